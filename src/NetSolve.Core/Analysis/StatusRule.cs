@@ -1,0 +1,50 @@
+using System.Collections.Immutable;
+using NetSolve.Solving;
+
+namespace NetSolve.Analysis;
+
+/// <summary>Assigns each unit its contract status: unstable, bottleneck, strained or ok.</summary>
+public static class StatusRule
+{
+    /// <summary>
+    /// Marks as bottleneck the stable unit(s) with finite servers and the smallest headroom (ties within a
+    /// relative <see cref="Tolerances.HeadroomTie"/>), even when another unit is unstable; then strained where
+    /// utilisation reaches <paramref name="strainThreshold"/>.
+    /// </summary>
+    public static ImmutableArray<UnitResult> Apply(IReadOnlyList<UnitResult> units, double strainThreshold)
+    {
+        ArgumentNullException.ThrowIfNull(units);
+        double smallest = double.PositiveInfinity;
+        foreach (var unit in units)
+        {
+            if (unit.IsStable && unit.Headroom is double headroom && headroom < smallest)
+            {
+                smallest = headroom;
+            }
+        }
+
+        var builder = ImmutableArray.CreateBuilder<UnitResult>(units.Count);
+        foreach (var unit in units)
+        {
+            builder.Add(unit with { Status = StatusOf(unit, smallest, strainThreshold) });
+        }
+
+        return builder.MoveToImmutable();
+    }
+
+    private static UnitStatus StatusOf(UnitResult unit, double smallestHeadroom, double strainThreshold)
+    {
+        if (!unit.IsStable)
+        {
+            return UnitStatus.Unstable;
+        }
+
+        if (unit.Headroom is double headroom
+            && headroom - smallestHeadroom <= Tolerances.HeadroomTie * Math.Max(headroom, smallestHeadroom))
+        {
+            return UnitStatus.Bottleneck;
+        }
+
+        return unit.Utilisation >= strainThreshold ? UnitStatus.Strained : UnitStatus.Ok;
+    }
+}

@@ -1,0 +1,37 @@
+using System.Collections.Immutable;
+
+namespace NetSolve.Model;
+
+/// <summary>A validated hospital network: units in file order, external arrivals and routing fractions.</summary>
+/// <remarks>
+/// Immutable; a what-if is <c>network with { Units = ... }</c>. Times are stored in hours and rates per hour;
+/// <see cref="TimeUnit"/> only says how to report them. The parser guarantees that ids are unique, that every
+/// id in <see cref="Arrivals"/> and <see cref="Routes"/> names a unit, and that routes out of a unit sum to at most 1.
+/// </remarks>
+/// <param name="Name">Shown in outputs.</param>
+/// <param name="TimeUnit">The unit for reported times and rates.</param>
+/// <param name="Units">Units in file order.</param>
+/// <param name="Arrivals">External arrival streams, at most one per unit.</param>
+/// <param name="Routes">Routing fractions, at most one per (from, to) pair.</param>
+public sealed record Network(
+    string Name,
+    TimeUnit TimeUnit,
+    ImmutableArray<Unit> Units,
+    ImmutableArray<Arrival> Arrivals,
+    ImmutableArray<Route> Routes)
+{
+    /// <summary>Total external arrivals per hour.</summary>
+    public double ExternalArrivalsPerHour => Arrivals.Sum(arrival => arrival.PerHour);
+
+    /// <summary>Maps each unit id to its position in <see cref="Units"/>. Builds a new dictionary on each call.</summary>
+    public Dictionary<string, int> BuildIndex()
+    {
+        var index = new Dictionary<string, int>(Units.Length, StringComparer.Ordinal);
+        for (int i = 0; i < Units.Length; i++)
+        {
+            index[Units[i].Id] = i;
+        }
+
+        return index;
+    }
+}

@@ -1,0 +1,19 @@
+using System.Collections.Immutable;
+using NetSolve.Model;
+
+namespace NetSolve.Solving;
+
+/// <summary>The solved network: one result per unit in file order, plus totals.</summary>
+/// <param name="Network">The network that was solved.</param>
+/// <param name="Units">Per-unit metrics in file order.</param>
+/// <param name="Totals">Network totals.</param>
+/// <param name="StrainThreshold">The utilisation threshold used for <see cref="UnitStatus.Strained"/>.</param>
+public sealed record NetworkSolution(
+    Network Network,
+    ImmutableArray<UnitResult> Units,
+    NetworkTotals Totals,
+    double StrainThreshold)
+{
+    /// <summary>True exactly when no unit is unstable.</summary>
+    public bool IsStable => Units.All(unit => unit.IsStable);
+}

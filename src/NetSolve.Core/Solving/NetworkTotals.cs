@@ -1,0 +1,12 @@
+namespace NetSolve.Solving;
+
+/// <summary>Network totals by Little's law. The last three are null when any unit is unstable.</summary>
+/// <param name="ExternalArrivalsPerHour">Sum of external arrival rates.</param>
+/// <param name="ThroughputPerHour">Patients leaving per hour; equals external arrivals when stable.</param>
+/// <param name="MeanInSystem">Sum of the units' mean number present.</param>
+/// <param name="MeanTimeInSystemHours">Mean time from entry to exit: mean in system / external arrivals.</param>
+public sealed record NetworkTotals(
+    double ExternalArrivalsPerHour,
+    double? ThroughputPerHour,
+    double? MeanInSystem,
+    double? MeanTimeInSystemHours);

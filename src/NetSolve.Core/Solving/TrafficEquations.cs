@@ -1,0 +1,134 @@
+using MathNet.Numerics.LinearAlgebra;
+using MathNet.Numerics.LinearAlgebra.Double;
+using MathNet.Numerics.LinearAlgebra.Double.Solvers;
+using MathNet.Numerics.LinearAlgebra.Solvers;
+
+namespace NetSolve.Solving;
+
+/// <summary>
+/// Solves the traffic equations λ = γ + Pᵀλ over the reached units: the total flow into each unit.
+/// </summary>
+/// <remarks>
+/// Up to <see cref="DenseLimit"/> reached units the system (I − Pᵀ)λ = γ is solved directly by LU on a dense
+/// matrix; above it, by BiCGStab with an ILU(0) preconditioner on a sparse matrix, so memory grows with the
+/// number of routes. Either way the residual is checked. Validation has already rejected sets of units with no
+/// exit, so I − Pᵀ is non-singular on the reached units.
+/// </remarks>
+public static class TrafficEquations
+{
+    /// <summary>Largest number of reached units solved densely; chosen by measurement (docs/performance.md).</summary>
+    public const int DenseLimit = 400;
+
+    /// <summary>Iteration cap of the sparse solver.</summary>
+    public const int MaxIterations = 10_000;
+
+    /// <summary>Flow into each unit per hour, by unit position; 0 for unreached units.</summary>
+    /// <exception cref="TrafficEquationsException">The residual stays above <see cref="Tolerances.TrafficResidual"/>.</exception>
+    public static double[] Solve(RoutingTable routing)
+    {
+        ArgumentNullException.ThrowIfNull(routing);
+        bool[] reached = routing.ReachedUnits();
+        var position = new int[routing.UnitCount];
+        var members = new List<int>();
+        for (int i = 0; i < routing.UnitCount; i++)
+        {
+            position[i] = reached[i] ? members.Count : -1;
+            if (reached[i])
+            {
+                members.Add(i);
+            }
+        }
+
+        int n = members.Count;
+        var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
+        var flows = n <= DenseLimit
+            ? SolveDense(routing, members, position, external)
+            : SolveSparse(routing, members, position, external);
+
+        var result = new double[routing.UnitCount];
+        for (int k = 0; k < n; k++)
+        {
+            result[members[k]] = Math.Max(0.0, flows[k]);
+        }
+
+        CheckResidual(routing, result);
+        return result;
+    }
+
+    private static Vector<double> SolveDense(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
+    {
+        var matrix = DenseMatrix.CreateIdentity(members.Count);
+        foreach (var (row, column, value) in NegatedTransposeEntries(routing, members, position))
+        {
+            matrix[row, column] -= value;
+        }
+
+        return matrix.LU().Solve(external);
+    }
+
+    private static Vector<double> SolveSparse(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
+    {
+        var entries = new List<Tuple<int, int, double>>(routing.Targets.Count + members.Count);
+        for (int k = 0; k < members.Count; k++)
+        {
+            entries.Add(Tuple.Create(k, k, 1.0));
+        }
+
+        foreach (var (row, column, value) in NegatedTransposeEntries(routing, members, position))
+        {
+            entries.Add(Tuple.Create(row, column, -value));
+        }
+
+        // OfIndexed sums duplicate (row, column) entries, so a self-route lands on the diagonal correctly.
+        var matrix = SparseMatrix.OfIndexed(members.Count, members.Count, entries);
+        var iterator = new Iterator<double>(
+            new IterationCountStopCriterion<double>(MaxIterations),
+            new ResidualStopCriterion<double>(Tolerances.TrafficResidual * 1e-3));
+        return matrix.SolveIterative(external, new BiCgStab(), iterator, new ILU0Preconditioner());
+    }
+
+    private static IEnumerable<(int Row, int Column, double Value)> NegatedTransposeEntries(
+        RoutingTable routing, List<int> members, int[] position)
+    {
+        for (int k = 0; k < members.Count; k++)
+        {
+            int from = members[k];
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            {
+                int to = position[routing.Targets[e]];
+                if (to >= 0 && routing.Probabilities[e] > 0.0)
+                {
+                    yield return (to, k, routing.Probabilities[e]);
+                }
+            }
+        }
+    }
+
+    private static void CheckResidual(RoutingTable routing, double[] flows)
+    {
+        var inflow = (double[])routing.ExternalPerHour.ToArray().Clone();
+        for (int from = 0; from < routing.UnitCount; from++)
+        {
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            {
+                inflow[routing.Targets[e]] += routing.Probabilities[e] * flows[from];
+            }
+        }
+
+        double scale = Math.Max(1.0, flows.Length == 0 ? 0.0 : flows.Max());
+        double worst = 0.0;
+        for (int i = 0; i < flows.Length; i++)
+        {
+            double residual = Math.Abs(inflow[i] - flows[i]);
+            if (!double.IsFinite(residual) || residual > worst)
+            {
+                worst = double.IsFinite(residual) ? residual : double.PositiveInfinity;
+            }
+        }
+
+        if (!(worst <= Tolerances.TrafficResidual * scale))
+        {
+            throw new TrafficEquationsException(worst / scale);
+        }
+    }
+}
