@@ -1,0 +1,370 @@
+namespace NetSolve.Simulation;
+
+/// <summary>
+/// Runs one replication: an event loop over <see cref="EventQueue"/> with FCFS queues, collecting statistics after
+/// the warm-up. Mutable and single-threaded; allocates only when a pool first grows, so memory stays flat.
+/// </summary>
+internal sealed partial class SimulationEngine
+{
+    private const int CancellationCheckMask = (1 << 16) - 1;
+
+    private readonly CompiledNetwork _network;
+    private readonly MetricLayout _layout;
+    private readonly double[] _waitThresholdsHours;
+    private readonly double _warmupEnd;
+    private readonly double _end;
+    private readonly EventQueue _events;
+    private Xoshiro256StarStar _random;
+
+    private PatientRecord[] _patients = new PatientRecord[256];
+    private int[] _freePatients = new int[256];
+    private int _freeCount;
+    private int _patientsAllocated;
+
+    private readonly int[] _busy;
+    private readonly int[] _queued;
+    private readonly int[] _queueHead;
+    private readonly int[][] _queues;
+    private readonly double[] _lastChange;
+    private readonly double[] _busyArea;
+    private readonly double[] _queueArea;
+    private readonly double[] _queueAreaByHour;
+
+    private readonly long[] _offered;
+    private readonly long[] _accepted;
+    private readonly long[] _full;
+    private readonly long[] _turnedAway;
+    private readonly long[] _diverted;
+    private readonly long[] _starts;
+    private readonly long[] _waited;
+    private readonly double[] _waitSum;
+    private readonly long[] _waitOver;
+    private readonly long[] _completions;
+    private readonly double[] _sojournSum;
+    private readonly long[] _unitHistogram;
+
+    private readonly long[] _groupExits;
+    private readonly double[] _groupTimeSum;
+    private readonly long[] _groupHistogram;
+    private long _entered;
+    private long _networkTurnedAway;
+
+    public SimulationEngine(CompiledNetwork network, MetricLayout layout, double[] waitThresholdsHours, double warmupHours, double durationHours, ulong seed, int replication)
+    {
+        _network = network;
+        _layout = layout;
+        _waitThresholdsHours = waitThresholdsHours;
+        _warmupEnd = warmupHours;
+        _end = warmupHours + durationHours;
+        _random = new Xoshiro256StarStar(seed, (ulong)replication);
+        int n = network.UnitCount;
+        int groups = network.Groups.Length;
+        _events = new EventQueue(groups + 64);
+        _busy = new int[n];
+        _queued = new int[n];
+        _queueHead = new int[n];
+        _queues = new int[n][];
+        for (int i = 0; i < n; i++)
+        {
+            _queues[i] = new int[4];
+        }
+
+        _lastChange = new double[n];
+        _busyArea = new double[n];
+        _queueArea = new double[n];
+        _queueAreaByHour = new double[n * 24];
+        _offered = new long[n];
+        _accepted = new long[n];
+        _full = new long[n];
+        _turnedAway = new long[n];
+        _diverted = new long[n];
+        _starts = new long[n];
+        _waited = new long[n];
+        _waitSum = new double[n];
+        _waitOver = new long[n * waitThresholdsHours.Length];
+        _completions = new long[n];
+        _sojournSum = new double[n];
+        _unitHistogram = new long[n * TimeHistogram.Bins];
+        _groupExits = new long[groups];
+        _groupTimeSum = new double[groups];
+        _groupHistogram = new long[groups * TimeHistogram.Bins];
+    }
+
+    /// <summary>Events processed so far.</summary>
+    public long EventCount { get; private set; }
+
+    /// <summary>
+    /// Runs to the end of the replication. Returns false if <paramref name="cancellation"/> fired first.
+    /// <paramref name="progress"/>, when given, receives the fraction of simulated time done every 65,536 events.
+    /// </summary>
+    public bool Run(Action<double>? progress, CancellationToken cancellation)
+    {
+        var groups = _network.Groups;
+        for (int g = 0; g < groups.Length; g++)
+        {
+            if (groups[g].CandidatesPerHour > 0.0)
+            {
+                _events.Push(new SimulationEvent(_random.NextExponential() / groups[g].CandidatesPerHour, g, SimulationEvent.ArrivalMarker));
+            }
+        }
+
+        long events = 0;
+        while (_events.Count > 0 && _events.Peek().Time <= _end)
+        {
+            var next = _events.Pop();
+            events++;
+            if (next.IsArrival)
+            {
+                OnArrivalCandidate(next.Time, next.Unit);
+            }
+            else
+            {
+                OnServiceEnd(next.Time, next.Unit, next.Patient);
+            }
+
+            if ((events & CancellationCheckMask) == 0)
+            {
+                if (cancellation.IsCancellationRequested)
+                {
+                    EventCount = events;
+                    return false;
+                }
+
+                progress?.Invoke(next.Time / _end);
+            }
+        }
+
+        EventCount = events;
+        for (int u = 0; u < _busy.Length; u++)
+        {
+            Accumulate(u, _end);
+        }
+
+        return true;
+    }
+
+    private void OnArrivalCandidate(double now, int group)
+    {
+        var plan = _network.Groups[group];
+        _events.Push(new SimulationEvent(now + (_random.NextExponential() / plan.CandidatesPerHour), group, SimulationEvent.ArrivalMarker));
+
+        // Thinning (Lewis and Shedler, 1979): candidates come at the peak rate; keep each with multiplier / peak.
+        if (plan.HourOfDay is not null && _random.NextDouble() * plan.MaxMultiplier >= plan.MultiplierAt(now))
+        {
+            return;
+        }
+
+        int entry = plan.EntryUnits[0];
+        if (plan.EntryUnits.Length > 1)
+        {
+            double draw = _random.NextDouble();
+            var cumulative = plan.EntryCumulative;
+            int k = 0;
+            while (k < cumulative.Length - 1 && draw >= cumulative[k])
+            {
+                k++;
+            }
+
+            entry = plan.EntryUnits[k];
+        }
+
+        int patient = AllocatePatient();
+        ref var record = ref _patients[patient];
+        record.NetworkEntry = now;
+        record.Group = group;
+        if (now >= _warmupEnd)
+        {
+            _entered++;
+        }
+
+        ArriveAtUnit(now, entry, patient);
+    }
+
+    private void OnServiceEnd(double now, int unit, int patient)
+    {
+        Accumulate(unit, now);
+        ref var record = ref _patients[patient];
+        if (record.UnitArrival >= _warmupEnd)
+        {
+            double sojourn = now - record.UnitArrival;
+            _completions[unit]++;
+            _sojournSum[unit] += sojourn;
+            _unitHistogram[(unit * TimeHistogram.Bins) + TimeHistogram.BinOf(sojourn / _network.MeanServiceHours[unit])]++;
+        }
+
+        if (_queued[unit] > 0)
+        {
+            StartService(now, unit, Dequeue(unit));
+        }
+        else
+        {
+            _busy[unit]--;
+        }
+
+        int group = record.Group;
+        int next = Route(_network.Groups[group], unit);
+        if (next >= 0)
+        {
+            ArriveAtUnit(now, next, patient);
+        }
+        else
+        {
+            Leave(now, patient, group);
+        }
+    }
+
+    private void ArriveAtUnit(double now, int unit, int patient)
+    {
+        bool counted = now >= _warmupEnd;
+        var capacity = _network.Capacity;
+        for (int hops = 0; ; hops++)
+        {
+            if (counted)
+            {
+                _offered[unit]++;
+            }
+
+            if (_busy[unit] + _queued[unit] < capacity[unit])
+            {
+                break;
+            }
+
+            int divertTo = _network.DivertTo[unit];
+            if (counted)
+            {
+                _full[unit]++;
+                if (divertTo < 0 || hops >= _busy.Length)
+                {
+                    _turnedAway[unit]++;
+                    _networkTurnedAway++;
+                }
+                else
+                {
+                    _diverted[unit]++;
+                }
+            }
+
+            // A chain of diversions longer than the number of units has gone round a loop of full units.
+            if (divertTo < 0 || hops >= _busy.Length)
+            {
+                ReleasePatient(patient);
+                return;
+            }
+
+            unit = divertTo;
+        }
+
+        Accumulate(unit, now);
+        if (counted)
+        {
+            _accepted[unit]++;
+        }
+
+        _patients[patient].UnitArrival = now;
+        if (_busy[unit] < _network.Servers[unit])
+        {
+            _busy[unit]++;
+            StartService(now, unit, patient);
+        }
+        else
+        {
+            Enqueue(unit, patient);
+        }
+    }
+
+    private void StartService(double now, int unit, int patient)
+    {
+        ref var record = ref _patients[patient];
+        if (record.UnitArrival >= _warmupEnd)
+        {
+            double wait = now - record.UnitArrival;
+            _starts[unit]++;
+            if (wait > 0.0)
+            {
+                _waited[unit]++;
+                _waitSum[unit] += wait;
+                var thresholds = _waitThresholdsHours;
+                for (int t = 0; t < thresholds.Length; t++)
+                {
+                    if (wait > thresholds[t])
+                    {
+                        _waitOver[(unit * thresholds.Length) + t]++;
+                    }
+                }
+            }
+        }
+
+        double service = _network.Samplers[(record.Group * _busy.Length) + unit].Sample(ref _random);
+        _events.Push(new SimulationEvent(now + service, unit, patient));
+    }
+
+    private void Leave(double now, int patient, int group)
+    {
+        ref var record = ref _patients[patient];
+        if (record.NetworkEntry >= _warmupEnd)
+        {
+            double time = now - record.NetworkEntry;
+            _groupExits[group]++;
+            _groupTimeSum[group] += time;
+            _groupHistogram[(group * TimeHistogram.Bins) + TimeHistogram.BinOf(time / _network.NetworkTimeScale)]++;
+        }
+
+        ReleasePatient(patient);
+    }
+
+    private int Route(GroupPlan plan, int unit)
+    {
+        int start = plan.RouteOffsets[unit];
+        int stop = plan.RouteOffsets[unit + 1];
+        if (start == stop)
+        {
+            return -1;
+        }
+
+        double draw = _random.NextDouble();
+        var cumulative = plan.RouteCumulative;
+        for (int k = start; k < stop; k++)
+        {
+            if (draw < cumulative[k])
+            {
+                return plan.RouteTargets[k];
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>Adds the time since the unit's last change, clipped to the statistics window, to its areas.</summary>
+    private void Accumulate(int unit, double now)
+    {
+        double from = _lastChange[unit];
+        _lastChange[unit] = now;
+        if (now <= _warmupEnd)
+        {
+            return;
+        }
+
+        if (from < _warmupEnd)
+        {
+            from = _warmupEnd;
+        }
+
+        double span = now - from;
+        _busyArea[unit] += _busy[unit] * span;
+        int queued = _queued[unit];
+        if (queued == 0)
+        {
+            return;
+        }
+
+        _queueArea[unit] += queued * span;
+        int row = unit * 24;
+        while (from < now)
+        {
+            double hourStart = Math.Floor(from);
+            double until = Math.Min(now, hourStart + 1.0);
+            _queueAreaByHour[row + (int)((long)hourStart % 24)] += queued * (until - from);
+            from = until;
+        }
+    }
+}
