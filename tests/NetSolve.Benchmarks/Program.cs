@@ -1,0 +1,1 @@
+BenchmarkDotNet.Running.BenchmarkSwitcher.FromAssembly(typeof(NetSolve.Benchmarks.SimulationBenchmarks).Assembly).Run(args);
