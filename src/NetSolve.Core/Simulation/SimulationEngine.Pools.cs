@@ -23,32 +23,32 @@ internal sealed partial class SimulationEngine
 
     private void Enqueue(int unit, int patient)
     {
+        ref var state = ref _units[unit];
         var queue = _queues[unit];
-        int count = _queued[unit];
+        int count = state.Queued;
         if (count == queue.Length)
         {
             var grown = new int[queue.Length * 2];
-            int head = _queueHead[unit];
             for (int i = 0; i < count; i++)
             {
-                grown[i] = queue[(head + i) & (queue.Length - 1)];
+                grown[i] = queue[(state.QueueHead + i) & (queue.Length - 1)];
             }
 
             _queues[unit] = queue = grown;
-            _queueHead[unit] = 0;
+            state.QueueHead = 0;
         }
 
-        queue[(_queueHead[unit] + count) & (queue.Length - 1)] = patient;
-        _queued[unit] = count + 1;
+        queue[(state.QueueHead + count) & (queue.Length - 1)] = patient;
+        state.Queued = count + 1;
     }
 
     private int Dequeue(int unit)
     {
+        ref var state = ref _units[unit];
         var queue = _queues[unit];
-        int head = _queueHead[unit];
-        int patient = queue[head];
-        _queueHead[unit] = (head + 1) & (queue.Length - 1);
-        _queued[unit]--;
+        int patient = queue[state.QueueHead];
+        state.QueueHead = (state.QueueHead + 1) & (queue.Length - 1);
+        state.Queued--;
         return patient;
     }
 }

@@ -14,21 +14,22 @@ internal sealed partial class SimulationEngine
         double[] exposure = HourOfDayExposure(_warmupEnd, _end);
         int thresholds = _waitThresholdsHours.Length;
         double inSystem = 0.0;
-        for (int u = 0; u < _busy.Length; u++)
+        for (int u = 0; u < _units.Length; u++)
         {
-            int servers = _network.Servers[u];
-            double inUnit = (_busyArea[u] + _queueArea[u]) / window;
+            ref readonly var state = ref _units[u];
+            int servers = state.Servers;
+            double inUnit = (state.BusyArea + state.QueueArea) / window;
             inSystem += inUnit;
-            row[_layout.Unit(u, MetricLayout.ArrivalsPerHour)] = _accepted[u] / window;
-            row[_layout.Unit(u, MetricLayout.Utilisation)] = servers == CompiledNetwork.NoLimit ? 0.0 : _busyArea[u] / (servers * window);
-            row[_layout.Unit(u, MetricLayout.WaitProbability)] = Ratio(_waited[u], _starts[u], 0.0);
-            row[_layout.Unit(u, MetricLayout.MeanQueue)] = _queueArea[u] / window;
-            row[_layout.Unit(u, MetricLayout.MeanWaitHours)] = _starts[u] > 0 ? _waitSum[u] / _starts[u] : 0.0;
+            row[_layout.Unit(u, MetricLayout.ArrivalsPerHour)] = state.Accepted / window;
+            row[_layout.Unit(u, MetricLayout.Utilisation)] = servers == CompiledNetwork.NoLimit ? 0.0 : state.BusyArea / (servers * window);
+            row[_layout.Unit(u, MetricLayout.WaitProbability)] = Ratio(state.Waited, state.Starts, 0.0);
+            row[_layout.Unit(u, MetricLayout.MeanQueue)] = state.QueueArea / window;
+            row[_layout.Unit(u, MetricLayout.MeanWaitHours)] = state.Starts > 0 ? state.WaitSum / state.Starts : 0.0;
             row[_layout.Unit(u, MetricLayout.MeanInUnit)] = inUnit;
-            row[_layout.Unit(u, MetricLayout.MeanTimeInUnitHours)] = _completions[u] > 0 ? _sojournSum[u] / _completions[u] : double.NaN;
-            row[_layout.Unit(u, MetricLayout.FullProbability)] = Ratio(_full[u], _offered[u], 0.0);
-            row[_layout.Unit(u, MetricLayout.TurnedAwayPerHour)] = _turnedAway[u] / window;
-            row[_layout.Unit(u, MetricLayout.DivertedPerHour)] = _diverted[u] / window;
+            row[_layout.Unit(u, MetricLayout.MeanTimeInUnitHours)] = state.Completions > 0 ? state.SojournSum / state.Completions : double.NaN;
+            row[_layout.Unit(u, MetricLayout.FullProbability)] = Ratio(state.Full, state.Offered, 0.0);
+            row[_layout.Unit(u, MetricLayout.TurnedAwayPerHour)] = state.TurnedAway / window;
+            row[_layout.Unit(u, MetricLayout.DivertedPerHour)] = state.Diverted / window;
             for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
             {
                 row[_layout.Unit(u, MetricLayout.UnitPercentiles + p)] = TimeHistogram.Quantile(
@@ -37,7 +38,7 @@ internal sealed partial class SimulationEngine
 
             for (int t = 0; t < thresholds; t++)
             {
-                row[_layout.Unit(u, _layout.WaitOverOffset + t)] = Ratio(_waitOver[(u * thresholds) + t], _starts[u], 0.0);
+                row[_layout.Unit(u, _layout.WaitOverOffset + t)] = Ratio(_waitOver[(u * thresholds) + t], state.Starts, 0.0);
             }
 
             for (int h = 0; h < 24; h++)
@@ -52,7 +53,7 @@ internal sealed partial class SimulationEngine
         row[_layout.Total(MetricLayout.TotalMeanInSystem)] = inSystem;
         row[_layout.Total(MetricLayout.TotalMeanTimeInSystemHours)] = exits > 0 ? _groupTimeSum.Sum() / exits : double.NaN;
         row[_layout.Total(MetricLayout.TotalTurnedAwayPerHour)] = _networkTurnedAway / window;
-        var all = new long[TimeHistogram.Bins];
+        var all = new int[TimeHistogram.Bins];
         for (int g = 0; g < _groupExits.Length; g++)
         {
             for (int b = 0; b < TimeHistogram.Bins; b++)

@@ -21,31 +21,18 @@ internal sealed partial class SimulationEngine
     private int _freeCount;
     private int _patientsAllocated;
 
-    private readonly int[] _busy;
-    private readonly int[] _queued;
-    private readonly int[] _queueHead;
+    private readonly UnitState[] _units;
     private readonly int[][] _queues;
-    private readonly double[] _lastChange;
-    private readonly double[] _busyArea;
-    private readonly double[] _queueArea;
     private readonly double[] _queueAreaByHour;
-
-    private readonly long[] _offered;
-    private readonly long[] _accepted;
-    private readonly long[] _full;
-    private readonly long[] _turnedAway;
-    private readonly long[] _diverted;
-    private readonly long[] _starts;
-    private readonly long[] _waited;
-    private readonly double[] _waitSum;
     private readonly long[] _waitOver;
-    private readonly long[] _completions;
-    private readonly double[] _sojournSum;
-    private readonly long[] _unitHistogram;
+    private readonly int[] _unitHistogram;
+    private readonly GroupPlan[] _groups;
+    private readonly ServiceSampler[] _samplers;
+    private readonly double _inverseNetworkScale;
 
     private readonly long[] _groupExits;
     private readonly double[] _groupTimeSum;
-    private readonly long[] _groupHistogram;
+    private readonly int[] _groupHistogram;
     private long _entered;
     private long _networkTurnedAway;
 
@@ -60,34 +47,26 @@ internal sealed partial class SimulationEngine
         int n = network.UnitCount;
         int groups = network.Groups.Length;
         _events = new EventQueue(groups + 64);
-        _busy = new int[n];
-        _queued = new int[n];
-        _queueHead = new int[n];
+        _units = new UnitState[n];
         _queues = new int[n][];
         for (int i = 0; i < n; i++)
         {
             _queues[i] = new int[4];
+            _units[i].Servers = network.Servers[i];
+            _units[i].Capacity = network.Capacity[i];
+            _units[i].DivertTo = network.DivertTo[i];
+            _units[i].InverseScale = 1.0 / network.MeanServiceHours[i];
         }
 
-        _lastChange = new double[n];
-        _busyArea = new double[n];
-        _queueArea = new double[n];
         _queueAreaByHour = new double[n * 24];
-        _offered = new long[n];
-        _accepted = new long[n];
-        _full = new long[n];
-        _turnedAway = new long[n];
-        _diverted = new long[n];
-        _starts = new long[n];
-        _waited = new long[n];
-        _waitSum = new double[n];
         _waitOver = new long[n * waitThresholdsHours.Length];
-        _completions = new long[n];
-        _sojournSum = new double[n];
-        _unitHistogram = new long[n * TimeHistogram.Bins];
+        _unitHistogram = new int[n * TimeHistogram.Bins];
+        _groups = network.Groups;
+        _samplers = network.Samplers;
+        _inverseNetworkScale = 1.0 / network.NetworkTimeScale;
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
-        _groupHistogram = new long[groups * TimeHistogram.Bins];
+        _groupHistogram = new int[groups * TimeHistogram.Bins];
     }
 
     /// <summary>Events processed so far.</summary>
@@ -135,7 +114,7 @@ internal sealed partial class SimulationEngine
         }
 
         EventCount = events;
-        for (int u = 0; u < _busy.Length; u++)
+        for (int u = 0; u < _units.Length; u++)
         {
             Accumulate(u, _end);
         }
@@ -145,7 +124,7 @@ internal sealed partial class SimulationEngine
 
     private void OnArrivalCandidate(double now, int group)
     {
-        var plan = _network.Groups[group];
+        var plan = _groups[group];
         _events.Push(new SimulationEvent(now + (_random.NextExponential() / plan.CandidatesPerHour), group, SimulationEvent.ArrivalMarker));
 
         // Thinning (Lewis and Shedler, 1979): candidates come at the peak rate; keep each with multiplier / peak.
@@ -183,26 +162,27 @@ internal sealed partial class SimulationEngine
     private void OnServiceEnd(double now, int unit, int patient)
     {
         Accumulate(unit, now);
+        ref var state = ref _units[unit];
         ref var record = ref _patients[patient];
         if (record.UnitArrival >= _warmupEnd)
         {
             double sojourn = now - record.UnitArrival;
-            _completions[unit]++;
-            _sojournSum[unit] += sojourn;
-            _unitHistogram[(unit * TimeHistogram.Bins) + TimeHistogram.BinOf(sojourn / _network.MeanServiceHours[unit])]++;
+            state.Completions++;
+            state.SojournSum += sojourn;
+            _unitHistogram[(unit * TimeHistogram.Bins) + TimeHistogram.BinOf(sojourn * state.InverseScale)]++;
         }
 
-        if (_queued[unit] > 0)
+        if (state.Queued > 0)
         {
             StartService(now, unit, Dequeue(unit));
         }
         else
         {
-            _busy[unit]--;
+            state.Busy--;
         }
 
         int group = record.Group;
-        int next = Route(_network.Groups[group], unit);
+        int next = Route(_groups[group], unit);
         if (next >= 0)
         {
             ArriveAtUnit(now, next, patient);
@@ -216,54 +196,55 @@ internal sealed partial class SimulationEngine
     private void ArriveAtUnit(double now, int unit, int patient)
     {
         bool counted = now >= _warmupEnd;
-        var capacity = _network.Capacity;
         for (int hops = 0; ; hops++)
         {
+            ref var candidate = ref _units[unit];
             if (counted)
             {
-                _offered[unit]++;
+                candidate.Offered++;
             }
 
-            if (_busy[unit] + _queued[unit] < capacity[unit])
+            if (candidate.Busy + candidate.Queued < candidate.Capacity)
             {
                 break;
             }
 
-            int divertTo = _network.DivertTo[unit];
+            // A chain of diversions longer than the number of units has gone round a loop of full units.
+            bool turnAway = candidate.DivertTo < 0 || hops >= _units.Length;
             if (counted)
             {
-                _full[unit]++;
-                if (divertTo < 0 || hops >= _busy.Length)
+                candidate.Full++;
+                if (turnAway)
                 {
-                    _turnedAway[unit]++;
+                    candidate.TurnedAway++;
                     _networkTurnedAway++;
                 }
                 else
                 {
-                    _diverted[unit]++;
+                    candidate.Diverted++;
                 }
             }
 
-            // A chain of diversions longer than the number of units has gone round a loop of full units.
-            if (divertTo < 0 || hops >= _busy.Length)
+            if (turnAway)
             {
                 ReleasePatient(patient);
                 return;
             }
 
-            unit = divertTo;
+            unit = candidate.DivertTo;
         }
 
         Accumulate(unit, now);
+        ref var state = ref _units[unit];
         if (counted)
         {
-            _accepted[unit]++;
+            state.Accepted++;
         }
 
         _patients[patient].UnitArrival = now;
-        if (_busy[unit] < _network.Servers[unit])
+        if (state.Busy < state.Servers)
         {
-            _busy[unit]++;
+            state.Busy++;
             StartService(now, unit, patient);
         }
         else
@@ -277,12 +258,13 @@ internal sealed partial class SimulationEngine
         ref var record = ref _patients[patient];
         if (record.UnitArrival >= _warmupEnd)
         {
+            ref var state = ref _units[unit];
             double wait = now - record.UnitArrival;
-            _starts[unit]++;
+            state.Starts++;
             if (wait > 0.0)
             {
-                _waited[unit]++;
-                _waitSum[unit] += wait;
+                state.Waited++;
+                state.WaitSum += wait;
                 var thresholds = _waitThresholdsHours;
                 for (int t = 0; t < thresholds.Length; t++)
                 {
@@ -294,7 +276,7 @@ internal sealed partial class SimulationEngine
             }
         }
 
-        double service = _network.Samplers[(record.Group * _busy.Length) + unit].Sample(ref _random);
+        double service = _samplers[(record.Group * _units.Length) + unit].Sample(ref _random);
         _events.Push(new SimulationEvent(now + service, unit, patient));
     }
 
@@ -306,7 +288,7 @@ internal sealed partial class SimulationEngine
             double time = now - record.NetworkEntry;
             _groupExits[group]++;
             _groupTimeSum[group] += time;
-            _groupHistogram[(group * TimeHistogram.Bins) + TimeHistogram.BinOf(time / _network.NetworkTimeScale)]++;
+            _groupHistogram[(group * TimeHistogram.Bins) + TimeHistogram.BinOf(time * _inverseNetworkScale)]++;
         }
 
         ReleasePatient(patient);
@@ -337,8 +319,9 @@ internal sealed partial class SimulationEngine
     /// <summary>Adds the time since the unit's last change, clipped to the statistics window, to its areas.</summary>
     private void Accumulate(int unit, double now)
     {
-        double from = _lastChange[unit];
-        _lastChange[unit] = now;
+        ref var state = ref _units[unit];
+        double from = state.LastChange;
+        state.LastChange = now;
         if (now <= _warmupEnd)
         {
             return;
@@ -350,14 +333,14 @@ internal sealed partial class SimulationEngine
         }
 
         double span = now - from;
-        _busyArea[unit] += _busy[unit] * span;
-        int queued = _queued[unit];
+        state.BusyArea += state.Busy * span;
+        int queued = state.Queued;
         if (queued == 0)
         {
             return;
         }
 
-        _queueArea[unit] += queued * span;
+        state.QueueArea += queued * span;
         int row = unit * 24;
         while (from < now)
         {
