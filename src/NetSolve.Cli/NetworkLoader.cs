@@ -7,7 +7,10 @@ namespace NetSolve.Cli;
 internal static class NetworkLoader
 {
     /// <summary>The network, or an <see cref="InputException"/> carrying the diagnostics when the file is invalid.</summary>
-    public static Network Load(string path, CliContext context)
+    /// <param name="path">The network file.</param>
+    /// <param name="context">Where warnings go.</param>
+    /// <param name="forSimulation">True for <c>simulate</c>: warnings that the formulas ignore a key do not apply.</param>
+    public static Network Load(string path, CliContext context, bool forSimulation = false)
     {
         var result = NetworkReader.ReadFile(path);
         var errors = result.Diagnostics.Where(d => d.IsError).ToList();
@@ -16,7 +19,7 @@ internal static class NetworkLoader
             throw new InputException(string.Join("\n", errors.Select(d => d.ToString())));
         }
 
-        foreach (var warning in result.Diagnostics)
+        foreach (var warning in result.Diagnostics.Where(d => !forSimulation || d.Code != DiagnosticCodes.IgnoredByFormulas))
         {
             context.Report(warning.ToString());
         }

@@ -22,7 +22,7 @@ public static class SimulationTableWriter
         string time = "(" + TimeConstants.Suffix(timeUnit) + ")";
         var options = result.Options;
         output.Write(string.Create(CultureInfo.InvariantCulture,
-            $"{result.Network.Name}  (simulated: {result.ReplicationsFinished} of {options.Replications} replications of {Numbers.Compact(scale.Time(options.DurationHours))} {TimeConstants.Name(timeUnit)}s after a warm-up of {Numbers.Compact(scale.Time(options.WarmupHours))}, seed {options.Seed}; ± is the 95% half-width)\n\n"));
+            $"{result.Network.Name}  (simulated: {result.ReplicationsFinished} of {options.Replications} replications of {Numbers.Compact(scale.Time(options.DurationHours))} {TimeConstants.Name(timeUnit)}s each after a warm-up of {Numbers.Compact(scale.Time(options.WarmupHours))} {TimeConstants.Name(timeUnit)}s, seed {options.Seed}; ± is the 95% half-width)\n\n"));
 
         var statuses = SimulationStatus.Of(result, strainThreshold);
         var table = new TextTable("unit", ">servers", ">arrivals" + per, ">util", ">P(wait)", ">queue", ">wait " + time,

@@ -11,8 +11,15 @@ public readonly record struct Estimate(double Mean, double? HalfWidth, int Repli
     /// <summary>The confidence level of <see cref="HalfWidth"/>.</summary>
     public const double ConfidenceLevel = 0.95;
 
+    /// <summary>
+    /// Absolute and relative slack added to the half-width in <see cref="Contains"/>, so that a formula of 1e-21 matches
+    /// a simulation that saw exactly 0 in every replication (half-width 0).
+    /// </summary>
+    public const double ContainsTolerance = 1e-9;
+
     /// <summary>True when <paramref name="value"/> lies inside the interval (false when there is no interval).</summary>
-    public bool Contains(double value) => HalfWidth is double half && Math.Abs(value - Mean) <= half;
+    public bool Contains(double value) =>
+        HalfWidth is double half && Math.Abs(value - Mean) <= half + (ContainsTolerance * Math.Max(1.0, Math.Abs(Mean)));
 
     /// <summary>The estimate from the finite values among <paramref name="values"/>; null when there are none.</summary>
     public static Estimate? From(IEnumerable<double> values)
