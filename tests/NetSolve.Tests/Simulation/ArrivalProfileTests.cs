@@ -50,8 +50,9 @@ public sealed class ArrivalProfileTests
     [Fact]
     public void Queues_by_hour_follow_the_arrival_peak()
     {
-        // A single server at mean load 0.5 that gets all its patients from 08:00 to 20:00 (load 1 while open) queues
-        // in the afternoon and never overnight.
+        // Source: by reasoning from the model, no formula. A single server at mean load 0.5 that gets all its patients
+        // from 08:00 to 20:00 runs at load 1 while open, so its queue builds through the day; with no arrivals after
+        // 20:00 and 4 services an hour it has long emptied by 03:00.
         var hours = Enumerable.Range(0, 24).Select(h => h is >= 8 and < 20 ? 1.0 : 0.0);
         var unit = TestNetworks.Unit("minor_injuries", 1, 0.25);
         var network = TestNetworks.Single(unit, 2.0) with { ArrivalProfile = ArrivalProfile.Create(hours) };
