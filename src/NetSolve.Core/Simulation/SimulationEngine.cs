@@ -164,7 +164,11 @@ internal sealed partial class SimulationEngine
         Accumulate(unit, now);
         ref var state = ref _units[unit];
         ref var record = ref _patients[patient];
-        if (record.UnitArrival >= _warmupEnd)
+
+        // Times are recorded when they end, for every patient ending after the warm-up: in steady state the patient
+        // leaving at any moment has the steady-state time, whereas keeping only those who also arrived after the
+        // warm-up would leave out long stays that straddle the end of the run.
+        if (now >= _warmupEnd)
         {
             double sojourn = now - record.UnitArrival;
             state.Completions++;
@@ -256,7 +260,7 @@ internal sealed partial class SimulationEngine
     private void StartService(double now, int unit, int patient)
     {
         ref var record = ref _patients[patient];
-        if (record.UnitArrival >= _warmupEnd)
+        if (now >= _warmupEnd)
         {
             ref var state = ref _units[unit];
             double wait = now - record.UnitArrival;
@@ -283,7 +287,7 @@ internal sealed partial class SimulationEngine
     private void Leave(double now, int patient, int group)
     {
         ref var record = ref _patients[patient];
-        if (record.NetworkEntry >= _warmupEnd)
+        if (now >= _warmupEnd)
         {
             double time = now - record.NetworkEntry;
             _groupExits[group]++;
