@@ -346,12 +346,16 @@ internal sealed partial class SimulationEngine
 
         state.QueueArea += queued * span;
         int row = unit * 24;
-        while (from < now)
+
+        // Times are not negative, so truncation is the floor; most spans end within the hour they start in.
+        long hour = (long)from;
+        while (now > hour + 1.0)
         {
-            double hourStart = Math.Floor(from);
-            double until = Math.Min(now, hourStart + 1.0);
-            _queueAreaByHour[row + (int)((long)hourStart % 24)] += queued * (until - from);
-            from = until;
+            _queueAreaByHour[row + (int)(hour % 24)] += queued * (hour + 1.0 - from);
+            hour++;
+            from = hour;
         }
+
+        _queueAreaByHour[row + (int)(hour % 24)] += queued * (now - from);
     }
 }

@@ -58,8 +58,12 @@ public sealed class ArrivalProfileTests
         var network = TestNetworks.Single(unit, 2.0) with { ArrivalProfile = ArrivalProfile.Create(hours) };
         var options = new SimulationOptions { Seed = 8, Replications = 4, WarmupHours = 24, DurationHours = 24 * 100 };
 
-        var byHour = Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken).Units[0].MeanQueueByHour;
+        var result = Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken).Units[0];
+        var byHour = result.MeanQueueByHour;
 
+        // Source: exact by hand. Over whole days each hour of the day is covered equally, so the mean of the 24
+        // hourly means is the overall mean queue, replication by replication and so also on average.
+        Assert.Equal(result.MeanQueue.Mean, byHour.Average(hour => hour!.Value.Mean), 9);
         Assert.True(byHour[17]!.Value.Mean > 1.0);
         Assert.Equal(0.0, byHour[3]!.Value.Mean);
         Assert.True(byHour[17]!.Value.Mean > byHour[9]!.Value.Mean);
