@@ -19,10 +19,16 @@ public static class GrowthAnalysis
     public const int DefaultSteps = 20;
 
     /// <summary>
-    /// The default table stops this fraction of the way from today's demand (factor 1) to the first saturation, so that
-    /// the last row is just below it and every wait is finite.
+    /// The default table stops where the first unit to saturate reaches this utilisation: just below saturation, so
+    /// that every wait in the table is finite and the steep end of the curve shows.
     /// </summary>
-    public const double DefaultReach = 0.98;
+    public const double DefaultLastUtilisation = 0.98;
+
+    /// <summary>
+    /// When the first unit is already at or above <see cref="DefaultLastUtilisation"/> today, the default table stops
+    /// this fraction of the way from today's demand to its saturation.
+    /// </summary>
+    public const double DefaultReach = 0.5;
 
     /// <summary>The default table's last factor when no unit ever saturates: double today's demand.</summary>
     public const double NoSaturationLastFactor = 2.0;
@@ -62,19 +68,23 @@ public static class GrowthAnalysis
     }
 
     /// <summary>
-    /// <see cref="DefaultSteps"/> evenly spaced factors from 1 to <see cref="DefaultReach"/> of the way to the first
-    /// saturation; to <see cref="NoSaturationLastFactor"/> when nothing saturates; only 1 when a unit is already unstable.
+    /// <see cref="DefaultSteps"/> evenly spaced factors from 1 to <see cref="DefaultLastFactor"/>.
     /// </summary>
-    public static ImmutableArray<double> DefaultFactors(double? firstSaturation)
+    public static ImmutableArray<double> DefaultFactors(SaturationPoint? firstUnstable) =>
+        Range(1.0, DefaultLastFactor(firstUnstable), DefaultSteps);
+
+    /// <summary>
+    /// The default table's last factor: where the first unit to saturate reaches <see cref="DefaultLastUtilisation"/>
+    /// (or <see cref="DefaultReach"/> of the way to saturation when it is already that busy); 1 when it is already
+    /// unstable; <see cref="NoSaturationLastFactor"/> when nothing saturates.
+    /// </summary>
+    public static double DefaultLastFactor(SaturationPoint? firstUnstable) => firstUnstable switch
     {
-        double last = firstSaturation switch
-        {
-            null => NoSaturationLastFactor,
-            double f when f > 1.0 => 1.0 + (DefaultReach * (f - 1.0)),
-            _ => 1.0,
-        };
-        return Range(1.0, last, DefaultSteps);
-    }
+        null => NoSaturationLastFactor,
+        { SaturationFactor: <= 1.0 } => 1.0,
+        { UtilisationToday: < DefaultLastUtilisation } point => point.FactorAt(DefaultLastUtilisation),
+        var point => 1.0 + (DefaultReach * (point.SaturationFactor - 1.0)),
+    };
 
     /// <summary><paramref name="count"/> evenly spaced factors from <paramref name="first"/> to <paramref name="last"/>; one when they are equal.</summary>
     public static ImmutableArray<double> Range(double first, double last, int count)
@@ -100,7 +110,7 @@ public static class GrowthAnalysis
     {
         var network = solution.Network;
         var saturation = SaturationOrder(network, fixedFlows, grownFlows, solution.StrainThreshold);
-        var chosen = factors?.ToImmutableArray() ?? DefaultFactors(saturation.IsEmpty ? null : saturation[0].SaturationFactor);
+        var chosen = factors?.ToImmutableArray() ?? DefaultFactors(saturation.IsEmpty ? null : saturation[0]);
         var steps = ImmutableArray.CreateBuilder<GrowthStep>(chosen.Length);
         var flows = new double[fixedFlows.Length];
         foreach (double factor in chosen)
@@ -143,7 +153,7 @@ public static class GrowthAnalysis
                 // Not fed by the growing stream: unstable at every factor, or never.
                 if (fixedFlows[i] >= capacityPerHour)
                 {
-                    points.Add((new SaturationPoint(unit.Id, 0.0, 0.0), i));
+                    points.Add((new SaturationPoint(unit.Id, fixedFlows[i] / capacityPerHour, 0.0, 0.0), i));
                 }
 
                 continue;
@@ -151,7 +161,7 @@ public static class GrowthAnalysis
 
             double saturation = (capacityPerHour - fixedFlows[i]) / grownFlows[i];
             double strain = ((strainThreshold * capacityPerHour) - fixedFlows[i]) / grownFlows[i];
-            points.Add((new SaturationPoint(unit.Id, strain, saturation), i));
+            points.Add((new SaturationPoint(unit.Id, (fixedFlows[i] + grownFlows[i]) / capacityPerHour, strain, saturation), i));
         }
 
         return [.. points.OrderBy(p => p.Point.SaturationFactor).ThenBy(p => p.Index).Select(p => p.Point)];
