@@ -66,6 +66,7 @@ internal static class NetSolveApp
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
         root.Subcommands.Add(GrowthCommand.Create(context));
+        root.Subcommands.Add(CompareCommand.Create(context));
         return root;
     }
 }
