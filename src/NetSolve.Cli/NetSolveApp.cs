@@ -67,6 +67,7 @@ internal static class NetSolveApp
         root.Subcommands.Add(SolveCommand.Create(context));
         root.Subcommands.Add(GrowthCommand.Create(context));
         root.Subcommands.Add(CompareCommand.Create(context));
+        root.Subcommands.Add(StaffCommand.Create(context));
         return root;
     }
 }
