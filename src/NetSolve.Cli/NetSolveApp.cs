@@ -68,6 +68,7 @@ internal static class NetSolveApp
         root.Subcommands.Add(GrowthCommand.Create(context));
         root.Subcommands.Add(CompareCommand.Create(context));
         root.Subcommands.Add(StaffCommand.Create(context));
+        root.Subcommands.Add(PathwayCommand.Create(context));
         return root;
     }
 }
