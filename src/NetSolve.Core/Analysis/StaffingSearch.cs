@@ -20,6 +20,12 @@ namespace NetSolve.Analysis;
 /// </remarks>
 public static class StaffingSearch
 {
+    /// <summary>
+    /// Relative: a measure within this of its target meets it, so that a target met exactly on paper (7.2 erlangs on
+    /// 12 beds is 60%) is not missed by the last bit of a floating-point quotient.
+    /// </summary>
+    public const double TargetTolerance = 1e-12;
+
     /// <summary>Searches every unit of <paramref name="solution"/>'s network.</summary>
     /// <param name="solution">The network solved as given.</param>
     /// <param name="targets">What every unit must meet.</param>
@@ -89,12 +95,11 @@ public static class StaffingSearch
         double maxUtilisation = Math.Min(1.0, targets.MaxUtilisation ?? 1.0);
         double waitLimit = Math.Min(targets.MaxMeanWaitHours ?? double.PositiveInfinity, (targets.MaxMeanTimeInUnitHours ?? double.PositiveInfinity) - meanServiceHours);
         long first = Math.Max(start, Math.Max((long)Math.Floor(load) + 1, (long)Math.Ceiling(load / maxUtilisation)));
-        while (first > 1 && load / (first - 1) <= maxUtilisation && load < first - 1)
+        while (first > start && load < first - 1 && Within(load / (first - 1), maxUtilisation))
         {
             first--; // Ceiling of a rounded quotient can overshoot by one.
         }
 
-        first = Math.Max(first, start);
         if (first > NetworkFileParser.MaxServers)
         {
             impossible = TooMany(first);
@@ -128,20 +133,23 @@ public static class StaffingSearch
         double maxUtilisation, double waitLimit, WaitTailTarget? tail)
     {
         double utilisation = load / servers;
-        if (utilisation >= 1.0 || utilisation > maxUtilisation)
+        if (utilisation >= 1.0 || !Within(utilisation, maxUtilisation))
         {
             return false;
         }
 
         double waitProbability = Math.Min(1.0, blocking / (1.0 - (utilisation * (1.0 - blocking))));
         double drainPerHour = (servers / meanServiceHours) - arrivalsPerHour;
-        if (waitProbability / drainPerHour > waitLimit)
+        if (!Within(waitProbability / drainPerHour, waitLimit))
         {
             return false;
         }
 
-        return tail is null || waitProbability * Math.Exp(-drainPerHour * tail.WaitHours) <= tail.MaxProbability;
+        return tail is null || Within(waitProbability * Math.Exp(-drainPerHour * tail.WaitHours), tail.MaxProbability);
     }
+
+    /// <summary>True when <paramref name="value"/> is at most <paramref name="target"/>, within <see cref="TargetTolerance"/> relative.</summary>
+    public static bool Within(double value, double target) => value <= target + (TargetTolerance * Math.Abs(target));
 
     private static string? Unreachable(double meanServiceHours, StaffingTargets targets, bool unlimited, TimeUnit timeUnit)
     {
