@@ -229,13 +229,15 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
     private CloseUnit? CloseChange(YamlScalar key, YamlNode node)
     {
-        if (Scalar(node, key.Value, "close_units") is not YamlScalar scalar)
+        if (node is YamlScalar { IsNull: true })
         {
             Error(node.Location, key.Value, DiagnosticCodes.MissingKey, $"say where its patients go instead: a unit id or '{ScenarioReader.LeaveNetwork}'");
             return null;
         }
 
-        return new CloseUnit(scalar.Location, key.Value, scalar.Value == ScenarioReader.LeaveNetwork ? null : scalar.Value);
+        return Scalar(node, key.Value, "close_units") is YamlScalar scalar
+            ? new CloseUnit(scalar.Location, key.Value, scalar.Value == ScenarioReader.LeaveNetwork ? null : scalar.Value)
+            : null;
     }
 
     private double? Factor(YamlScalar scalar, string? unitId, string what, bool allowZero)
