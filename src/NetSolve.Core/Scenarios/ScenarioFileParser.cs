@@ -92,7 +92,11 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
     private ScenarioReadResult Result(Scenario? scenario)
     {
         bool failed = _diagnostics.Any(d => d.IsError);
-        return new ScenarioReadResult(failed ? null : scenario, [.. _diagnostics]);
+        var sorted = _diagnostics
+            .OrderBy(d => string.Equals(d.Location.File, fileName, StringComparison.Ordinal))
+            .ThenBy(d => d.Location.Line)
+            .ThenBy(d => d.Location.Column);
+        return new ScenarioReadResult(failed ? null : scenario, [.. sorted]);
     }
 
     private void Section(Dictionary<string, YamlNode> fields, string key, List<NetworkChange> changes, Func<YamlScalar, YamlNode, NetworkChange?> parse)
