@@ -17,6 +17,7 @@ internal static class CompareCommand
             Arity = ArgumentArity.ZeroOrMore,
         };
         var format = CommonOptions.Format();
+        format.Description = "Output: table (for people), json (one document) or csv (one row per scenario, unit and metric).";
         var strain = CommonOptions.Strain();
         var set = WhatIfOption.Create();
         set.Description = "Adds one more scenario: the base with these what-if changes. " + WhatIfOption.Description;

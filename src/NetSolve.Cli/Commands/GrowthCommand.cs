@@ -18,6 +18,7 @@ internal static class GrowthCommand
     {
         var file = CommonOptions.NetworkFile();
         var format = CommonOptions.Format();
+        format.Description = "Output: table (for people, with a text chart), json (one document) or csv (one row per factor and unit, ready to plot).";
         var strain = CommonOptions.Strain();
         var set = WhatIfOption.Create();
         var stream = new Option<string>("--stream") { Description = "Grow only the external arrivals at this unit; the other streams stay as they are.", HelpName = "UNIT" };

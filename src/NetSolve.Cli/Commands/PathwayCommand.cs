@@ -17,6 +17,7 @@ internal static class PathwayCommand
     {
         var file = CommonOptions.NetworkFile();
         var format = CommonOptions.Format();
+        format.Description = "Output: table (for people), json (one document) or csv (one row per unit reached, then the path).";
         var strain = CommonOptions.Strain();
         var set = WhatIfOption.Create();
         var from = new Option<string>("--from") { Description = "The unit patients enter at: expected visits, chance of visiting and time for every unit they can reach.", HelpName = "UNIT" };

@@ -15,6 +15,7 @@ internal static class StaffCommand
     {
         var file = CommonOptions.NetworkFile();
         var format = CommonOptions.Format();
+        format.Description = "Output: table (for people), json (one document) or csv (one row per unit).";
         var strain = CommonOptions.Strain();
         var set = WhatIfOption.Create();
         var maxUtil = new Option<double?>("--max-util") { Description = "Target: utilisation at most this, above 0 and at most 1 (e.g. 0.85).", HelpName = "FRACTION" };

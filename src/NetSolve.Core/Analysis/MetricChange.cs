@@ -11,6 +11,7 @@ public sealed record MetricChange(double? Before, double? After)
     /// <summary>(After − before) / before; null unless both exist and before is not 0.</summary>
     public double? Relative => Before is double before && After is double after && before != 0.0 ? (after - before) / Math.Abs(before) : null;
 
-    /// <summary>True when both are absent, or both exist and are equal.</summary>
+    /// <summary>True when both are absent, or both exist and are equal to the last bit.</summary>
+    /// <remarks>Exact on purpose: the same network solved twice gives the same bits, and any other difference is a change.</remarks>
     public bool IsUnchanged => Before == After;
 }
