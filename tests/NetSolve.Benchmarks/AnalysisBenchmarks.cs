@@ -40,7 +40,7 @@ public class AnalysisBenchmarks
     [Benchmark]
     public GrowthResult Growth_table_20_steps_10000_units() => GrowthAnalysis.Run(_tenThousandSolved);
 
-    /// <summary>The same for one arrival stream: two traffic solves, then 20 steps.</summary>
+    /// <summary>The same for one arrival stream: one traffic solve (the other streams), then 20 steps.</summary>
     [Benchmark]
     public GrowthResult Stream_growth_table_20_steps_10000_units() => GrowthAnalysis.RunStream(_tenThousandSolved, "unit00000");
 

@@ -10,8 +10,8 @@ namespace NetSolve.Analysis;
 /// </summary>
 /// <remarks>
 /// The traffic equations λ = γ + Pᵀλ are linear in γ. Growing every stream by f gives λ(f) = f·λ, so unit i
-/// saturates at f = c_i/a_i, its headroom. Growing one stream s by f gives λ(f) = λ_rest + f·λ_s, with λ_s solved
-/// for that stream alone and λ_rest for the others: two solves in all, however many factors. Thread-safe.
+/// saturates at f = c_i/a_i, its headroom. Growing one stream s by f gives λ(f) = λ_rest + f·λ_s, with λ_rest solved
+/// for the other streams and λ_s = λ − λ_rest from the solution: one solve in all, however many factors. Thread-safe.
 /// </remarks>
 public static class GrowthAnalysis
 {
@@ -58,12 +58,20 @@ public static class GrowthAnalysis
             throw new ArgumentException($"Unit '{streamUnitId}' has no positive external arrival stream.", nameof(streamUnitId));
         }
 
-        var streamOnly = network with { Arrivals = [.. network.Arrivals.Where(arrival => IsStream(arrival, streamUnitId))] };
+        // By linearity the stream's own flows are the solved total minus the flows of the other streams: one solve
+        // (none when the stream is the only one) instead of two, and the right-hand side stays as spread as the file's.
         var rest = network with { Arrivals = [.. network.Arrivals.Where(arrival => !IsStream(arrival, streamUnitId))] };
-        double[] streamFlows = TrafficEquations.Solve(RoutingTable.Build(streamOnly));
         double[] restFlows = rest.Arrivals.Any(arrival => arrival.PerHour > 0.0)
             ? TrafficEquations.Solve(RoutingTable.Build(rest))
             : new double[network.Units.Length];
+        var streamFlows = new double[restFlows.Length];
+        for (int i = 0; i < streamFlows.Length; i++)
+        {
+            double total = solution.Units[i].ArrivalsPerHour;
+            restFlows[i] = Math.Min(restFlows[i], total);
+            streamFlows[i] = total - restFlows[i];
+        }
+
         return Build(solution, streamUnitId, restFlows, streamFlows, factors);
     }
 
