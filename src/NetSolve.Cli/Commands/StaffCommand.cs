@@ -69,7 +69,7 @@ internal static class StaffCommand
                     throw new InputException("netsolve: staff: " + plan.Impossible);
                 }
 
-                Write(chosen, context, json => StaffingOutput.WriteJson(plan, json), text => StaffingOutput.WriteCsv(plan, text), text => StaffingOutput.WriteTable(plan, text));
+                Write(chosen, context, json => BudgetOutput.WriteJson(plan, json), text => BudgetOutput.WriteCsv(plan, text), text => BudgetOutput.WriteTable(plan, text));
                 return ExitCodes.Success;
             }
 
