@@ -141,6 +141,25 @@ public sealed class AnalysisCommandTests
         Assert.Equal("netsolve: compare: give at least one SCENARIO file, or --set changes, to compare with the base\n", error[error.IndexOf("netsolve:", StringComparison.Ordinal)..]);
     }
 
+    [Fact]
+    public void Growth_output_ignores_the_current_culture()
+    {
+        var culture = System.Globalization.CultureInfo.CurrentCulture;
+        try
+        {
+            var (_, invariant, _) = Run("growth", Network("harbourside.yaml"), "--format", "csv", "--steps", "3");
+            System.Globalization.CultureInfo.CurrentCulture = new System.Globalization.CultureInfo("de-DE");
+            var (_, german, _) = Run("growth", Network("harbourside.yaml"), "--format", "csv", "--steps", "3");
+            var (_, table, _) = Run("growth", Network("harbourside.yaml"));
+            Assert.Equal(invariant, german);
+            Assert.Contains("x1.000", table, StringComparison.Ordinal);
+        }
+        finally
+        {
+            System.Globalization.CultureInfo.CurrentCulture = culture;
+        }
+    }
+
     private static (int Code, string Output, string Error) Run(params string[] args)
     {
         using var output = new StringWriter();

@@ -78,6 +78,17 @@ public sealed class ScenarioReaderTests
     }
 
     [Fact]
+    public void Bare_numbers_in_a_scenario_use_the_base_networks_time_unit()
+    {
+        // networks/millbrook-clinic.yaml is in minutes: service 15 is 15 min = 0.25 h, arrivals 12 are 12/min = 720/h.
+        const string Yaml = "base: millbrook-clinic.yaml\nservice:\n  clinician: 15\narrivals:\n  reception: 12\n";
+        var result = ScenarioReader.ReadText(Yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(SmallNetworks.NetworksFolder, basePath)));
+        var network = result.Scenario!.Network;
+        Assert.Equal(0.25, network.Units.Single(u => u.Id == "clinician").MeanServiceHours, 1e-15);
+        Assert.Equal(720.0, network.Arrivals.Single(a => a.UnitId == "reception").PerHour, 1e-12);
+    }
+
+    [Fact]
     public void A_network_file_reads_as_a_scenario_with_no_changes()
     {
         var result = ScenarioReader.ReadFile(Path.Combine(SmallNetworks.NetworksFolder, "millbrook-clinic.yaml"));
