@@ -18,7 +18,7 @@ internal static class StaffCommand
         format.Description = "Output: table (for people), json (one document) or csv (one row per unit).";
         var strain = CommonOptions.Strain();
         var set = WhatIfOption.Create();
-        var maxUtil = new Option<double?>("--max-util") { Description = "Target: utilisation at most this, above 0 and at most 1 (e.g. 0.85).", HelpName = "FRACTION" };
+        var maxUtil = new Option<double?>("--max-util") { Description = "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).", HelpName = "FRACTION" };
         var maxWait = new Option<string>("--max-wait") { Description = "Target: mean wait before service at most this (e.g. 30min, 4h).", HelpName = "DURATION" };
         var maxTime = new Option<string>("--max-time") { Description = "Target: mean time in unit, wait plus service, at most this.", HelpName = "DURATION" };
         var waitOver = new Option<string>("--wait-over") { Description = "Target, with --at-most: the wait whose chance of being exceeded is limited (e.g. 4h).", HelpName = "DURATION" };
@@ -32,9 +32,9 @@ internal static class StaffCommand
         var budget = new Option<int?>("--budget") { Description = "Instead of targets: place this many extra servers where they cut the mean time in network most.", HelpName = "N" };
         maxUtil.Validators.Add(result =>
         {
-            if (result.GetValueOrDefault<double?>() is double u && !(u > 0.0 && u <= 1.0))
+            if (result.GetValueOrDefault<double?>() is double u && !(u >= 0.0 && u <= 1.0))
             {
-                result.AddError(string.Create(CultureInfo.InvariantCulture, $"--max-util must be above 0 and at most 1, not {u}"));
+                result.AddError(string.Create(CultureInfo.InvariantCulture, $"--max-util must be from 0 to 1, not {u}"));
             }
         });
         budget.Validators.Add(result =>

@@ -39,13 +39,18 @@ public static class PathwayAnalysis
         var builder = ImmutableArray.CreateBuilder<PathwayVisit>();
         for (int j = 0; j < visits.Length; j++)
         {
+            var result = solution.Units[j];
+            string id = result.Unit.Id;
             if (!(visits[j] > 0.0))
             {
+                if (probabilityFor?.Contains(id) == true)
+                {
+                    builder.Add(new PathwayVisit(id, 0.0, 0.0, 0.0)); // asked for, and never reached from here
+                }
+
                 continue;
             }
 
-            var result = solution.Units[j];
-            string id = result.Unit.Id;
             double? probability = probabilityFor is null || probabilityFor.Contains(id) ? VisitProbability(network, fromUnitId, id) : null;
             double? time = result.MeanTimeInUnitHours is double perVisit ? visits[j] * perVisit : null;
             builder.Add(new PathwayVisit(id, visits[j], probability, time));

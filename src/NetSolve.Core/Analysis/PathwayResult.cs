@@ -4,7 +4,7 @@ namespace NetSolve.Analysis;
 
 /// <summary>Where patients who enter at one unit go: expected visits, chance of visiting and time, per unit.</summary>
 /// <param name="FromUnitId">The unit patients enter at.</param>
-/// <param name="Units">Every unit they can reach (positive expected visits), in file order.</param>
+/// <param name="Units">Every unit they can reach (positive expected visits), and any unit whose chance was asked for, in file order.</param>
 public sealed record PathwayResult(string FromUnitId, ImmutableArray<PathwayVisit> Units)
 {
     /// <summary>

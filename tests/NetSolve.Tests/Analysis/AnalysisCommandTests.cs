@@ -115,6 +115,15 @@ public sealed class AnalysisCommandTests
     }
 
     [Fact]
+    public void Staff_with_a_zero_utilisation_target_names_the_busy_units()
+    {
+        var (code, _, error) = Run("staff", Network("millbrook-clinic.yaml"), "--max-util", "0");
+        Assert.Equal(1, code);
+        Assert.Equal(3, error.Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
+        Assert.Contains("netsolve: staff: unit 'reception' cannot meet the targets: a maximum utilisation of 0 cannot be met while patients arrive\n", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Staff_budget_places_every_server()
     {
         var (code, output, _) = Run("staff", Network("harbourside.yaml"), "--budget", "5", "--format", "json");

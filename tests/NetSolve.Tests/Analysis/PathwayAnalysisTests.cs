@@ -83,6 +83,17 @@ public sealed class PathwayAnalysisTests
         Assert.Equal(solution.Totals.MeanTimeInSystemHours!.Value, pathway.MeanTimeInNetworkHours!.Value, 1e-9);
     }
 
+    [Fact]
+    public void A_unit_that_cannot_be_reached_from_the_start_has_chance_zero_when_asked()
+    {
+        // Exact by hand: nothing routes back from the ward to emergency in networks/harbourside.yaml.
+        var solution = NetworkSolver.Solve(SmallNetworks.Example("harbourside.yaml"));
+        var pathway = PathwayAnalysis.From(solution, "ward", ["emergency"]);
+        var emergency = pathway.Units.Single(u => u.UnitId == "emergency");
+        Assert.Equal(0.0, emergency.VisitProbability);
+        Assert.Equal(0.0, emergency.ExpectedVisits);
+    }
+
     private sealed class ToleranceComparer(double tolerance) : IEqualityComparer<double>
     {
         public bool Equals(double x, double y) => Math.Abs(x - y) <= tolerance;
