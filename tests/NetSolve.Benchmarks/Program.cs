@@ -1,10 +1,10 @@
 using BenchmarkDotNet.Running;
 using NetSolve.Benchmarks;
 
-if (args.Length == 1 && args[0] == "cpu-time")
+if (args is ["cpu-time"])
 {
     CpuTimeMeasurement.Run(Console.Out);
     return;
 }
 
-BenchmarkSwitcher.FromAssembly(typeof(SimulationBenchmarks).Assembly).Run(args);
+BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);
