@@ -24,7 +24,10 @@ public static class TrafficEquations
 
     /// <summary>Flow into each unit per hour, by unit position; 0 for unreached units.</summary>
     /// <exception cref="TrafficEquationsException">The residual stays above <see cref="Tolerances.TrafficResidual"/>.</exception>
-    public static double[] Solve(RoutingTable routing)
+    public static double[] Solve(RoutingTable routing) => Solve(routing, TrafficSolveMethod.Automatic);
+
+    /// <summary>As <see cref="Solve(RoutingTable)"/> with the method forced, so tests and benchmarks can compare both paths.</summary>
+    internal static double[] Solve(RoutingTable routing, TrafficSolveMethod method)
     {
         ArgumentNullException.ThrowIfNull(routing);
         bool[] reached = routing.ReachedUnits();
@@ -41,7 +44,8 @@ public static class TrafficEquations
 
         int n = members.Count;
         var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
-        var flows = n <= DenseLimit
+        bool dense = method == TrafficSolveMethod.Dense || (method == TrafficSolveMethod.Automatic && n <= DenseLimit);
+        var flows = dense
             ? SolveDense(routing, members, position, external)
             : SolveSparse(routing, members, position, external);
 
