@@ -1,7 +1,5 @@
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.LinearAlgebra.Double;
-using MathNet.Numerics.LinearAlgebra.Double.Solvers;
-using MathNet.Numerics.LinearAlgebra.Solvers;
 
 namespace NetSolve.Solving;
 
@@ -10,8 +8,8 @@ namespace NetSolve.Solving;
 /// </summary>
 /// <remarks>
 /// Up to <see cref="DenseLimit"/> reached units the system (I − Pᵀ)λ = γ is solved directly by LU on a dense
-/// matrix; above it, by BiCGStab with an ILU(0) preconditioner on a sparse matrix, so memory grows with the
-/// number of routes. Either way the residual is checked. Validation has already rejected sets of units with no
+/// matrix; above it, by Gauss-Seidel over the strongly connected sets of units in topological order
+/// (<see cref="SparseTrafficSolver"/>), so memory grows with the number of routes. Either way the residual is checked. Validation has already rejected sets of units with no
 /// exit, so I − Pᵀ is non-singular on the reached units.
 /// </remarks>
 public static class TrafficEquations
@@ -19,8 +17,14 @@ public static class TrafficEquations
     /// <summary>Largest number of reached units solved densely; chosen by measurement (docs/performance.md).</summary>
     public const int DenseLimit = 400;
 
-    /// <summary>Iteration cap of the sparse solver.</summary>
+    /// <summary>Most Gauss-Seidel sweeps over one loop of units on the sparse path.</summary>
     public const int MaxIterations = 10_000;
+
+    /// <summary>
+    /// Relative to the largest flow in a loop: the sweep change at which the sparse path stops. Well below
+    /// <see cref="Tolerances.TrafficResidual"/>, so the residual check that follows passes with margin.
+    /// </summary>
+    private const double SparseTolerance = Tolerances.TrafficResidual * 1e-4;
 
     /// <summary>Flow into each unit per hour, by unit position; 0 for unreached units.</summary>
     /// <exception cref="TrafficEquationsException">The residual stays above <see cref="Tolerances.TrafficResidual"/>.</exception>
@@ -43,11 +47,10 @@ public static class TrafficEquations
         }
 
         int n = members.Count;
-        var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
         bool dense = method == TrafficSolveMethod.Dense || (method == TrafficSolveMethod.Automatic && n <= DenseLimit);
         var flows = dense
-            ? SolveDense(routing, members, position, external)
-            : SolveSparse(routing, members, position, external);
+            ? SolveDense(routing, members, position)
+            : SparseTrafficSolver.Solve(routing, members, position, MaxIterations, SparseTolerance);
 
         var result = new double[routing.UnitCount];
         for (int k = 0; k < n; k++)
@@ -59,36 +62,16 @@ public static class TrafficEquations
         return result;
     }
 
-    private static Vector<double> SolveDense(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
+    private static double[] SolveDense(RoutingTable routing, List<int> members, int[] position)
     {
+        var external = Vector<double>.Build.Dense(members.Count, k => routing.ExternalPerHour[members[k]]);
         var matrix = DenseMatrix.CreateIdentity(members.Count);
         foreach (var (row, column, value) in NegatedTransposeEntries(routing, members, position))
         {
             matrix[row, column] -= value;
         }
 
-        return matrix.LU().Solve(external);
-    }
-
-    private static Vector<double> SolveSparse(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
-    {
-        var entries = new List<Tuple<int, int, double>>(routing.Targets.Count + members.Count);
-        for (int k = 0; k < members.Count; k++)
-        {
-            entries.Add(Tuple.Create(k, k, 1.0));
-        }
-
-        foreach (var (row, column, value) in NegatedTransposeEntries(routing, members, position))
-        {
-            entries.Add(Tuple.Create(row, column, -value));
-        }
-
-        // OfIndexed sums duplicate (row, column) entries, so a self-route lands on the diagonal correctly.
-        var matrix = SparseMatrix.OfIndexed(members.Count, members.Count, entries);
-        var iterator = new Iterator<double>(
-            new IterationCountStopCriterion<double>(MaxIterations),
-            new ResidualStopCriterion<double>(Tolerances.TrafficResidual * 1e-3));
-        return matrix.SolveIterative(external, new BiCgStab(), iterator, new ILU0Preconditioner());
+        return matrix.LU().Solve(external).ToArray();
     }
 
     private static IEnumerable<(int Row, int Column, double Value)> NegatedTransposeEntries(
