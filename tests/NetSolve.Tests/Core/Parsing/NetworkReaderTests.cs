@@ -1,4 +1,5 @@
 using NetSolve.Benchmarks;
+using NetSolve.Model;
 using NetSolve.Parsing;
 
 namespace NetSolve.Tests.Core.Parsing;
@@ -133,18 +134,17 @@ public class NetworkReaderTests
 
     // Source: the network file contract, "Values": the accepted forms of durations, rates and probabilities.
     [Theory]
-    [InlineData("45", 45.0)]
+    [InlineData("45", 0.75)]
     [InlineData("45min", 0.75)]
     [InlineData("45 min", 0.75)]
     [InlineData("2.5h", 2.5)]
     [InlineData("4d", 96.0)]
     [InlineData("30s", 30.0 / 3600.0)]
     [InlineData("2.5e-3h", 0.0025)]
-    public void Durations_convert_to_hours(string text, double hours)
+    public void Durations_convert_to_hours_with_bare_numbers_in_the_files_time_unit(string text, double hours)
     {
-        var time = text == "45" ? Model.TimeUnit.Hour : Model.TimeUnit.Minute;
-        Assert.Null(ValueParser.Duration(text, time, out double parsed));
-        Assert.Equal(text == "45" ? 45.0 : hours, parsed, 1e-12);
+        Assert.Null(ValueParser.Duration(text, TimeUnit.Minute, out double parsed));
+        Assert.Equal(hours, parsed, 1e-12);
     }
 
     [Theory]
@@ -156,7 +156,7 @@ public class NetworkReaderTests
     [InlineData("3/s", 10_800.0)]
     public void Rates_convert_to_events_per_hour(string text, double perHour)
     {
-        Assert.Null(ValueParser.Rate(text, Model.TimeUnit.Hour, out double parsed));
+        Assert.Null(ValueParser.Rate(text, TimeUnit.Hour, out double parsed));
         Assert.Equal(perHour, parsed, 1e-9);
     }
 
