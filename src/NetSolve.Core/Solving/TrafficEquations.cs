@@ -1,5 +1,7 @@
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.LinearAlgebra.Double;
+using MathNet.Numerics.LinearAlgebra.Double.Solvers;
+using MathNet.Numerics.LinearAlgebra.Solvers;
 
 namespace NetSolve.Solving;
 
@@ -8,23 +10,22 @@ namespace NetSolve.Solving;
 /// </summary>
 /// <remarks>
 /// Up to <see cref="DenseLimit"/> reached units the system (I − Pᵀ)λ = γ is solved directly by LU on a dense
-/// matrix; above it, by Gauss-Seidel over the strongly connected sets of units in topological order
-/// (<see cref="SparseTrafficSolver"/>), so memory grows with the number of routes. Either way the residual is checked. Validation has already rejected sets of units with no
-/// exit, so I − Pᵀ is non-singular on the reached units.
+/// matrix (MathNet.Numerics). Above it memory must grow with the routes, not units squared: Gauss–Seidel sweeps
+/// over the units in upstream-first order (<see cref="ComponentOrder"/>), which is exact after one sweep where
+/// patients never return and converges geometrically inside feedback loops; if the sweeps stall, BiCGStab on a
+/// MathNet sparse matrix takes over. Either way the residual is checked. Validation has already rejected sets of
+/// units with no exit, so I − Pᵀ is non-singular on the reached units.
 /// </remarks>
 public static class TrafficEquations
 {
     /// <summary>Largest number of reached units solved densely; chosen by measurement (docs/performance.md).</summary>
     public const int DenseLimit = 400;
 
-    /// <summary>Most Gauss-Seidel sweeps over one loop of units on the sparse path.</summary>
-    public const int MaxIterations = 10_000;
+    /// <summary>Iteration cap of the sparse solvers (sweeps, then BiCGStab iterations).</summary>
+    public const int MaxIterations = 2_000;
 
-    /// <summary>
-    /// Relative to the largest flow in a loop: the sweep change at which the sparse path stops. Well below
-    /// <see cref="Tolerances.TrafficResidual"/>, so the residual check that follows passes with margin.
-    /// </summary>
-    private const double SparseTolerance = Tolerances.TrafficResidual * 1e-4;
+    /// <summary>Relative to the largest flow: sweeping stops when no flow changes by more than this.</summary>
+    public const double SweepTolerance = 1e-13;
 
     /// <summary>Flow into each unit per hour, by unit position; 0 for unreached units.</summary>
     /// <exception cref="TrafficEquationsException">The residual stays above <see cref="Tolerances.TrafficResidual"/>.</exception>
@@ -47,31 +48,143 @@ public static class TrafficEquations
         }
 
         int n = members.Count;
+        var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
+        double[] result;
         bool dense = method == TrafficSolveMethod.Dense || (method == TrafficSolveMethod.Automatic && n <= DenseLimit);
-        var flows = dense
-            ? SolveDense(routing, members, position)
-            : SparseTrafficSolver.Solve(routing, members, position, MaxIterations, SparseTolerance);
-
-        var result = new double[routing.UnitCount];
-        for (int k = 0; k < n; k++)
+        if (dense)
         {
-            result[members[k]] = Math.Max(0.0, flows[k]);
+            result = Scatter(SolveDense(routing, members, position, external), members, routing.UnitCount);
+        }
+        else
+        {
+            result = Sweep(routing, reached)
+                ?? Scatter(SolveSparse(routing, members, position, external), members, routing.UnitCount);
         }
 
         CheckResidual(routing, result);
         return result;
     }
 
-    private static double[] SolveDense(RoutingTable routing, List<int> members, int[] position)
+    private static double[] Scatter(Vector<double> flows, List<int> members, int unitCount)
     {
-        var external = Vector<double>.Build.Dense(members.Count, k => routing.ExternalPerHour[members[k]]);
+        var result = new double[unitCount];
+        for (int k = 0; k < members.Count; k++)
+        {
+            result[members[k]] = Math.Max(0.0, flows[k]);
+        }
+
+        return result;
+    }
+
+    /// <summary>Gauss–Seidel in upstream-first order; null when it has not converged within <see cref="MaxIterations"/> sweeps.</summary>
+    private static double[]? Sweep(RoutingTable routing, bool[] reached)
+    {
+        int n = routing.UnitCount;
+        var incomingStart = new int[n + 1];
+        for (int from = 0; from < n; from++)
+        {
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            {
+                if (reached[from] && routing.Probabilities[e] > 0.0)
+                {
+                    incomingStart[routing.Targets[e] + 1]++;
+                }
+            }
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            incomingStart[i + 1] += incomingStart[i];
+        }
+
+        var fill = (int[])incomingStart.Clone();
+        var sources = new int[incomingStart[n]];
+        var weights = new double[incomingStart[n]];
+        var selfRoute = new double[n];
+        for (int from = 0; from < n; from++)
+        {
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            {
+                int to = routing.Targets[e];
+                double p = routing.Probabilities[e];
+                if (!reached[from] || p <= 0.0)
+                {
+                    continue;
+                }
+
+                if (to == from)
+                {
+                    selfRoute[from] += p;
+                }
+                else
+                {
+                    int slot = fill[to]++;
+                    sources[slot] = from;
+                    weights[slot] = p;
+                }
+            }
+        }
+
+        int[] order = ComponentOrder.Upstream(routing, reached);
+        var external = routing.ExternalPerHour.ToArray();
+        var flows = new double[n];
+        for (int sweep = 0; sweep < MaxIterations; sweep++)
+        {
+            double largestChange = 0.0;
+            double largestFlow = 0.0;
+            foreach (int unit in order)
+            {
+                double inflow = external[unit];
+                for (int k = incomingStart[unit]; k < incomingStart[unit + 1]; k++)
+                {
+                    inflow += weights[k] * flows[sources[k]];
+                }
+
+                double updated = inflow / (1.0 - selfRoute[unit]);
+                largestChange = Math.Max(largestChange, Math.Abs(updated - flows[unit]));
+                largestFlow = Math.Max(largestFlow, updated);
+                flows[unit] = updated;
+            }
+
+            if (largestChange <= SweepTolerance * Math.Max(1.0, largestFlow))
+            {
+                return flows;
+            }
+        }
+
+        return null;
+    }
+
+    private static Vector<double> SolveDense(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
+    {
         var matrix = DenseMatrix.CreateIdentity(members.Count);
         foreach (var (row, column, value) in NegatedTransposeEntries(routing, members, position))
         {
             matrix[row, column] -= value;
         }
 
-        return matrix.LU().Solve(external).ToArray();
+        return matrix.LU().Solve(external);
+    }
+
+    private static Vector<double> SolveSparse(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
+    {
+        var entries = new List<Tuple<int, int, double>>(routing.Targets.Count + members.Count);
+        for (int k = 0; k < members.Count; k++)
+        {
+            entries.Add(Tuple.Create(k, k, 1.0));
+        }
+
+        foreach (var (row, column, value) in NegatedTransposeEntries(routing, members, position))
+        {
+            entries.Add(Tuple.Create(row, column, -value));
+        }
+
+        // OfIndexed sums duplicate (row, column) entries, so a self-route lands on the diagonal correctly.
+        var matrix = SparseMatrix.OfIndexed(members.Count, members.Count, entries);
+        var iterator = new Iterator<double>(
+            new IterationCountStopCriterion<double>(MaxIterations),
+            new ResidualStopCriterion<double>(Tolerances.TrafficResidual * 1e-3));
+        return matrix.SolveIterative(external, new BiCgStab(), iterator, new DiagonalPreconditioner());
     }
 
     private static IEnumerable<(int Row, int Column, double Value)> NegatedTransposeEntries(
