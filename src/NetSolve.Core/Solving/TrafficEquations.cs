@@ -19,7 +19,7 @@ namespace NetSolve.Solving;
 public static class TrafficEquations
 {
     /// <summary>Largest number of reached units solved densely; chosen by measurement (docs/performance.md).</summary>
-    public const int DenseLimit = 400;
+    public const int DenseLimit = 100;
 
     /// <summary>Iteration cap of the sparse solvers (sweeps, then BiCGStab iterations).</summary>
     public const int MaxIterations = 2_000;
