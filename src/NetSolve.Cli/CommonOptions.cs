@@ -27,22 +27,24 @@ internal static class CommonOptions
         DefaultValueFactory = _ => "table",
     }.AcceptOnlyFromAmong("table", "json", "csv");
 
-    /// <summary><c>--strain</c>: utilisation at which a unit is flagged strained.</summary>
-    public static Option<double> Strain()
+    /// <summary><c>--strain</c>: utilisation at which a unit is flagged strained, read in invariant culture.</summary>
+    public static Option<double> Strain() => new("--strain")
     {
-        var option = new Option<double>("--strain")
+        Description = "Utilisation at or above which a unit is flagged strained (default 0.85, the common planning rule of thumb).",
+        DefaultValueFactory = _ => Defaults.StrainThreshold,
+
+        // Our own parser: the built-in one reads numbers in the current culture (0.9 is 9 under de-DE) and its
+        // failure surfaced as an exception from a validator instead of a usage error.
+        CustomParser = result =>
         {
-            Description = "Utilisation at or above which a unit is flagged strained (default 0.85, the common planning rule of thumb).",
-            DefaultValueFactory = _ => Defaults.StrainThreshold,
-        };
-        option.Validators.Add(result =>
-        {
-            double value = result.GetValueOrDefault<double>();
-            if (!(value > 0.0 && value <= 1.0))
+            string text = result.Tokens.Count == 1 ? result.Tokens[0].Value : string.Empty;
+            if (!double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) || !(value > 0.0 && value <= 1.0))
             {
-                result.AddError(string.Create(CultureInfo.InvariantCulture, $"--strain must be above 0 and at most 1, not {value}"));
+                result.AddError($"--strain must be a number above 0 and at most 1, such as 0.85, not '{text}'");
+                return Defaults.StrainThreshold;
             }
-        });
-        return option;
-    }
+
+            return value;
+        },
+    };
 }

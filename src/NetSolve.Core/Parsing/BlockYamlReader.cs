@@ -1,3 +1,5 @@
+using StringPool = System.Collections.Generic.Dictionary<string, string>.AlternateLookup<System.ReadOnlySpan<char>>;
+
 namespace NetSolve.Parsing;
 
 /// <summary>
@@ -16,7 +18,8 @@ internal static class BlockYamlReader
     public static bool TryRead(string text, string fileName, out YamlNode? root)
     {
         root = null;
-        var lines = new List<Line>();
+        // One line per '\n' at most: sizing the list up front avoids regrowing it for 100,000-unit files.
+        var lines = new List<Line>(text.AsSpan().Count('\n') + 1);
         if (!Tokenize(text, lines))
         {
             return false;
@@ -87,6 +90,8 @@ internal static class BlockYamlReader
 
     private static bool Tokenize(string text, List<Line> lines)
     {
+        // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each.
+        var pool = new Dictionary<string, string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
         int lineNumber = 0;
         int position = 0;
         while (position <= text.Length)
@@ -104,7 +109,7 @@ internal static class BlockYamlReader
                 span = span[..^1];
             }
 
-            if (!ReadLine(span, lineNumber, lines))
+            if (!ReadLine(span, lineNumber, lines, pool))
             {
                 return false;
             }
@@ -115,7 +120,7 @@ internal static class BlockYamlReader
         return true;
     }
 
-    private static bool ReadLine(ReadOnlySpan<char> span, int number, List<Line> lines)
+    private static bool ReadLine(ReadOnlySpan<char> span, int number, List<Line> lines, StringPool pool)
     {
         foreach (char c in span)
         {
@@ -148,7 +153,7 @@ internal static class BlockYamlReader
             return false;
         }
 
-        string key = span[indent..keyEnd].ToString();
+        string key = Intern(pool, span[indent..keyEnd]);
         int colon = keyEnd;
         int valueStart = colon + 1;
         if (valueStart < span.Length && span[valueStart] != ' ')
@@ -168,7 +173,7 @@ internal static class BlockYamlReader
             return true;
         }
 
-        if (!ReadValue(rest, out string? value, out bool isPlain))
+        if (!ReadValue(rest, pool, out string? value, out bool isPlain))
         {
             return false;
         }
@@ -177,7 +182,7 @@ internal static class BlockYamlReader
         return true;
     }
 
-    private static bool ReadValue(ReadOnlySpan<char> rest, out string? value, out bool isPlain)
+    private static bool ReadValue(ReadOnlySpan<char> rest, StringPool pool, out string? value, out bool isPlain)
     {
         value = null;
         isPlain = true;
@@ -196,7 +201,7 @@ internal static class BlockYamlReader
                 return false;
             }
 
-            value = rest[1..(close + 1)].ToString();
+            value = Intern(pool, rest[1..(close + 1)]);
             isPlain = false;
             return true;
         }
@@ -213,8 +218,19 @@ internal static class BlockYamlReader
             return false;
         }
 
-        value = body.ToString();
+        value = Intern(pool, body);
         return true;
+    }
+
+    private static string Intern(StringPool pool, ReadOnlySpan<char> text)
+    {
+        if (!pool.TryGetValue(text, out string? interned))
+        {
+            interned = text.ToString();
+            pool.Dictionary[interned] = interned;
+        }
+
+        return interned;
     }
 
     private static bool IsKeyChar(char c) => char.IsAsciiLetterOrDigit(c) || c is '_' or '-';

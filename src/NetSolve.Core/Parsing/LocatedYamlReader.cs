@@ -51,6 +51,13 @@ public static class LocatedYamlReader
         {
             throw new YamlReadException(At(fileName, exception.Start), "not valid YAML: " + Describe(exception));
         }
+        catch (InvalidOperationException)
+        {
+            // YamlDotNet's scanner throws this, without a position, on some unterminated flow collections
+            // (for example an unclosed '{'): point at the last place it read.
+            var mark = parser.Current is { } current ? current.End : Mark.Empty;
+            throw new YamlReadException(At(fileName, mark), "not valid YAML: cannot be read past this point (an unclosed bracket or quote?)");
+        }
     }
 
     private static YamlNode ReadNode(IParser parser, string fileName, int depth)

@@ -139,7 +139,7 @@ internal sealed partial class NetworkFileParser
             return null;
         }
 
-        if (!scalar.IsPlain || !WholeNumberRegex().IsMatch(scalar.Value)
+        if (!scalar.IsPlain || scalar.Value.Length == 0 || scalar.Value.AsSpan().ContainsAnyExceptInRange('0', '9')
             || !int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int capacity) || capacity < 1)
         {
             Error(scalar.Location, id, DiagnosticCodes.BadValue, $"capacity must be a whole number of at least 1 (patients in the unit, in service and waiting), not '{scalar.Value}'");

@@ -18,7 +18,7 @@ internal sealed partial class NetworkFileParser
         foreach (var (key, value) in UniqueEntries(mapping, null))
         {
             string id = key.Value;
-            if (!UnitIdRegex().IsMatch(id))
+            if (!IsUnitId(id))
             {
                 Error(key.Location, null, DiagnosticCodes.BadUnitId,
                     $"groups: '{id}' is not a valid group id: use letters, digits, '_' and '-', starting with a letter");

@@ -1,6 +1,5 @@
 using System.Collections.Immutable;
 using System.Globalization;
-using System.Text.RegularExpressions;
 using NetSolve.Model;
 
 namespace NetSolve.Parsing;
@@ -94,7 +93,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         foreach (var (key, value) in UniqueEntries(mapping, null))
         {
             string id = key.Value;
-            if (!UnitIdRegex().IsMatch(id))
+            if (!IsUnitId(id))
             {
                 Error(key.Location, null, DiagnosticCodes.BadUnitId,
                     $"'{id}' is not a valid unit id: use letters, digits, '_' and '-', starting with a letter");
@@ -161,7 +160,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             return Servers.Unlimited;
         }
 
-        if (!WholeNumberRegex().IsMatch(scalar.Value))
+        if (scalar.Value.Length == 0 || scalar.Value.AsSpan().ContainsAnyExceptInRange('0', '9'))
         {
             Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, not '{scalar.Value}'");
             return null;
@@ -235,8 +234,9 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             double total = 0.0;
             foreach (var (targetKey, value) in UniqueEntries(targetMap, from))
             {
-                if (KnownUnit(targetKey, known, $"routes.{from}", from)
-                    && Value(value, from, $"route to '{targetKey.Value}'", ValueParser.Probability) is double probability)
+                // The names in messages are built only on error: a 100,000-unit file has hundreds of thousands of routes.
+                if (KnownUnit(targetKey, known, "routes", from, from)
+                    && Value(value, from, "route to", ValueParser.Probability, targetKey.Value) is double probability)
                 {
                     routes.Add(new Route(from, targetKey.Value, probability));
                     total += probability;
@@ -253,7 +253,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         return routes.ToImmutable();
     }
 
-    private bool KnownUnit(YamlScalar key, HashSet<string> known, string where, string? unitId = null)
+    private bool KnownUnit(YamlScalar key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
     {
         if (known.Contains(key.Value) || _unitLocations.ContainsKey(key.Value))
         {
@@ -261,7 +261,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         }
 
         Error(key.Location, unitId, DiagnosticCodes.UnknownUnit,
-            $"{where}: unknown unit '{key.Value}'{NearestName.Hint(key.Value, _unitLocations.Keys)}");
+            $"{where}{(whereUnit is null ? string.Empty : "." + whereUnit)}: unknown unit '{key.Value}'{NearestName.Hint(key.Value, _unitLocations.Keys)}");
         return false;
     }
 
@@ -287,33 +287,59 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
 
     private IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
     {
-        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
-        foreach (var (key, value) in mapping.Entries)
+        // Most mappings (a unit's fields, its routes) hold a handful of keys: a linear scan finds duplicates there
+        // without a dictionary per mapping, which matters for 100,000-unit files.
+        const int ScanLimit = 16;
+        var entries = mapping.Entries;
+        var seen = entries.Count > ScanLimit ? new Dictionary<string, SourceLocation>(entries.Count, StringComparer.Ordinal) : null;
+        for (int i = 0; i < entries.Count; i++)
         {
-            if (seen.TryGetValue(key.Value, out var first))
+            var (key, value) = entries[i];
+            if (FirstOccurrence(entries, i, seen) is SourceLocation first)
             {
                 Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
                     $"duplicate key '{key.Value}' (first at line {first.Line})"));
                 continue;
             }
 
-            seen[key.Value] = key.Location;
+            seen?.Add(key.Value, key.Location);
             yield return (key, value);
         }
     }
 
+    /// <summary>Where the key of entry <paramref name="index"/> first appeared, when it appeared before.</summary>
+    private static SourceLocation? FirstOccurrence(IReadOnlyList<KeyValuePair<YamlScalar, YamlNode>> entries, int index, Dictionary<string, SourceLocation>? seen)
+    {
+        string key = entries[index].Key.Value;
+        if (seen is not null)
+        {
+            return seen.TryGetValue(key, out var location) ? location : null;
+        }
+
+        for (int j = 0; j < index; j++)
+        {
+            if (string.Equals(entries[j].Key.Value, key, StringComparison.Ordinal))
+            {
+                return entries[j].Key.Location;
+            }
+        }
+
+        return null;
+    }
+
     private delegate string? ValueParse(string text, out double value);
 
-    private double? Value(YamlNode node, string? unitId, string what, ValueParse parse)
+    private double? Value(YamlNode node, string? unitId, string what, ValueParse parse, string? whatUnit = null)
     {
-        if (Scalar(node, unitId, what) is not YamlScalar scalar)
+        if (node is not YamlScalar { IsNull: false } && Scalar(node, unitId, whatUnit is null ? what : $"{what} '{whatUnit}'") is null)
         {
             return null;
         }
 
+        var scalar = (YamlScalar)node;
         if (parse(scalar.Value, out double value) is string error)
         {
-            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: {error}");
+            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, whatUnit is null ? $"{what}: {error}" : $"{what} '{whatUnit}': {error}");
             return null;
         }
 
@@ -348,9 +374,22 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
     private void Warning(SourceLocation location, string? unitId, string code, string message) =>
         diagnostics.Add(Diagnostic.Warning(code, location, unitId, message));
 
-    [GeneratedRegex("^[A-Za-z][A-Za-z0-9_-]*$", RegexOptions.CultureInvariant)]
-    private static partial Regex UnitIdRegex();
+    /// <summary>Letters, digits, '_' and '-', starting with a letter (ASCII, as the contract's examples).</summary>
+    private static bool IsUnitId(string id)
+    {
+        if (id.Length == 0 || !char.IsAsciiLetter(id[0]))
+        {
+            return false;
+        }
 
-    [GeneratedRegex("^[0-9]+$", RegexOptions.CultureInvariant)]
-    private static partial Regex WholeNumberRegex();
+        foreach (char c in id)
+        {
+            if (!(char.IsAsciiLetterOrDigit(c) || c is '_' or '-'))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
 }

@@ -1,21 +1,18 @@
 using System.Globalization;
-using System.Text.RegularExpressions;
 using NetSolve.Model;
 
 namespace NetSolve.Parsing;
 
 /// <summary>Parses the contract's value forms: numbers, durations, rates and probabilities.</summary>
 /// <remarks>Each method returns null on success and an error message (one line, no location) on failure.</remarks>
-public static partial class ValueParser
+public static class ValueParser
 {
-    private const string NumberPattern = @"[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?";
-
     /// <summary>Parses a finite number.</summary>
     public static string? Number(string text, out double value)
     {
         ArgumentNullException.ThrowIfNull(text);
         value = 0.0;
-        if (!NumberRegex().IsMatch(text))
+        if (NumberLength(text) != text.Length)
         {
             return $"'{text}' is not a number";
         }
@@ -29,18 +26,17 @@ public static partial class ValueParser
     {
         ArgumentNullException.ThrowIfNull(text);
         hours = 0.0;
-        var match = DurationRegex().Match(text);
-        if (!match.Success)
+        if (!Split(text, string.Empty, out string number, out string suffix) || suffix is not ("" or "s" or "min" or "h" or "d"))
         {
             return $"'{text}' is not a duration (write e.g. 45min, 2.5h, 3d, 30s, or a number in {TimeConstants.Name(timeUnit)}s)";
         }
 
-        if (Number(match.Groups["n"].Value, out double amount) is string error)
+        if (Number(number, out double amount) is string error)
         {
             return error;
         }
 
-        hours = amount * HoursPerSuffix(match.Groups["u"].Value, timeUnit);
+        hours = amount * HoursPerSuffix(suffix, timeUnit);
         return hours > 0.0 && double.IsFinite(hours) ? null : $"'{text}' is not a positive duration";
     }
 
@@ -49,18 +45,17 @@ public static partial class ValueParser
     {
         ArgumentNullException.ThrowIfNull(text);
         perHour = 0.0;
-        var match = RateRegex().Match(text);
-        if (!match.Success)
+        if (!Split(text, "/", out string number, out string suffix) || suffix is not ("" or "s" or "min" or "h" or "d"))
         {
             return $"'{text}' is not a rate (write e.g. 11.5/h, 280/d, 0.2/min, or a number per {TimeConstants.Name(timeUnit)})";
         }
 
-        if (Number(match.Groups["n"].Value, out double amount) is string error)
+        if (Number(number, out double amount) is string error)
         {
             return error;
         }
 
-        perHour = amount / HoursPerSuffix(match.Groups["u"].Value, timeUnit);
+        perHour = amount / HoursPerSuffix(suffix, timeUnit);
         if (!double.IsFinite(perHour))
         {
             return $"'{text}' is too large for a rate";
@@ -74,18 +69,17 @@ public static partial class ValueParser
     {
         ArgumentNullException.ThrowIfNull(text);
         probability = 0.0;
-        var match = ProbabilityRegex().Match(text);
-        if (!match.Success)
+        if (!Split(text, string.Empty, out string number, out string suffix) || suffix is not ("" or "%"))
         {
             return $"'{text}' is not a probability (write e.g. 0.35 or 35%)";
         }
 
-        if (Number(match.Groups["n"].Value, out double amount) is string error)
+        if (Number(number, out double amount) is string error)
         {
             return error;
         }
 
-        probability = match.Groups["p"].Success ? amount / 100.0 : amount;
+        probability = suffix == "%" ? amount / 100.0 : amount;
         return probability is >= 0.0 and <= 1.0 ? null : $"'{text}' is not between 0 and 1";
     }
 
@@ -99,15 +93,85 @@ public static partial class ValueParser
         _ => throw new ArgumentOutOfRangeException(nameof(suffix), suffix, "Unknown time suffix."),
     };
 
-    [GeneratedRegex("^" + NumberPattern + "$", RegexOptions.CultureInvariant)]
-    private static partial Regex NumberRegex();
+    /// <summary>
+    /// Splits <c>NUMBER[ ]MARKER SUFFIX</c>: a number in the contract's form, then (only when anything follows) one
+    /// optional space, <paramref name="marker"/> and the rest as the suffix. False when no number starts the text.
+    /// </summary>
+    private static bool Split(string text, string marker, out string number, out string suffix)
+    {
+        int length = NumberLength(text);
+        number = text[..length];
+        suffix = string.Empty;
+        if (length == 0)
+        {
+            return false;
+        }
 
-    [GeneratedRegex("^(?<n>" + NumberPattern + ")(?: ?(?<u>s|min|h|d))?$", RegexOptions.CultureInvariant)]
-    private static partial Regex DurationRegex();
+        if (length == text.Length)
+        {
+            return true;
+        }
 
-    [GeneratedRegex("^(?<n>" + NumberPattern + ")(?: ?/(?<u>s|min|h|d))?$", RegexOptions.CultureInvariant)]
-    private static partial Regex RateRegex();
+        int rest = text[length] == ' ' ? length + 1 : length;
+        if (!text.AsSpan(rest).StartsWith(marker, StringComparison.Ordinal))
+        {
+            return false;
+        }
 
-    [GeneratedRegex("^(?<n>" + NumberPattern + ")(?<p> ?%)?$", RegexOptions.CultureInvariant)]
-    private static partial Regex ProbabilityRegex();
+        suffix = text[(rest + marker.Length)..];
+        return suffix.Length > 0;
+    }
+
+    /// <summary>
+    /// Length of the number at the start of <paramref name="text"/> in the form
+    /// <c>[+-]? (digits [. digits?] | . digits) ([eE] [+-]? digits)?</c>; 0 when there is none.
+    /// </summary>
+    private static int NumberLength(string text)
+    {
+        int i = 0;
+        if (i < text.Length && text[i] is '+' or '-')
+        {
+            i++;
+        }
+
+        int integerDigits = Digits(text, ref i);
+        int fractionDigits = 0;
+        if (i < text.Length && text[i] == '.')
+        {
+            i++;
+            fractionDigits = Digits(text, ref i);
+        }
+
+        if (integerDigits == 0 && fractionDigits == 0)
+        {
+            return 0;
+        }
+
+        if (i < text.Length && text[i] is 'e' or 'E')
+        {
+            int exponent = i + 1;
+            if (exponent < text.Length && text[exponent] is '+' or '-')
+            {
+                exponent++;
+            }
+
+            if (Digits(text, ref exponent) > 0)
+            {
+                i = exponent;
+            }
+        }
+
+        return i;
+    }
+
+    private static int Digits(string text, ref int i)
+    {
+        int start = i;
+        while (i < text.Length && char.IsAsciiDigit(text[i]))
+        {
+            i++;
+        }
+
+        return i - start;
+    }
 }

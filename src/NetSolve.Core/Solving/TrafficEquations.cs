@@ -19,7 +19,7 @@ namespace NetSolve.Solving;
 public static class TrafficEquations
 {
     /// <summary>Largest number of reached units solved densely; chosen by measurement (docs/performance.md).</summary>
-    public const int DenseLimit = 400;
+    public const int DenseLimit = 100;
 
     /// <summary>Iteration cap of the sparse solvers (sweeps, then BiCGStab iterations).</summary>
     public const int MaxIterations = 2_000;
@@ -29,7 +29,10 @@ public static class TrafficEquations
 
     /// <summary>Flow into each unit per hour, by unit position; 0 for unreached units.</summary>
     /// <exception cref="TrafficEquationsException">The residual stays above <see cref="Tolerances.TrafficResidual"/>.</exception>
-    public static double[] Solve(RoutingTable routing)
+    public static double[] Solve(RoutingTable routing) => Solve(routing, TrafficSolveMethod.Automatic);
+
+    /// <summary>As <see cref="Solve(RoutingTable)"/> with the method forced, so tests and benchmarks can compare both paths.</summary>
+    internal static double[] Solve(RoutingTable routing, TrafficSolveMethod method)
     {
         ArgumentNullException.ThrowIfNull(routing);
         bool[] reached = routing.ReachedUnits();
@@ -47,7 +50,8 @@ public static class TrafficEquations
         int n = members.Count;
         var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
         double[] result;
-        if (n <= DenseLimit)
+        bool dense = method == TrafficSolveMethod.Dense || (method == TrafficSolveMethod.Automatic && n <= DenseLimit);
+        if (dense)
         {
             result = Scatter(SolveDense(routing, members, position, external), members, routing.UnitCount);
         }
