@@ -1,0 +1,11 @@
+namespace NetSolve.Output;
+
+/// <summary>The planning caution every report carries: staffing and capacity advice can hurt patients if misread.</summary>
+public static class Caution
+{
+    /// <summary>The caution, one paragraph.</summary>
+    public const string Text =
+        "Caution: these are planning estimates under stated assumptions (steady state, Poisson arrivals, exponential "
+        + "service, independent routing, first come first served). Decisions on beds and staffing follow local clinical "
+        + "governance and safe-staffing rules.";
+}

@@ -1,0 +1,101 @@
+using YamlDotNet.Core;
+using YamlDotNet.Core.Events;
+
+namespace NetSolve.Parsing;
+
+/// <summary>
+/// Reads YAML into <see cref="YamlNode"/>s that keep their file positions, duplicate keys and quoting,
+/// which the network rules need and YamlDotNet's own object model hides.
+/// </summary>
+public static class LocatedYamlReader
+{
+    /// <summary>Deepest nesting accepted; network files need four levels, junk can need thousands.</summary>
+    public const int MaxDepth = 64;
+
+    /// <summary>Reads the first document of <paramref name="text"/>; null for an empty file.</summary>
+    /// <exception cref="YamlReadException">The text is not YAML this reader accepts.</exception>
+    public static YamlNode? Read(string text, string fileName)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        var parser = new Parser(new StringReader(text));
+        try
+        {
+            parser.Consume<StreamStart>();
+            if (parser.Accept<StreamEnd>(out _))
+            {
+                return null;
+            }
+
+            parser.Consume<DocumentStart>();
+            var root = ReadNode(parser, fileName, 0);
+            parser.Consume<DocumentEnd>();
+            if (!parser.Accept<StreamEnd>(out _))
+            {
+                throw new YamlReadException(At(fileName, parser.Current!.Start), "the file holds more than one YAML document");
+            }
+
+            return root;
+        }
+        catch (YamlException exception)
+        {
+            throw new YamlReadException(At(fileName, exception.Start), "not valid YAML: " + Describe(exception));
+        }
+    }
+
+    private static YamlNode ReadNode(IParser parser, string fileName, int depth)
+    {
+        var start = parser.Current!;
+        var location = At(fileName, start.Start);
+        if (depth > MaxDepth)
+        {
+            throw new YamlReadException(location, $"nesting deeper than {MaxDepth} levels");
+        }
+
+        switch (start)
+        {
+            case Scalar scalar:
+                parser.MoveNext();
+                return new YamlScalar(location, scalar.Value, scalar.Style == ScalarStyle.Plain && scalar.Tag.IsEmpty);
+            case SequenceStart:
+                parser.MoveNext();
+                var items = new List<YamlNode>();
+                while (!parser.TryConsume<SequenceEnd>(out _))
+                {
+                    items.Add(ReadNode(parser, fileName, depth + 1));
+                }
+
+                return new YamlSequence(location, items);
+            case MappingStart:
+                parser.MoveNext();
+                var entries = new List<KeyValuePair<YamlScalar, YamlNode>>();
+                while (!parser.TryConsume<MappingEnd>(out _))
+                {
+                    if (ReadNode(parser, fileName, depth + 1) is not YamlScalar key)
+                    {
+                        throw new YamlReadException(location, "a mapping key must be a plain name, not a list or mapping");
+                    }
+
+                    entries.Add(new(key, ReadNode(parser, fileName, depth + 1)));
+                }
+
+                return new YamlMapping(location, entries);
+            case AnchorAlias:
+                throw new YamlReadException(location, "YAML aliases (*name) are not supported in network files");
+            default:
+                throw new YamlReadException(location, "unexpected YAML content");
+        }
+    }
+
+    private static SourceLocation At(string fileName, Mark mark) =>
+        new(fileName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column));
+
+    private static string Describe(YamlException exception)
+    {
+        // YamlDotNet prefixes its message with "(Line: .., Col: .., Idx: ..) - (..): "; the location is ours to print.
+        string message = exception.Message;
+        int cut = message.LastIndexOf("): ", StringComparison.Ordinal);
+        message = cut >= 0 ? message[(cut + 3)..] : message;
+        message = message.ReplaceLineEndings(" ").Trim();
+        return message.Length == 0 ? "unreadable content" : char.ToLowerInvariant(message[0]) + message[1..].TrimEnd('.');
+    }
+}

@@ -1,0 +1,362 @@
+using System.Collections.Immutable;
+using System.Globalization;
+using System.Text.RegularExpressions;
+using NetSolve.Model;
+
+namespace NetSolve.Parsing;
+
+/// <summary>Turns the located YAML of a network file into a <see cref="Network"/>, collecting every problem.</summary>
+internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics)
+{
+    /// <summary>Largest finite server count; more is better written <c>unlimited</c> (Erlang C costs O(c)).</summary>
+    public const int MaxServers = 1_000_000;
+
+    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes"];
+    private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv"];
+    private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
+
+    private readonly Dictionary<string, SourceLocation> _unitLocations = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, SourceLocation> _routeLocations = new(StringComparer.Ordinal);
+
+    public (Network Network, NetworkLocations Locations)? Parse(YamlNode root)
+    {
+        if (root is not YamlMapping top)
+        {
+            Error(root.Location, null, DiagnosticCodes.WrongShape, "the top level must be a mapping with 'units', 'arrivals' and optionally 'name', 'time_unit', 'routes'");
+            return null;
+        }
+
+        var fields = Fields(top, TopKeys, null);
+        var timeUnit = ParseTimeUnit(fields.GetValueOrDefault("time_unit"));
+        string name = fields.GetValueOrDefault("name") is YamlNode nameNode && Scalar(nameNode, null, "name") is YamlScalar nameScalar
+            ? nameScalar.Value
+            : Path.GetFileNameWithoutExtension(fileName);
+
+        if (!fields.TryGetValue("units", out var unitsNode))
+        {
+            Error(top.Location, null, DiagnosticCodes.MissingKey, "missing 'units': a network file defines at least one unit");
+        }
+
+        if (!fields.TryGetValue("arrivals", out var arrivalsNode))
+        {
+            Error(top.Location, null, DiagnosticCodes.MissingKey, "missing 'arrivals': at least one unit needs a positive external arrival rate");
+        }
+
+        var units = unitsNode is null ? [] : ParseUnits(unitsNode, timeUnit);
+        var known = units.Select(unit => unit.Id).ToHashSet(StringComparer.Ordinal);
+        var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
+        var routes = fields.TryGetValue("routes", out var routesNode) ? ParseRoutes(routesNode, known) : [];
+
+        if (diagnostics.Any(d => d.IsError))
+        {
+            return null;
+        }
+
+        var network = new Network(name, timeUnit, units, arrivals, routes);
+        return (network, new NetworkLocations(_unitLocations, _routeLocations));
+    }
+
+    private TimeUnit ParseTimeUnit(YamlNode? node)
+    {
+        if (node is null || Scalar(node, null, "time_unit") is not YamlScalar scalar)
+        {
+            return TimeUnit.Hour;
+        }
+
+        switch (scalar.Value)
+        {
+            case "minute": return TimeUnit.Minute;
+            case "hour": return TimeUnit.Hour;
+            case "day": return TimeUnit.Day;
+            default:
+                Error(scalar.Location, null, DiagnosticCodes.BadValue,
+                    $"time_unit must be minute, hour or day, not '{scalar.Value}'{NearestName.Hint(scalar.Value, TimeUnitNames)}");
+                return TimeUnit.Hour;
+        }
+    }
+
+    private ImmutableArray<Unit> ParseUnits(YamlNode node, TimeUnit timeUnit)
+    {
+        if (Mapping(node, null, "units") is not YamlMapping mapping)
+        {
+            return [];
+        }
+
+        if (mapping.Entries.Count == 0)
+        {
+            Error(node.Location, null, DiagnosticCodes.MissingKey, "'units' is empty: define at least one unit");
+        }
+
+        var units = ImmutableArray.CreateBuilder<Unit>();
+        foreach (var (key, value) in UniqueEntries(mapping, null))
+        {
+            string id = key.Value;
+            if (!UnitIdRegex().IsMatch(id))
+            {
+                Error(key.Location, null, DiagnosticCodes.BadUnitId,
+                    $"'{id}' is not a valid unit id: use letters, digits, '_' and '-', starting with a letter");
+                continue;
+            }
+
+            _unitLocations[id] = key.Location;
+            if (ParseUnit(id, value, timeUnit) is Unit unit)
+            {
+                units.Add(unit);
+            }
+        }
+
+        return units.ToImmutable();
+    }
+
+    private Unit? ParseUnit(string id, YamlNode node, TimeUnit timeUnit)
+    {
+        if (Mapping(node, id, "a unit") is not YamlMapping mapping)
+        {
+            return null;
+        }
+
+        var fields = Fields(mapping, UnitKeys, id);
+        string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, id, "label") is YamlScalar labelScalar
+            ? labelScalar.Value
+            : id;
+        var servers = fields.TryGetValue("servers", out var serversNode) ? ParseServers(serversNode, id) : null;
+        double? service = fields.TryGetValue("service", out var serviceNode) ? Value(serviceNode, id, "service", (string text, out double hours) => ValueParser.Duration(text, timeUnit, out hours)) : null;
+        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", ValueParser.Number) : 1.0;
+        if (cv < 0.0)
+        {
+            Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
+        }
+
+        if (serversNode is null)
+        {
+            Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'servers' (a whole number of at least 1, or unlimited)");
+        }
+
+        if (serviceNode is null)
+        {
+            Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'service' (the mean time a patient holds a server, e.g. 45min)");
+        }
+
+        if (cv is double usedCv && usedCv >= 0.0 && Math.Abs(usedCv - 1.0) > 0.0)
+        {
+            Warning(cvNode!.Location, id, DiagnosticCodes.IgnoredByFormulas, string.Create(CultureInfo.InvariantCulture,
+                $"service_cv {usedCv:0.###} is ignored: the exponential (Jackson) model assumes service_cv 1"));
+        }
+
+        return servers is Servers s && service is double hours && cv is double c && c >= 0.0
+            ? new Unit(id, label, s, hours, c)
+            : null;
+    }
+
+    private Servers? ParseServers(YamlNode node, string id)
+    {
+        if (Scalar(node, id, "servers") is not YamlScalar scalar)
+        {
+            return null;
+        }
+
+        const string Expected = "servers must be a whole number of at least 1, or unlimited";
+        if (!scalar.IsPlain)
+        {
+            Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, written without quotes");
+            return null;
+        }
+
+        if (scalar.Value == "unlimited")
+        {
+            return Servers.Unlimited;
+        }
+
+        if (!WholeNumberRegex().IsMatch(scalar.Value))
+        {
+            Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, not '{scalar.Value}'");
+            return null;
+        }
+
+        if (!int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count > MaxServers)
+        {
+            Error(scalar.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
+                $"servers '{scalar.Value}' is more than {MaxServers}; write unlimited for a unit where nobody waits"));
+            return null;
+        }
+
+        if (count < 1)
+        {
+            Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, not '{scalar.Value}'");
+            return null;
+        }
+
+        return Servers.Of(count);
+    }
+
+    private ImmutableArray<Arrival> ParseArrivals(YamlNode node, TimeUnit timeUnit, HashSet<string> known)
+    {
+        var arrivals = ImmutableArray.CreateBuilder<Arrival>();
+        if (Mapping(node, null, "arrivals") is YamlMapping mapping)
+        {
+            foreach (var (key, value) in UniqueEntries(mapping, null))
+            {
+                if (!KnownUnit(key, known, "arrivals"))
+                {
+                    continue;
+                }
+
+                if (Value(value, key.Value, "arrival rate", (string text, out double perHour) => ValueParser.Rate(text, timeUnit, out perHour)) is double rate)
+                {
+                    arrivals.Add(new Arrival(key.Value, rate));
+                }
+            }
+        }
+
+        if (!diagnostics.Any(d => d.IsError) && !arrivals.Any(arrival => arrival.PerHour > 0.0))
+        {
+            Error(node.Location, null, DiagnosticCodes.NoArrivals, "no positive arrival rate: at least one unit needs patients arriving from outside");
+        }
+
+        return arrivals.ToImmutable();
+    }
+
+    private ImmutableArray<Route> ParseRoutes(YamlNode node, HashSet<string> known)
+    {
+        var routes = ImmutableArray.CreateBuilder<Route>();
+        if (node is YamlScalar { IsNull: true } || Mapping(node, null, "routes") is not YamlMapping mapping)
+        {
+            return routes.ToImmutable();
+        }
+
+        foreach (var (sourceKey, targets) in UniqueEntries(mapping, null))
+        {
+            string from = sourceKey.Value;
+            if (!KnownUnit(sourceKey, known, "routes"))
+            {
+                continue;
+            }
+
+            _routeLocations[from] = sourceKey.Location;
+            if (targets is YamlScalar { IsNull: true } || Mapping(targets, from, "routes") is not YamlMapping targetMap)
+            {
+                continue;
+            }
+
+            double total = 0.0;
+            foreach (var (targetKey, value) in UniqueEntries(targetMap, from))
+            {
+                if (KnownUnit(targetKey, known, $"routes.{from}", from)
+                    && Value(value, from, $"route to '{targetKey.Value}'", ValueParser.Probability) is double probability)
+                {
+                    routes.Add(new Route(from, targetKey.Value, probability));
+                    total += probability;
+                }
+            }
+
+            if (total > 1.0 + Solving.Tolerances.ProbabilitySum)
+            {
+                Error(sourceKey.Location, from, DiagnosticCodes.RoutesOverOne, string.Create(CultureInfo.InvariantCulture,
+                    $"routes add up to {total:0.######}, more than 1"));
+            }
+        }
+
+        return routes.ToImmutable();
+    }
+
+    private bool KnownUnit(YamlScalar key, HashSet<string> known, string where, string? unitId = null)
+    {
+        if (known.Contains(key.Value) || _unitLocations.ContainsKey(key.Value))
+        {
+            return true;
+        }
+
+        Error(key.Location, unitId, DiagnosticCodes.UnknownUnit,
+            $"{where}: unknown unit '{key.Value}'{NearestName.Hint(key.Value, _unitLocations.Keys)}");
+        return false;
+    }
+
+    private Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
+    {
+        var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
+        foreach (var (key, value) in UniqueEntries(mapping, unitId))
+        {
+            if (Array.IndexOf(knownKeys, key.Value) < 0)
+            {
+                string hint = NearestName.Suggest(key.Value, knownKeys) is string best
+                    ? $"; did you mean '{best}'?"
+                    : $" (known keys: {string.Join(", ", knownKeys)})";
+                Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
+                continue;
+            }
+
+            fields[key.Value] = value;
+        }
+
+        return fields;
+    }
+
+    private IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
+    {
+        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        foreach (var (key, value) in mapping.Entries)
+        {
+            if (seen.TryGetValue(key.Value, out var first))
+            {
+                Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
+                    $"duplicate key '{key.Value}' (first at line {first.Line})"));
+                continue;
+            }
+
+            seen[key.Value] = key.Location;
+            yield return (key, value);
+        }
+    }
+
+    private delegate string? ValueParse(string text, out double value);
+
+    private double? Value(YamlNode node, string? unitId, string what, ValueParse parse)
+    {
+        if (Scalar(node, unitId, what) is not YamlScalar scalar)
+        {
+            return null;
+        }
+
+        if (parse(scalar.Value, out double value) is string error)
+        {
+            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: {error}");
+            return null;
+        }
+
+        return value;
+    }
+
+    private YamlScalar? Scalar(YamlNode node, string? unitId, string what)
+    {
+        if (node is YamlScalar scalar && !scalar.IsNull)
+        {
+            return scalar;
+        }
+
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node is YamlScalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
+        return null;
+    }
+
+    private YamlMapping? Mapping(YamlNode node, string? unitId, string what)
+    {
+        if (node is YamlMapping mapping)
+        {
+            return mapping;
+        }
+
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, $"{what} must be a mapping of keys to values");
+        return null;
+    }
+
+    private void Error(SourceLocation location, string? unitId, string code, string message) =>
+        diagnostics.Add(Diagnostic.Error(code, location, unitId, message));
+
+    private void Warning(SourceLocation location, string? unitId, string code, string message) =>
+        diagnostics.Add(Diagnostic.Warning(code, location, unitId, message));
+
+    [GeneratedRegex("^[A-Za-z][A-Za-z0-9_-]*$", RegexOptions.CultureInvariant)]
+    private static partial Regex UnitIdRegex();
+
+    [GeneratedRegex("^[0-9]+$", RegexOptions.CultureInvariant)]
+    private static partial Regex WholeNumberRegex();
+}

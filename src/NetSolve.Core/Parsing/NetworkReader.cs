@@ -1,0 +1,74 @@
+using System.Collections.Immutable;
+
+namespace NetSolve.Parsing;
+
+/// <summary>Reads network files (see the network file contract) into a validated <see cref="Model.Network"/>.</summary>
+/// <remarks>Never throws for bad input: every problem is a <see cref="Diagnostic"/>. Thread-safe.</remarks>
+public static class NetworkReader
+{
+    /// <summary>Reads the file at <paramref name="path"/>; the path is shown in diagnostics as given.</summary>
+    public static ReadResult ReadFile(string path)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        var location = new SourceLocation(path, 0, 0);
+        if (Directory.Exists(path))
+        {
+            return Failed(location, DiagnosticCodes.Unreadable, "is a directory, not a network file");
+        }
+
+        if (!File.Exists(path))
+        {
+            return Failed(location, DiagnosticCodes.Unreadable, "no such file");
+        }
+
+        string text;
+        try
+        {
+            text = File.ReadAllText(path);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return Failed(location, DiagnosticCodes.Unreadable, "cannot be read: " + exception.Message);
+        }
+
+        return ReadText(text, path);
+    }
+
+    /// <summary>Reads network YAML from <paramref name="text"/>; <paramref name="fileName"/> is used in diagnostics.</summary>
+    public static ReadResult ReadText(string text, string fileName)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(fileName);
+        YamlNode? root;
+        try
+        {
+            root = LocatedYamlReader.Read(text, fileName);
+        }
+        catch (YamlReadException exception)
+        {
+            return Failed(exception.Location, DiagnosticCodes.NotYaml, exception.Message);
+        }
+
+        if (root is null || root is YamlScalar { IsNull: true })
+        {
+            return Failed(new SourceLocation(fileName, 1, 1), DiagnosticCodes.Empty, "the file is empty; a network file needs 'units' and 'arrivals'");
+        }
+
+        var diagnostics = new List<Diagnostic>();
+        var network = new NetworkFileParser(fileName, diagnostics).Parse(root);
+        if (network is not null && !diagnostics.Any(d => d.IsError))
+        {
+            StructureRules.Check(network.Value.Network, network.Value.Locations, diagnostics);
+        }
+
+        var sorted = diagnostics
+            .OrderBy(d => d.Location.Line)
+            .ThenBy(d => d.Location.Column)
+            .ToImmutableArray();
+        bool failed = sorted.Any(d => d.IsError);
+        return new ReadResult(failed ? null : network?.Network, sorted);
+    }
+
+    private static ReadResult Failed(SourceLocation location, string code, string message) =>
+        new(null, [Diagnostic.Error(code, location, null, message)]);
+}

@@ -1,0 +1,14 @@
+namespace NetSolve.Parsing;
+
+/// <summary>A place in a source file: 1-based line and column.</summary>
+/// <param name="File">The file name as the user gave it.</param>
+/// <param name="Line">1-based line.</param>
+/// <param name="Column">1-based column.</param>
+public readonly record struct SourceLocation(string File, int Line, int Column)
+{
+    /// <summary><c>FILE:LINE:COL</c>.</summary>
+    /// <remarks>A location with line 0 stands for the whole file and prints as <c>FILE</c> alone.</remarks>
+    public override string ToString() => Line == 0
+        ? File
+        : string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{File}:{Line}:{Column}");
+}
