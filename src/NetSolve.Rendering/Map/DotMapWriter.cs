@@ -6,7 +6,10 @@ using NetSolve.Rendering.Text;
 namespace NetSolve.Rendering.Map;
 
 /// <summary>Writes a laid-out map as Graphviz DOT, with the same texts, colours, borders and line kinds as the SVG.</summary>
-/// <remarks>Graphviz does its own layout; the main direction becomes <c>rankdir</c>. Pen widths follow the map's proportional widths.</remarks>
+/// <remarks>
+/// Graphviz does its own layout; the main direction becomes <c>rankdir</c>. Pen widths follow the map's proportional
+/// widths. External arrivals and exits become small point nodes (<c>arrivals:ID</c>, <c>exit:ID</c>) with labelled edges.
+/// </remarks>
 public static class DotMapWriter
 {
     /// <summary>The DOT text of <paramref name="layout"/>.</summary>
@@ -17,52 +20,58 @@ public static class DotMapWriter
         dot.Append("digraph ").Append(Quote(layout.Title)).Append(" {\n");
         dot.Append("  graph [rankdir=").Append(layout.Direction == MapDirection.TopToBottom ? "TB" : "LR")
             .Append(", fontname=\"DejaVu Sans\", labelloc=t, label=").Append(Quote(layout.Title + " (rates per " + TimeConstants.Name(layout.TimeUnit) + ")")).Append("];\n");
-        dot.Append("  node [fontname=\"DejaVu Sans\", fontsize=11];\n");
+        dot.Append("  node [shape=box, fontname=\"DejaVu Sans\", fontsize=11];\n");
         dot.Append("  edge [fontname=\"DejaVu Sans\", fontsize=10];\n");
         foreach (var node in layout.Nodes)
         {
-            dot.Append("  ").Append(Quote(node.Id)).Append(" [").Append(NodeAttributes(node)).Append("];\n");
+            dot.Append("  ").Append(Quote(node.UnitId)).Append(" [").Append(UnitAttributes(node)).Append("];\n");
+            if (node.Arrival is { } arrival)
+            {
+                string id = "arrivals:" + node.UnitId;
+                dot.Append("  ").Append(Quote(id)).Append(" [shape=point, xlabel=\"from outside\"];\n");
+                Edge(dot, id, node.UnitId, arrival.RateText, arrival.StrokeWidth, MapColours.BoundaryLine, dashed: false);
+            }
+
+            if (node.Exit is { } exit)
+            {
+                string id = "exit:" + node.UnitId;
+                dot.Append("  ").Append(Quote(id)).Append(" [shape=point, xlabel=\"leave\"];\n");
+                Edge(dot, node.UnitId, id, exit.RateText, exit.StrokeWidth, MapColours.BoundaryLine, dashed: false);
+            }
         }
 
         foreach (var edge in layout.Edges)
         {
-            dot.Append("  ").Append(Quote(edge.From)).Append(" -> ").Append(Quote(edge.To)).Append(" [")
-                .Append("label=").Append(Quote(edge.RateText))
-                .Append(", penwidth=").Append(Invariant.Coordinate(edge.StrokeWidth))
-                .Append(", color=").Append(Quote(EdgeColour(edge.Kind)));
-            if (edge.Kind == MapEdgeKind.Feedback)
-            {
-                dot.Append(", style=dashed");
-            }
-
-            dot.Append("];\n");
+            bool feedback = edge.Kind == MapEdgeKind.Feedback;
+            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, feedback ? MapColours.FeedbackLine : MapColours.ForwardLine, feedback);
         }
 
         dot.Append("}\n");
         return dot.ToString();
     }
 
-    private static string NodeAttributes(MapNode node)
+    private static void Edge(StringBuilder dot, string from, string to, string rate, double width, string colour, bool dashed)
     {
-        string label = string.Join("\n", node.Lines.Select(line => line.Text));
-        if (node.Kind != MapNodeKind.Unit)
+        dot.Append("  ").Append(Quote(from)).Append(" -> ").Append(Quote(to))
+            .Append(" [label=").Append(Quote(rate))
+            .Append(", penwidth=").Append(Invariant.Coordinate(width))
+            .Append(", color=").Append(Quote(colour));
+        if (dashed)
         {
-            return string.Create(CultureInfo.InvariantCulture,
-                $"shape=box, style=\"rounded,filled\", fillcolor={Quote(MapColours.MarkerFill)}, color={Quote(MapColours.BoundaryLine)}, label={Quote(label)}");
+            dot.Append(", style=dashed");
         }
 
-        var style = HarbourLightsPalette.For(node.Status);
-        string border = style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
-        return string.Create(CultureInfo.InvariantCulture,
-            $"shape=box, style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Invariant.Coordinate(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}");
+        dot.Append("];\n");
     }
 
-    private static string EdgeColour(MapEdgeKind kind) => kind switch
+    private static string UnitAttributes(MapNode node)
     {
-        MapEdgeKind.Feedback => MapColours.FeedbackLine,
-        MapEdgeKind.Arrival or MapEdgeKind.Exit => MapColours.BoundaryLine,
-        _ => MapColours.ForwardLine,
-    };
+        var style = HarbourLightsPalette.For(node.Status);
+        string label = string.Join("\n", node.Lines.Select(line => line.Text));
+        string border = style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
+        return string.Create(CultureInfo.InvariantCulture,
+            $"style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Invariant.Coordinate(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}");
+    }
 
     /// <summary>A DOT quoted string: backslash and double quote escaped, line breaks as <c>\n</c>.</summary>
     internal static string Quote(string text) =>

@@ -1,9 +1,9 @@
 namespace NetSolve.Rendering.Map;
 
 /// <summary>A flow line on the laid-out map, from the boundary of one box to the boundary of another.</summary>
-/// <param name="From">Id of the <see cref="MapNode"/> it leaves.</param>
-/// <param name="To">Id of the <see cref="MapNode"/> it enters.</param>
-/// <param name="Kind">Forward, feedback, arrival or exit.</param>
+/// <param name="From">Id of the unit it leaves.</param>
+/// <param name="To">Id of the unit it enters.</param>
+/// <param name="Kind">Forward or feedback.</param>
 /// <param name="PerHour">Patients per hour along the line.</param>
 /// <param name="RateText">The rate as written on the map, in the network's time unit.</param>
 /// <param name="StrokeWidth">Line width in map units, proportional to the flow.</param>

@@ -8,10 +8,4 @@ public enum MapEdgeKind
 
     /// <summary>A route back against the main direction, or to the same unit: drawn dashed.</summary>
     Feedback,
-
-    /// <summary>External arrivals into a unit.</summary>
-    Arrival,
-
-    /// <summary>Patients leaving the network from a unit.</summary>
-    Exit,
 }

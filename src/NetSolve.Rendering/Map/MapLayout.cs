@@ -9,8 +9,8 @@ namespace NetSolve.Rendering.Map;
 /// <param name="Direction">The main direction of flow.</param>
 /// <param name="Width">Width of the laid-out graph, margins included.</param>
 /// <param name="Height">Height of the laid-out graph, margins included.</param>
-/// <param name="Nodes">Units first, in file order, then arrival and exit markers.</param>
-/// <param name="Edges">Flow lines.</param>
+/// <param name="Nodes">Unit boxes in file order.</param>
+/// <param name="Edges">Routes with a positive probability, in file order.</param>
 public sealed record MapLayout(
     string Title,
     TimeUnit TimeUnit,

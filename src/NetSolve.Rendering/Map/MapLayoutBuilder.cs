@@ -15,15 +15,18 @@ namespace NetSolve.Rendering.Map;
 
 /// <summary>Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way.</summary>
 /// <remarks>
-/// Every unit, every route with a positive probability, every unit with external arrivals and every unit that
-/// patients leave from appears. Routes that run against the main direction after layering, and repeat visits,
+/// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
+/// at the unit's box with their rate written in the box. Routes that run against the main direction after layering, and repeat visits,
 /// become <see cref="MapEdgeKind.Feedback"/>. Deterministic: the same solution gives the same layout.
 /// </remarks>
 public static class MapLayoutBuilder
 {
-    private const double NodeSeparation = 28.0;
-    private const double LayerSeparation = 46.0;
-    private const double MarkerCornerRadius = 10.0;
+    /// <summary>Gap between boxes in one layer: room for an arrival or exit arrow and a rate label, no more, so 40 units fit A4 width.</summary>
+    private const double NodeSeparation = 18.0;
+    private const double LayerSeparation = 50.0;
+    /// <summary>Length of the arrival and exit arrows; two of them fit in <see cref="LayerSeparation"/>.</summary>
+    internal const double StubLength = 18.0;
+    private const double StubInset = 14.0;
     private const double ArrowLengthPerStroke = 1.6;
     private const double MinArrowLength = 9.0;
 
@@ -34,78 +37,52 @@ public static class MapLayoutBuilder
         var network = solution.Network;
         var routing = RoutingTable.Build(network);
         var index = network.BuildIndex();
+        var timeUnit = network.TimeUnit;
+
+        var arrivalPerHour = new double[network.Units.Length];
+        foreach (var arrival in network.Arrivals)
+        {
+            arrivalPerHour[index[arrival.UnitId]] += arrival.PerHour;
+        }
+
+        var exitPerHour = new double[network.Units.Length];
+        for (int i = 0; i < exitPerHour.Length; i++)
+        {
+            exitPerHour[i] = solution.Units[i].ArrivalsPerHour * routing.ExitProbability(i);
+        }
+
+        var routes = network.Routes
+            .Where(route => route.Probability > 0.0)
+            .Select(route => (Route: route, PerHour: solution.Units[index[route.From]].ArrivalsPerHour * route.Probability))
+            .ToList();
+        double maxPerHour = routes.Select(r => r.PerHour).Concat(arrivalPerHour).Concat(exitPerHour).DefaultIfEmpty(0.0).Max();
+
         var graph = new GeometryGraph();
-        var nodes = new List<(MsaglNode Node, MapNode Template)>();
-        var byId = new Dictionary<string, MsaglNode>(StringComparer.Ordinal);
-
-        void AddNode(MapNode template, bool rounded)
+        var templates = new MapNode[network.Units.Length];
+        var graphNodes = new MsaglNode[network.Units.Length];
+        for (int i = 0; i < templates.Length; i++)
         {
-            var centre = new MsaglPoint(0.0, 0.0);
-            ICurve boundary = rounded
-                ? CurveFactory.CreateRectangleWithRoundedCorners(template.Width, template.Height, MarkerCornerRadius, MarkerCornerRadius, centre)
-                : CurveFactory.CreateRectangle(template.Width, template.Height, centre);
-            var node = new MsaglNode(boundary, template.Id);
-            graph.Nodes.Add(node);
-            nodes.Add((node, template));
-            byId[template.Id] = node;
+            templates[i] = UnitTemplate(solution.Units[i], timeUnit, arrivalPerHour[i], exitPerHour[i]);
+            graphNodes[i] = new MsaglNode(CurveFactory.CreateRectangle(templates[i].Width, templates[i].Height, new MsaglPoint(0.0, 0.0)), templates[i].UnitId);
+            graph.Nodes.Add(graphNodes[i]);
         }
 
-        foreach (var result in solution.Units)
+        var edges = new List<(MsaglEdge Edge, Route Route, double PerHour, double Stroke, string RateText)>(routes.Count);
+        foreach (var (route, perHour) in routes)
         {
-            AddNode(UnitTemplate(result, network.TimeUnit), rounded: false);
-        }
-
-        var flows = new List<(string From, string To, MapEdgeKind Kind, double PerHour)>();
-        foreach (var arrival in network.Arrivals.Where(arrival => arrival.PerHour > 0.0))
-        {
-            var status = solution.Units[index[arrival.UnitId]].Status;
-            string id = "arrivals:" + arrival.UnitId;
-            AddNode(MarkerTemplate(id, MapNodeKind.Arrival, arrival.UnitId, "arrivals", status), rounded: true);
-            flows.Add((id, arrival.UnitId, MapEdgeKind.Arrival, arrival.PerHour));
-        }
-
-        foreach (var route in network.Routes.Where(route => route.Probability > 0.0))
-        {
-            double perHour = solution.Units[index[route.From]].ArrivalsPerHour * route.Probability;
-            flows.Add((route.From, route.To, MapEdgeKind.Forward, perHour));
-        }
-
-        for (int i = 0; i < solution.Units.Length; i++)
-        {
-            double perHour = solution.Units[i].ArrivalsPerHour * routing.ExitProbability(i);
-            if (perHour > 0.0)
-            {
-                string unitId = network.Units[i].Id;
-                string id = "exit:" + unitId;
-                AddNode(MarkerTemplate(id, MapNodeKind.Exit, unitId, "leave", solution.Units[i].Status), rounded: true);
-                flows.Add((unitId, id, MapEdgeKind.Exit, perHour));
-            }
-        }
-
-        double maxPerHour = flows.Count == 0 ? 0.0 : flows.Max(flow => flow.PerHour);
-        var edges = new List<(MsaglEdge Edge, int Flow, double Stroke, string RateText)>();
-        for (int f = 0; f < flows.Count; f++)
-        {
-            var flow = flows[f];
-            double stroke = StrokeWidth(flow.PerHour, maxPerHour);
-            string rateText = Units.Rate(flow.PerHour, network.TimeUnit);
-            var edge = new MsaglEdge(byId[flow.From], byId[flow.To])
-            {
-                Weight = 1,
-            };
+            double stroke = StrokeWidth(perHour, maxPerHour);
+            string rateText = Units.ShortRate(perHour, timeUnit);
+            var edge = new MsaglEdge(graphNodes[index[route.From]], graphNodes[index[route.To]]);
             edge.EdgeGeometry.TargetArrowhead = new Arrowhead { Length = Math.Max(MinArrowLength, ArrowLengthPerStroke * stroke) };
-            edge.Label = new Label(
-                TextWidth.Of(rateText, MapTypography.RateSize) + 4.0,
-                MapTypography.RateSize * MapTypography.LineSpacing,
-                edge);
             graph.Edges.Add(edge);
-            edges.Add((edge, f, stroke, rateText));
+            edges.Add((edge, route, perHour, stroke, rateText));
         }
 
         var settings = new SugiyamaLayoutSettings
         {
             NodeSeparation = NodeSeparation,
             LayerSeparation = LayerSeparation,
+
         };
         settings.EdgeRoutingSettings.EdgeRoutingMode = EdgeRoutingMode.SugiyamaSplines;
         if (direction == MapDirection.LeftToRight)
@@ -114,17 +91,7 @@ public static class MapLayoutBuilder
         }
 
         LayoutHelpers.CalculateLayout(graph, settings, null);
-        return Extract(solution, direction, graph, nodes, edges, flows);
-    }
 
-    private static MapLayout Extract(
-        NetworkSolution solution,
-        MapDirection direction,
-        GeometryGraph graph,
-        List<(MsaglNode Node, MapNode Template)> nodes,
-        List<(MsaglEdge Edge, int Flow, double Stroke, string RateText)> edges,
-        List<(string From, string To, MapEdgeKind Kind, double PerHour)> flows)
-    {
         var bounds = graph.Nodes[0].BoundingBox;
         foreach (var node in graph.Nodes)
         {
@@ -135,57 +102,85 @@ public static class MapLayoutBuilder
         {
             bounds.Add(edge.Curve.BoundingBox);
             bounds.Add(edge.EdgeGeometry.TargetArrowhead.TipPosition);
-            if (edge.Label is not null)
-            {
-                bounds.Add(edge.Label.BoundingBox);
-            }
         }
 
+        // Room for the arrival and exit arrows outside the outermost boxes.
+        bounds.Pad(StubLength);
         double left = bounds.Left - MapTypography.Margin;
         double top = bounds.Top + MapTypography.Margin;
         MapPoint ToMap(MsaglPoint point) => new(point.X - left, top - point.Y);
 
-        var mapNodes = ImmutableArray.CreateBuilder<MapNode>(nodes.Count);
-        var placed = new Dictionary<string, MapNode>(StringComparer.Ordinal);
-        foreach (var (node, template) in nodes)
+        var placed = ImmutableArray.CreateBuilder<MapNode>(templates.Length);
+        for (int i = 0; i < templates.Length; i++)
         {
-            var box = node.BoundingBox;
+            var box = graphNodes[i].BoundingBox;
             var corner = ToMap(new MsaglPoint(box.Left, box.Top));
-            var mapNode = template with { Left = corner.X, Top = corner.Y, Width = box.Width, Height = box.Height };
-            mapNodes.Add(mapNode);
-            placed[mapNode.Id] = mapNode;
+            var node = templates[i] with { Left = corner.X, Top = corner.Y, Width = box.Width, Height = box.Height };
+            placed.Add(node with
+            {
+                Arrival = Stub(arrivalPerHour[i], maxPerHour, timeUnit, node, direction, isArrival: true),
+                Exit = Stub(exitPerHour[i], maxPerHour, timeUnit, node, direction, isArrival: false),
+            });
         }
 
+        var labels = new RateLabelPlacer(placed);
         var mapEdges = ImmutableArray.CreateBuilder<MapEdge>(edges.Count);
-        foreach (var (edge, f, stroke, rateText) in edges)
+        foreach (var (edge, route, perHour, stroke, rateText) in edges)
         {
-            var flow = flows[f];
-            var kind = flow.Kind == MapEdgeKind.Forward && RunsBackwards(placed[flow.From], placed[flow.To], direction)
-                ? MapEdgeKind.Feedback
-                : flow.Kind;
-            var labelCentre = edge.Label is null ? ToMap(edge.Curve[(edge.Curve.ParStart + edge.Curve.ParEnd) / 2.0]) : ToMap(edge.Label.Center);
+            var kind = RunsBackwards(placed[index[route.From]], placed[index[route.To]], direction) ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
             mapEdges.Add(new MapEdge(
-                flow.From,
-                flow.To,
+                route.From,
+                route.To,
                 kind,
-                flow.PerHour,
+                perHour,
                 rateText,
                 stroke,
                 CurvePath.Of(edge.Curve, ToMap),
                 ToMap(edge.Curve.Start),
                 ToMap(edge.Curve.End),
                 ToMap(edge.EdgeGeometry.TargetArrowhead.TipPosition),
-                labelCentre));
+                labels.Place(edge.Curve, ToMap, rateText)));
         }
 
         return new MapLayout(
-            solution.Network.Name,
-            solution.Network.TimeUnit,
+            network.Name,
+            timeUnit,
             direction,
             bounds.Width + (2.0 * MapTypography.Margin),
             bounds.Height + (2.0 * MapTypography.Margin),
-            mapNodes.MoveToImmutable(),
+            placed.MoveToImmutable(),
             mapEdges.MoveToImmutable());
+    }
+
+    /// <summary>
+    /// The arrival arrow enters the box near its first corner along the main direction (top-left), the exit arrow
+    /// leaves near the opposite corner (bottom-right), each <see cref="StubLength"/> long, in the gap between layers.
+    /// </summary>
+    private static MapStub? Stub(double perHour, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction, bool isArrival)
+    {
+        if (!(perHour > 0.0))
+        {
+            return null;
+        }
+
+        MapPoint start;
+        MapPoint tip;
+        if (direction == MapDirection.TopToBottom)
+        {
+            double x = isArrival ? node.Left + StubInset : node.Right - StubInset;
+            double y = isArrival ? node.Top : node.Bottom;
+            start = isArrival ? new MapPoint(x, y - StubLength) : new MapPoint(x, y);
+            tip = isArrival ? new MapPoint(x, y) : new MapPoint(x, y + StubLength);
+        }
+        else
+        {
+            double y = isArrival ? node.Top + StubInset : node.Bottom - StubInset;
+            double x = isArrival ? node.Left : node.Right;
+            start = isArrival ? new MapPoint(x - StubLength, y) : new MapPoint(x, y);
+            tip = isArrival ? new MapPoint(x, y) : new MapPoint(x + StubLength, y);
+        }
+
+        return new MapStub(perHour, Units.ShortRate(perHour, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
     }
 
     /// <summary>A route runs backwards when its target's centre is not further along the main direction than its source's.</summary>
@@ -199,19 +194,11 @@ public static class MapLayoutBuilder
         ? Math.Max(MapTypography.MinStrokeWidth, MapTypography.MaxStrokeWidth * perHour / maxPerHour)
         : MapTypography.MinStrokeWidth;
 
-    private static MapNode UnitTemplate(UnitResult result, TimeUnit timeUnit)
+    private static MapNode UnitTemplate(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
     {
-        var lines = UnitBoxText.For(result, timeUnit);
-        return Sized(result.Unit.Id, MapNodeKind.Unit, result.Unit.Id, lines, result.Status, MapTypography.MinUnitWidth);
-    }
-
-    private static MapNode MarkerTemplate(string id, MapNodeKind kind, string unitId, string word, UnitStatus status) =>
-        Sized(id, kind, unitId, [new MapTextLine(word, MapTypography.RateSize, IsBold: false)], status, minWidth: 0.0);
-
-    private static MapNode Sized(string id, MapNodeKind kind, string unitId, ImmutableArray<MapTextLine> lines, UnitStatus status, double minWidth)
-    {
+        var lines = UnitBoxText.For(result, timeUnit, arrivalPerHour, exitPerHour);
         double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
-        double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding * (kind == MapNodeKind.Unit ? 1.0 : 0.5));
-        return new MapNode(id, kind, unitId, 0.0, 0.0, Math.Ceiling(Math.Max(minWidth, width)), Math.Ceiling(height), lines, status);
+        double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
+        return new MapNode(result.Unit.Id, 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null);
     }
 }

@@ -63,11 +63,15 @@ internal static class MapLegend
 
         items.Add(LineItem("route", MapColours.ForwardLine, string.Empty));
         items.Add(LineItem("return route", MapColours.FeedbackLine, MapColours.FeedbackDash));
-        items.Add(LineItem("arrivals and exits", MapColours.BoundaryLine, string.Empty));
-        string unitText = "width \u221D patients; rates per " + TimeConstants.Name(timeUnit) + ", times in " + TimeConstants.Name(timeUnit) + "s";
-        items.Add(new LegendItem(unitText, (x, y) => SvgMapWriter.Text(x, y + 13.0, MapTypography.DetailSize, unitText), swatch: false));
+        items.Add(LineItem("in from outside / out", MapColours.BoundaryLine, string.Empty));
+        string unit = TimeConstants.Name(timeUnit);
+        items.Add(TextItem("line width \u221D patients per " + unit));
+        items.Add(TextItem("wait = mean wait before service, in " + unit + "s"));
         return items;
     }
+
+    private static LegendItem TextItem(string text) =>
+        new(text, (x, y) => SvgMapWriter.Text(x, y + 13.0, MapTypography.DetailSize, text), swatch: false);
 
     private static LegendItem LineItem(string text, string colour, string dash) => new(text, (x, y) =>
     {

@@ -3,26 +3,26 @@ using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Map;
 
-/// <summary>A box on the laid-out map: a unit, or the marker of arrivals into or exits from a unit.</summary>
-/// <param name="Id">Unique on the map: the unit id, or <c>arrivals:ID</c> / <c>exit:ID</c>.</param>
-/// <param name="Kind">What the box stands for.</param>
-/// <param name="UnitId">The unit the box belongs to.</param>
+/// <summary>A unit's box on the laid-out map, with its arrival and exit arrows where patients enter or leave there.</summary>
+/// <param name="UnitId">The unit id.</param>
 /// <param name="Left">Left edge in map units.</param>
 /// <param name="Top">Top edge in map units.</param>
 /// <param name="Width">Width in map units.</param>
 /// <param name="Height">Height in map units.</param>
 /// <param name="Lines">Text lines, top to bottom.</param>
-/// <param name="Status">The unit's status (for markers, the status of their unit).</param>
+/// <param name="Status">The unit's status.</param>
+/// <param name="Arrival">External arrivals into the unit, if any.</param>
+/// <param name="Exit">Patients leaving the network from the unit, if any.</param>
 public sealed record MapNode(
-    string Id,
-    MapNodeKind Kind,
     string UnitId,
     double Left,
     double Top,
     double Width,
     double Height,
     ImmutableArray<MapTextLine> Lines,
-    UnitStatus Status)
+    UnitStatus Status,
+    MapStub? Arrival,
+    MapStub? Exit)
 {
     /// <summary>Right edge in map units.</summary>
     public double Right => Left + Width;

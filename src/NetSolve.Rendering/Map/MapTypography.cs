@@ -7,25 +7,25 @@ public static class MapTypography
     public const string FontFamily = "'DejaVu Sans', 'Liberation Sans', Arial, Helvetica, sans-serif";
 
     /// <summary>Unit labels (bold).</summary>
-    public const double LabelSize = 13.0;
+    public const double LabelSize = 12.5;
 
     /// <summary>Status word and metrics inside boxes.</summary>
     public const double DetailSize = 12.0;
 
-    /// <summary>Rates on flow lines and text in arrival and exit markers: the smallest text on the map.</summary>
-    public const double RateSize = 11.0;
+    /// <summary>Rates on flow lines. No text on the map is smaller than <see cref="DetailSize"/> and this.</summary>
+    public const double RateSize = 12.0;
 
     /// <summary>Line height as a multiple of the font size.</summary>
     public const double LineSpacing = 1.3;
 
     /// <summary>Space between box border and text.</summary>
-    public const double Padding = 9.0;
+    public const double Padding = 7.0;
 
     /// <summary>Labels longer than this are wrapped onto further lines.</summary>
-    public const double MaxLabelWidth = 180.0;
+    public const double MaxLabelWidth = 96.0;
 
     /// <summary>Boxes are at least this wide, so short labels still leave room for the metrics.</summary>
-    public const double MinUnitWidth = 120.0;
+    public const double MinUnitWidth = 90.0;
 
     /// <summary>Width of the flow line carrying the largest flow.</summary>
     public const double MaxStrokeWidth = 10.0;

@@ -62,7 +62,7 @@ public static class SvgMapWriter
 
     private static string Description(MapLayout layout)
     {
-        int units = layout.Nodes.Count(node => node.Kind == MapNodeKind.Unit);
+        int units = layout.Nodes.Length;
         return string.Create(CultureInfo.InvariantCulture,
             $"{units} units; boxes filled by status ({HarbourLightsPalette.Name} palette) with a glyph and word; line width proportional to patients per {TimeConstants.Name(layout.TimeUnit)}; dashed lines return against the main flow.");
     }
@@ -72,7 +72,6 @@ public static class SvgMapWriter
         string stroke = edge.Kind switch
         {
             MapEdgeKind.Feedback => MapColours.FeedbackLine,
-            MapEdgeKind.Arrival or MapEdgeKind.Exit => MapColours.BoundaryLine,
             _ => MapColours.ForwardLine,
         };
         var path = new XElement(
@@ -119,52 +118,43 @@ public static class SvgMapWriter
     private static XElement Node(MapNode node)
     {
         var style = HarbourLightsPalette.For(node.Status);
-        bool isUnit = node.Kind == MapNodeKind.Unit;
         var group = new XElement(
             Svg + "g",
-            new XAttribute("class", isUnit ? "unit status-" + StatusName(node.Status) : "marker " + (node.Kind == MapNodeKind.Arrival ? "arrival" : "exit")),
-            new XAttribute("data-node", node.Id),
-            new XAttribute("data-unit", node.UnitId));
-        if (isUnit)
+            new XAttribute("class", "unit status-" + StatusName(node.Status)),
+            new XAttribute("data-unit", node.UnitId),
+            new XAttribute("data-status", StatusName(node.Status)),
+            new XElement(Svg + "title", node.UnitId + ": " + string.Join("; ", node.Lines.Select(line => line.Text))));
+        foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit") })
         {
-            group.Add(new XAttribute("data-status", StatusName(node.Status)));
-            group.Add(new XElement(Svg + "title", node.UnitId + ": " + string.Join("; ", node.Lines.Select(line => line.Text))));
-            var box = Box(node.Left, node.Top, node.Width, node.Height, style.Fill, style.Border, style.BorderWidth, style.BorderDash);
-            box.Add(new XAttribute("class", "box"));
-            group.Add(box);
-            if (style.DoubleBorder)
+            if (stub is not null)
             {
-                double inset = style.BorderWidth + 1.5;
-                group.Add(Box(node.Left + inset, node.Top + inset, node.Width - (2 * inset), node.Height - (2 * inset), "none", style.Border, 1.5, string.Empty));
+                group.Add(Stub(stub, kind));
             }
         }
-        else
+
+        var box = Box(node.Left, node.Top, node.Width, node.Height, style.Fill, style.Border, style.BorderWidth, style.BorderDash);
+        box.Add(new XAttribute("class", "box"));
+        group.Add(box);
+        if (style.DoubleBorder)
         {
-            var pill = Box(node.Left, node.Top, node.Width, node.Height, MapColours.MarkerFill, MapColours.BoundaryLine, 1.2, string.Empty);
-            pill.Add(Attr("rx", node.Height / 2.0));
-            pill.Add(new XAttribute("class", "box"));
-            group.Add(pill);
+            double inset = style.BorderWidth + 1.5;
+            group.Add(Box(node.Left + inset, node.Top + inset, node.Width - (2 * inset), node.Height - (2 * inset), "none", style.Border, 1.5, string.Empty));
         }
 
-        double lineTop = node.Top + (isUnit ? MapTypography.Padding : (node.Height - node.Lines.Sum(l => l.FontSize * MapTypography.LineSpacing)) / 2.0);
+        double lineTop = node.Top + MapTypography.Padding;
         foreach (var line in node.Lines)
         {
             double baseline = lineTop + (line.FontSize * 1.02);
             var text = new XElement(
                 Svg + "text",
-                Attr("x", isUnit ? node.Left + MapTypography.Padding : node.Left + (node.Width / 2.0)),
+                Attr("x", node.Left + MapTypography.Padding),
                 Attr("y", baseline),
                 Attr("font-size", line.FontSize),
-                new XAttribute("fill", isUnit ? style.Text : MapColours.Ink),
+                new XAttribute("fill", style.Text),
                 line.Text);
             if (line.IsBold)
             {
                 text.Add(new XAttribute("font-weight", "bold"));
-            }
-
-            if (!isUnit)
-            {
-                text.Add(new XAttribute("text-anchor", "middle"));
             }
 
             group.Add(text);
@@ -172,6 +162,29 @@ public static class SvgMapWriter
         }
 
         return group;
+    }
+
+    private static XElement Stub(MapStub stub, string kind)
+    {
+        double dx = stub.Tip.X - stub.Start.X;
+        double dy = stub.Tip.Y - stub.Start.Y;
+        double length = Math.Sqrt((dx * dx) + (dy * dy));
+        double arrow = Math.Min(length * 0.6, Math.Max(7.0, 1.4 * stub.StrokeWidth));
+        var arrowBase = new MapPoint(stub.Tip.X - (dx / length * arrow), stub.Tip.Y - (dy / length * arrow));
+        var edge = new MapEdge(kind, kind, MapEdgeKind.Forward, stub.PerHour, stub.RateText, stub.StrokeWidth, string.Empty, stub.Start, arrowBase, stub.Tip, stub.Tip);
+        return new XElement(
+            Svg + "g",
+            new XAttribute("class", "stub " + kind),
+            new XAttribute("data-rate", stub.RateText),
+            new XElement(
+                Svg + "line",
+                Attr("x1", stub.Start.X),
+                Attr("y1", stub.Start.Y),
+                Attr("x2", arrowBase.X),
+                Attr("y2", arrowBase.Y),
+                new XAttribute("stroke", MapColours.BoundaryLine),
+                Attr("stroke-width", stub.StrokeWidth)),
+            Arrow(edge, MapColours.BoundaryLine));
     }
 
     private static XElement Rate(MapEdge edge)
@@ -235,8 +248,6 @@ public static class SvgMapWriter
     {
         MapEdgeKind.Forward => "forward",
         MapEdgeKind.Feedback => "feedback",
-        MapEdgeKind.Arrival => "arrival",
-        MapEdgeKind.Exit => "exit",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown flow kind."),
     };
 

@@ -8,7 +8,7 @@ namespace NetSolve.Rendering.Map;
 /// <summary>The lines written in a unit's box: label, status glyph and word, servers and utilisation, mean wait.</summary>
 internal static class UnitBoxText
 {
-    public static ImmutableArray<MapTextLine> For(UnitResult result, TimeUnit timeUnit)
+    public static ImmutableArray<MapTextLine> For(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
     {
         var lines = ImmutableArray.CreateBuilder<MapTextLine>();
         foreach (string part in Wrap(result.Unit.Label, MapTypography.LabelSize))
@@ -17,30 +17,46 @@ internal static class UnitBoxText
         }
 
         var style = HarbourLightsPalette.For(result.Status);
-        lines.Add(new MapTextLine(style.Glyph + " " + style.Word, MapTypography.DetailSize, IsBold: true));
-        lines.Add(new MapTextLine(Capacity(result), MapTypography.DetailSize, IsBold: false));
-        lines.Add(new MapTextLine(Wait(result, timeUnit), MapTypography.DetailSize, IsBold: false));
+        lines.Add(Detail(style.Glyph + " " + style.Word, bold: true));
+        lines.Add(Detail(Servers(result), bold: false));
+        if (!result.Unit.Servers.IsUnlimited)
+        {
+            lines.Add(Detail(Invariant.Percent(result.Utilisation) + " busy", bold: false));
+        }
+
+        lines.Add(Detail(Wait(result, timeUnit), bold: false));
+        if (arrivalPerHour > 0.0)
+        {
+            lines.Add(Detail("in " + Units.ShortRate(arrivalPerHour, timeUnit), bold: false));
+        }
+
+        if (exitPerHour > 0.0)
+        {
+            lines.Add(Detail("out " + Units.ShortRate(exitPerHour, timeUnit), bold: false));
+        }
+
         return lines.ToImmutable();
     }
 
-    public static string Capacity(UnitResult result) => result.Unit.Servers.IsUnlimited
+    private static MapTextLine Detail(string text, bool bold) => new(text, MapTypography.DetailSize, bold);
+
+    public static string Servers(UnitResult result) => result.Unit.Servers.IsUnlimited
         ? "unlimited servers"
-        : Invariant.Number(result.Unit.Servers.Count) + (result.Unit.Servers.Count == 1 ? " server, " : " servers, ")
-            + Invariant.Percent(result.Utilisation) + " busy";
+        : Invariant.Number(result.Unit.Servers.Count) + (result.Unit.Servers.Count == 1 ? " server" : " servers");
 
     public static string Wait(UnitResult result, TimeUnit timeUnit)
     {
         if (result.MeanWaitHours is not double waitHours)
         {
-            return "wait grows without limit";
+            return "wait unbounded";
         }
 
         if (result.Unit.Servers.IsUnlimited)
         {
-            return "no wait (unlimited)";
+            return "no wait";
         }
 
-        return "mean wait " + Units.Time(waitHours, timeUnit);
+        return "wait " + Units.ShortTime(waitHours, timeUnit);
     }
 
     /// <summary>Greedy word wrap at <see cref="MapTypography.MaxLabelWidth"/>; a single long word keeps its own line.</summary>
