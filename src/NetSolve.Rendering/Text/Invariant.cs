@@ -36,13 +36,13 @@ internal static class Invariant
         return value.ToString(format, CultureInfo.InvariantCulture);
     }
 
-    /// <summary>A number with two significant digits, for the tight space of a map box: 0.0385 gives <c>0.039</c>, 126.4 gives <c>126</c>.</summary>
+    /// <summary>Two significant digits below 10, for the tight space of a map box: 0.0385 gives <c>0.039</c>; from 10 up as <see cref="Number"/>.</summary>
     public static string Short(double value)
     {
         double magnitude = Math.Abs(value);
         if (magnitude >= 10.0 || value == 0.0)
         {
-            return Number(Math.Round(value));
+            return Number(value);
         }
 
         int decimals = Math.Max(1, 1 - (int)Math.Floor(Math.Log10(magnitude)));
