@@ -18,9 +18,9 @@ public static class HarbourLightsPalette
 
     private static readonly StatusStyle OkStyle = new("OK", "\u25CB", "#E3EEF7", "#13233A", "#3D5F80", 1.5, "", false);
 
-    private static readonly StatusStyle StrainedStyle = new("STRAINED", "\u25B2", "#F7D98B", "#2B1D00", "#7A5300", 2.5, "7 4", false);
+    private static readonly StatusStyle StrainedStyle = new("STRAINED", "\u25B2", "#E8AE3A", "#2B1D00", "#7A5300", 2.5, "7 4", false);
 
-    private static readonly StatusStyle BottleneckStyle = new("BOTTLENECK", "\u25C6", "#E8772E", "#1A0A00", "#5A2200", 2.5, "", true);
+    private static readonly StatusStyle BottleneckStyle = new("BOTTLENECK", "\u25C6", "#D9651C", "#1A0A00", "#5A2200", 2.5, "", true);
 
     private static readonly StatusStyle UnstableStyle = new("UNSTABLE", "\u2716", "#4A1450", "#FFFFFF", "#0D0010", 3.5, "2 3", false);
 

@@ -29,8 +29,9 @@ public static class SvgMapWriter
     {
         ArgumentNullException.ThrowIfNull(layout);
         var legend = MapLegend.Lay(layout, out double headerHeight, out double minWidth);
-        double width = Math.Max(layout.Width, minWidth);
-        double height = layout.Height + headerHeight;
+        // Whole-unit sizes, so a raster at an integer scale has exactly the SVG's size.
+        double width = Math.Ceiling(Math.Max(layout.Width, minWidth));
+        double height = Math.Ceiling(layout.Height + headerHeight);
         double offsetX = (width - layout.Width) / 2.0;
 
         var root = new XElement(
