@@ -34,6 +34,9 @@ public static class HtmlReport
     public const string PlanningCaution =
         "These are planning estimates under stated assumptions; decisions follow local clinical governance and safe-staffing rules.";
 
+    /// <summary>The map is drawn at most this many times its own size on screen.</summary>
+    private const double MaxMapEnlargement = 1.25;
+
     /// <summary>The report for <paramref name="baseline"/>, compared with <paramref name="scenarios"/> when any are given.</summary>
     public static string Write(NetworkSolution baseline, IReadOnlyList<ReportScenario>? scenarios = null)
     {
@@ -55,8 +58,12 @@ public static class HtmlReport
         html.Append("<p class=\"finding\" id=\"finding\"><strong>Finding:</strong> ").Append(HtmlEncode(Finding.Summarise(baseline))).Append("</p>\n");
 
         var layout = MapLayoutBuilder.Build(baseline);
+        var map = SvgMapWriter.Write(layout).Root!;
+        // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
+        string maxWidth = Invariant.Coordinate(Math.Ceiling(double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture) * MaxMapEnlargement));
         html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n")
-            .Append(SvgMapWriter.WriteString(layout)).Append('\n')
+            .Append("<div class=\"map-frame\" style=\"max-width:").Append(maxWidth).Append("px\">\n")
+            .Append(map.ToString()).Append("\n</div>\n")
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
             .Append(".</figcaption>\n</figure>\n</section>\n");
@@ -99,7 +106,7 @@ public static class HtmlReport
         }
 
         var shown = WaitChart.Shown(growth);
-        html.Append("<figure id=\"growth-figure\">\n").Append(StripDeclaration(chart)).Append('\n')
+        html.Append("<figure id=\"growth-figure\">\n<div class=\"chart-frame\">\n").Append(StripDeclaration(chart)).Append("\n</div>\n")
             .Append("<figcaption>Every arrival rate multiplied by the same factor, from today's demand (1.0) to ")
             .Append(Invariant.Factor(growth.Factors[^1])).Append(", just below the first saturation at ")
             .Append(Invariant.Factor(growth.SaturationFactor!.Value)).Append(". ");

@@ -17,7 +17,9 @@ internal static class ReportStyles
         table { border-collapse: collapse; width: 100%; font-size: 0.88rem; font-variant-numeric: tabular-nums; }
         th, td { border-bottom: 1px solid #B8BEC4; padding: 0.3rem 0.45rem; text-align: right; vertical-align: top; }
         th { background: #EEF1F4; }
-        th:first-child, td:first-child { text-align: left; }
+        th:first-child, td:first-child, #unit-table th:nth-child(2) { text-align: left; }
+        .map-frame { margin: 0 auto; }
+        .chart-frame { max-width: 54rem; margin: 0 auto; }
         td.status { text-align: left; white-space: nowrap; font-weight: bold; }
         .caution { border: 2px solid #22313F; padding: 0.6rem 0.9rem; }
         footer { margin-top: 2rem; color: #3A3A3A; font-size: 0.85rem; }

@@ -73,7 +73,20 @@ public static partial class WaitChart
             LabelFormatter = value => value.ToString("0.###", CultureInfo.InvariantCulture),
         };
         plot.ShowLegend(Alignment.UpperLeft);
-        return RenumberIds(plot.GetSvgXml(Width, Height));
+        return WithViewBox(RenumberIds(plot.GetSvgXml(Width, Height)));
+    }
+
+    /// <summary>Adds a viewBox when the SVG has none, so the page can scale the chart to its column.</summary>
+    internal static string WithViewBox(string svg)
+    {
+        int root = svg.IndexOf("<svg", StringComparison.Ordinal);
+        int end = svg.IndexOf('>', root);
+        if (root < 0 || svg.AsSpan(root, end - root).Contains("viewBox", StringComparison.Ordinal))
+        {
+            return svg;
+        }
+
+        return svg.Insert(root + 4, string.Create(CultureInfo.InvariantCulture, $" viewBox=\"0 0 {Width} {Height}\""));
     }
 
     /// <summary>
