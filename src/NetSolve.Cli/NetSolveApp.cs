@@ -65,6 +65,7 @@ internal static class NetSolveApp
         root.Options.Add(CommonOptions.Verbose);
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
+        root.Subcommands.Add(FitCommand.Create(context));
         return root;
     }
 }

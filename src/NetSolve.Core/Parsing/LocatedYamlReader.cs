@@ -17,6 +17,17 @@ public static class LocatedYamlReader
     public static YamlNode? Read(string text, string fileName)
     {
         ArgumentNullException.ThrowIfNull(text);
+        if (BlockYamlReader.TryRead(text, fileName, out var fast))
+        {
+            return fast;
+        }
+
+        return ReadWithYamlDotNet(text, fileName);
+    }
+
+    /// <summary>Reads through YamlDotNet only; the reference that the fast block reader must agree with.</summary>
+    internal static YamlNode? ReadWithYamlDotNet(string text, string fileName)
+    {
         var parser = new Parser(new StringReader(text));
         try
         {

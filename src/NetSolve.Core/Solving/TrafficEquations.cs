@@ -10,17 +10,22 @@ namespace NetSolve.Solving;
 /// </summary>
 /// <remarks>
 /// Up to <see cref="DenseLimit"/> reached units the system (I − Pᵀ)λ = γ is solved directly by LU on a dense
-/// matrix; above it, by BiCGStab with an ILU(0) preconditioner on a sparse matrix, so memory grows with the
-/// number of routes. Either way the residual is checked. Validation has already rejected sets of units with no
-/// exit, so I − Pᵀ is non-singular on the reached units.
+/// matrix (MathNet.Numerics). Above it memory must grow with the routes, not units squared: Gauss–Seidel sweeps
+/// over the units in upstream-first order (<see cref="ComponentOrder"/>), which is exact after one sweep where
+/// patients never return and converges geometrically inside feedback loops; if the sweeps stall, BiCGStab on a
+/// MathNet sparse matrix takes over. Either way the residual is checked. Validation has already rejected sets of
+/// units with no exit, so I − Pᵀ is non-singular on the reached units.
 /// </remarks>
 public static class TrafficEquations
 {
     /// <summary>Largest number of reached units solved densely; chosen by measurement (docs/performance.md).</summary>
     public const int DenseLimit = 400;
 
-    /// <summary>Iteration cap of the sparse solver.</summary>
-    public const int MaxIterations = 10_000;
+    /// <summary>Iteration cap of the sparse solvers (sweeps, then BiCGStab iterations).</summary>
+    public const int MaxIterations = 2_000;
+
+    /// <summary>Relative to the largest flow: sweeping stops when no flow changes by more than this.</summary>
+    public const double SweepTolerance = 1e-13;
 
     /// <summary>Flow into each unit per hour, by unit position; 0 for unreached units.</summary>
     /// <exception cref="TrafficEquationsException">The residual stays above <see cref="Tolerances.TrafficResidual"/>.</exception>
@@ -41,18 +46,109 @@ public static class TrafficEquations
 
         int n = members.Count;
         var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
-        var flows = n <= DenseLimit
-            ? SolveDense(routing, members, position, external)
-            : SolveSparse(routing, members, position, external);
-
-        var result = new double[routing.UnitCount];
-        for (int k = 0; k < n; k++)
+        double[] result;
+        if (n <= DenseLimit)
         {
-            result[members[k]] = Math.Max(0.0, flows[k]);
+            result = Scatter(SolveDense(routing, members, position, external), members, routing.UnitCount);
+        }
+        else
+        {
+            result = Sweep(routing, reached)
+                ?? Scatter(SolveSparse(routing, members, position, external), members, routing.UnitCount);
         }
 
         CheckResidual(routing, result);
         return result;
+    }
+
+    private static double[] Scatter(Vector<double> flows, List<int> members, int unitCount)
+    {
+        var result = new double[unitCount];
+        for (int k = 0; k < members.Count; k++)
+        {
+            result[members[k]] = Math.Max(0.0, flows[k]);
+        }
+
+        return result;
+    }
+
+    /// <summary>Gauss–Seidel in upstream-first order; null when it has not converged within <see cref="MaxIterations"/> sweeps.</summary>
+    private static double[]? Sweep(RoutingTable routing, bool[] reached)
+    {
+        int n = routing.UnitCount;
+        var incomingStart = new int[n + 1];
+        for (int from = 0; from < n; from++)
+        {
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            {
+                if (reached[from] && routing.Probabilities[e] > 0.0)
+                {
+                    incomingStart[routing.Targets[e] + 1]++;
+                }
+            }
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            incomingStart[i + 1] += incomingStart[i];
+        }
+
+        var fill = (int[])incomingStart.Clone();
+        var sources = new int[incomingStart[n]];
+        var weights = new double[incomingStart[n]];
+        var selfRoute = new double[n];
+        for (int from = 0; from < n; from++)
+        {
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            {
+                int to = routing.Targets[e];
+                double p = routing.Probabilities[e];
+                if (!reached[from] || p <= 0.0)
+                {
+                    continue;
+                }
+
+                if (to == from)
+                {
+                    selfRoute[from] += p;
+                }
+                else
+                {
+                    int slot = fill[to]++;
+                    sources[slot] = from;
+                    weights[slot] = p;
+                }
+            }
+        }
+
+        int[] order = ComponentOrder.Upstream(routing, reached);
+        var external = routing.ExternalPerHour.ToArray();
+        var flows = new double[n];
+        for (int sweep = 0; sweep < MaxIterations; sweep++)
+        {
+            double largestChange = 0.0;
+            double largestFlow = 0.0;
+            foreach (int unit in order)
+            {
+                double inflow = external[unit];
+                for (int k = incomingStart[unit]; k < incomingStart[unit + 1]; k++)
+                {
+                    inflow += weights[k] * flows[sources[k]];
+                }
+
+                double updated = inflow / (1.0 - selfRoute[unit]);
+                largestChange = Math.Max(largestChange, Math.Abs(updated - flows[unit]));
+                largestFlow = Math.Max(largestFlow, updated);
+                flows[unit] = updated;
+            }
+
+            if (largestChange <= SweepTolerance * Math.Max(1.0, largestFlow))
+            {
+                return flows;
+            }
+        }
+
+        return null;
     }
 
     private static Vector<double> SolveDense(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
@@ -84,7 +180,7 @@ public static class TrafficEquations
         var iterator = new Iterator<double>(
             new IterationCountStopCriterion<double>(MaxIterations),
             new ResidualStopCriterion<double>(Tolerances.TrafficResidual * 1e-3));
-        return matrix.SolveIterative(external, new BiCgStab(), iterator, new ILU0Preconditioner());
+        return matrix.SolveIterative(external, new BiCgStab(), iterator, new DiagonalPreconditioner());
     }
 
     private static IEnumerable<(int Row, int Column, double Value)> NegatedTransposeEntries(

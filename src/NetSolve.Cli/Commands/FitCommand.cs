@@ -1,0 +1,108 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text;
+using NetSolve.Fitting;
+using NetSolve.Model;
+using NetSolve.Output;
+
+namespace NetSolve.Cli.Commands;
+
+/// <summary><c>netsolve fit LOG.csv</c>: estimates a network file from a log of patient movements.</summary>
+internal static class FitCommand
+{
+    public static Command Create(CliContext context)
+    {
+        var log = new Argument<string>("LOG") { Description = "Movement log (CSV: patient,unit,arrived,started,left; see docs/movement-log.md)." };
+        var output = new Option<string?>("--output", "-o") { Description = "Write the network file here (default: print it)." };
+        var timeUnit = new Option<string>("--time-unit")
+        {
+            Description = "Time unit of the network file written: minute, hour or day.",
+            DefaultValueFactory = _ => "hour",
+        }.AcceptOnlyFromAmong("minute", "hour", "day");
+        var name = new Option<string?>("--name") { Description = "Network name (default: the log's file name)." };
+        var command = new Command("fit", "Estimate a network from a log of patient movements: arrival rates, routing fractions, service times and servers.")
+        {
+            log, output, timeUnit, name,
+        };
+        command.SetAction(parse =>
+        {
+            string path = parse.GetValue(log)!;
+            var visits = ReadLog(path);
+            var unit = Enum.Parse<TimeUnit>(parse.GetValue(timeUnit)!, ignoreCase: true);
+            FittedNetwork fitted;
+            try
+            {
+                fitted = NetworkFitter.Fit(visits, parse.GetValue(name) ?? Path.GetFileNameWithoutExtension(path), unit);
+            }
+            catch (ArgumentException exception)
+            {
+                throw new InputException($"{path}: {exception.Message.Split(" (Parameter", 2)[0]}");
+            }
+
+            string[] header =
+            [
+                $"Estimated by netsolve fit from {Path.GetFileName(path)}: {fitted.Patients} patients, {visits.Count} stays,",
+                string.Create(CultureInfo.InvariantCulture, $"arrivals over {TimeConstants.FromHours(fitted.WindowHours, unit):0.##} {TimeConstants.Name(unit)}s. Servers are the most patients seen in service at once:"),
+                "check them against the roster before planning with this file.",
+            ];
+            if (parse.GetValue(output) is string target)
+            {
+                AtomicFile.Write(target, stream =>
+                {
+                    using var writer = new StreamWriter(stream, new UTF8Encoding(false));
+                    NetworkYamlWriter.Write(fitted.Network, writer, header);
+                });
+                WriteSummary(fitted, context.Out);
+                context.Out.Write($"\nnetwork file written to {target}\n");
+            }
+            else
+            {
+                NetworkYamlWriter.Write(fitted.Network, context.Out, header);
+            }
+
+            return ExitCodes.Success;
+        });
+        return command;
+    }
+
+    private static List<UnitVisit> ReadLog(string path)
+    {
+        if (Directory.Exists(path) || !File.Exists(path))
+        {
+            throw new InputException($"{path}: {(Directory.Exists(path) ? "is a directory, not a movement log" : "no such file")}");
+        }
+
+        string text;
+        try
+        {
+            text = File.ReadAllText(path);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException($"{path}: cannot be read: {exception.Message}");
+        }
+
+        var (visits, diagnostics) = MovementLogReader.Read(text, path);
+        if (diagnostics.Any(d => d.IsError))
+        {
+            throw new InputException(string.Join("\n", diagnostics.Where(d => d.IsError)));
+        }
+
+        return [.. visits];
+    }
+
+    private static void WriteSummary(FittedNetwork fitted, TextWriter output)
+    {
+        var unit = fitted.Network.TimeUnit;
+        string suffix = TimeConstants.Suffix(unit);
+        var table = new TextTable("unit", ">stays", $">entries/{suffix}", $">service ({suffix})", ">service cv", $">observed wait ({suffix})", ">peak in service");
+        foreach (var u in fitted.Units)
+        {
+            table.Add(u.Id, u.Stays.ToString(CultureInfo.InvariantCulture), Numbers.Compact(TimeConstants.RateFromPerHour(u.EntriesPerHour, unit)),
+                Numbers.Compact(TimeConstants.FromHours(u.MeanServiceHours, unit)), Numbers.Fixed(u.ServiceCv, 2),
+                Numbers.Compact(TimeConstants.FromHours(u.MeanWaitHours, unit)), u.PeakInService.ToString(CultureInfo.InvariantCulture));
+        }
+
+        table.Write(output);
+    }
+}

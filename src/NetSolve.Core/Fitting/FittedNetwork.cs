@@ -1,0 +1,11 @@
+using System.Collections.Immutable;
+using NetSolve.Model;
+
+namespace NetSolve.Fitting;
+
+/// <summary>A network estimated from a movement log, with the per-unit evidence behind it.</summary>
+/// <param name="Network">The estimated network, ready to solve or simulate.</param>
+/// <param name="Units">Per-unit estimates, in the network's unit order.</param>
+/// <param name="Patients">Patients in the log.</param>
+/// <param name="WindowHours">Span of arrivals the rates are measured over.</param>
+public sealed record FittedNetwork(Network Network, ImmutableArray<FittedUnit> Units, int Patients, double WindowHours);
