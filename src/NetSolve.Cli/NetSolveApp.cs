@@ -66,6 +66,8 @@ internal static class NetSolveApp
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
         root.Subcommands.Add(FitCommand.Create(context));
+        root.Subcommands.Add(MapCommand.Create(context));
+        root.Subcommands.Add(ReportCommand.Create(context));
         return root;
     }
 }

@@ -1,0 +1,3 @@
+using BenchmarkDotNet.Running;
+
+BenchmarkSwitcher.FromAssembly(typeof(NetSolve.Benchmarks.MapRenderingBenchmarks).Assembly).Run(args);
