@@ -4,7 +4,7 @@ namespace NetSolve.Rendering.Map;
 public static class MapTypography
 {
     /// <summary>The font stack: DejaVu Sans first because box sizes are estimated from its (wide) advance widths.</summary>
-    public const string FontFamily = "'DejaVu Sans', 'Liberation Sans', Arial, Helvetica, sans-serif";
+    public const string FontFamily = "DejaVu Sans, Liberation Sans, Arial, Helvetica, sans-serif";
 
     /// <summary>Unit labels (bold).</summary>
     public const double LabelSize = 12.5;
