@@ -27,6 +27,8 @@ internal static class ReportStyles
         @media print {
           body { max-width: none; padding: 0; font-size: 10pt; }
           h2 { break-after: avoid-page; }
+          table { font-size: 8pt; }
+          th, td { padding: 0.15rem 0.25rem; }
           .finding, figure, tr, .caution { break-inside: avoid-page; }
           thead { display: table-header-group; }
           th { background: #EEF1F4; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
