@@ -16,18 +16,27 @@ namespace NetSolve.Rendering.Map;
 /// <summary>Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way.</summary>
 /// <remarks>
 /// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
-/// at the unit's box with their rate written in the box. Routes that run against the main direction after layering, and repeat visits,
-/// become <see cref="MapEdgeKind.Feedback"/>. Deterministic: the same solution gives the same layout.
+/// at the unit's box with their rate written in the box. Routes that run against the main direction after
+/// layering, and repeat visits, become <see cref="MapEdgeKind.Feedback"/>. Deterministic: the same solution gives the same layout.
 /// </remarks>
 public static class MapLayoutBuilder
 {
     /// <summary>Gap between boxes in one layer: room for an arrival or exit arrow and a rate label, no more, so 40 units fit A4 width.</summary>
     private const double NodeSeparation = 18.0;
+
+    /// <summary>Gap between layers: two arrival or exit arrows and a rate label.</summary>
     private const double LayerSeparation = 50.0;
+
     /// <summary>Length of the arrival and exit arrows; two of them fit in <see cref="LayerSeparation"/>.</summary>
     internal const double StubLength = 18.0;
+
+    /// <summary>Distance of the arrival and exit arrows from the box corner.</summary>
     private const double StubInset = 14.0;
+
+    /// <summary>Arrowheads grow with the line so a wide line still ends in a visible point.</summary>
     private const double ArrowLengthPerStroke = 1.6;
+
+    /// <summary>Shortest arrowhead, for thin lines.</summary>
     private const double MinArrowLength = 9.0;
 
     /// <summary>Lays out <paramref name="solution"/> with the given main direction.</summary>
