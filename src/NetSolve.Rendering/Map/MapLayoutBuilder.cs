@@ -21,13 +21,13 @@ namespace NetSolve.Rendering.Map;
 /// </remarks>
 public static class MapLayoutBuilder
 {
-    /// <summary>Gap between boxes in one layer: room for an arrival or exit arrow and a rate label, no more, so 40 units fit A4 width.</summary>
-    private const double NodeSeparation = 18.0;
+    /// <summary>Gap between boxes in one layer: room for an exit arrow and a little air, no more, so 40 units fit A4 width.</summary>
+    private const double NodeSeparation = 24.0;
 
     /// <summary>Gap between layers: two arrival or exit arrows and a rate label.</summary>
     private const double LayerSeparation = 50.0;
 
-    /// <summary>Length of the arrival and exit arrows; two of them fit in <see cref="LayerSeparation"/>.</summary>
+    /// <summary>Length of the arrival and exit arrows; shorter than both gaps, between layers and between boxes.</summary>
     internal const double StubLength = 18.0;
 
     /// <summary>Distance of the arrival and exit arrows from the box corner.</summary>
@@ -163,7 +163,7 @@ public static class MapLayoutBuilder
 
     /// <summary>
     /// The arrival arrow enters the box near its first corner along the main direction (top-left), the exit arrow
-    /// leaves near the opposite corner (bottom-right), each <see cref="StubLength"/> long, in the gap between layers.
+    /// leaves sideways near the opposite corner (bottom-right), each <see cref="StubLength"/> long.
     /// </summary>
     private static MapStub? Stub(double perHour, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction, bool isArrival)
     {
@@ -172,21 +172,19 @@ public static class MapLayoutBuilder
             return null;
         }
 
+        // Arrivals come in along the main direction at the first corner; exits leave sideways at the last corner,
+        // into the gap between boxes of one layer, clear of the routes that leave the box towards the next layer.
         MapPoint start;
         MapPoint tip;
         if (direction == MapDirection.TopToBottom)
         {
-            double x = isArrival ? node.Left + StubInset : node.Right - StubInset;
-            double y = isArrival ? node.Top : node.Bottom;
-            start = isArrival ? new MapPoint(x, y - StubLength) : new MapPoint(x, y);
-            tip = isArrival ? new MapPoint(x, y) : new MapPoint(x, y + StubLength);
+            start = isArrival ? new MapPoint(node.Left + StubInset, node.Top - StubLength) : new MapPoint(node.Right, node.Bottom - StubInset);
+            tip = isArrival ? new MapPoint(node.Left + StubInset, node.Top) : new MapPoint(node.Right + StubLength, node.Bottom - StubInset);
         }
         else
         {
-            double y = isArrival ? node.Top + StubInset : node.Bottom - StubInset;
-            double x = isArrival ? node.Left : node.Right;
-            start = isArrival ? new MapPoint(x - StubLength, y) : new MapPoint(x, y);
-            tip = isArrival ? new MapPoint(x, y) : new MapPoint(x + StubLength, y);
+            start = isArrival ? new MapPoint(node.Left - StubLength, node.Top + StubInset) : new MapPoint(node.Right - StubInset, node.Bottom);
+            tip = isArrival ? new MapPoint(node.Left, node.Top + StubInset) : new MapPoint(node.Right - StubInset, node.Bottom + StubLength);
         }
 
         return new MapStub(perHour, Units.ShortRate(perHour, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
