@@ -66,6 +66,10 @@ internal static class NetSolveApp
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
         root.Subcommands.Add(FitCommand.Create(context));
+        root.Subcommands.Add(GrowthCommand.Create(context));
+        root.Subcommands.Add(CompareCommand.Create(context));
+        root.Subcommands.Add(StaffCommand.Create(context));
+        root.Subcommands.Add(PathwayCommand.Create(context));
         root.Subcommands.Add(MapCommand.Create(context));
         root.Subcommands.Add(ReportCommand.Create(context));
         return root;

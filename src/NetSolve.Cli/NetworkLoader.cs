@@ -1,5 +1,6 @@
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Scenarios;
 
 namespace NetSolve.Cli;
 
@@ -7,7 +8,10 @@ namespace NetSolve.Cli;
 internal static class NetworkLoader
 {
     /// <summary>The network, or an <see cref="InputException"/> carrying the diagnostics when the file is invalid.</summary>
-    public static Network Load(string path, CliContext context)
+    /// <param name="path">The network file.</param>
+    /// <param name="context">Where warnings go.</param>
+    /// <param name="overrides">What-if texts from <c>--set</c>, applied in order after reading (see <see cref="OverrideParser"/>).</param>
+    public static Network Load(string path, CliContext context, IReadOnlyList<string>? overrides = null)
     {
         var result = NetworkReader.ReadFile(path);
         var errors = result.Diagnostics.Where(d => d.IsError).ToList();
@@ -21,6 +25,43 @@ internal static class NetworkLoader
             context.Report(warning.ToString());
         }
 
-        return result.Network!;
+        return overrides is null || overrides.Count == 0
+            ? result.Network!
+            : ApplyOverrides(result.Network!, path, overrides, context);
+    }
+
+    /// <summary>Applies <c>--set</c> texts to <paramref name="network"/>; every bad text is reported, one line each.</summary>
+    public static Network ApplyOverrides(Network network, string path, IReadOnlyList<string> overrides, CliContext context)
+    {
+        var changes = new List<NetworkChange>();
+        var problems = new List<Diagnostic>();
+        foreach (string text in overrides)
+        {
+            if (OverrideParser.Parse(text, network.TimeUnit, out var change) is Diagnostic problem)
+            {
+                problems.Add(problem);
+            }
+            else
+            {
+                changes.Add(change!);
+            }
+        }
+
+        if (problems.Count == 0)
+        {
+            var edit = NetworkEditor.Apply(network, changes, new SourceLocation(path, 0, 0));
+            problems.AddRange(edit.Diagnostics.Where(d => d.IsError));
+            if (edit.Network is Network changed)
+            {
+                foreach (var warning in edit.Diagnostics)
+                {
+                    context.Report(warning.ToString());
+                }
+
+                return changed;
+            }
+        }
+
+        throw new InputException(string.Join("\n", problems.Select(d => d.ToString())));
     }
 }

@@ -1,3 +1,3 @@
 using BenchmarkDotNet.Running;
 
-BenchmarkSwitcher.FromAssembly(typeof(NetSolve.Benchmarks.MapRenderingBenchmarks).Assembly).Run(args);
+BenchmarkSwitcher.FromAssembly(typeof(NetSolve.Benchmarks.GeneratedNetworks).Assembly).Run(args);

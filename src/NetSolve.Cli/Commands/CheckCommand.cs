@@ -9,13 +9,14 @@ internal static class CheckCommand
     public static Command Create(CliContext context)
     {
         var file = CommonOptions.NetworkFile();
+        var set = WhatIfOption.Create();
         var command = new Command("check", "Validate a network file: report every error and warning with file, line, column and unit.")
         {
-            file,
+            file, set,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context);
+            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
             context.Out.Write(string.Create(CultureInfo.InvariantCulture,
                 $"{parse.GetValue(file)}: valid: {network.Units.Length} units, {network.Arrivals.Length} arrival streams, {network.Routes.Length} routes\n"));
             return ExitCodes.Success;

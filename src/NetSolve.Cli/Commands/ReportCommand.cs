@@ -6,7 +6,7 @@ using NetSolve.Solving;
 namespace NetSolve.Cli.Commands;
 
 /// <summary><c>netsolve report FILE [SCENARIO ...] -o report.html</c>: the self-contained leadership report.</summary>
-/// <remarks>Until scenario files exist, each extra argument is a network file, solved and compared with the first.</remarks>
+/// <remarks>Like <c>compare</c>: FILE and each SCENARIO may be a network file or a scenario file (docs/scenarios.md).</remarks>
 internal static class ReportCommand
 {
     private static readonly string[] Extensions = [".html", ".htm"];
@@ -16,7 +16,7 @@ internal static class ReportCommand
         var file = CommonOptions.NetworkFile();
         var scenarios = new Argument<string[]>("SCENARIO")
         {
-            Description = "Alternative network files, each solved and compared with FILE (named by file name).",
+            Description = "Scenario files (see docs/scenarios.md) or network files, each solved and compared with FILE.",
             Arity = ArgumentArity.ZeroOrMore,
         };
         var output = MapCommand.OutputOption("Write the report here (.html): one file with everything inline, to open in any browser, e-mail or print.", Extensions);
@@ -28,9 +28,11 @@ internal static class ReportCommand
         command.SetAction(parse =>
         {
             double threshold = parse.GetValue(strain);
-            var baseline = NetworkSolver.Solve(NetworkLoader.Load(parse.GetValue(file)!, context), threshold);
+            var loader = new ScenarioLoader(context);
+            var baseline = NetworkSolver.Solve(loader.Load(parse.GetValue(file)!).Network, threshold);
             var alternatives = (parse.GetValue(scenarios) ?? [])
-                .Select(path => new ReportScenario(Path.GetFileNameWithoutExtension(path), NetworkSolver.Solve(NetworkLoader.Load(path, context), threshold)))
+                .Select(loader.Load)
+                .Select(scenario => new ReportScenario(scenario.Name, NetworkSolver.Solve(scenario.Network, threshold)))
                 .ToList();
             string html = HtmlReport.Write(baseline, alternatives);
             string target = parse.GetValue(output)!;

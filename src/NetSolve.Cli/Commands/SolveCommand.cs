@@ -11,13 +11,14 @@ internal static class SolveCommand
         var file = CommonOptions.NetworkFile();
         var format = CommonOptions.Format();
         var strain = CommonOptions.Strain();
+        var set = WhatIfOption.Create();
         var command = new Command("solve", "Solve the network: load, utilisation, waits and headroom of every unit, bottleneck and network totals.")
         {
-            file, format, strain,
+            file, format, strain, set,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context);
+            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
             var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
             SolutionOutput.Write(solution, parse.GetValue(format)!, context);
             return ExitCodes.Success;

@@ -66,6 +66,20 @@ public sealed class RenderCommandsTests : IDisposable
     }
 
     [Fact]
+    public void Report_takes_scenario_files_and_names_them_as_the_scenario_does()
+    {
+        string target = Path.Combine(_folder, "report.html");
+        string scenario = Path.Combine(AppContext.BaseDirectory, "networks", "scenarios", "harbourside-winter-beds.yaml");
+        var (code, _, _) = Run("report", Network("harbourside"), scenario, "-o", target);
+
+        Assert.Equal(0, code);
+        string html = File.ReadAllText(target);
+        int section = html.IndexOf("id=\"scenario-table\"", StringComparison.Ordinal);
+        Assert.True(section > 0);
+        Assert.Equal(2, System.Text.RegularExpressions.Regex.Count(html[section..html.IndexOf("</table>", section, StringComparison.Ordinal)], "<tr><td>"));
+    }
+
+    [Fact]
     public void A_missing_network_file_is_one_line_on_stderr_exit_1_and_no_file_written()
     {
         string target = Path.Combine(_folder, "report.html");

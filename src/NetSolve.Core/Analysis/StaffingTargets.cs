@@ -1,0 +1,16 @@
+namespace NetSolve.Analysis;
+
+/// <summary>What every unit must meet; a null target is not checked. Every unit must also be stable (utilisation below 1).</summary>
+/// <param name="MaxUtilisation">Largest utilisation allowed, in (0, 1].</param>
+/// <param name="MaxMeanWaitHours">Largest mean wait before service (Wq), in hours, not negative.</param>
+/// <param name="MaxMeanTimeInUnitHours">Largest mean time in the unit including service (W), in hours, not negative.</param>
+/// <param name="WaitTail">Largest share of patients waiting longer than a time.</param>
+public sealed record StaffingTargets(
+    double? MaxUtilisation = null,
+    double? MaxMeanWaitHours = null,
+    double? MaxMeanTimeInUnitHours = null,
+    WaitTailTarget? WaitTail = null)
+{
+    /// <summary>True when no target is set (then only stability is required).</summary>
+    public bool IsEmpty => MaxUtilisation is null && MaxMeanWaitHours is null && MaxMeanTimeInUnitHours is null && WaitTail is null;
+}

@@ -1,0 +1,344 @@
+using System.Globalization;
+using NetSolve.Model;
+using NetSolve.Parsing;
+
+namespace NetSolve.Scenarios;
+
+/// <summary>Turns the located YAML of a scenario file into changes on its base network, collecting every problem.</summary>
+internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResult> readBase)
+{
+    private static readonly string[] TopKeys =
+        ["scenario", "base", "add_units", "servers", "service", "scale_arrivals", "arrivals", "routes", "close_units"];
+
+    private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv"];
+
+    private readonly List<Diagnostic> _diagnostics = [];
+
+    public ScenarioReadResult Parse(YamlNode root)
+    {
+        if (root is not YamlMapping top)
+        {
+            Error(root.Location, null, DiagnosticCodes.WrongShape, "the top level must be a mapping with 'base' and the changes");
+            return Result(null);
+        }
+
+        var fields = Fields(top, TopKeys, null);
+        string name = fields.TryGetValue("scenario", out var nameNode) && Scalar(nameNode, null, "scenario") is YamlScalar nameScalar
+            ? nameScalar.Value
+            : Path.GetFileNameWithoutExtension(fileName);
+        var baseNode = fields["base"];
+        if (Scalar(baseNode, null, "base") is not YamlScalar baseScalar)
+        {
+            return Result(null);
+        }
+
+        var read = readBase(baseScalar.Value);
+        foreach (var diagnostic in read.Diagnostics)
+        {
+            _diagnostics.Add(diagnostic.Location.Line == 0
+                ? Diagnostic.Error(ChangeCodes.BadBase, baseScalar.Location, null, $"base network '{baseScalar.Value}': {diagnostic.Message}")
+                : diagnostic);
+        }
+
+        if (read.Network is not Network network)
+        {
+            return Result(null);
+        }
+
+        var changes = new List<NetworkChange>();
+        var timeUnit = network.TimeUnit;
+        Section(fields, "add_units", changes, (key, value) => AddUnit(key, value, timeUnit));
+        Section(fields, "servers", changes, ServersChange);
+        Section(fields, "service", changes, (key, value) => ServiceChange(key, value, timeUnit));
+        if (fields.TryGetValue("scale_arrivals", out var scaleNode) && Scalar(scaleNode, null, "scale_arrivals") is YamlScalar scale
+            && Factor(scale, null, "scale_arrivals", allowZero: true) is double all)
+        {
+            changes.Add(new ScaleArrivals(scale.Location, null, all));
+        }
+
+        Section(fields, "arrivals", changes, (key, value) => ArrivalsChange(key, value, timeUnit));
+        if (fields.TryGetValue("routes", out var routesNode) && Mapping(routesNode, null, "routes") is YamlMapping routes)
+        {
+            foreach (var (from, targets) in UniqueEntries(routes, null))
+            {
+                if (Mapping(targets, from.Value, $"routes.{from.Value}") is not YamlMapping targetMap)
+                {
+                    continue;
+                }
+
+                foreach (var (to, value) in UniqueEntries(targetMap, from.Value))
+                {
+                    if (Value(value, from.Value, $"route to '{to.Value}'", ValueParser.Probability) is double probability)
+                    {
+                        changes.Add(new SetRoute(to.Location, from.Value, to.Value, probability));
+                    }
+                }
+            }
+        }
+
+        Section(fields, "close_units", changes, CloseChange);
+        if (_diagnostics.Any(d => d.IsError))
+        {
+            return Result(null);
+        }
+
+        var edit = NetworkEditor.Apply(network, changes, baseScalar.Location);
+        _diagnostics.AddRange(edit.Diagnostics);
+        return Result(edit.Network is Network changed
+            ? new Scenario(name, fileName, network, [.. changes], changed)
+            : null);
+    }
+
+    private ScenarioReadResult Result(Scenario? scenario)
+    {
+        bool failed = _diagnostics.Any(d => d.IsError);
+        var sorted = _diagnostics
+            .OrderBy(d => string.Equals(d.Location.File, fileName, StringComparison.Ordinal))
+            .ThenBy(d => d.Location.Line)
+            .ThenBy(d => d.Location.Column);
+        return new ScenarioReadResult(failed ? null : scenario, [.. sorted]);
+    }
+
+    private void Section(Dictionary<string, YamlNode> fields, string key, List<NetworkChange> changes, Func<YamlScalar, YamlNode, NetworkChange?> parse)
+    {
+        if (!fields.TryGetValue(key, out var node) || node is YamlScalar { IsNull: true } || Mapping(node, null, key) is not YamlMapping mapping)
+        {
+            return;
+        }
+
+        foreach (var (unitKey, value) in UniqueEntries(mapping, null))
+        {
+            if (parse(unitKey, value) is NetworkChange change)
+            {
+                changes.Add(change);
+            }
+        }
+    }
+
+    private AddUnit? AddUnit(YamlScalar key, YamlNode node, TimeUnit timeUnit)
+    {
+        string id = key.Value;
+        if (Mapping(node, id, "a new unit") is not YamlMapping mapping)
+        {
+            return null;
+        }
+
+        var fields = Fields(mapping, UnitKeys, id);
+        string label = fields.TryGetValue("label", out var labelNode) && Scalar(labelNode, id, "label") is YamlScalar labelScalar ? labelScalar.Value : id;
+        Servers? servers = null;
+        if (!fields.TryGetValue("servers", out var serversNode))
+        {
+            Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'servers' (a whole number of at least 1, or unlimited)");
+        }
+        else if (Scalar(serversNode, id, "servers") is YamlScalar serversScalar)
+        {
+            servers = NewServers(serversScalar, id);
+        }
+
+        double? hours = null;
+        if (!fields.TryGetValue("service", out var serviceNode))
+        {
+            Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'service' (the mean time a patient holds a server, e.g. 45min)");
+        }
+        else
+        {
+            hours = Value(serviceNode, id, "service", (string text, out double value) => ValueParser.Duration(text, timeUnit, out value));
+        }
+
+        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", ValueParser.Number) : 1.0;
+        if (cv < 0.0)
+        {
+            Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
+            return null;
+        }
+
+        return servers is Servers s && hours is double h && cv is double c
+            ? new AddUnit(key.Location, new Unit(id, label, s, h, c))
+            : null;
+    }
+
+    private NetworkChange? ServersChange(YamlScalar key, YamlNode node)
+    {
+        if (Scalar(node, key.Value, "servers") is not YamlScalar scalar)
+        {
+            return null;
+        }
+
+        if (scalar.Value.StartsWith('+') || scalar.Value.StartsWith('-'))
+        {
+            if (!int.TryParse(scalar.Value, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out int added))
+            {
+                Error(scalar.Location, key.Value, DiagnosticCodes.BadValue, $"servers: '{scalar.Value}' is not a whole number of servers to add (write e.g. +2)");
+                return null;
+            }
+
+            return new AddServers(key.Location, key.Value, added);
+        }
+
+        return NewServers(scalar, key.Value) is Servers servers ? new SetServers(key.Location, key.Value, servers) : null;
+    }
+
+    private Servers? NewServers(YamlScalar scalar, string id)
+    {
+        if (scalar.IsPlain && scalar.Value == "unlimited")
+        {
+            return Servers.Unlimited;
+        }
+
+        if (scalar.IsPlain && scalar.Value.All(char.IsAsciiDigit)
+            && int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count)
+            && count is >= 1 and <= NetworkFileParser.MaxServers)
+        {
+            return Servers.Of(count);
+        }
+
+        Error(scalar.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
+            $"servers must be a whole number from 1 to {NetworkFileParser.MaxServers}, unlimited, or +N to add, not '{scalar.Value}'"));
+        return null;
+    }
+
+    private NetworkChange? ServiceChange(YamlScalar key, YamlNode node, TimeUnit timeUnit)
+    {
+        if (Scalar(node, key.Value, "service") is not YamlScalar scalar)
+        {
+            return null;
+        }
+
+        if (scalar.Value.StartsWith('x'))
+        {
+            return Factor(scalar, key.Value, "service", allowZero: false) is double factor ? new ScaleService(key.Location, key.Value, factor) : null;
+        }
+
+        return Value(scalar, key.Value, "service", (string text, out double value) => ValueParser.Duration(text, timeUnit, out value)) is double hours
+            ? new SetService(key.Location, key.Value, hours)
+            : null;
+    }
+
+    private NetworkChange? ArrivalsChange(YamlScalar key, YamlNode node, TimeUnit timeUnit)
+    {
+        if (Scalar(node, key.Value, "arrival rate") is not YamlScalar scalar)
+        {
+            return null;
+        }
+
+        if (scalar.Value.StartsWith('x'))
+        {
+            return Factor(scalar, key.Value, "arrivals", allowZero: true) is double factor ? new ScaleArrivals(key.Location, key.Value, factor) : null;
+        }
+
+        return Value(scalar, key.Value, "arrival rate", (string text, out double value) => ValueParser.Rate(text, timeUnit, out value)) is double perHour
+            ? new SetArrivals(key.Location, key.Value, perHour)
+            : null;
+    }
+
+    private CloseUnit? CloseChange(YamlScalar key, YamlNode node)
+    {
+        if (node is YamlScalar { IsNull: true })
+        {
+            Error(node.Location, key.Value, DiagnosticCodes.MissingKey, $"say where its patients go instead: a unit id or '{ScenarioReader.LeaveNetwork}'");
+            return null;
+        }
+
+        return Scalar(node, key.Value, "close_units") is YamlScalar scalar
+            ? new CloseUnit(scalar.Location, key.Value, scalar.Value == ScenarioReader.LeaveNetwork ? null : scalar.Value)
+            : null;
+    }
+
+    private double? Factor(YamlScalar scalar, string? unitId, string what, bool allowZero)
+    {
+        string text = scalar.Value.StartsWith('x') ? scalar.Value[1..] : scalar.Value;
+        if (ValueParser.Number(text, out double factor) is string error)
+        {
+            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: {error} (write a factor as e.g. x1.2)");
+            return null;
+        }
+
+        if (allowZero ? factor >= 0.0 : factor > 0.0)
+        {
+            return factor;
+        }
+
+        Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: the factor must be {(allowZero ? "0 or more" : "more than 0")}, not '{scalar.Value}'");
+        return null;
+    }
+
+    private Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
+    {
+        var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
+        foreach (var (key, value) in UniqueEntries(mapping, unitId))
+        {
+            if (Array.IndexOf(knownKeys, key.Value) < 0)
+            {
+                string hint = NearestName.Suggest(key.Value, knownKeys) is string best
+                    ? $"; did you mean '{best}'?"
+                    : $" (known keys: {string.Join(", ", knownKeys)})";
+                Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
+                continue;
+            }
+
+            fields[key.Value] = value;
+        }
+
+        return fields;
+    }
+
+    private IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
+    {
+        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        foreach (var (key, value) in mapping.Entries)
+        {
+            if (seen.TryGetValue(key.Value, out var first))
+            {
+                Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
+                    $"duplicate key '{key.Value}' (first at line {first.Line})"));
+                continue;
+            }
+
+            seen[key.Value] = key.Location;
+            yield return (key, value);
+        }
+    }
+
+    private delegate string? ValueParse(string text, out double value);
+
+    private double? Value(YamlNode node, string? unitId, string what, ValueParse parse)
+    {
+        if (Scalar(node, unitId, what) is not YamlScalar scalar)
+        {
+            return null;
+        }
+
+        if (parse(scalar.Value, out double value) is string error)
+        {
+            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: {error}");
+            return null;
+        }
+
+        return value;
+    }
+
+    private YamlScalar? Scalar(YamlNode node, string? unitId, string what)
+    {
+        if (node is YamlScalar scalar && !scalar.IsNull)
+        {
+            return scalar;
+        }
+
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node is YamlScalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
+        return null;
+    }
+
+    private YamlMapping? Mapping(YamlNode node, string? unitId, string what)
+    {
+        if (node is YamlMapping mapping)
+        {
+            return mapping;
+        }
+
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, $"{what} must be a mapping of keys to values");
+        return null;
+    }
+
+    private void Error(SourceLocation location, string? unitId, string code, string message) =>
+        _diagnostics.Add(Diagnostic.Error(code, location, unitId, message));
+}
