@@ -11,7 +11,8 @@ internal static class NetworkLoader
     /// <param name="path">The network file.</param>
     /// <param name="context">Where warnings go.</param>
     /// <param name="overrides">What-if texts from <c>--set</c>, applied in order after reading (see <see cref="OverrideParser"/>).</param>
-    public static Network Load(string path, CliContext context, IReadOnlyList<string>? overrides = null)
+    /// <param name="forSimulation">True for <c>simulate</c>: warnings that the formulas ignore a key do not apply.</param>
+    public static Network Load(string path, CliContext context, IReadOnlyList<string>? overrides = null, bool forSimulation = false)
     {
         var result = NetworkReader.ReadFile(path);
         var errors = result.Diagnostics.Where(d => d.IsError).ToList();
@@ -20,7 +21,7 @@ internal static class NetworkLoader
             throw new InputException(string.Join("\n", errors.Select(d => d.ToString())));
         }
 
-        foreach (var warning in result.Diagnostics)
+        foreach (var warning in result.Diagnostics.Where(d => !forSimulation || d.Code != DiagnosticCodes.IgnoredByFormulas))
         {
             context.Report(warning.ToString());
         }

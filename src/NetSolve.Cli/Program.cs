@@ -1,3 +1,3 @@
 using NetSolve.Cli;
 
-return NetSolveApp.Run(args, new CliContext(Console.Out, Console.Error));
+return NetSolveApp.Run(args, new CliContext(Console.Out, Console.Error, IsTerminal: !Console.IsErrorRedirected));

@@ -1,3 +1,10 @@
 using BenchmarkDotNet.Running;
+using NetSolve.Benchmarks;
 
-BenchmarkSwitcher.FromAssembly(typeof(NetSolve.Benchmarks.GeneratedNetworks).Assembly).Run(args);
+if (args is ["cpu-time"])
+{
+    CpuTimeMeasurement.Run(Console.Out);
+    return;
+}
+
+BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);

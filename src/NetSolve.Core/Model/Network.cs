@@ -20,8 +20,17 @@ public sealed record Network(
     ImmutableArray<Arrival> Arrivals,
     ImmutableArray<Route> Routes)
 {
-    /// <summary>Total external arrivals per hour.</summary>
+    /// <summary>How the top-level arrivals vary by hour and day; null for a constant rate (the v1 meaning).</summary>
+    public ArrivalProfile? ArrivalProfile { get; init; }
+
+    /// <summary>Patient groups beside the default group formed by <see cref="Arrivals"/> and <see cref="Routes"/>; empty in v1.</summary>
+    public ImmutableArray<PatientGroup> Groups { get; init; } = [];
+
+    /// <summary>Total external arrivals per hour of the default group (the v1 arrivals).</summary>
     public double ExternalArrivalsPerHour => Arrivals.Sum(arrival => arrival.PerHour);
+
+    /// <summary>Total external arrivals per hour of the default group and every patient group.</summary>
+    public double AllExternalArrivalsPerHour => ExternalArrivalsPerHour + Groups.Sum(group => group.ExternalArrivalsPerHour);
 
     /// <summary>Maps each unit id to its position in <see cref="Units"/>. Builds a new dictionary on each call.</summary>
     public Dictionary<string, int> BuildIndex()

@@ -1,9 +1,29 @@
 namespace NetSolve.Model;
 
 /// <summary>A hospital unit: its servers (beds, cubicles, scanners, clinicians) and its mean service time.</summary>
+/// <remarks>
+/// The optional <c>init</c> properties are extensions whose defaults keep the v1 meaning: service given only by
+/// <see cref="MeanServiceHours"/> and <see cref="ServiceCv"/>, and no limit on the patients in the unit.
+/// </remarks>
 /// <param name="Id">The unit id from the file: letters, digits, <c>_</c> and <c>-</c>, starting with a letter.</param>
 /// <param name="Label">The display name; the id when the file gives none.</param>
 /// <param name="Servers">Servers working at once.</param>
 /// <param name="MeanServiceHours">Mean time a patient holds a server, in hours; positive and finite.</param>
 /// <param name="ServiceCv">Coefficient of variation of the service time; 1 is exponential.</param>
-public sealed record Unit(string Id, string Label, Servers Servers, double MeanServiceHours, double ServiceCv = 1.0);
+public sealed record Unit(string Id, string Label, Servers Servers, double MeanServiceHours, double ServiceCv = 1.0)
+{
+    /// <summary>
+    /// The service-time distribution given in the file; null when the file gives only <c>service</c> and
+    /// <c>service_cv</c> (see <see cref="EffectiveService"/>). When set, its mean equals <see cref="MeanServiceHours"/>.
+    /// </summary>
+    public ServiceDistribution? Service { get; init; }
+
+    /// <summary>The most patients the unit holds at once, in service and waiting; null for no limit.</summary>
+    public int? Capacity { get; init; }
+
+    /// <summary>What happens to a patient arriving when the unit holds <see cref="Capacity"/> patients.</summary>
+    public WhenFull WhenFull { get; init; } = WhenFull.TurnAway;
+
+    /// <summary>The distribution the simulator uses: <see cref="Service"/>, or the v1 meaning of mean and cv.</summary>
+    public ServiceDistribution EffectiveService => Service ?? ServiceDistribution.FromMeanAndCv(MeanServiceHours, ServiceCv);
+}

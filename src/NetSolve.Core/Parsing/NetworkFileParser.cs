@@ -11,8 +11,8 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
     /// <summary>Largest finite server count; more is better written <c>unlimited</c> (Erlang C costs O(c)).</summary>
     public const int MaxServers = 1_000_000;
 
-    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes"];
-    private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv"];
+    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups"];
+    private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full"];
     private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
 
     private readonly Dictionary<string, SourceLocation> _unitLocations = new(StringComparer.Ordinal);
@@ -46,14 +46,17 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         var known = units.Select(unit => unit.Id).ToHashSet(StringComparer.Ordinal);
         var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
         var routes = fields.TryGetValue("routes", out var routesNode) ? ParseRoutes(routesNode, known) : [];
+        CheckDiversions(known);
+        var profile = fields.TryGetValue("arrival_profile", out var profileNode) ? ParseProfile(profileNode, null) : null;
+        var groups = fields.TryGetValue("groups", out var groupsNode) ? ParseGroups(groupsNode, timeUnit, known) : [];
 
         if (diagnostics.Any(d => d.IsError))
         {
             return null;
         }
 
-        var network = new Network(name, timeUnit, units, arrivals, routes);
-        return (network, new NetworkLocations(_unitLocations, _routeLocations));
+        var network = new Network(name, timeUnit, units, arrivals, routes) { ArrivalProfile = profile, Groups = groups };
+        return (network, new NetworkLocations(_unitLocations, _routeLocations) { Groups = _groupLocations });
     }
 
     private TimeUnit ParseTimeUnit(YamlNode? node)
@@ -120,31 +123,22 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             ? labelScalar.Value
             : id;
         var servers = fields.TryGetValue("servers", out var serversNode) ? ParseServers(serversNode, id) : null;
-        double? service = fields.TryGetValue("service", out var serviceNode) ? Value(serviceNode, id, "service", (string text, out double hours) => ValueParser.Duration(text, timeUnit, out hours)) : null;
-        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", ValueParser.Number) : 1.0;
-        if (cv < 0.0)
-        {
-            Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
-        }
-
+        var service = ParseService(fields, mapping, id, timeUnit);
         if (serversNode is null)
         {
             Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'servers' (a whole number of at least 1, or unlimited)");
         }
 
-        if (serviceNode is null)
+        int? capacity = fields.TryGetValue("capacity", out var capacityNode) ? ParseCapacity(capacityNode, id, servers) : null;
+        var whenFull = fields.TryGetValue("when_full", out var whenFullNode) ? ParseWhenFull(whenFullNode, id) : WhenFull.TurnAway;
+        if (whenFullNode is not null && capacityNode is null)
         {
-            Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'service' (the mean time a patient holds a server, e.g. 45min)");
+            Error(whenFullNode.Location, id, DiagnosticCodes.BadValue, "when_full needs 'capacity': a unit without a capacity is never full");
         }
 
-        if (cv is double usedCv && usedCv >= 0.0 && Math.Abs(usedCv - 1.0) > 0.0)
-        {
-            Warning(cvNode!.Location, id, DiagnosticCodes.IgnoredByFormulas, string.Create(CultureInfo.InvariantCulture,
-                $"service_cv {usedCv:0.###} is ignored: the exponential (Jackson) model assumes service_cv 1"));
-        }
-
-        return servers is Servers s && service is double hours && cv is double c && c >= 0.0
-            ? new Unit(id, label, s, hours, c)
+        WarnIgnoredUnitKeys(fields, id, service);
+        return servers is Servers s && service is ParsedService parsed
+            ? new Unit(id, label, s, parsed.MeanHours, parsed.Cv) { Service = parsed.Distribution, Capacity = capacity, WhenFull = whenFull }
             : null;
     }
 

@@ -15,6 +15,18 @@ internal static class StructureRules
     {
         var routing = RoutingTable.Build(network);
         bool[] reached = routing.ReachedUnits();
+        var groupRoutings = network.Groups
+            .Select(group => (Group: group, Routing: RoutingTable.Build(network with { Arrivals = group.Arrivals, Routes = group.Routes ?? network.Routes })))
+            .ToList();
+        foreach (var (_, groupRouting) in groupRoutings)
+        {
+            bool[] groupReached = groupRouting.ReachedUnits();
+            for (int i = 0; i < reached.Length; i++)
+            {
+                reached[i] |= groupReached[i];
+            }
+        }
+
         for (int i = 0; i < reached.Length; i++)
         {
             if (!reached[i])
@@ -25,6 +37,20 @@ internal static class StructureRules
             }
         }
 
+        var reported = new HashSet<string>(StringComparer.Ordinal);
+        ReportClosedSets(network, routing, routing.ReachedUnits(), null, locations.For, reported, diagnostics);
+        foreach (var (group, groupRouting) in groupRoutings)
+        {
+            // A group with its own routes is pointed at by its key; one that follows the network's routes, by those routes.
+            Func<string, SourceLocation> at = group.Routes is null ? locations.For : _ => locations.Groups[group.Id];
+            ReportClosedSets(network, groupRouting, groupRouting.ReachedUnits(), group.Id, at, reported, diagnostics);
+        }
+    }
+
+    private static void ReportClosedSets(
+        Network network, RoutingTable routing, bool[] reached, string? groupId, Func<string, SourceLocation> locate,
+        HashSet<string> reported, List<Diagnostic> diagnostics)
+    {
         foreach (var closedSet in ClosedSets(routing, reached))
         {
             var ids = closedSet.Select(i => network.Units[i].Id).ToList();
@@ -34,7 +60,18 @@ internal static class StructureRules
             string message = ids.Count == 1
                 ? "patients who reach this unit can never leave the network; let its routes add up to less than 1"
                 : "patients who reach these units can never leave the network; let the routes of at least one of them add up to less than 1";
-            diagnostics.Add(new Diagnostic(DiagnosticSeverity.Error, DiagnosticCodes.NoExit, locations.For(ids[0]), subject, message));
+            string key = (groupId is not null && network.Groups.First(g => g.Id == groupId).Routes is not null ? groupId : string.Empty) + ":" + subject;
+            if (!reported.Add(key))
+            {
+                continue;
+            }
+
+            if (groupId is not null)
+            {
+                message = $"groups.{groupId}: {message}";
+            }
+
+            diagnostics.Add(new Diagnostic(DiagnosticSeverity.Error, DiagnosticCodes.NoExit, locate(ids[0]), subject, message));
         }
     }
 

@@ -1,0 +1,27 @@
+using NetSolve.Simulation;
+
+namespace NetSolve.Output;
+
+/// <summary>One metric of one unit, formula against simulation, with the verdict.</summary>
+/// <param name="Name">The contract's field name (<c>utilisation</c>, <c>mean_wait</c>, ...).</param>
+/// <param name="Formula">The formula's value, in hours for times; null when the formula has none (an unstable unit).</param>
+/// <param name="Simulated">The simulated estimate, in hours for times.</param>
+/// <param name="Dimension">Whether the values are times, rates or plain numbers (for conversion).</param>
+public sealed record ComparedMetric(string Name, double? Formula, Estimate Simulated, MetricDimension Dimension)
+{
+    /// <summary>The factor that converts the values to <paramref name="scale"/>'s time unit.</summary>
+    public double Factor(TimeScale scale) => Dimension switch
+    {
+        MetricDimension.Time => scale.TimeFactor,
+        MetricDimension.Rate => scale.RateFactor,
+        _ => 1.0,
+    };
+
+    /// <summary>
+    /// <c>inside</c> when the formula lies in the simulation's 95% interval, <c>outside</c> when not,
+    /// <c>no formula</c> for an unstable unit, <c>no interval</c> with a single replication.
+    /// </summary>
+    public string Verdict => Formula is not double value ? "no formula"
+        : Simulated.HalfWidth is null ? "no interval"
+        : Simulated.Contains(value) ? "inside" : "outside";
+}

@@ -1,0 +1,26 @@
+using System.Collections.Immutable;
+using NetSolve.Simulation;
+using NetSolve.Solving;
+
+namespace NetSolve.Output;
+
+/// <summary>Pairs each unit's formula metrics with the simulated ones for the side-by-side view.</summary>
+public static class Comparison
+{
+    /// <summary>The compared metrics of one unit, in the contract's order.</summary>
+    public static ImmutableArray<ComparedMetric> ForUnit(SimulatedUnit simulated, UnitResult formula)
+    {
+        ArgumentNullException.ThrowIfNull(simulated);
+        ArgumentNullException.ThrowIfNull(formula);
+        return
+        [
+            new("arrival_rate", formula.ArrivalsPerHour, simulated.ArrivalsPerHour, MetricDimension.Rate),
+            new("utilisation", formula.Utilisation, simulated.Utilisation, MetricDimension.Plain),
+            new("p_wait", formula.WaitProbability, simulated.WaitProbability, MetricDimension.Plain),
+            new("mean_queue", formula.MeanQueue, simulated.MeanQueue, MetricDimension.Plain),
+            new("mean_wait", formula.MeanWaitHours, simulated.MeanWaitHours, MetricDimension.Time),
+            new("mean_in_unit", formula.MeanInUnit, simulated.MeanInUnit, MetricDimension.Plain),
+            new("mean_time_in_unit", formula.MeanTimeInUnitHours, simulated.MeanTimeInUnitHours, MetricDimension.Time),
+        ];
+    }
+}

@@ -1,0 +1,51 @@
+using System.Globalization;
+using NetSolve.Simulation;
+
+namespace NetSolve.Output;
+
+/// <summary>Writes a simulation as CSV: one row per unit, each metric followed by its 95% half-width.</summary>
+public static class SimulationCsvWriter
+{
+    /// <summary>Writes the header and one row per unit; times in the network's time unit, invariant culture.</summary>
+    public static void Write(SimulationResult result, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(output);
+        var scale = new TimeScale(result.Network.TimeUnit);
+        var thresholds = result.Options.WaitThresholdsHours.IsDefault ? [] : result.Options.WaitThresholdsHours;
+        var header = new List<string> { "id", "label", "servers" };
+        foreach (string name in new[] { "arrival_rate", "utilisation", "p_wait", "mean_queue", "mean_wait", "mean_in_unit", "mean_time_in_unit", "p_full", "turned_away_rate", "diverted_rate" })
+        {
+            header.Add(name);
+            header.Add(name + "_ci");
+        }
+
+        header.AddRange(["time_in_unit_p50", "time_in_unit_p90", "time_in_unit_p95", "time_in_unit_p99"]);
+        header.AddRange(thresholds.Select(t => "p_wait_over_" + Number(scale.Time(t))));
+        output.Write(string.Join(",", header) + "\n");
+        foreach (var unit in result.Units)
+        {
+            var cells = new List<string> { Quote(unit.Unit.Id), Quote(unit.Unit.Label), unit.Unit.Servers.ToString() };
+            foreach (var (estimate, factor) in new[]
+            {
+                (unit.ArrivalsPerHour, scale.RateFactor), (unit.Utilisation, 1.0), (unit.WaitProbability, 1.0),
+                (unit.MeanQueue, 1.0), (unit.MeanWaitHours, scale.TimeFactor), (unit.MeanInUnit, 1.0),
+                (unit.MeanTimeInUnitHours, scale.TimeFactor), (unit.FullProbability, 1.0),
+                (unit.TurnedAwayPerHour, scale.RateFactor), (unit.DivertedPerHour, scale.RateFactor),
+            })
+            {
+                cells.Add(Number(estimate.Mean * factor));
+                cells.Add(estimate.HalfWidth is double half ? Number(half * factor) : string.Empty);
+            }
+
+            cells.AddRange(unit.TimeInUnitPercentiles.Select(p => p.Hours is Estimate hours ? Number(hours.Mean * scale.TimeFactor) : string.Empty));
+            cells.AddRange(unit.WaitOver.Select(over => Number(over.Probability.Mean)));
+            output.Write(string.Join(",", cells) + "\n");
+        }
+    }
+
+    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+
+    private static string Quote(string text) =>
+        text.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + text.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : text;
+}

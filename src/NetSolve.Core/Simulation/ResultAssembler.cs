@@ -1,0 +1,121 @@
+using System.Collections.Immutable;
+using NetSolve.Model;
+
+namespace NetSolve.Simulation;
+
+/// <summary>Turns the rows of the finished replications, in replication order, into a <see cref="SimulationResult"/>.</summary>
+internal sealed class ResultAssembler
+{
+    private readonly MetricLayout _layout;
+    private readonly IReadOnlyList<double[]> _rows;
+
+    public ResultAssembler(MetricLayout layout, IReadOnlyList<double[]> rows)
+    {
+        _layout = layout;
+        _rows = rows;
+    }
+
+    public SimulationResult Assemble(Network network, SimulationOptions options, long events)
+    {
+        if (_rows.Count == 0)
+        {
+            return new SimulationResult
+            {
+                Network = network,
+                Options = options,
+                ReplicationsFinished = 0,
+                Events = events,
+                Units = [],
+                Totals = null,
+                Groups = [],
+            };
+        }
+
+        var units = ImmutableArray.CreateBuilder<SimulatedUnit>(network.Units.Length);
+        for (int u = 0; u < network.Units.Length; u++)
+        {
+            units.Add(UnitResult(network.Units[u], u, options));
+        }
+
+        var groups = ImmutableArray.CreateBuilder<SimulatedGroup>(network.Groups.Length);
+        for (int g = 0; g < network.Groups.Length; g++)
+        {
+            groups.Add(new SimulatedGroup
+            {
+                Group = network.Groups[g],
+                ThroughputPerHour = Required(_layout.Group(g, MetricLayout.GroupThroughputPerHour), 0.0),
+                MeanTimeInSystemHours = At(_layout.Group(g, MetricLayout.GroupMeanTimeInSystemHours)),
+                TimeInSystemPercentiles = Percentiles(_layout.Group(g, MetricLayout.GroupPercentiles)),
+            });
+        }
+
+        return new SimulationResult
+        {
+            Network = network,
+            Options = options,
+            ReplicationsFinished = _rows.Count,
+            Events = events,
+            Units = units.MoveToImmutable(),
+            Totals = new SimulatedTotals
+            {
+                ExternalArrivalsPerHour = network.AllExternalArrivalsPerHour,
+                EnteredPerHour = Required(_layout.Total(MetricLayout.TotalEnteredPerHour), 0.0),
+                ThroughputPerHour = Required(_layout.Total(MetricLayout.TotalThroughputPerHour), 0.0),
+                TurnedAwayPerHour = Required(_layout.Total(MetricLayout.TotalTurnedAwayPerHour), 0.0),
+                MeanInSystem = Required(_layout.Total(MetricLayout.TotalMeanInSystem), 0.0),
+                MeanTimeInSystemHours = At(_layout.Total(MetricLayout.TotalMeanTimeInSystemHours)),
+                TimeInSystemPercentiles = Percentiles(_layout.Total(MetricLayout.TotalPercentiles)),
+            },
+            Groups = groups.MoveToImmutable(),
+        };
+    }
+
+    private SimulatedUnit UnitResult(Unit unit, int u, SimulationOptions options)
+    {
+        var waitOver = ImmutableArray.CreateBuilder<WaitOverEstimate>(_layout.WaitThresholds);
+        for (int t = 0; t < _layout.WaitThresholds; t++)
+        {
+            waitOver.Add(new WaitOverEstimate(options.WaitThresholdsHours[t], Required(_layout.Unit(u, _layout.WaitOverOffset + t), 0.0)));
+        }
+
+        var byHour = ImmutableArray.CreateBuilder<Estimate?>(24);
+        for (int h = 0; h < 24; h++)
+        {
+            byHour.Add(At(_layout.Unit(u, _layout.QueueByHourOffset + h)));
+        }
+
+        return new SimulatedUnit
+        {
+            Unit = unit,
+            ArrivalsPerHour = Required(_layout.Unit(u, MetricLayout.ArrivalsPerHour), 0.0),
+            Utilisation = Required(_layout.Unit(u, MetricLayout.Utilisation), 0.0),
+            WaitProbability = Required(_layout.Unit(u, MetricLayout.WaitProbability), 0.0),
+            MeanQueue = Required(_layout.Unit(u, MetricLayout.MeanQueue), 0.0),
+            MeanWaitHours = Required(_layout.Unit(u, MetricLayout.MeanWaitHours), 0.0),
+            MeanInUnit = Required(_layout.Unit(u, MetricLayout.MeanInUnit), 0.0),
+            MeanTimeInUnitHours = Required(_layout.Unit(u, MetricLayout.MeanTimeInUnitHours), unit.EffectiveService.MeanHours),
+            FullProbability = Required(_layout.Unit(u, MetricLayout.FullProbability), 0.0),
+            TurnedAwayPerHour = Required(_layout.Unit(u, MetricLayout.TurnedAwayPerHour), 0.0),
+            DivertedPerHour = Required(_layout.Unit(u, MetricLayout.DivertedPerHour), 0.0),
+            TimeInUnitPercentiles = Percentiles(_layout.Unit(u, MetricLayout.UnitPercentiles)),
+            WaitOver = waitOver.MoveToImmutable(),
+            MeanQueueByHour = byHour.MoveToImmutable(),
+        };
+    }
+
+    private ImmutableArray<PercentileEstimate> Percentiles(int first)
+    {
+        var builder = ImmutableArray.CreateBuilder<PercentileEstimate>(MetricLayout.Percentiles.Length);
+        for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
+        {
+            builder.Add(new PercentileEstimate(MetricLayout.Percentiles[p] * 100.0, At(first + p)));
+        }
+
+        return builder.MoveToImmutable();
+    }
+
+    private Estimate? At(int slot) => Estimate.From(_rows.Select(row => row[slot]));
+
+    /// <summary>The estimate at <paramref name="slot"/>, or <paramref name="whenUnobserved"/> (no interval) if no replication observed it.</summary>
+    private Estimate Required(int slot, double whenUnobserved) => At(slot) ?? new Estimate(whenUnobserved, null, 0);
+}

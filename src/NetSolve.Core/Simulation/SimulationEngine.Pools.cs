@@ -1,0 +1,54 @@
+namespace NetSolve.Simulation;
+
+/// <summary>The patient pool and the per-unit FCFS ring buffers: both grow by doubling and are then reused.</summary>
+internal sealed partial class SimulationEngine
+{
+    private int AllocatePatient()
+    {
+        if (_freeCount > 0)
+        {
+            return _freePatients[--_freeCount];
+        }
+
+        if (_patientsAllocated == _patients.Length)
+        {
+            Array.Resize(ref _patients, _patients.Length * 2);
+            Array.Resize(ref _freePatients, _patients.Length);
+        }
+
+        return _patientsAllocated++;
+    }
+
+    private void ReleasePatient(int patient) => _freePatients[_freeCount++] = patient;
+
+    private void Enqueue(int unit, int patient)
+    {
+        ref var state = ref _units[unit];
+        var queue = _queues[unit];
+        int count = state.Queued;
+        if (count == queue.Length)
+        {
+            var grown = new int[queue.Length * 2];
+            for (int i = 0; i < count; i++)
+            {
+                grown[i] = queue[(state.QueueHead + i) & (queue.Length - 1)];
+            }
+
+            _queues[unit] = queue = grown;
+            state.QueueHead = 0;
+        }
+
+        queue[(state.QueueHead + count) & (queue.Length - 1)] = patient;
+        state.Queued = count + 1;
+    }
+
+    private int Dequeue(int unit)
+    {
+        ref var state = ref _units[unit];
+        var queue = _queues[unit];
+        int patient = queue[state.QueueHead];
+        state.QueueHead = (state.QueueHead + 1) & (queue.Length - 1);
+        state.Queued--;
+        return patient;
+    }
+}

@@ -1,0 +1,361 @@
+namespace NetSolve.Simulation;
+
+/// <summary>
+/// Runs one replication: an event loop over <see cref="EventQueue"/> with FCFS queues, collecting statistics after
+/// the warm-up. Mutable and single-threaded; allocates only when a pool first grows, so memory stays flat.
+/// </summary>
+internal sealed partial class SimulationEngine
+{
+    private const int CancellationCheckMask = (1 << 16) - 1;
+
+    private readonly CompiledNetwork _network;
+    private readonly MetricLayout _layout;
+    private readonly double[] _waitThresholdsHours;
+    private readonly double _warmupEnd;
+    private readonly double _end;
+    private readonly EventQueue _events;
+    private Xoshiro256StarStar _random;
+
+    private PatientRecord[] _patients = new PatientRecord[256];
+    private int[] _freePatients = new int[256];
+    private int _freeCount;
+    private int _patientsAllocated;
+
+    private readonly UnitState[] _units;
+    private readonly int[][] _queues;
+    private readonly double[] _queueAreaByHour;
+    private readonly long[] _waitOver;
+    private readonly int[] _unitHistogram;
+    private readonly GroupPlan[] _groups;
+    private readonly ServiceSampler[] _samplers;
+    private readonly double _inverseNetworkScale;
+
+    private readonly long[] _groupExits;
+    private readonly double[] _groupTimeSum;
+    private readonly int[] _groupHistogram;
+    private long _entered;
+    private long _networkTurnedAway;
+
+    public SimulationEngine(CompiledNetwork network, MetricLayout layout, double[] waitThresholdsHours, double warmupHours, double durationHours, ulong seed, int replication)
+    {
+        _network = network;
+        _layout = layout;
+        _waitThresholdsHours = waitThresholdsHours;
+        _warmupEnd = warmupHours;
+        _end = warmupHours + durationHours;
+        _random = new Xoshiro256StarStar(seed, (ulong)replication);
+        int n = network.UnitCount;
+        int groups = network.Groups.Length;
+        _events = new EventQueue(groups + 64);
+        _units = new UnitState[n];
+        _queues = new int[n][];
+        for (int i = 0; i < n; i++)
+        {
+            _queues[i] = new int[4];
+            _units[i].Servers = network.Servers[i];
+            _units[i].Capacity = network.Capacity[i];
+            _units[i].DivertTo = network.DivertTo[i];
+            _units[i].InverseScale = 1.0 / network.MeanServiceHours[i];
+        }
+
+        _queueAreaByHour = new double[n * 24];
+        _waitOver = new long[n * waitThresholdsHours.Length];
+        _unitHistogram = new int[n * TimeHistogram.Bins];
+        _groups = network.Groups;
+        _samplers = network.Samplers;
+        _inverseNetworkScale = 1.0 / network.NetworkTimeScale;
+        _groupExits = new long[groups];
+        _groupTimeSum = new double[groups];
+        _groupHistogram = new int[groups * TimeHistogram.Bins];
+    }
+
+    /// <summary>Events processed so far.</summary>
+    public long EventCount { get; private set; }
+
+    /// <summary>
+    /// Runs to the end of the replication. Returns false if <paramref name="cancellation"/> fired first.
+    /// <paramref name="progress"/>, when given, receives the fraction of simulated time done every 65,536 events.
+    /// </summary>
+    public bool Run(Action<double>? progress, CancellationToken cancellation)
+    {
+        var groups = _network.Groups;
+        for (int g = 0; g < groups.Length; g++)
+        {
+            if (groups[g].CandidatesPerHour > 0.0)
+            {
+                _events.Push(new SimulationEvent(_random.NextExponential() / groups[g].CandidatesPerHour, g, SimulationEvent.ArrivalMarker));
+            }
+        }
+
+        long events = 0;
+        while (_events.Count > 0 && _events.Peek().Time <= _end)
+        {
+            var next = _events.Pop();
+            events++;
+            if (next.IsArrival)
+            {
+                OnArrivalCandidate(next.Time, next.Unit);
+            }
+            else
+            {
+                OnServiceEnd(next.Time, next.Unit, next.Patient);
+            }
+
+            if ((events & CancellationCheckMask) == 0)
+            {
+                if (cancellation.IsCancellationRequested)
+                {
+                    EventCount = events;
+                    return false;
+                }
+
+                progress?.Invoke(next.Time / _end);
+            }
+        }
+
+        EventCount = events;
+        for (int u = 0; u < _units.Length; u++)
+        {
+            Accumulate(u, _end);
+        }
+
+        return true;
+    }
+
+    private void OnArrivalCandidate(double now, int group)
+    {
+        var plan = _groups[group];
+        _events.Push(new SimulationEvent(now + (_random.NextExponential() / plan.CandidatesPerHour), group, SimulationEvent.ArrivalMarker));
+
+        // Thinning (Lewis and Shedler, 1979): candidates come at the peak rate; keep each with multiplier / peak.
+        if (plan.HourOfDay is not null && _random.NextDouble() * plan.MaxMultiplier >= plan.MultiplierAt(now))
+        {
+            return;
+        }
+
+        int entry = plan.EntryUnits[0];
+        if (plan.EntryUnits.Length > 1)
+        {
+            double draw = _random.NextDouble();
+            var cumulative = plan.EntryCumulative;
+            int k = 0;
+            while (k < cumulative.Length - 1 && draw >= cumulative[k])
+            {
+                k++;
+            }
+
+            entry = plan.EntryUnits[k];
+        }
+
+        int patient = AllocatePatient();
+        ref var record = ref _patients[patient];
+        record.NetworkEntry = now;
+        record.Group = group;
+        if (now >= _warmupEnd)
+        {
+            _entered++;
+        }
+
+        ArriveAtUnit(now, entry, patient);
+    }
+
+    private void OnServiceEnd(double now, int unit, int patient)
+    {
+        Accumulate(unit, now);
+        ref var state = ref _units[unit];
+        ref var record = ref _patients[patient];
+
+        // Times are recorded when they end, for every patient ending after the warm-up: in steady state the patient
+        // leaving at any moment has the steady-state time, whereas keeping only those who also arrived after the
+        // warm-up would leave out long stays that straddle the end of the run.
+        if (now >= _warmupEnd)
+        {
+            double sojourn = now - record.UnitArrival;
+            state.Completions++;
+            state.SojournSum += sojourn;
+            _unitHistogram[(unit * TimeHistogram.Bins) + TimeHistogram.BinOf(sojourn * state.InverseScale)]++;
+        }
+
+        if (state.Queued > 0)
+        {
+            StartService(now, unit, Dequeue(unit));
+        }
+        else
+        {
+            state.Busy--;
+        }
+
+        int group = record.Group;
+        int next = Route(_groups[group], unit);
+        if (next >= 0)
+        {
+            ArriveAtUnit(now, next, patient);
+        }
+        else
+        {
+            Leave(now, patient, group);
+        }
+    }
+
+    private void ArriveAtUnit(double now, int unit, int patient)
+    {
+        bool counted = now >= _warmupEnd;
+        for (int hops = 0; ; hops++)
+        {
+            ref var candidate = ref _units[unit];
+            if (counted)
+            {
+                candidate.Offered++;
+            }
+
+            if (candidate.Busy + candidate.Queued < candidate.Capacity)
+            {
+                break;
+            }
+
+            // A chain of diversions longer than the number of units has gone round a loop of full units.
+            bool turnAway = candidate.DivertTo < 0 || hops >= _units.Length;
+            if (counted)
+            {
+                candidate.Full++;
+                if (turnAway)
+                {
+                    candidate.TurnedAway++;
+                    _networkTurnedAway++;
+                }
+                else
+                {
+                    candidate.Diverted++;
+                }
+            }
+
+            if (turnAway)
+            {
+                ReleasePatient(patient);
+                return;
+            }
+
+            unit = candidate.DivertTo;
+        }
+
+        Accumulate(unit, now);
+        ref var state = ref _units[unit];
+        if (counted)
+        {
+            state.Accepted++;
+        }
+
+        _patients[patient].UnitArrival = now;
+        if (state.Busy < state.Servers)
+        {
+            state.Busy++;
+            StartService(now, unit, patient);
+        }
+        else
+        {
+            Enqueue(unit, patient);
+        }
+    }
+
+    private void StartService(double now, int unit, int patient)
+    {
+        ref var record = ref _patients[patient];
+        if (now >= _warmupEnd)
+        {
+            ref var state = ref _units[unit];
+            double wait = now - record.UnitArrival;
+            state.Starts++;
+            if (wait > 0.0)
+            {
+                state.Waited++;
+                state.WaitSum += wait;
+                var thresholds = _waitThresholdsHours;
+                for (int t = 0; t < thresholds.Length; t++)
+                {
+                    if (wait > thresholds[t])
+                    {
+                        _waitOver[(unit * thresholds.Length) + t]++;
+                    }
+                }
+            }
+        }
+
+        double service = _samplers[(record.Group * _units.Length) + unit].Sample(ref _random);
+        _events.Push(new SimulationEvent(now + service, unit, patient));
+    }
+
+    private void Leave(double now, int patient, int group)
+    {
+        ref var record = ref _patients[patient];
+        if (now >= _warmupEnd)
+        {
+            double time = now - record.NetworkEntry;
+            _groupExits[group]++;
+            _groupTimeSum[group] += time;
+            _groupHistogram[(group * TimeHistogram.Bins) + TimeHistogram.BinOf(time * _inverseNetworkScale)]++;
+        }
+
+        ReleasePatient(patient);
+    }
+
+    private int Route(GroupPlan plan, int unit)
+    {
+        int start = plan.RouteOffsets[unit];
+        int stop = plan.RouteOffsets[unit + 1];
+        if (start == stop)
+        {
+            return -1;
+        }
+
+        double draw = _random.NextDouble();
+        var cumulative = plan.RouteCumulative;
+        for (int k = start; k < stop; k++)
+        {
+            if (draw < cumulative[k])
+            {
+                return plan.RouteTargets[k];
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>Adds the time since the unit's last change, clipped to the statistics window, to its areas.</summary>
+    private void Accumulate(int unit, double now)
+    {
+        ref var state = ref _units[unit];
+        double from = state.LastChange;
+        state.LastChange = now;
+        if (now <= _warmupEnd)
+        {
+            return;
+        }
+
+        if (from < _warmupEnd)
+        {
+            from = _warmupEnd;
+        }
+
+        double span = now - from;
+        state.BusyArea += state.Busy * span;
+        int queued = state.Queued;
+        if (queued == 0)
+        {
+            return;
+        }
+
+        state.QueueArea += queued * span;
+        int row = unit * 24;
+
+        // Times are not negative, so truncation is the floor; most spans end within the hour they start in.
+        long hour = (long)from;
+        while (now > hour + 1.0)
+        {
+            _queueAreaByHour[row + (int)(hour % 24)] += queued * (hour + 1.0 - from);
+            hour++;
+            from = hour;
+        }
+
+        _queueAreaByHour[row + (int)(hour % 24)] += queued * (now - from);
+    }
+}

@@ -1,0 +1,33 @@
+using System.Collections.Immutable;
+using NetSolve.Model;
+
+namespace NetSolve.Simulation;
+
+/// <summary>What a simulation run found, over the replications that finished.</summary>
+/// <remarks>Immutable. When no replication finished, <see cref="Units"/> and <see cref="Groups"/> are empty and <see cref="Totals"/> is null.</remarks>
+public sealed record SimulationResult
+{
+    /// <summary>The network simulated.</summary>
+    public required Network Network { get; init; }
+
+    /// <summary>The options used.</summary>
+    public required SimulationOptions Options { get; init; }
+
+    /// <summary>Replications that ran to the end (fewer than requested when the run was cancelled).</summary>
+    public required int ReplicationsFinished { get; init; }
+
+    /// <summary>True when every requested replication finished.</summary>
+    public bool IsComplete => ReplicationsFinished == Options.Replications;
+
+    /// <summary>Events processed in the finished replications.</summary>
+    public required long Events { get; init; }
+
+    /// <summary>Per-unit results in file order.</summary>
+    public required ImmutableArray<SimulatedUnit> Units { get; init; }
+
+    /// <summary>Network totals; null when no replication finished.</summary>
+    public required SimulatedTotals? Totals { get; init; }
+
+    /// <summary>Per-group results for <see cref="Network.Groups"/>, in order.</summary>
+    public required ImmutableArray<SimulatedGroup> Groups { get; init; }
+}

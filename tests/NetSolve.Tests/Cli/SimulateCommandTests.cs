@@ -1,0 +1,95 @@
+using System.Text.Json;
+using NetSolve.Cli;
+
+namespace NetSolve.Tests.Cli;
+
+public sealed class SimulateCommandTests
+{
+    private static readonly string Example = Path.Combine("networks", "larkspur-simulation.yaml");
+
+    private static (int Code, string Out, string Error) Run(params string[] args)
+    {
+        using var output = new StringWriter();
+        using var error = new StringWriter();
+        int code = NetSolveApp.Run(args, new CliContext(output, error));
+        return (code, output.ToString(), error.ToString());
+    }
+
+    [Fact]
+    public void Json_has_the_solve_shape_plus_confidence_percentile_and_run_fields()
+    {
+        var (code, output, error) = Run("simulate", Example, "--format", "json", "--replications", "3", "--warmup", "7d", "--duration", "28d", "--wait-over", "4h", "--compare");
+
+        Assert.Equal(0, code);
+        Assert.Empty(error);
+        using var document = JsonDocument.Parse(output);
+        var root = document.RootElement;
+        Assert.Equal("hour", root.GetProperty("time_unit").GetString());
+        Assert.Equal(3, root.GetProperty("simulation").GetProperty("replications_finished").GetInt32());
+        var unit = root.GetProperty("units")[0];
+        foreach (string field in new[] { "id", "label", "servers", "arrival_rate", "visits_per_patient", "offered_load", "utilisation", "p_wait",
+            "mean_queue", "mean_wait", "mean_in_unit", "mean_time_in_unit", "headroom", "status", "utilisation_ci", "mean_wait_ci" })
+        {
+            Assert.True(unit.TryGetProperty(field, out _), field);
+        }
+
+        Assert.Equal(4, unit.GetProperty("time_in_unit_percentiles").EnumerateObject().Count(p => !p.Name.EndsWith("_ci", StringComparison.Ordinal)));
+        Assert.Equal(4.0, unit.GetProperty("p_wait_over")[0].GetProperty("wait").GetDouble());
+        Assert.Equal(24, unit.GetProperty("mean_queue_by_hour").GetArrayLength());
+        Assert.True(unit.GetProperty("compare").GetProperty("mean_wait").TryGetProperty("verdict", out _));
+        foreach (string field in new[] { "external_arrival_rate", "throughput", "throughput_ci", "mean_in_system", "mean_time_in_system" })
+        {
+            Assert.True(root.GetProperty("totals").TryGetProperty(field, out _), field);
+        }
+    }
+
+    [Fact]
+    public void The_same_seed_prints_the_same_document_whatever_the_thread_count()
+    {
+        string[] common = ["simulate", Example, "--format", "csv", "--replications", "4", "--warmup", "3d", "--duration", "14d", "--seed", "31"];
+
+        var one = Run([.. common, "--threads", "1"]);
+        var two = Run([.. common, "--threads", "2"]);
+
+        Assert.Equal(0, one.Code);
+        Assert.Equal(one.Out, two.Out);
+    }
+
+    [Fact]
+    public void A_bad_option_value_is_a_usage_error_with_one_line_and_no_output()
+    {
+        var (code, output, error) = Run("simulate", Example, "--duration", "soon");
+
+        Assert.Equal(2, code);
+        Assert.Empty(output);
+        Assert.StartsWith("netsolve: --duration: 'soon' is not a positive duration", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_bad_file_names_file_line_column_and_unit_and_exits_1()
+    {
+        string path = Path.Combine(Path.GetTempPath(), $"netsolve-simulate-{Guid.NewGuid():N}.yaml");
+        File.WriteAllText(path, "units:\n  ward:\n    servers: 2\n    service: 2d\n    capacity: 1\narrivals:\n  ward: 1/d\n");
+        try
+        {
+            var (code, output, error) = Run("simulate", path);
+
+            Assert.Equal(1, code);
+            Assert.Empty(output);
+            Assert.Equal($"{path}:5:15: unit 'ward': capacity 1 is below servers 2; capacity counts patients in service and waiting\n", error);
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Fact]
+    public void Simulate_does_not_repeat_the_warnings_meant_for_the_formulas()
+    {
+        var (code, _, error) = Run("simulate", Example, "--replications", "2", "--warmup", "1d", "--duration", "7d");
+
+        Assert.Equal(0, code);
+        Assert.DoesNotContain("ignored by the formulas", error, StringComparison.Ordinal);
+    }
+}

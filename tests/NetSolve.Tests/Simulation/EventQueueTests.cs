@@ -1,0 +1,52 @@
+using NetSolve.Simulation;
+
+namespace NetSolve.Tests.Simulation;
+
+public sealed class EventQueueTests
+{
+    [Fact]
+    public void Each_pop_returns_the_earliest_pending_event_through_growth_and_interleaving()
+    {
+        // Source: exact by hand. A priority queue must return, at every pop, the smallest time still pending.
+        var random = new Xoshiro256StarStar(3, 0);
+        var queue = new EventQueue(2);
+        var pending = new List<double>();
+        for (int round = 0; round < 1_000; round++)
+        {
+            for (int k = 0; k < 3; k++)
+            {
+                double time = random.NextDouble() * 100.0;
+                pending.Add(time);
+                queue.Push(new SimulationEvent(time, k, round));
+            }
+
+            PopAndCheck(queue, pending);
+        }
+
+        while (queue.Count > 0)
+        {
+            PopAndCheck(queue, pending);
+        }
+
+        Assert.Empty(pending);
+    }
+
+    [Fact]
+    public void Pop_returns_the_smallest_time_each_time()
+    {
+        var queue = new EventQueue(4);
+        foreach (double time in new[] { 5.0, 1.0, 4.0, 2.0, 3.0 })
+        {
+            queue.Push(new SimulationEvent(time, 0, 0));
+        }
+
+        Assert.Equal([1.0, 2.0, 3.0, 4.0, 5.0], Enumerable.Range(0, 5).Select(_ => queue.Pop().Time));
+    }
+
+    private static void PopAndCheck(EventQueue queue, List<double> pending)
+    {
+        double earliest = pending.Min();
+        Assert.Equal(earliest, queue.Pop().Time);
+        pending.Remove(earliest);
+    }
+}
