@@ -71,6 +71,8 @@ internal static class NetSolveApp
         root.Subcommands.Add(StaffCommand.Create(context));
         root.Subcommands.Add(PathwayCommand.Create(context));
         root.Subcommands.Add(SimulateCommand.Create(context));
+        root.Subcommands.Add(MapCommand.Create(context));
+        root.Subcommands.Add(ReportCommand.Create(context));
         return root;
     }
 }

@@ -1,0 +1,82 @@
+using System.Globalization;
+using System.Text;
+using NetSolve.Model;
+using NetSolve.Rendering.Text;
+
+namespace NetSolve.Rendering.Map;
+
+/// <summary>Writes a laid-out map as Graphviz DOT, with the same texts, colours, borders and line kinds as the SVG.</summary>
+/// <remarks>
+/// Graphviz does its own layout; the main direction becomes <c>rankdir</c>. Pen widths follow the map's proportional
+/// widths. External arrivals and exits become small point nodes (<c>arrivals:ID</c>, <c>exit:ID</c>) with labelled edges.
+/// </remarks>
+public static class DotMapWriter
+{
+    /// <summary>The DOT text of <paramref name="layout"/>.</summary>
+    public static string Write(MapLayout layout)
+    {
+        ArgumentNullException.ThrowIfNull(layout);
+        var dot = new StringBuilder();
+        dot.Append("digraph ").Append(Quote(layout.Title)).Append(" {\n");
+        dot.Append("  graph [rankdir=").Append(layout.Direction == MapDirection.TopToBottom ? "TB" : "LR")
+            .Append(", fontname=\"DejaVu Sans\", labelloc=t, label=").Append(Quote(layout.Title + " (rates per " + TimeConstants.Name(layout.TimeUnit) + ")")).Append("];\n");
+        dot.Append("  node [shape=box, fontname=\"DejaVu Sans\", fontsize=11];\n");
+        dot.Append("  edge [fontname=\"DejaVu Sans\", fontsize=10];\n");
+        foreach (var node in layout.Nodes)
+        {
+            dot.Append("  ").Append(Quote(node.UnitId)).Append(" [").Append(UnitAttributes(node)).Append("];\n");
+            if (node.Arrival is { } arrival)
+            {
+                string id = "arrivals:" + node.UnitId;
+                dot.Append("  ").Append(Quote(id)).Append(" [shape=point, xlabel=\"from outside\"];\n");
+                Edge(dot, id, node.UnitId, arrival.RateText, arrival.StrokeWidth, MapColours.BoundaryLine, dashed: false);
+            }
+
+            if (node.Exit is { } exit)
+            {
+                string id = "exit:" + node.UnitId;
+                dot.Append("  ").Append(Quote(id)).Append(" [shape=point, xlabel=\"leave\"];\n");
+                Edge(dot, node.UnitId, id, exit.RateText, exit.StrokeWidth, MapColours.BoundaryLine, dashed: false);
+            }
+        }
+
+        foreach (var edge in layout.Edges)
+        {
+            bool feedback = edge.Kind == MapEdgeKind.Feedback;
+            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, feedback ? MapColours.FeedbackLine : MapColours.ForwardLine, feedback);
+        }
+
+        dot.Append("}\n");
+        return dot.ToString();
+    }
+
+    private static void Edge(StringBuilder dot, string from, string to, string rate, double width, string colour, bool dashed)
+    {
+        dot.Append("  ").Append(Quote(from)).Append(" -> ").Append(Quote(to))
+            .Append(" [label=").Append(Quote(rate))
+            .Append(", penwidth=").Append(Invariant.Coordinate(width))
+            .Append(", color=").Append(Quote(colour));
+        if (dashed)
+        {
+            dot.Append(", style=dashed");
+        }
+
+        dot.Append("];\n");
+    }
+
+    private static string UnitAttributes(MapNode node)
+    {
+        var style = HarbourLightsPalette.For(node.Status);
+        string label = string.Join("\n", node.Lines.Select(line => line.Text));
+        string border = style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
+        return string.Create(CultureInfo.InvariantCulture,
+            $"style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Invariant.Coordinate(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}");
+    }
+
+    /// <summary>A DOT quoted string: backslash and double quote escaped, line breaks as <c>\n</c>.</summary>
+    internal static string Quote(string text) =>
+        "\"" + text.Replace("\\", "\\\\", StringComparison.Ordinal)
+            .Replace("\"", "\\\"", StringComparison.Ordinal)
+            .Replace("\r", string.Empty, StringComparison.Ordinal)
+            .Replace("\n", "\\n", StringComparison.Ordinal) + "\"";
+}

@@ -1,0 +1,211 @@
+using System.Collections.Immutable;
+using NetSolve.Model;
+using NetSolve.Rendering.Text;
+using NetSolve.Solving;
+using Microsoft.Msagl.Core.Geometry.Curves;
+using Microsoft.Msagl.Core.Layout;
+using Microsoft.Msagl.Core.Routing;
+using Microsoft.Msagl.Layout.Layered;
+using Microsoft.Msagl.Miscellaneous;
+using MsaglEdge = Microsoft.Msagl.Core.Layout.Edge;
+using MsaglNode = Microsoft.Msagl.Core.Layout.Node;
+using MsaglPoint = Microsoft.Msagl.Core.Geometry.Point;
+
+namespace NetSolve.Rendering.Map;
+
+/// <summary>Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way.</summary>
+/// <remarks>
+/// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
+/// at the unit's box with their rate written in the box. Routes that run against the main direction after
+/// layering, and repeat visits, become <see cref="MapEdgeKind.Feedback"/>. Deterministic: the same solution gives the same layout.
+/// </remarks>
+public static class MapLayoutBuilder
+{
+    /// <summary>Gap between boxes in one layer: room for an exit arrow and a little air, no more, so 40 units fit A4 width.</summary>
+    private const double NodeSeparation = 24.0;
+
+    /// <summary>Gap between layers: two arrival or exit arrows and a rate label.</summary>
+    private const double LayerSeparation = 50.0;
+
+    /// <summary>Length of the arrival and exit arrows; shorter than both gaps, between layers and between boxes.</summary>
+    internal const double StubLength = 18.0;
+
+    /// <summary>Distance of the arrival and exit arrows from the box corner.</summary>
+    private const double StubInset = 14.0;
+
+    /// <summary>Arrowheads grow with the line so a wide line still ends in a visible point.</summary>
+    private const double ArrowLengthPerStroke = 1.6;
+
+    /// <summary>Shortest arrowhead, for thin lines.</summary>
+    private const double MinArrowLength = 9.0;
+
+    /// <summary>Lays out <paramref name="solution"/> with the given main direction.</summary>
+    public static MapLayout Build(NetworkSolution solution, MapDirection direction = MapDirection.TopToBottom)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        var network = solution.Network;
+        var routing = RoutingTable.Build(network);
+        var index = network.BuildIndex();
+        var timeUnit = network.TimeUnit;
+
+        var arrivalPerHour = new double[network.Units.Length];
+        foreach (var arrival in network.Arrivals)
+        {
+            arrivalPerHour[index[arrival.UnitId]] += arrival.PerHour;
+        }
+
+        var exitPerHour = new double[network.Units.Length];
+        for (int i = 0; i < exitPerHour.Length; i++)
+        {
+            exitPerHour[i] = solution.Units[i].ArrivalsPerHour * routing.ExitProbability(i);
+        }
+
+        var routes = network.Routes
+            .Where(route => route.Probability > 0.0)
+            .Select(route => (Route: route, PerHour: solution.Units[index[route.From]].ArrivalsPerHour * route.Probability))
+            .ToList();
+        double maxPerHour = routes.Select(r => r.PerHour).Concat(arrivalPerHour).Concat(exitPerHour).DefaultIfEmpty(0.0).Max();
+
+        var graph = new GeometryGraph();
+        var templates = new MapNode[network.Units.Length];
+        var graphNodes = new MsaglNode[network.Units.Length];
+        for (int i = 0; i < templates.Length; i++)
+        {
+            templates[i] = UnitTemplate(solution.Units[i], timeUnit, arrivalPerHour[i], exitPerHour[i]);
+            graphNodes[i] = new MsaglNode(CurveFactory.CreateRectangle(templates[i].Width, templates[i].Height, new MsaglPoint(0.0, 0.0)), templates[i].UnitId);
+            graph.Nodes.Add(graphNodes[i]);
+        }
+
+        var edges = new List<(MsaglEdge Edge, Route Route, double PerHour, double Stroke, string RateText)>(routes.Count);
+        foreach (var (route, perHour) in routes)
+        {
+            double stroke = StrokeWidth(perHour, maxPerHour);
+            string rateText = Units.ShortRate(perHour, timeUnit);
+            var edge = new MsaglEdge(graphNodes[index[route.From]], graphNodes[index[route.To]]);
+            edge.EdgeGeometry.TargetArrowhead = new Arrowhead { Length = Math.Max(MinArrowLength, ArrowLengthPerStroke * stroke) };
+            graph.Edges.Add(edge);
+            edges.Add((edge, route, perHour, stroke, rateText));
+        }
+
+        var settings = new SugiyamaLayoutSettings
+        {
+            NodeSeparation = NodeSeparation,
+            LayerSeparation = LayerSeparation,
+
+        };
+        settings.EdgeRoutingSettings.EdgeRoutingMode = EdgeRoutingMode.SugiyamaSplines;
+        if (direction == MapDirection.LeftToRight)
+        {
+            settings.Transformation = PlaneTransformation.Rotation(Math.PI / 2.0);
+        }
+
+        LayoutHelpers.CalculateLayout(graph, settings, null);
+
+        var bounds = graph.Nodes[0].BoundingBox;
+        foreach (var node in graph.Nodes)
+        {
+            bounds.Add(node.BoundingBox);
+        }
+
+        foreach (var edge in graph.Edges)
+        {
+            bounds.Add(edge.Curve.BoundingBox);
+            bounds.Add(edge.EdgeGeometry.TargetArrowhead.TipPosition);
+        }
+
+        // Room for the arrival and exit arrows outside the outermost boxes.
+        bounds.Pad(StubLength);
+        double left = bounds.Left - MapTypography.Margin;
+        double top = bounds.Top + MapTypography.Margin;
+        MapPoint ToMap(MsaglPoint point) => new(point.X - left, top - point.Y);
+
+        var placed = ImmutableArray.CreateBuilder<MapNode>(templates.Length);
+        for (int i = 0; i < templates.Length; i++)
+        {
+            var box = graphNodes[i].BoundingBox;
+            var corner = ToMap(new MsaglPoint(box.Left, box.Top));
+            var node = templates[i] with { Left = corner.X, Top = corner.Y, Width = box.Width, Height = box.Height };
+            placed.Add(node with
+            {
+                Arrival = Stub(arrivalPerHour[i], maxPerHour, timeUnit, node, direction, isArrival: true),
+                Exit = Stub(exitPerHour[i], maxPerHour, timeUnit, node, direction, isArrival: false),
+            });
+        }
+
+        var labels = new RateLabelPlacer(placed);
+        var mapEdges = ImmutableArray.CreateBuilder<MapEdge>(edges.Count);
+        foreach (var (edge, route, perHour, stroke, rateText) in edges)
+        {
+            var kind = RunsBackwards(placed[index[route.From]], placed[index[route.To]], direction) ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
+            mapEdges.Add(new MapEdge(
+                route.From,
+                route.To,
+                kind,
+                perHour,
+                rateText,
+                stroke,
+                CurvePath.Of(edge.Curve, ToMap),
+                ToMap(edge.Curve.Start),
+                ToMap(edge.Curve.End),
+                ToMap(edge.EdgeGeometry.TargetArrowhead.TipPosition),
+                labels.Place(edge.Curve, ToMap, rateText)));
+        }
+
+        return new MapLayout(
+            network.Name,
+            timeUnit,
+            direction,
+            bounds.Width + (2.0 * MapTypography.Margin),
+            bounds.Height + (2.0 * MapTypography.Margin),
+            placed.MoveToImmutable(),
+            mapEdges.MoveToImmutable());
+    }
+
+    /// <summary>
+    /// The arrival arrow enters the box near its first corner along the main direction (top-left), the exit arrow
+    /// leaves sideways near the opposite corner (bottom-right), each <see cref="StubLength"/> long.
+    /// </summary>
+    private static MapStub? Stub(double perHour, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction, bool isArrival)
+    {
+        if (!(perHour > 0.0))
+        {
+            return null;
+        }
+
+        // Arrivals come in along the main direction at the first corner; exits leave sideways at the last corner,
+        // into the gap between boxes of one layer, clear of the routes that leave the box towards the next layer.
+        MapPoint start;
+        MapPoint tip;
+        if (direction == MapDirection.TopToBottom)
+        {
+            start = isArrival ? new MapPoint(node.Left + StubInset, node.Top - StubLength) : new MapPoint(node.Right, node.Bottom - StubInset);
+            tip = isArrival ? new MapPoint(node.Left + StubInset, node.Top) : new MapPoint(node.Right + StubLength, node.Bottom - StubInset);
+        }
+        else
+        {
+            start = isArrival ? new MapPoint(node.Left - StubLength, node.Top + StubInset) : new MapPoint(node.Right - StubInset, node.Bottom);
+            tip = isArrival ? new MapPoint(node.Left, node.Top + StubInset) : new MapPoint(node.Right - StubInset, node.Bottom + StubLength);
+        }
+
+        return new MapStub(perHour, Units.ShortRate(perHour, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
+    }
+
+    /// <summary>A route runs backwards when its target's centre is not further along the main direction than its source's.</summary>
+    private static bool RunsBackwards(MapNode from, MapNode to, MapDirection direction) =>
+        ReferenceEquals(from, to) || (direction == MapDirection.TopToBottom
+            ? to.Centre.Y <= from.Centre.Y
+            : to.Centre.X <= from.Centre.X);
+
+    /// <summary>Width proportional to flow, the largest flow drawn <see cref="MapTypography.MaxStrokeWidth"/> wide, never thinner than <see cref="MapTypography.MinStrokeWidth"/>.</summary>
+    internal static double StrokeWidth(double perHour, double maxPerHour) => maxPerHour > 0.0
+        ? Math.Max(MapTypography.MinStrokeWidth, MapTypography.MaxStrokeWidth * perHour / maxPerHour)
+        : MapTypography.MinStrokeWidth;
+
+    private static MapNode UnitTemplate(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
+    {
+        var lines = UnitBoxText.For(result, timeUnit, arrivalPerHour, exitPerHour);
+        double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
+        double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
+        return new MapNode(result.Unit.Id, 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null);
+    }
+}

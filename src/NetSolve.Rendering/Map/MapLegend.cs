@@ -1,0 +1,105 @@
+using System.Xml.Linq;
+using NetSolve.Model;
+using NetSolve.Rendering.Text;
+
+namespace NetSolve.Rendering.Map;
+
+/// <summary>The header of the map: the network's name and a legend of statuses, line styles and units, wrapped to the map's width.</summary>
+internal static class MapLegend
+{
+    private static readonly XNamespace Svg = SvgMapWriter.Svg;
+
+    public static XElement Lay(MapLayout layout, out double headerHeight, out double minWidth)
+    {
+        double margin = MapTypography.Margin;
+        double titleWidth = TextWidth.Of(layout.Title, SvgMapWriter.TitleFontSize, bold: true);
+        var items = Items(layout.TimeUnit);
+        double widestItem = items.Max(item => item.Width);
+        minWidth = Math.Max(titleWidth, widestItem) + (2.0 * margin);
+        double available = Math.Max(layout.Width, minWidth) - (2.0 * margin);
+
+        var header = new XElement(Svg + "g", new XAttribute("class", "legend"));
+        double y = margin + SvgMapWriter.TitleFontSize;
+        header.Add(SvgMapWriter.Text(margin, y, SvgMapWriter.TitleFontSize, layout.Title, bold: true));
+        y += SvgMapWriter.TitleFontSize * 0.6;
+
+        double rowHeight = SvgMapWriter.SwatchHeight + 8.0;
+        double x = margin;
+        double rowTop = y;
+        foreach (var item in items)
+        {
+            if (x > margin && x + item.Width > margin + available)
+            {
+                x = margin;
+                rowTop += rowHeight;
+            }
+
+            header.Add(item.Draw(x, rowTop));
+            x += item.Width + SvgMapWriter.Gap;
+        }
+
+        headerHeight = rowTop + rowHeight + 4.0;
+        return header;
+    }
+
+    private static List<LegendItem> Items(TimeUnit timeUnit)
+    {
+        var items = new List<LegendItem>();
+        foreach (var status in HarbourLightsPalette.Order)
+        {
+            var style = HarbourLightsPalette.For(status);
+            string text = style.Glyph + " " + style.Word;
+            items.Add(new LegendItem(text, (x, y) =>
+            {
+                var swatch = SvgMapWriter.Box(x, y, SvgMapWriter.SwatchWidth, SvgMapWriter.SwatchHeight, style.Fill, style.Border, Math.Min(style.BorderWidth, 2.5), style.BorderDash);
+                return new XElement(
+                    Svg + "g",
+                    new XAttribute("class", "legend-status"),
+                    new XAttribute("data-status", SvgMapWriter.StatusName(status)),
+                    swatch,
+                    SvgMapWriter.Text(x + SvgMapWriter.SwatchWidth + 6.0, y + 13.0, MapTypography.DetailSize, text, bold: true));
+            }));
+        }
+
+        items.Add(LineItem("route", MapColours.ForwardLine, string.Empty));
+        items.Add(LineItem("return route", MapColours.FeedbackLine, MapColours.FeedbackDash));
+        items.Add(LineItem("in from outside / out", MapColours.BoundaryLine, string.Empty));
+        string unit = TimeConstants.Name(timeUnit);
+        items.Add(TextItem("line width \u221D patients per " + unit));
+        items.Add(TextItem("wait = mean wait before service, in " + unit + "s"));
+        return items;
+    }
+
+    private static LegendItem TextItem(string text) =>
+        new(text, (x, y) => SvgMapWriter.Text(x, y + 13.0, MapTypography.DetailSize, text), swatch: false);
+
+    private static LegendItem LineItem(string text, string colour, string dash) => new(text, (x, y) =>
+    {
+        double mid = y + (SvgMapWriter.SwatchHeight / 2.0);
+        var line = new XElement(
+            Svg + "line",
+            SvgMapWriter.Attr("x1", x),
+            SvgMapWriter.Attr("y1", mid),
+            SvgMapWriter.Attr("x2", x + SvgMapWriter.SwatchWidth),
+            SvgMapWriter.Attr("y2", mid),
+            new XAttribute("stroke", colour),
+            SvgMapWriter.Attr("stroke-width", 3.0));
+        if (dash.Length > 0)
+        {
+            line.Add(new XAttribute("stroke-dasharray", dash));
+        }
+
+        return new XElement(
+            Svg + "g",
+            new XAttribute("class", "legend-line"),
+            line,
+            SvgMapWriter.Text(x + SvgMapWriter.SwatchWidth + 6.0, y + 13.0, MapTypography.DetailSize, text));
+    });
+
+    private sealed class LegendItem(string text, Func<double, double, XElement> draw, bool swatch = true)
+    {
+        public double Width { get; } = (swatch ? SvgMapWriter.SwatchWidth + 6.0 : 0.0) + TextWidth.Of(text, MapTypography.DetailSize, bold: true);
+
+        public XElement Draw(double x, double y) => draw(x, y);
+    }
+}

@@ -1,0 +1,273 @@
+using System.Globalization;
+using System.Xml.Linq;
+using NetSolve.Model;
+using NetSolve.Rendering.Text;
+using NetSolve.Solving;
+
+namespace NetSolve.Rendering.Map;
+
+/// <summary>Draws a <see cref="MapLayout"/> as a standalone SVG document: title, legend, flow lines, unit boxes, rates.</summary>
+/// <remarks>
+/// Output is well-formed XML built with LINQ to XML, numbers in the invariant culture, no external references,
+/// so it can be inlined in HTML or rasterised as it is. Unit groups carry <c>data-unit</c> and <c>data-status</c>;
+/// flow groups carry <c>data-from</c>, <c>data-to</c> and <c>data-kind</c>.
+/// </remarks>
+public static class SvgMapWriter
+{
+    /// <summary>The SVG namespace.</summary>
+    public static readonly XNamespace Svg = "http://www.w3.org/2000/svg";
+
+    private const double TitleSize = 16.0;
+    private const double LegendSwatchWidth = 30.0;
+    private const double LegendSwatchHeight = 18.0;
+    private const double LegendGap = 16.0;
+    private const double MinArrowHalfWidth = 4.5;
+    private const double ArrowHalfWidthPerStroke = 1.1;
+
+    /// <summary>The map as an SVG document.</summary>
+    public static XDocument Write(MapLayout layout)
+    {
+        ArgumentNullException.ThrowIfNull(layout);
+        var legend = MapLegend.Lay(layout, out double headerHeight, out double minWidth);
+        // Whole-unit sizes, so a raster at an integer scale has exactly the SVG's size.
+        double width = Math.Ceiling(Math.Max(layout.Width, minWidth));
+        double height = Math.Ceiling(layout.Height + headerHeight);
+        double offsetX = (width - layout.Width) / 2.0;
+
+        var root = new XElement(
+            Svg + "svg",
+            new XAttribute("viewBox", FormattableString.Invariant($"0 0 {Invariant.Coordinate(width)} {Invariant.Coordinate(height)}")),
+            new XAttribute("width", Invariant.Coordinate(width)),
+            new XAttribute("height", Invariant.Coordinate(height)),
+            new XAttribute("role", "img"),
+            new XAttribute("class", "bottleneck-map"),
+            new XAttribute("font-family", MapTypography.FontFamily),
+            new XElement(Svg + "title", "Bottleneck map: " + layout.Title),
+            new XElement(Svg + "desc", Description(layout)),
+            new XElement(Svg + "rect", Attr("x", 0), Attr("y", 0), Attr("width", width), Attr("height", height), new XAttribute("fill", MapColours.Background)),
+            legend,
+            new XElement(
+                Svg + "g",
+                new XAttribute("class", "graph"),
+                new XAttribute("transform", FormattableString.Invariant($"translate({Invariant.Coordinate(offsetX)} {Invariant.Coordinate(headerHeight)})")),
+                new XElement(Svg + "g", new XAttribute("class", "flows"), layout.Edges.Select(Flow)),
+                new XElement(Svg + "g", new XAttribute("class", "nodes"), layout.Nodes.Select(Node)),
+                new XElement(Svg + "g", new XAttribute("class", "rates"), layout.Edges.Select(Rate))));
+        return new XDocument(root);
+    }
+
+    /// <summary>The map as SVG text, without an XML declaration so it can also be inlined in HTML.</summary>
+    public static string WriteString(MapLayout layout) => Write(layout).Root!.ToString(SaveOptions.None);
+
+    internal static XAttribute Attr(string name, double value) => new(name, Invariant.Coordinate(value));
+
+    private static string Description(MapLayout layout)
+    {
+        int units = layout.Nodes.Length;
+        return string.Create(CultureInfo.InvariantCulture,
+            $"{units} units; boxes filled by status ({HarbourLightsPalette.Name} palette) with a glyph and word; line width proportional to patients per {TimeConstants.Name(layout.TimeUnit)}; dashed lines return against the main flow.");
+    }
+
+    private static XElement Flow(MapEdge edge)
+    {
+        string stroke = edge.Kind switch
+        {
+            MapEdgeKind.Feedback => MapColours.FeedbackLine,
+            _ => MapColours.ForwardLine,
+        };
+        var path = new XElement(
+            Svg + "path",
+            new XAttribute("d", edge.PathData),
+            new XAttribute("fill", "none"),
+            new XAttribute("stroke", stroke),
+            Attr("stroke-width", edge.StrokeWidth),
+            new XAttribute("stroke-linecap", "butt"));
+        if (edge.Kind == MapEdgeKind.Feedback)
+        {
+            path.Add(new XAttribute("stroke-dasharray", MapColours.FeedbackDash));
+        }
+
+        return new XElement(
+            Svg + "g",
+            new XAttribute("class", "flow " + KindName(edge.Kind)),
+            new XAttribute("data-from", edge.From),
+            new XAttribute("data-to", edge.To),
+            new XAttribute("data-kind", KindName(edge.Kind)),
+            new XAttribute("data-rate", edge.RateText),
+            new XElement(Svg + "title", FormattableString.Invariant($"{edge.From} to {edge.To}: {edge.RateText}")),
+            path,
+            Arrow(edge, stroke));
+    }
+
+    private static XElement Arrow(MapEdge edge, string fill)
+    {
+        double dx = edge.ArrowTip.X - edge.ArrowBase.X;
+        double dy = edge.ArrowTip.Y - edge.ArrowBase.Y;
+        double length = Math.Sqrt((dx * dx) + (dy * dy));
+        double half = Math.Max(MinArrowHalfWidth, ArrowHalfWidthPerStroke * edge.StrokeWidth);
+        double nx = length > 0.0 ? -dy / length : 0.0;
+        double ny = length > 0.0 ? dx / length : 0.0;
+        string points = string.Join(' ', new[]
+        {
+            edge.ArrowTip,
+            new MapPoint(edge.ArrowBase.X + (nx * half), edge.ArrowBase.Y + (ny * half)),
+            new MapPoint(edge.ArrowBase.X - (nx * half), edge.ArrowBase.Y - (ny * half)),
+        }.Select(p => Invariant.Coordinate(p.X) + "," + Invariant.Coordinate(p.Y)));
+        return new XElement(Svg + "polygon", new XAttribute("class", "arrowhead"), new XAttribute("points", points), new XAttribute("fill", fill));
+    }
+
+    private static XElement Node(MapNode node)
+    {
+        var style = HarbourLightsPalette.For(node.Status);
+        var group = new XElement(
+            Svg + "g",
+            new XAttribute("class", "unit status-" + StatusName(node.Status)),
+            new XAttribute("data-unit", node.UnitId),
+            new XAttribute("data-status", StatusName(node.Status)),
+            new XElement(Svg + "title", node.UnitId + ": " + string.Join("; ", node.Lines.Select(line => line.Text))));
+        foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit") })
+        {
+            if (stub is not null)
+            {
+                group.Add(Stub(stub, kind));
+            }
+        }
+
+        var box = Box(node.Left, node.Top, node.Width, node.Height, style.Fill, style.Border, style.BorderWidth, style.BorderDash);
+        box.Add(new XAttribute("class", "box"));
+        group.Add(box);
+        if (style.DoubleBorder)
+        {
+            double inset = style.BorderWidth + 1.5;
+            group.Add(Box(node.Left + inset, node.Top + inset, node.Width - (2 * inset), node.Height - (2 * inset), "none", style.Border, 1.5, string.Empty));
+        }
+
+        double lineTop = node.Top + MapTypography.Padding;
+        foreach (var line in node.Lines)
+        {
+            double baseline = lineTop + (line.FontSize * 1.02);
+            var text = new XElement(
+                Svg + "text",
+                Attr("x", node.Left + MapTypography.Padding),
+                Attr("y", baseline),
+                Attr("font-size", line.FontSize),
+                new XAttribute("fill", style.Text),
+                line.Text);
+            if (line.IsBold)
+            {
+                text.Add(new XAttribute("font-weight", "bold"));
+            }
+
+            group.Add(text);
+            lineTop += line.FontSize * MapTypography.LineSpacing;
+        }
+
+        return group;
+    }
+
+    private static XElement Stub(MapStub stub, string kind)
+    {
+        double dx = stub.Tip.X - stub.Start.X;
+        double dy = stub.Tip.Y - stub.Start.Y;
+        double length = Math.Sqrt((dx * dx) + (dy * dy));
+        double arrow = Math.Min(length * 0.6, Math.Max(7.0, 1.4 * stub.StrokeWidth));
+        var arrowBase = new MapPoint(stub.Tip.X - (dx / length * arrow), stub.Tip.Y - (dy / length * arrow));
+        var edge = new MapEdge(kind, kind, MapEdgeKind.Forward, stub.PerHour, stub.RateText, stub.StrokeWidth, string.Empty, stub.Start, arrowBase, stub.Tip, stub.Tip);
+        return new XElement(
+            Svg + "g",
+            new XAttribute("class", "stub " + kind),
+            new XAttribute("data-rate", stub.RateText),
+            new XElement(
+                Svg + "line",
+                Attr("x1", stub.Start.X),
+                Attr("y1", stub.Start.Y),
+                Attr("x2", arrowBase.X),
+                Attr("y2", arrowBase.Y),
+                new XAttribute("stroke", MapColours.BoundaryLine),
+                Attr("stroke-width", stub.StrokeWidth)),
+            Arrow(edge, MapColours.BoundaryLine));
+    }
+
+    private static XElement Rate(MapEdge edge)
+    {
+        double width = TextWidth.Of(edge.RateText, MapTypography.RateSize) + 4.0;
+        double height = MapTypography.RateSize * MapTypography.LineSpacing;
+        return new XElement(
+            Svg + "g",
+            new XAttribute("class", "rate"),
+            new XAttribute("data-from", edge.From),
+            new XAttribute("data-to", edge.To),
+            new XElement(
+                Svg + "rect",
+                Attr("x", edge.LabelCentre.X - (width / 2.0)),
+                Attr("y", edge.LabelCentre.Y - (height / 2.0)),
+                Attr("width", width),
+                Attr("height", height),
+                Attr("rx", 3.0),
+                new XAttribute("fill", MapColours.Background),
+                new XAttribute("fill-opacity", "0.85")),
+            new XElement(
+                Svg + "text",
+                Attr("x", edge.LabelCentre.X),
+                Attr("y", edge.LabelCentre.Y + (MapTypography.RateSize * 0.36)),
+                Attr("font-size", MapTypography.RateSize),
+                new XAttribute("text-anchor", "middle"),
+                new XAttribute("fill", MapColours.Ink),
+                edge.RateText));
+    }
+
+    internal static XElement Box(double x, double y, double width, double height, string fill, string stroke, double strokeWidth, string dash)
+    {
+        var rect = new XElement(
+            Svg + "rect",
+            Attr("x", x),
+            Attr("y", y),
+            Attr("width", width),
+            Attr("height", height),
+            new XAttribute("fill", fill),
+            new XAttribute("stroke", stroke),
+            Attr("stroke-width", strokeWidth));
+        if (dash.Length > 0)
+        {
+            rect.Add(new XAttribute("stroke-dasharray", dash));
+        }
+
+        return rect;
+    }
+
+    /// <summary>The lower-case contract word for a status: <c>ok</c>, <c>strained</c>, <c>bottleneck</c>, <c>unstable</c>.</summary>
+    public static string StatusName(UnitStatus status) => status switch
+    {
+        UnitStatus.Ok => "ok",
+        UnitStatus.Strained => "strained",
+        UnitStatus.Bottleneck => "bottleneck",
+        UnitStatus.Unstable => "unstable",
+        _ => throw new ArgumentOutOfRangeException(nameof(status), status, "Unknown unit status."),
+    };
+
+    internal static string KindName(MapEdgeKind kind) => kind switch
+    {
+        MapEdgeKind.Forward => "forward",
+        MapEdgeKind.Feedback => "feedback",
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown flow kind."),
+    };
+
+    internal static XElement Text(double x, double y, double size, string content, bool bold = false)
+    {
+        var text = new XElement(Svg + "text", Attr("x", x), Attr("y", y), Attr("font-size", size), new XAttribute("fill", MapColours.Ink), content);
+        if (bold)
+        {
+            text.Add(new XAttribute("font-weight", "bold"));
+        }
+
+        return text;
+    }
+
+    internal static double TitleFontSize => TitleSize;
+
+    internal static double SwatchWidth => LegendSwatchWidth;
+
+    internal static double SwatchHeight => LegendSwatchHeight;
+
+    internal static double Gap => LegendGap;
+}

@@ -1,0 +1,46 @@
+using System.Globalization;
+using NetSolve.Rendering.Text;
+using NetSolve.Solving;
+
+namespace NetSolve.Rendering.Report;
+
+/// <summary>The report's one-line finding: which unit saturates first, and at what growth in demand.</summary>
+public static class Finding
+{
+    /// <summary>One sentence for <paramref name="solution"/>.</summary>
+    /// <remarks>
+    /// Unstable units come first (they are over capacity at today's demand); otherwise the bottleneck unit(s) and
+    /// their headroom, the factor by which every arrival rate can grow before they reach full utilisation.
+    /// </remarks>
+    public static string Summarise(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        var unstable = solution.Units.Where(u => u.Status == UnitStatus.Unstable).ToList();
+        if (unstable.Count > 0)
+        {
+            string names = Join(unstable.Select(u => u.Unit.Label + " (" + Invariant.Percent(u.Utilisation) + " busy)"));
+            return unstable.Count == 1
+                ? names + " is over capacity at today's demand: its queue grows without limit."
+                : names + " are over capacity at today's demand: their queues grow without limit.";
+        }
+
+        var first = solution.Units.Where(u => u.Status == UnitStatus.Bottleneck && u.Headroom is not null).ToList();
+        if (first.Count == 0)
+        {
+            return "No unit saturates as demand grows: every unit that patients reach has unlimited servers.";
+        }
+
+        double headroom = first[0].Headroom!.Value;
+        string growth = string.Create(CultureInfo.InvariantCulture, $"a factor of {Invariant.Factor(headroom)} ({(headroom - 1.0) * 100.0:+0.0;-0.0}%)");
+        string who = Join(first.Select(u => u.Unit.Label));
+        return first.Count == 1
+            ? $"{who} saturates first: it reaches full utilisation when demand grows by {growth}."
+            : $"{who} saturate first, together: they reach full utilisation when demand grows by {growth}.";
+    }
+
+    private static string Join(IEnumerable<string> parts)
+    {
+        var list = parts.ToList();
+        return list.Count <= 1 ? string.Concat(list) : string.Join(", ", list.Take(list.Count - 1)) + " and " + list[^1];
+    }
+}

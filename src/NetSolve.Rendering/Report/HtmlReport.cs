@@ -1,0 +1,138 @@
+using System.Globalization;
+using System.Text;
+using NetSolve.Model;
+using NetSolve.Output;
+using NetSolve.Rendering.Map;
+using NetSolve.Rendering.Text;
+using NetSolve.Solving;
+using static System.Net.WebUtility;
+
+namespace NetSolve.Rendering.Report;
+
+/// <summary>
+/// The leadership report: one self-contained HTML page (inline SVG and CSS, no scripts, fonts or requests) with the
+/// finding, the bottleneck map, the unit table, mean wait against demand growth, an optional scenario comparison,
+/// the model's assumptions and the planning caution.
+/// </summary>
+/// <remarks>
+/// A Content-Security-Policy of <c>default-src 'none'</c> makes browsers refuse any request the page might
+/// still try. The output depends only on its inputs (no dates), so the same solutions give the same bytes.
+/// </remarks>
+public static class HtmlReport
+{
+    /// <summary>The model's assumptions, as the report lists them.</summary>
+    public static IReadOnlyList<string> Assumptions { get; } =
+    [
+        "Steady state: demand and capacity stay as given long enough for queues to settle; no daily or seasonal pattern.",
+        "Poisson arrivals: patients arrive one at a time, independently, at the given mean rates.",
+        "Exponential service: each unit's service time is exponential with the given mean (service_cv is not used).",
+        "Independent routing: where a patient goes next depends only on the unit just left, by the given probabilities.",
+        "First come, first served at every unit; no priorities, no blocking, no abandonment; unlimited waiting room.",
+    ];
+
+    /// <summary>The planning caution, as the report states it.</summary>
+    public const string PlanningCaution =
+        "These are planning estimates under stated assumptions; decisions follow local clinical governance and safe-staffing rules.";
+
+    /// <summary>The map is drawn at most this many times its own size on screen.</summary>
+    private const double MaxMapEnlargement = 1.25;
+
+    /// <summary>The report for <paramref name="baseline"/>, compared with <paramref name="scenarios"/> when any are given.</summary>
+    public static string Write(NetworkSolution baseline, IReadOnlyList<ReportScenario>? scenarios = null)
+    {
+        ArgumentNullException.ThrowIfNull(baseline);
+        scenarios ??= [];
+        var network = baseline.Network;
+        var timeUnit = network.TimeUnit;
+        string unit = TimeConstants.Name(timeUnit);
+        var html = new StringBuilder();
+        html.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
+            .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'\">\n")
+            .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
+            .Append("<title>Capacity report: ").Append(HtmlEncode(network.Name)).Append("</title>\n")
+            .Append("<style>\n").Append(ReportStyles.Css).Append("</style>\n</head>\n<body>\n");
+
+        html.Append("<header>\n<h1>").Append(HtmlEncode(network.Name)).Append("</h1>\n")
+            .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Times in ").Append(unit)
+            .Append("s, rates per ").Append(unit).Append(".</p>\n</header>\n");
+        html.Append("<p class=\"finding\" id=\"finding\"><strong>Finding:</strong> ").Append(HtmlEncode(Finding.Summarise(baseline))).Append("</p>\n");
+
+        var layout = MapLayoutBuilder.Build(baseline);
+        var map = SvgMapWriter.Write(layout).Root!;
+        // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
+        string maxWidth = Invariant.Coordinate(Math.Ceiling(double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture) * MaxMapEnlargement));
+        html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n")
+            .Append("<div class=\"map-frame\" style=\"max-width:").Append(maxWidth).Append("px\">\n")
+            .Append(map.ToString()).Append("\n</div>\n")
+            .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
+            .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
+            .Append(".</figcaption>\n</figure>\n</section>\n");
+
+        html.Append("<section id=\"units\">\n<h2>Units</h2>\n");
+        UnitTable.Append(html, baseline);
+        html.Append("</section>\n");
+
+        AppendGrowth(html, baseline);
+
+        if (scenarios.Count > 0)
+        {
+            ScenarioTable.Append(html, baseline, scenarios);
+        }
+
+        html.Append("<section id=\"assumptions\">\n<h2>Assumptions and caution</h2>\n<p>The numbers come from a Jackson network: ")
+            .Append("each unit is an M/M/c queue (Erlang C) fed by the flows of the traffic equations, and totals follow Little's law. The model assumes:</p>\n<ul>\n");
+        foreach (string assumption in Assumptions)
+        {
+            html.Append("<li>").Append(HtmlEncode(assumption)).Append("</li>\n");
+        }
+
+        html.Append("</ul>\n<p class=\"caution\" id=\"caution\"><strong>Planning caution:</strong> ").Append(HtmlEncode(PlanningCaution)).Append("</p>\n</section>\n");
+        html.Append("<footer>Made with NetSolve. A unit is strained at ")
+            .Append(Invariant.Percent(baseline.StrainThreshold)).Append(" utilisation or more.</footer>\n</body>\n</html>\n");
+        return html.ToString();
+    }
+
+    private static void AppendGrowth(StringBuilder html, NetworkSolution baseline)
+    {
+        var growth = WaitGrowth.Compute(baseline);
+        html.Append("<section id=\"growth\">\n<h2>Mean wait as demand grows</h2>\n");
+        string? chart = WaitChart.Svg(growth, baseline.Network.TimeUnit);
+        if (chart is null)
+        {
+            html.Append("<p>No chart: ").Append(baseline.IsStable
+                ? "no unit with a finite number of servers receives patients, so nothing saturates."
+                : "a unit is already over capacity, so there is no growth left to show.").Append("</p>\n</section>\n");
+            return;
+        }
+
+        var shown = WaitChart.Shown(growth);
+        html.Append("<figure id=\"growth-figure\">\n<div class=\"chart-frame\">\n").Append(StripDeclaration(chart)).Append("\n</div>\n")
+            .Append("<figcaption>Every arrival rate multiplied by the same factor, from today's demand (1.0) to ")
+            .Append(Invariant.Factor(growth.Factors[^1])).Append(", just below the first saturation at ")
+            .Append(Invariant.Factor(growth.SaturationFactor!.Value)).Append(". ");
+        if (shown.Count < growth.Curves.Length)
+        {
+            html.Append(string.Create(CultureInfo.InvariantCulture, $"Showing the {shown.Count} units with the longest waits at the last factor; the other {growth.Curves.Length - shown.Count} wait less. "));
+        }
+
+        html.Append("Units with unlimited servers never wait and are not drawn.</figcaption>\n</figure>\n</section>\n");
+    }
+
+    private static string StripDeclaration(string svg)
+    {
+        int start = svg.IndexOf("<svg", StringComparison.Ordinal);
+        return start > 0 ? svg[start..] : svg;
+    }
+
+    internal static string StatusCell(UnitStatus status)
+    {
+        var style = HarbourLightsPalette.For(status);
+        string border = style.DoubleBorder ? "double" : style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
+        return string.Create(CultureInfo.InvariantCulture,
+            $"<td class=\"status\" data-status=\"{SvgMapWriter.StatusName(status)}\" style=\"background:{style.Fill};color:{style.Text};border:3px {border} {style.Border}\">{HtmlEncode(style.Glyph + " " + style.Word)}</td>");
+    }
+
+    internal static string Cell(string text) => "<td>" + HtmlEncode(text) + "</td>";
+
+    internal static string Time(double? value) => value is double v ? Numbers.Compact(v) : "unbounded";
+}

@@ -1,0 +1,113 @@
+using System.Globalization;
+using NetSolve.Model;
+using NetSolve.Rendering.Text;
+using ScottPlot;
+
+namespace NetSolve.Rendering.Report;
+
+/// <summary>Draws mean wait against demand growth with ScottPlot, as SVG.</summary>
+/// <remarks>
+/// Shows the units with the longest waits at the last factor (the first unit to saturate among them), at most
+/// <see cref="ChartSeriesStyles.Count"/>, and a vertical line at the saturation factor. Waits are in the network's time unit.
+/// </remarks>
+public static partial class WaitChart
+{
+    /// <summary>Chart width in SVG units.</summary>
+    public const int Width = 720;
+
+    /// <summary>Chart height in SVG units.</summary>
+    public const int Height = 400;
+
+    private static readonly LinePattern[] Patterns = [LinePattern.Solid, LinePattern.Dashed, LinePattern.Dotted, LinePattern.DenselyDashed];
+
+    private static readonly MarkerShape[] Markers =
+        [MarkerShape.FilledCircle, MarkerShape.FilledSquare, MarkerShape.FilledTriangleUp, MarkerShape.FilledDiamond, MarkerShape.OpenCircle, MarkerShape.OpenSquare, MarkerShape.OpenTriangleUp, MarkerShape.Cross];
+
+    /// <summary>The curves chosen for the chart, longest final wait first.</summary>
+    public static IReadOnlyList<WaitCurve> Shown(WaitGrowth growth)
+    {
+        ArgumentNullException.ThrowIfNull(growth);
+        return growth.Curves.OrderByDescending(curve => curve.WaitHours[^1]).Take(ChartSeriesStyles.Count).ToList();
+    }
+
+    /// <summary>The chart as an SVG document; null when <paramref name="growth"/> has no curves.</summary>
+    public static string? Svg(WaitGrowth growth, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(growth);
+        if (growth.Curves.IsEmpty || growth.SaturationFactor is not double saturation)
+        {
+            return null;
+        }
+
+        var plot = new Plot();
+        plot.Font.Set("DejaVu Sans");
+        double[] factors = [.. growth.Factors];
+        var shown = Shown(growth);
+        for (int i = 0; i < shown.Count; i++)
+        {
+            double[] waits = shown[i].WaitHours.Select(hours => TimeConstants.FromHours(hours, timeUnit)).ToArray();
+            var series = plot.Add.Scatter(factors, waits);
+            series.LegendText = shown[i].Label;
+            series.Color = Color.FromHex(ChartSeriesStyles.Colours[i]);
+            series.LineWidth = 2;
+            series.LinePattern = Patterns[i % Patterns.Length];
+            series.MarkerShape = Markers[i];
+            series.MarkerSize = 5;
+        }
+
+        var line = plot.Add.VerticalLine(saturation);
+        line.Color = Color.FromHex("#111111");
+        line.LinePattern = LinePattern.Dashed;
+        line.LineWidth = 1.5f;
+        line.LegendText = "first saturation \u00D7" + Invariant.Factor(saturation);
+
+        plot.XLabel("Demand growth factor (\u00D7 today's arrivals)");
+        plot.YLabel("Mean wait (" + TimeConstants.Name(timeUnit) + "s)");
+        plot.Axes.SetLimitsX(1.0, saturation + ((saturation - 1.0) * 0.04));
+        plot.Axes.Bottom.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic
+        {
+            LabelFormatter = value => value.ToString("0.###", CultureInfo.InvariantCulture),
+        };
+        plot.Axes.Left.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic
+        {
+            LabelFormatter = value => value.ToString("0.###", CultureInfo.InvariantCulture),
+        };
+        plot.ShowLegend(Alignment.UpperLeft);
+        return WithViewBox(RenumberIds(plot.GetSvgXml(Width, Height)));
+    }
+
+    /// <summary>Adds a viewBox when the SVG has none, so the page can scale the chart to its column.</summary>
+    internal static string WithViewBox(string svg)
+    {
+        int root = svg.IndexOf("<svg", StringComparison.Ordinal);
+        int end = svg.IndexOf('>', root);
+        if (root < 0 || svg.AsSpan(root, end - root).Contains("viewBox", StringComparison.Ordinal))
+        {
+            return svg;
+        }
+
+        return svg.Insert(root + 4, string.Create(CultureInfo.InvariantCulture, $" viewBox=\"0 0 {Width} {Height}\""));
+    }
+
+    /// <summary>
+    /// ScottPlot numbers clip paths from a process-wide counter; renumbering them from 1 with a chart prefix makes the
+    /// output depend on the data alone and keeps the ids apart from anything else on the page.
+    /// </summary>
+    internal static string RenumberIds(string svg)
+    {
+        var names = new Dictionary<string, string>(StringComparer.Ordinal);
+        return ClipIdRegex().Replace(svg, match =>
+        {
+            if (!names.TryGetValue(match.Value, out string? name))
+            {
+                name = "wait-chart-clip-" + (names.Count + 1).ToString(CultureInfo.InvariantCulture);
+                names[match.Value] = name;
+            }
+
+            return name;
+        });
+    }
+
+    [System.Text.RegularExpressions.GeneratedRegex(@"\bcl_[0-9a-f]+\b")]
+    private static partial System.Text.RegularExpressions.Regex ClipIdRegex();
+}
