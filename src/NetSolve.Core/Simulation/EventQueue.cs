@@ -1,59 +1,85 @@
 namespace NetSolve.Simulation;
 
 /// <summary>
-/// Pending events by time: a binary min-heap over a struct array. Push and pop cost O(log n) and allocate nothing
-/// once the array has grown to the most events ever pending at once. Not thread-safe.
+/// Pending events by time: a 4-ary min-heap with the times in one array and the (unit, patient) payloads in another.
+/// Push and pop cost O(log n) and allocate nothing once the arrays have grown to the most events ever pending at
+/// once. Not thread-safe.
 /// </summary>
+/// <remarks>
+/// Why this shape (measured on the 1,000-unit benchmark, where a few thousand events are pending): a 4-ary heap is
+/// half as deep as a binary one, and the four children of a slot are adjacent, so one or two cache lines of times
+/// serve a level; keeping the payloads apart keeps those lines full of times. Slots past the last event hold
+/// +∞, so the walk down never checks how many children a slot has, and <see cref="EarliestTime"/> of an empty
+/// queue is +∞. The smallest child is picked by comparisons the JIT turns into flag moves, not branches: which child
+/// is smallest is a coin toss the branch predictor would lose about half the time.
+/// </remarks>
 internal sealed class EventQueue
 {
-    private SimulationEvent[] _heap;
+    private const int Arity = 4;
+
+    private double[] _times;
+    private EventPayload[] _payloads;
+    private int _capacity;
 
     /// <summary>Creates an empty queue with room for <paramref name="capacity"/> events.</summary>
-    public EventQueue(int capacity) => _heap = new SimulationEvent[Math.Max(capacity, 16)];
+    public EventQueue(int capacity)
+    {
+        _capacity = Math.Max(capacity, 16);
+        _times = new double[_capacity + Arity];
+        _payloads = new EventPayload[_capacity + Arity];
+        Array.Fill(_times, double.PositiveInfinity);
+    }
 
     /// <summary>Events pending.</summary>
     public int Count { get; private set; }
 
-    /// <summary>The earliest pending event; the queue must not be empty.</summary>
-    public ref readonly SimulationEvent Peek() => ref _heap[0];
+    /// <summary>The time of the earliest pending event, or +∞ when the queue is empty.</summary>
+    public double EarliestTime => _times[0];
 
     /// <summary>Adds an event.</summary>
     public void Push(in SimulationEvent item)
     {
-        if (Count == _heap.Length)
+        if (Count == _capacity)
         {
-            Array.Resize(ref _heap, _heap.Length * 2);
+            Grow();
         }
 
-        var heap = _heap;
+        var times = _times;
+        var payloads = _payloads;
         int hole = Count++;
         double time = item.Time;
         while (hole > 0)
         {
-            int parent = (hole - 1) >> 1;
-            if (heap[parent].Time <= time)
+            int parent = (hole - 1) >> 2;
+            if (times[parent] <= time)
             {
                 break;
             }
 
-            heap[hole] = heap[parent];
+            times[hole] = times[parent];
+            payloads[hole] = payloads[parent];
             hole = parent;
         }
 
-        heap[hole] = item;
+        times[hole] = time;
+        payloads[hole] = new EventPayload(item.Unit, item.Patient);
     }
 
     /// <summary>Removes and returns the earliest event; the queue must not be empty.</summary>
     /// <remarks>
-    /// Floyd's bottom-up variant: the hole left at the root moves down along the smaller children to a leaf, then the
-    /// last event sifts up from there. The last event usually belongs near the bottom, so this saves about half the
+    /// Floyd's bottom-up variant: the hole left at the root moves down along the smallest children to a leaf, then the
+    /// last event sifts up from there. The last event usually belongs near the bottom, so this saves most of the
     /// comparisons of the textbook sift-down.
     /// </remarks>
     public SimulationEvent Pop()
     {
-        var heap = _heap;
-        var top = heap[0];
+        var times = _times;
+        var payloads = _payloads;
+        var top = new SimulationEvent(times[0], payloads[0].Unit, payloads[0].Patient);
         int count = --Count;
+        double lastTime = times[count];
+        var lastPayload = payloads[count];
+        times[count] = double.PositiveInfinity;
         if (count == 0)
         {
             return top;
@@ -63,34 +89,49 @@ internal sealed class EventQueue
         int child = 1;
         while (child < count)
         {
-            if (child + 1 < count && heap[child + 1].Time < heap[child].Time)
-            {
-                child++;
-            }
-
-            heap[hole] = heap[child];
-            hole = child;
-            child = (hole << 1) + 1;
+            // Children past the last event are +∞ sentinels (the arrays keep Arity spare slots), so all four compare.
+            int left = child + (times[child + 1] < times[child] ? 1 : 0);
+            int right = child + 2 + (times[child + 3] < times[child + 2] ? 1 : 0);
+            int smallest = times[right] < times[left] ? right : left;
+            times[hole] = times[smallest];
+            payloads[hole] = payloads[smallest];
+            hole = smallest;
+            child = (hole * Arity) + 1;
         }
 
-        var last = heap[count];
-        double time = last.Time;
         while (hole > 0)
         {
-            int parent = (hole - 1) >> 1;
-            if (heap[parent].Time <= time)
+            int parent = (hole - 1) >> 2;
+            if (times[parent] <= lastTime)
             {
                 break;
             }
 
-            heap[hole] = heap[parent];
+            times[hole] = times[parent];
+            payloads[hole] = payloads[parent];
             hole = parent;
         }
 
-        heap[hole] = last;
+        times[hole] = lastTime;
+        payloads[hole] = lastPayload;
         return top;
     }
 
-    /// <summary>Removes every event, keeping the array.</summary>
-    public void Clear() => Count = 0;
+    /// <summary>Removes every event, keeping the arrays.</summary>
+    public void Clear()
+    {
+        Array.Fill(_times, double.PositiveInfinity, 0, Count);
+        Count = 0;
+    }
+
+    private void Grow()
+    {
+        int old = _times.Length;
+        _capacity *= 2;
+        Array.Resize(ref _times, _capacity + Arity);
+        Array.Resize(ref _payloads, _capacity + Arity);
+        Array.Fill(_times, double.PositiveInfinity, old, _times.Length - old);
+    }
+
+    private readonly record struct EventPayload(int Unit, int Patient);
 }

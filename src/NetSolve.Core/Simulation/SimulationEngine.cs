@@ -88,7 +88,7 @@ internal sealed partial class SimulationEngine
         }
 
         long events = 0;
-        while (_events.Count > 0 && _events.Peek().Time <= _end)
+        while (_events.EarliestTime <= _end)
         {
             var next = _events.Pop();
             events++;
