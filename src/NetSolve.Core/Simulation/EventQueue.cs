@@ -1,3 +1,6 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>
@@ -85,16 +88,21 @@ internal sealed class EventQueue
             return top;
         }
 
+        // The walk reads past bounds checks: every index is below Count + Arity, inside both arrays, because a slot
+        // with a child below Count is itself below Count and its other children are at most Arity − 1 further on.
+        ref double time = ref MemoryMarshal.GetArrayDataReference(times);
+        ref var payload = ref MemoryMarshal.GetArrayDataReference(payloads);
         int hole = 0;
         int child = 1;
         while (child < count)
         {
             // Children past the last event are +∞ sentinels (the arrays keep Arity spare slots), so all four compare.
-            int left = child + (times[child + 1] < times[child] ? 1 : 0);
-            int right = child + 2 + (times[child + 3] < times[child + 2] ? 1 : 0);
-            int smallest = times[right] < times[left] ? right : left;
-            times[hole] = times[smallest];
-            payloads[hole] = payloads[smallest];
+            int left = child + (Unsafe.Add(ref time, child + 1) < Unsafe.Add(ref time, child) ? 1 : 0);
+            int right = child + 2 + (Unsafe.Add(ref time, child + 3) < Unsafe.Add(ref time, child + 2) ? 1 : 0);
+            int pickRight = Unsafe.Add(ref time, right) < Unsafe.Add(ref time, left) ? -1 : 0;
+            int smallest = left + ((right - left) & pickRight);
+            Unsafe.Add(ref time, hole) = Unsafe.Add(ref time, smallest);
+            Unsafe.Add(ref payload, hole) = Unsafe.Add(ref payload, smallest);
             hole = smallest;
             child = (hole * Arity) + 1;
         }
