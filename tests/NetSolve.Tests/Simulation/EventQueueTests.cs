@@ -43,6 +43,29 @@ public sealed class EventQueueTests
         Assert.Equal([1.0, 2.0, 3.0, 4.0, 5.0], Enumerable.Range(0, 5).Select(_ => queue.Pop().Time));
     }
 
+    [Fact]
+    public void The_earliest_time_is_infinite_when_empty_and_tracks_the_smallest_pending_time()
+    {
+        // Source: exact by hand. The run loop stops on the earliest time alone, so an empty queue must report +∞.
+        var queue = new EventQueue(1);
+        Assert.Equal(double.PositiveInfinity, queue.EarliestTime);
+        for (int k = 40; k >= 1; k--)
+        {
+            queue.Push(new SimulationEvent(k, k, -k));
+        }
+
+        Assert.Equal(1.0, queue.EarliestTime);
+        for (int k = 1; k <= 40; k++)
+        {
+            var popped = queue.Pop();
+            Assert.Equal((double)k, popped.Time);
+            Assert.Equal(k, popped.Unit);
+            Assert.Equal(-k, popped.Patient);
+        }
+
+        Assert.Equal(double.PositiveInfinity, queue.EarliestTime);
+    }
+
     private static void PopAndCheck(EventQueue queue, List<double> pending)
     {
         double earliest = pending.Min();
