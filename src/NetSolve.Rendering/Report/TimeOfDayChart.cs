@@ -49,7 +49,8 @@ public static class TimeOfDayChart
         plot.XLabel("Hour of day (each point is the mean over its hour)");
         plot.YLabel("Mean queue (patients waiting)");
         plot.Axes.SetLimitsX(0.0, TimeOfDayQueues.HoursOfDay);
-        double[] ticks = Enumerable.Range(0, (TimeOfDayQueues.HoursOfDay / TickEveryHours) + 1).Select(k => (double)(k * TickEveryHours)).ToArray();
+        // 00:00 to 21:00: a label at 24:00 would run off the right edge of the chart.
+        double[] ticks = Enumerable.Range(0, TimeOfDayQueues.HoursOfDay / TickEveryHours).Select(k => (double)(k * TickEveryHours)).ToArray();
         plot.Axes.Bottom.SetTicks(ticks, ticks.Select(HourLabel).ToArray());
         plot.Axes.Left.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic
         {
