@@ -13,6 +13,9 @@ internal static class SimulationComparisonTable
     /// <summary>The percentile of time in unit the table shows.</summary>
     private const double TailPercent = 95.0;
 
+    /// <summary>Absolute slack when finding <see cref="TailPercent"/> among the reported percentiles (50, 90, 95, 99).</summary>
+    private const double PercentSlack = 0.5;
+
     /// <summary>What the simulation's spreads rest on, as the report states it.</summary>
     public const string SpreadCaution =
         "Simulation spreads (the \u00B1 half-widths and the percentiles) depend on the modelled assumptions: the service-time "
@@ -35,7 +38,7 @@ internal static class SimulationComparisonTable
         {
             var simulated = simulation.Units[i];
             var wait = Comparison.ForUnit(simulated, formula.Units[i]).Single(metric => metric.Name == "mean_wait");
-            var tail = simulated.TimeInUnitPercentiles.FirstOrDefault(p => Math.Abs(p.Percent - TailPercent) < 0.5)?.Hours;
+            var tail = simulated.TimeInUnitPercentiles.FirstOrDefault(p => Math.Abs(p.Percent - TailPercent) < PercentSlack)?.Hours;
             html.Append("<tr data-unit=\"").Append(HtmlEncode(simulated.Unit.Id)).Append("\"><td>").Append(HtmlEncode(simulated.Unit.Label)).Append("</td>")
                 .Append(HtmlReport.Cell(HtmlReport.Time(wait.Formula * scale.TimeFactor)))
                 .Append(HtmlReport.Cell(TimeOfDaySection.WithHalfWidth(wait.Simulated, scale.TimeFactor)))
