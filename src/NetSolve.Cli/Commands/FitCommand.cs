@@ -4,6 +4,7 @@ using System.Text;
 using NetSolve.Fitting;
 using NetSolve.Model;
 using NetSolve.Output;
+using NetSolve.Parsing;
 
 namespace NetSolve.Cli.Commands;
 
@@ -67,19 +68,9 @@ internal static class FitCommand
 
     private static List<UnitVisit> ReadLog(string path)
     {
-        if (Directory.Exists(path) || !File.Exists(path))
+        if (InputFile.TryRead(path, "a movement log", out var problem) is not string text)
         {
-            throw new InputException($"{path}: {(Directory.Exists(path) ? "is a directory, not a movement log" : "no such file")}");
-        }
-
-        string text;
-        try
-        {
-            text = File.ReadAllText(path);
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            throw new InputException($"{path}: cannot be read: {exception.Message}");
+            throw new InputException(problem!.ToString());
         }
 
         var (visits, diagnostics) = MovementLogReader.Read(text, path);

@@ -1,9 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
-using System.Text.RegularExpressions;
-using NetSolve.Cli.Terminal;
 using NetSolve.Model;
-using NetSolve.Parsing;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
@@ -13,24 +10,17 @@ namespace NetSolve.Cli.Commands;
 /// <c>netsolve simulate FILE</c>: discrete-event simulation of the network, with every extension key, confidence
 /// intervals and percentiles; <c>--compare</c> sets the formulas beside it.
 /// </summary>
-internal static partial class SimulateCommand
+internal static class SimulateCommand
 {
     public static Command Create(CliContext context)
     {
         var file = CommonOptions.NetworkFile();
         var format = CommonOptions.Format();
         var strain = CommonOptions.Strain();
-        var seed = new Option<ulong>("--seed") { Description = "Seed of the run; the same seed gives the same numbers on any machine and thread count.", DefaultValueFactory = _ => 1UL };
-        var replications = new Option<int>("--replications", "-r") { Description = "Independent replications (at least 2 for confidence intervals).", DefaultValueFactory = _ => SimulationOptions.DefaultReplications };
-        replications.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int>() < 1)
-            {
-                result.AddError("--replications must be at least 1");
-            }
-        });
-        var warmup = DurationOption("--warmup", "Simulated time discarded at the start of each replication (e.g. 28d; a bare number is in the file's time unit).", "28d", allowZero: true);
-        var duration = DurationOption("--duration", "Simulated time measured in each replication after the warm-up (e.g. 364d).", "364d", allowZero: false);
+        var seed = SimulationCliOptions.Seed();
+        var replications = SimulationCliOptions.Replications(SimulationOptions.DefaultReplications);
+        var warmup = SimulationCliOptions.Duration("--warmup", "Simulated time discarded at the start of each replication (e.g. 28d; a bare number is in the file's time unit).", "28d", allowZero: true);
+        var duration = SimulationCliOptions.Duration("--duration", "Simulated time measured in each replication after the warm-up (e.g. 364d).", "364d", allowZero: false);
         var waitOver = new Option<string[]>("--wait-over")
         {
             Description = "Report P(wait > t) per unit for each time t (e.g. --wait-over 1h 4h).",
@@ -40,7 +30,7 @@ internal static partial class SimulateCommand
         {
             foreach (string text in result.GetValueOrDefault<string[]>() ?? [])
             {
-                if (ParseDuration(text, TimeUnit.Hour, allowZero: true) is null)
+                if (SimulationCliOptions.ParseDuration(text, TimeUnit.Hour, allowZero: true) is null)
                 {
                     result.AddError($"--wait-over: '{text}' is not a duration (write e.g. 30min, 4h, 1d)");
                 }
@@ -69,12 +59,12 @@ internal static partial class SimulateCommand
             {
                 Seed = parse.GetValue(seed),
                 Replications = parse.GetValue(replications),
-                WarmupHours = ParseDuration(parse.GetValue(warmup)!, timeUnit, allowZero: true)!.Value,
-                DurationHours = ParseDuration(parse.GetValue(duration)!, timeUnit, allowZero: false)!.Value,
-                WaitThresholdsHours = [.. (parse.GetValue(waitOver) ?? []).Select(text => ParseDuration(text, timeUnit, allowZero: true)!.Value)],
+                WarmupHours = SimulationCliOptions.ParseDuration(parse.GetValue(warmup)!, timeUnit, allowZero: true)!.Value,
+                DurationHours = SimulationCliOptions.ParseDuration(parse.GetValue(duration)!, timeUnit, allowZero: false)!.Value,
+                WaitThresholdsHours = [.. (parse.GetValue(waitOver) ?? []).Select(text => SimulationCliOptions.ParseDuration(text, timeUnit, allowZero: true)!.Value)],
                 MaxDegreeOfParallelism = parse.GetValue(threads),
             };
-            var result = Run(network, options, context);
+            var result = SimulationRun.Run(network, options, context);
             if (result.ReplicationsFinished == 0)
             {
                 context.Report("netsolve: stopped before any replication finished; nothing to report");
@@ -93,54 +83,4 @@ internal static partial class SimulateCommand
         });
         return command;
     }
-
-    private static SimulationResult Run(Network network, SimulationOptions options, CliContext context)
-    {
-        using var stop = new CancellationTokenSource();
-        ConsoleCancelEventHandler onCancel = (_, args) =>
-        {
-            // Keep the process alive: the run stops at its next check and reports the finished replications.
-            args.Cancel = true;
-            stop.Cancel();
-        };
-        Console.CancelKeyPress += onCancel;
-        try
-        {
-            return context.IsTerminal
-                ? SimulationProgressBar.Run(progress => Simulator.Run(network, options, progress, stop.Token), context.Error)
-                : Simulator.Run(network, options, null, stop.Token);
-        }
-        finally
-        {
-            Console.CancelKeyPress -= onCancel;
-        }
-    }
-
-    private static Option<string> DurationOption(string name, string description, string defaultValue, bool allowZero)
-    {
-        var option = new Option<string>(name) { Description = description, DefaultValueFactory = _ => defaultValue };
-        option.Validators.Add(result =>
-        {
-            string text = result.GetValueOrDefault<string>() ?? string.Empty;
-            if (ParseDuration(text, TimeUnit.Hour, allowZero) is null)
-            {
-                result.AddError($"{name}: '{text}' is not a {(allowZero ? string.Empty : "positive ")}duration (write e.g. 28d, 12h, 90min)");
-            }
-        });
-        return option;
-    }
-
-    /// <summary>Hours, or null when <paramref name="text"/> is not a duration; bare numbers are in <paramref name="timeUnit"/>.</summary>
-    private static double? ParseDuration(string text, TimeUnit timeUnit, bool allowZero)
-    {
-        if (ValueParser.Duration(text, timeUnit, out double hours) is null)
-        {
-            return hours;
-        }
-
-        return allowZero && ZeroDurationRegex().IsMatch(text) ? 0.0 : null;
-    }
-
-    [GeneratedRegex("^0*(?:\\.0*)?(?: ?(?:s|min|h|d))?$", RegexOptions.CultureInvariant)]
-    private static partial Regex ZeroDurationRegex();
 }

@@ -6,7 +6,7 @@ namespace NetSolve.Output;
 /// <summary>Writes a simulation as CSV: one row per unit, each metric followed by its 95% half-width.</summary>
 public static class SimulationCsvWriter
 {
-    /// <summary>Writes the header and one row per unit; times in the network's time unit, invariant culture.</summary>
+    /// <summary>Writes the header and one row per unit (the mean queue by hour of day last, <c>mean_queue_h00</c> to <c>mean_queue_h23</c>); times in the network's time unit, invariant culture.</summary>
     public static void Write(SimulationResult result, TextWriter output)
     {
         ArgumentNullException.ThrowIfNull(result);
@@ -22,6 +22,7 @@ public static class SimulationCsvWriter
 
         header.AddRange(["time_in_unit_p50", "time_in_unit_p90", "time_in_unit_p95", "time_in_unit_p99"]);
         header.AddRange(thresholds.Select(t => "p_wait_over_" + Number(scale.Time(t))));
+        header.AddRange(Enumerable.Range(0, TimeOfDayQueues.HoursOfDay).Select(h => "mean_queue_h" + h.ToString("00", CultureInfo.InvariantCulture)));
         output.Write(string.Join(",", header) + "\n");
         foreach (var unit in result.Units)
         {
@@ -40,6 +41,7 @@ public static class SimulationCsvWriter
 
             cells.AddRange(unit.TimeInUnitPercentiles.Select(p => p.Hours is Estimate hours ? Number(hours.Mean * scale.TimeFactor) : string.Empty));
             cells.AddRange(unit.WaitOver.Select(over => Number(over.Probability.Mean)));
+            cells.AddRange(unit.MeanQueueByHour.Select(hour => hour is Estimate estimate ? Number(estimate.Mean) : string.Empty));
             output.Write(string.Join(",", cells) + "\n");
         }
     }

@@ -89,20 +89,8 @@ public static class SimulationJsonWriter
         }
 
         json.WriteEndArray();
-        json.WriteStartArray("mean_queue_by_hour");
-        foreach (var hour in unit.MeanQueueByHour)
-        {
-            if (hour is Estimate estimate)
-            {
-                json.WriteNumberValue(estimate.Mean);
-            }
-            else
-            {
-                json.WriteNullValue();
-            }
-        }
-
-        json.WriteEndArray();
+        HourlyArray(json, "mean_queue_by_hour", unit.MeanQueueByHour, estimate => estimate.Mean);
+        HourlyArray(json, "mean_queue_by_hour_ci", unit.MeanQueueByHour, estimate => estimate.HalfWidth);
         if (formula is not null)
         {
             WriteComparison(json, Comparison.ForUnit(unit, formula), scale);
@@ -169,6 +157,25 @@ public static class SimulationJsonWriter
         }
 
         json.WriteEndObject();
+    }
+
+    /// <summary>An array of one number per hour of day; null for an hour not measured (or without a half-width).</summary>
+    private static void HourlyArray(Utf8JsonWriter json, string name, ImmutableArray<Estimate?> byHour, Func<Estimate, double?> value)
+    {
+        json.WriteStartArray(name);
+        foreach (var hour in byHour)
+        {
+            if (hour is Estimate estimate && value(estimate) is double number)
+            {
+                json.WriteNumberValue(number);
+            }
+            else
+            {
+                json.WriteNullValue();
+            }
+        }
+
+        json.WriteEndArray();
     }
 
     /// <summary>Writes <c>name</c> and <c>name_ci</c>, scaled; both null when there is no estimate.</summary>

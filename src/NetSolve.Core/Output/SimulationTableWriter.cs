@@ -95,16 +95,39 @@ public static class SimulationTableWriter
         table.Write(output);
     }
 
+    /// <summary>
+    /// One row per hour of day and one column per unit, for the units with the highest peak queues; only when arrivals
+    /// follow a profile (without one every hour has the same expected queue; JSON and CSV still carry the numbers).
+    /// </summary>
     private static void WriteQueueByHour(SimulationResult result, TextWriter output)
     {
-        output.Write("\nmean queue by hour of day (hour 0 is 00:00-01:00)\n");
-        var table = new TextTable(["unit", .. Enumerable.Range(0, 24).Select(h => ">" + h.ToString("00", CultureInfo.InvariantCulture))]);
-        foreach (var unit in result.Units)
+        if (!TimeOfDayQueues.HasArrivalProfile(result.Network))
         {
-            table.Add([unit.Unit.Id, .. unit.MeanQueueByHour.Select(hour => Numbers.Compact(hour?.Mean))]);
+            return;
         }
 
+        var shown = TimeOfDayQueues.Shown(result);
+        output.Write("\nmean queue by hour of day (patients waiting; hour 00 is 00:00-01:00)\n");
+        if (shown.Count == 0)
+        {
+            output.Write("no patient waited at any unit\n");
+            return;
+        }
+
+        var table = new TextTable(["hour", .. shown.Select(unit => ">" + unit.Unit.Id)]);
+        for (int hour = 0; hour < TimeOfDayQueues.HoursOfDay; hour++)
+        {
+            table.Add([hour.ToString("00", CultureInfo.InvariantCulture), .. shown.Select(unit => Numbers.Compact(unit.MeanQueueByHour[hour]?.Mean))]);
+        }
+
+        table.Add(["peak", .. shown.Select(unit => TimeOfDayQueues.PeakHour(unit) is int peak ? peak.ToString("00", CultureInfo.InvariantCulture) + ":00" : Numbers.Missing)]);
         table.Write(output);
+        int hidden = result.Units.Length - shown.Count;
+        if (hidden > 0)
+        {
+            output.Write(string.Create(CultureInfo.InvariantCulture,
+                $"{hidden} other unit(s) not shown: their queues peak lower or stay at 0 (every unit is in --format json and csv)\n"));
+        }
     }
 
     private static void WriteTotals(SimulationResult result, TextWriter output, TimeScale scale, string per, string time)

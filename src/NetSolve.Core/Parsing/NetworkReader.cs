@@ -10,25 +10,9 @@ public static class NetworkReader
     public static ReadResult ReadFile(string path)
     {
         ArgumentNullException.ThrowIfNull(path);
-        var location = new SourceLocation(path, 0, 0);
-        if (Directory.Exists(path))
+        if (InputFile.TryRead(path, "a network file", out var problem) is not string text)
         {
-            return Failed(location, DiagnosticCodes.Unreadable, "is a directory, not a network file");
-        }
-
-        if (!File.Exists(path))
-        {
-            return Failed(location, DiagnosticCodes.Unreadable, "no such file");
-        }
-
-        string text;
-        try
-        {
-            text = File.ReadAllText(path);
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return Failed(location, DiagnosticCodes.Unreadable, "cannot be read: " + exception.Message);
+            return new ReadResult(null, [problem!]);
         }
 
         return ReadText(text, path);

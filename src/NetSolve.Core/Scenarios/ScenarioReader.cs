@@ -16,25 +16,9 @@ public static class ScenarioReader
     public static ScenarioReadResult ReadFile(string path)
     {
         ArgumentNullException.ThrowIfNull(path);
-        var location = new SourceLocation(path, 0, 0);
-        if (Directory.Exists(path))
+        if (InputFile.TryRead(path, "a scenario or network file", out var problem) is not string text)
         {
-            return Failed(location, DiagnosticCodes.Unreadable, "is a directory, not a scenario or network file");
-        }
-
-        if (!File.Exists(path))
-        {
-            return Failed(location, DiagnosticCodes.Unreadable, "no such file");
-        }
-
-        string text;
-        try
-        {
-            text = File.ReadAllText(path);
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return Failed(location, DiagnosticCodes.Unreadable, "cannot be read: " + exception.Message);
+            return Failed(problem!.Location, problem.Code, problem.Message);
         }
 
         return ReadText(text, path, basePath => NetworkReader.ReadFile(ResolveBase(path, basePath)));

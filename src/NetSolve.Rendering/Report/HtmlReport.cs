@@ -4,6 +4,7 @@ using NetSolve.Model;
 using NetSolve.Output;
 using NetSolve.Rendering.Map;
 using NetSolve.Rendering.Text;
+using NetSolve.Simulation;
 using NetSolve.Solving;
 using static System.Net.WebUtility;
 
@@ -12,7 +13,8 @@ namespace NetSolve.Rendering.Report;
 /// <summary>
 /// The leadership report: one self-contained HTML page (inline SVG and CSS, no scripts, fonts or requests) with the
 /// finding, the bottleneck map, the unit table, mean wait against demand growth, an optional scenario comparison,
-/// the model's assumptions and the planning caution.
+/// the model's assumptions and the planning caution; with a simulation, also the mean queue by hour of day and
+/// the formula against the simulation per unit.
 /// </summary>
 /// <remarks>
 /// A Content-Security-Policy of <c>default-src 'none'</c> makes browsers refuse any request the page might
@@ -38,9 +40,20 @@ public static class HtmlReport
     private const double MaxMapEnlargement = 1.25;
 
     /// <summary>The report for <paramref name="baseline"/>, compared with <paramref name="scenarios"/> when any are given.</summary>
-    public static string Write(NetworkSolution baseline, IReadOnlyList<ReportScenario>? scenarios = null)
+    /// <param name="baseline">The solved network the report is about.</param>
+    /// <param name="scenarios">Alternatives compared with it; none when null.</param>
+    /// <param name="simulation">
+    /// A simulation of <paramref name="baseline"/>'s network (same units in the same order): adds the "Time of day" and
+    /// "Formula against simulation" sections. Without it the report has neither, byte for byte as before.
+    /// </param>
+    public static string Write(NetworkSolution baseline, IReadOnlyList<ReportScenario>? scenarios = null, SimulationResult? simulation = null)
     {
         ArgumentNullException.ThrowIfNull(baseline);
+        if (simulation is not null && !simulation.Units.Select(u => u.Unit.Id).SequenceEqual(baseline.Units.Select(u => u.Unit.Id), StringComparer.Ordinal))
+        {
+            throw new ArgumentException("The simulation must be of the baseline's network, with every unit, in the same order.", nameof(simulation));
+        }
+
         scenarios ??= [];
         var network = baseline.Network;
         var timeUnit = network.TimeUnit;
@@ -77,6 +90,12 @@ public static class HtmlReport
         if (scenarios.Count > 0)
         {
             ScenarioTable.Append(html, baseline, scenarios);
+        }
+
+        if (simulation is not null)
+        {
+            TimeOfDaySection.Append(html, simulation);
+            SimulationComparisonTable.Append(html, baseline, simulation);
         }
 
         html.Append("<section id=\"assumptions\">\n<h2>Assumptions and caution</h2>\n<p>The numbers come from a Jackson network: ")
@@ -118,7 +137,7 @@ public static class HtmlReport
         html.Append("Units with unlimited servers never wait and are not drawn.</figcaption>\n</figure>\n</section>\n");
     }
 
-    private static string StripDeclaration(string svg)
+    internal static string StripDeclaration(string svg)
     {
         int start = svg.IndexOf("<svg", StringComparison.Ordinal);
         return start > 0 ? svg[start..] : svg;

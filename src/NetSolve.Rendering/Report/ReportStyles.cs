@@ -21,6 +21,7 @@ internal static class ReportStyles
         .map-frame { margin: 0 auto; }
         .chart-frame { max-width: 54rem; margin: 0 auto; }
         td.status { text-align: left; white-space: nowrap; font-weight: bold; }
+        .note { color: #3A3A3A; font-size: 0.85rem; }
         .caution { border: 2px solid #22313F; padding: 0.6rem 0.9rem; }
         footer { margin-top: 2rem; color: #3A3A3A; font-size: 0.85rem; }
         @page { margin: 15mm; }

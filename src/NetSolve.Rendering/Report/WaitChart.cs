@@ -18,11 +18,6 @@ public static partial class WaitChart
     /// <summary>Chart height in SVG units.</summary>
     public const int Height = 400;
 
-    private static readonly LinePattern[] Patterns = [LinePattern.Solid, LinePattern.Dashed, LinePattern.Dotted, LinePattern.DenselyDashed];
-
-    private static readonly MarkerShape[] Markers =
-        [MarkerShape.FilledCircle, MarkerShape.FilledSquare, MarkerShape.FilledTriangleUp, MarkerShape.FilledDiamond, MarkerShape.OpenCircle, MarkerShape.OpenSquare, MarkerShape.OpenTriangleUp, MarkerShape.Cross];
-
     /// <summary>The curves chosen for the chart, longest final wait first.</summary>
     public static IReadOnlyList<WaitCurve> Shown(WaitGrowth growth)
     {
@@ -48,11 +43,7 @@ public static partial class WaitChart
             double[] waits = shown[i].WaitHours.Select(hours => TimeConstants.FromHours(hours, timeUnit)).ToArray();
             var series = plot.Add.Scatter(factors, waits);
             series.LegendText = shown[i].Label;
-            series.Color = Color.FromHex(ChartSeriesStyles.Colours[i]);
-            series.LineWidth = 2;
-            series.LinePattern = Patterns[i % Patterns.Length];
-            series.MarkerShape = Markers[i];
-            series.MarkerSize = 5;
+            ChartSeriesStyles.Apply(series, i);
         }
 
         var line = plot.Add.VerticalLine(saturation);
@@ -73,7 +64,7 @@ public static partial class WaitChart
             LabelFormatter = value => value.ToString("0.###", CultureInfo.InvariantCulture),
         };
         plot.ShowLegend(Alignment.UpperLeft);
-        return WithViewBox(RenumberIds(plot.GetSvgXml(Width, Height)));
+        return WithViewBox(RenumberIds(plot.GetSvgXml(Width, Height), "wait-chart-clip-"));
     }
 
     /// <summary>Adds a viewBox when the SVG has none, so the page can scale the chart to its column.</summary>
@@ -93,14 +84,14 @@ public static partial class WaitChart
     /// ScottPlot numbers clip paths from a process-wide counter; renumbering them from 1 with a chart prefix makes the
     /// output depend on the data alone and keeps the ids apart from anything else on the page.
     /// </summary>
-    internal static string RenumberIds(string svg)
+    internal static string RenumberIds(string svg, string prefix)
     {
         var names = new Dictionary<string, string>(StringComparer.Ordinal);
         return ClipIdRegex().Replace(svg, match =>
         {
             if (!names.TryGetValue(match.Value, out string? name))
             {
-                name = "wait-chart-clip-" + (names.Count + 1).ToString(CultureInfo.InvariantCulture);
+                name = prefix + (names.Count + 1).ToString(CultureInfo.InvariantCulture);
                 names[match.Value] = name;
             }
 

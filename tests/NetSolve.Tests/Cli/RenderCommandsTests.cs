@@ -145,4 +145,72 @@ public sealed class RenderCommandsTests : IDisposable
         Assert.True(tall.Height > tall.Width);
         Assert.True(wide.Width > wide.Height);
     }
+
+    [Fact]
+    public void Report_with_simulate_adds_the_time_of_day_and_comparison_sections_and_without_it_does_not()
+    {
+        string plain = Path.Combine(_folder, "plain.html");
+        string simulated = Path.Combine(_folder, "simulated.html");
+        string example = Network("larkspur-simulation");
+
+        var without = Run("report", example, "-o", plain);
+        var with = Run("report", example, "-o", simulated, "--simulate", "--seed", "3", "--replications", "2", "--warmup", "7d", "--duration", "60d");
+
+        Assert.Equal(0, without.Code);
+        Assert.Equal(0, with.Code);
+        Assert.Equal($"report written to {simulated}\n", with.Out);
+        string plainHtml = File.ReadAllText(plain);
+        string simulatedHtml = File.ReadAllText(simulated);
+        Assert.DoesNotContain("id=\"time-of-day\"", plainHtml, StringComparison.Ordinal);
+        Assert.DoesNotContain("id=\"formula-vs-simulation\"", plainHtml, StringComparison.Ordinal);
+        Assert.Contains("<figure id=\"time-of-day-figure\">", simulatedHtml, StringComparison.Ordinal);
+        Assert.Contains("<table id=\"time-of-day-table\">", simulatedHtml, StringComparison.Ordinal);
+        Assert.Contains("<table id=\"comparison-table\">", simulatedHtml, StringComparison.Ordinal);
+        Assert.Contains("Simulated: 2 of 2 replications of 1440 hours each, after a warm-up of 168.0 hours, seed 3.", simulatedHtml, StringComparison.Ordinal);
+
+        // Everything before the new sections is the plain report, unchanged.
+        int cut = simulatedHtml.IndexOf("<section id=\"time-of-day\">", StringComparison.Ordinal);
+        Assert.StartsWith(simulatedHtml[..cut], plainHtml, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Report_with_simulate_gives_the_same_bytes_for_the_same_seed()
+    {
+        string first = Path.Combine(_folder, "first.html");
+        string second = Path.Combine(_folder, "second.html");
+        string[] common = ["report", Network("larkspur-simulation"), "--simulate", "--seed", "9", "-r", "2", "--warmup", "1d", "--duration", "14d"];
+
+        Assert.Equal(0, Run([.. common, "-o", first]).Code);
+        Assert.Equal(0, Run([.. common, "-o", second]).Code);
+        Assert.Equal(File.ReadAllText(first), File.ReadAllText(second));
+    }
+
+    [Theory]
+    [InlineData("--seed", "4")]
+    [InlineData("--replications", "3")]
+    [InlineData("--duration", "30d")]
+    [InlineData("--warmup", "2d")]
+    public void A_simulation_option_without_simulate_is_a_usage_error(string option, string value)
+    {
+        var (code, output, error) = Run("report", Network("harbourside"), "-o", Path.Combine(_folder, "report.html"), option, value);
+
+        // Contract: exit 2 for wrong usage.
+        Assert.Equal(2, code);
+        Assert.Empty(output);
+        Assert.StartsWith($"netsolve: {option} applies only with --simulate\n", error, StringComparison.Ordinal);
+        Assert.Empty(Directory.GetFiles(_folder));
+    }
+
+    [Fact]
+    public void A_report_simulation_shorter_than_a_day_is_a_usage_error_and_writes_nothing()
+    {
+        var (code, output, error) = Run("report", Network("harbourside"), "-o", Path.Combine(_folder, "report.html"), "--simulate", "--duration", "12h");
+
+        Assert.Equal(2, code);
+        Assert.Empty(output);
+        // The file's own warnings (harbourside's service_cv) come first; the error is one line, the last.
+        Assert.EndsWith("\nnetsolve: --duration '12h' is shorter than a day; the time-of-day section needs every hour measured\n", error, StringComparison.Ordinal);
+        Assert.Single(error.Split('\n'), line => line.StartsWith("netsolve:", StringComparison.Ordinal));
+        Assert.Empty(Directory.GetFiles(_folder));
+    }
 }

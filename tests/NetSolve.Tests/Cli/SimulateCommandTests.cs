@@ -92,4 +92,46 @@ public sealed class SimulateCommandTests
         Assert.Equal(0, code);
         Assert.DoesNotContain("ignored by the formulas", error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void With_an_arrival_profile_the_table_lists_24_hours_for_the_units_with_the_highest_peaks()
+    {
+        var (code, output, _) = Run("simulate", Example, "--replications", "2", "--warmup", "7d", "--duration", "28d", "--seed", "2");
+
+        Assert.Equal(0, code);
+        var lines = output.Split('\n');
+        int title = Array.IndexOf(lines, "mean queue by hour of day (patients waiting; hour 00 is 00:00-01:00)");
+        Assert.True(title > 0, output);
+        string[] header = lines[title + 1].Split(' ', StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal("hour", header[0]);
+
+        // Source: the larkspur file: the ward's capacity equals its beds, so nobody waits there; the others have queues.
+        Assert.DoesNotContain("ward", header);
+        Assert.Equal(["00", "01", "02", "03", "04", "05", "06", "07", "08", "09", "10", "11", "12", "13", "14", "15", "16", "17", "18", "19", "20", "21", "22", "23", "peak"],
+            lines[(title + 3)..(title + 28)].Select(line => line.Split(' ')[0]));
+        Assert.Equal("1 other unit(s) not shown: their queues peak lower or stay at 0 (every unit is in --format json and csv)", lines[title + 28]);
+    }
+
+    [Fact]
+    public void Without_an_arrival_profile_the_table_has_no_hourly_section_but_json_and_csv_carry_it()
+    {
+        string steady = Path.Combine("networks", "harbourside.yaml");
+        string[] common = ["simulate", steady, "--replications", "2", "--warmup", "2d", "--duration", "7d"];
+
+        var table = Run(common);
+        var json = Run([.. common, "--format", "json"]);
+        var csv = Run([.. common, "--format", "csv"]);
+
+        Assert.Equal(0, table.Code);
+        Assert.DoesNotContain("mean queue by hour", table.Out, StringComparison.Ordinal);
+        using var document = JsonDocument.Parse(json.Out);
+        var unit = document.RootElement.GetProperty("units")[0];
+        Assert.Equal(24, unit.GetProperty("mean_queue_by_hour").GetArrayLength());
+        Assert.Equal(24, unit.GetProperty("mean_queue_by_hour_ci").GetArrayLength());
+        string[] header = csv.Out.Split('\n')[0].Split(',');
+        Assert.Equal(Enumerable.Range(0, 24).Select(h => $"mean_queue_h{h:00}"), header[^24..]);
+        string[] firstRow = csv.Out.Split('\n')[1].Split(',');
+        Assert.Equal(header.Length, firstRow.Length);
+        Assert.Equal(unit.GetProperty("mean_queue_by_hour")[23].GetDouble(), double.Parse(firstRow[^1], System.Globalization.CultureInfo.InvariantCulture));
+    }
 }

@@ -1,5 +1,6 @@
 using Microsoft.Playwright;
 using NetSolve.Rendering.Report;
+using NetSolve.Simulation;
 using NetSolve.Solving;
 
 namespace NetSolve.Tests.Rendering;
@@ -19,7 +20,7 @@ public class ReportInBrowserTests
     ];
 
     [Fact]
-    public async Task The_report_shows_map_table_and_chart_and_makes_no_network_request()
+    public async Task The_report_shows_map_table_and_charts_and_makes_no_network_request()
     {
         Assert.True(File.Exists(Chromium), $"{Chromium} is missing: .ci/run installs Debian's chromium package");
         var baseline = RenderingFixtures.Example("kestrel-general");
@@ -28,6 +29,15 @@ public class ReportInBrowserTests
         string page = Path.Combine(RenderingFixtures.OutputFolder(), "browser-report.html");
         File.WriteAllText(page, html);
         string pageUrl = new Uri(page).AbsoluteUri;
+
+        // The same page with a short simulation of the larkspur example (it has an arrival profile): the time-of-day
+        // chart and table and the formula-against-simulation table are added.
+        var larkspur = RenderingFixtures.Example("larkspur-simulation");
+        var simulation = Simulator.Run(larkspur, new SimulationOptions { Seed = 5, Replications = 2, WarmupHours = 7 * 24, DurationHours = 60 * 24 }, cancellation: TestContext.Current.CancellationToken);
+        string simulatedPage = Path.Combine(RenderingFixtures.OutputFolder(), "browser-simulated-report.html");
+        File.WriteAllText(simulatedPage, HtmlReport.Write(NetworkSolver.Solve(larkspur), [], simulation));
+        string simulatedUrl = new Uri(simulatedPage).AbsoluteUri;
+        string[] pages = [pageUrl, simulatedUrl];
 
         string profile = Directory.CreateTempSubdirectory("netsolve-chromium-").FullName;
         try
@@ -50,7 +60,7 @@ public class ReportInBrowserTests
                     requests.Add(route.Request.Url);
                 }
 
-                await (route.Request.Url == pageUrl ? route.ContinueAsync() : route.AbortAsync());
+                await (pages.Contains(route.Request.Url) ? route.ContinueAsync() : route.AbortAsync());
             });
             var tab = context.Pages.Count > 0 ? context.Pages[0] : await context.NewPageAsync();
             tab.Request += (_, request) =>
@@ -77,22 +87,47 @@ public class ReportInBrowserTests
                 FullPage = true,
             });
 
-            // Printed on A4 (and so on Letter, which is wider), nothing runs off the side of the page.
-            await tab.SetViewportSizeAsync(A4PrintableWidthPx, 1000);
-            await tab.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
-            int scrollWidth = await tab.EvaluateAsync<int>("document.documentElement.scrollWidth");
-            string wide = await tab.EvaluateAsync<string>(
-                "Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > " + A4PrintableWidthPx + ").slice(0, 5).map(e => e.tagName + '#' + e.id + '.' + e.className + ' ' + Math.round(e.getBoundingClientRect().right)).join('; ')");
-            Assert.True(scrollWidth <= A4PrintableWidthPx, $"printed page is {scrollWidth} px wide: {wide}");
+            await AssertFitsA4Print(tab);
+
+            var simulated = await context.NewPageAsync();
+            simulated.Request += (_, request) =>
+            {
+                lock (requests)
+                {
+                    requests.Add(request.Url);
+                }
+            };
+            await simulated.GotoAsync(simulatedUrl, new PageGotoOptions { WaitUntil = WaitUntilState.Load });
+            await simulated.Locator("#time-of-day-figure svg").That(minWidth: 300);
+            await simulated.Locator("#time-of-day-table").That(minWidth: 300);
+            await simulated.Locator("#comparison-table").That(minWidth: 300);
+            Assert.Equal(24, await simulated.Locator("#time-of-day-table tbody tr").CountAsync());
+            Assert.Equal(larkspur.Units.Length, await simulated.Locator("#comparison-table tbody tr").CountAsync());
+            await simulated.Locator("#time-of-day").ScreenshotAsync(new LocatorScreenshotOptions
+            {
+                Path = Path.Combine(RenderingFixtures.OutputFolder(), "report-time-of-day-chromium.png"),
+            });
+            await AssertFitsA4Print(simulated);
 
             lock (requests)
             {
-                Assert.All(requests, url => Assert.Equal(pageUrl, url));
+                Assert.All(requests, url => Assert.Contains(url, pages));
             }
         }
         finally
         {
             Directory.Delete(profile, recursive: true);
         }
+    }
+
+    /// <summary>Printed on A4 (and so on Letter, which is wider), nothing runs off the side of the page.</summary>
+    private static async Task AssertFitsA4Print(IPage tab)
+    {
+        await tab.SetViewportSizeAsync(A4PrintableWidthPx, 1000);
+        await tab.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
+        int scrollWidth = await tab.EvaluateAsync<int>("document.documentElement.scrollWidth");
+        string wide = await tab.EvaluateAsync<string>(
+            "Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > " + A4PrintableWidthPx + ").slice(0, 5).map(e => e.tagName + '#' + e.id + '.' + e.className + ' ' + Math.round(e.getBoundingClientRect().right)).join('; ')");
+        Assert.True(scrollWidth <= A4PrintableWidthPx, $"printed page is {scrollWidth} px wide: {wide}");
     }
 }

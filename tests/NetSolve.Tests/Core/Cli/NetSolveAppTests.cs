@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Runtime.CompilerServices;
 using System.Text.Json;
 using NetSolve.Cli;
 
@@ -298,9 +297,10 @@ public class NetSolveAppTests
         }
     }
 
-    private static void AssertGolden(string name, string actual, [CallerFilePath] string sourceFile = "")
+    private static void AssertGolden(string name, string actual)
     {
-        string path = Path.Combine(Path.GetDirectoryName(sourceFile)!, name);
+        // Found from the test's output folder, not the compiler's source path: CI builds map source paths to "/_/".
+        string path = Path.Combine(RepositoryRoot(), "tests", "NetSolve.Tests", "Core", "Cli", name);
         if (Environment.GetEnvironmentVariable("NETSOLVE_UPDATE_GOLDEN") == "1")
         {
             File.WriteAllText(path, actual);
@@ -308,5 +308,16 @@ public class NetSolveAppTests
 
         Assert.True(File.Exists(path), $"no golden file {path}; run with NETSOLVE_UPDATE_GOLDEN=1 and review it");
         Assert.Equal(File.ReadAllText(path), actual);
+    }
+
+    private static string RepositoryRoot()
+    {
+        var directory = new DirectoryInfo(AppContext.BaseDirectory);
+        while (directory is not null && !File.Exists(Path.Combine(directory.FullName, "NetSolve.sln")))
+        {
+            directory = directory.Parent;
+        }
+
+        return directory?.FullName ?? throw new InvalidOperationException("NetSolve.sln not found above the test output folder");
     }
 }
