@@ -99,8 +99,9 @@ internal sealed class EventQueue
             // Children past the last event are +∞ sentinels (the arrays keep Arity spare slots), so all four compare.
             int left = child + (Unsafe.Add(ref time, child + 1) < Unsafe.Add(ref time, child) ? 1 : 0);
             int right = child + 2 + (Unsafe.Add(ref time, child + 3) < Unsafe.Add(ref time, child + 2) ? 1 : 0);
-            int pickRight = Unsafe.Add(ref time, right) < Unsafe.Add(ref time, left) ? -1 : 0;
-            int smallest = left + ((right - left) & pickRight);
+            // Written as 0 or 1, then negated into a mask: "? -1 : 0" compiled to a branch, "? 1 : 0" to a setcc.
+            int pickRight = Unsafe.Add(ref time, right) < Unsafe.Add(ref time, left) ? 1 : 0;
+            int smallest = left + ((right - left) & -pickRight);
             Unsafe.Add(ref time, hole) = Unsafe.Add(ref time, smallest);
             Unsafe.Add(ref payload, hole) = Unsafe.Add(ref payload, smallest);
             hole = smallest;
