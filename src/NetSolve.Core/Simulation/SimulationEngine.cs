@@ -8,6 +8,11 @@ internal sealed partial class SimulationEngine
 {
     private const int CancellationCheckMask = (1 << 16) - 1;
 
+    // Events per call of RunChunk: small enough that a replication makes the hundreds of calls after which the
+    // runtime compiles a method fully optimised, and a power of two no larger than the cancellation check interval
+    // so that chunk ends fall on every check.
+    private const int ChunkEvents = 1 << 11;
+
     private readonly CompiledNetwork _network;
     private readonly MetricLayout _layout;
     private readonly double[] _waitThresholdsHours;
@@ -35,6 +40,7 @@ internal sealed partial class SimulationEngine
     private readonly int[] _groupHistogram;
     private long _entered;
     private long _networkTurnedAway;
+    private double _lastEventTime;
 
     public SimulationEngine(CompiledNetwork network, MetricLayout layout, double[] waitThresholdsHours, double warmupHours, double durationHours, ulong seed, int replication)
     {
@@ -87,20 +93,20 @@ internal sealed partial class SimulationEngine
             }
         }
 
+        // The loop runs in chunks of a method of its own. Run is entered once per replication, so the runtime would
+        // only ever execute its loop as on-stack-replacement code; RunChunk is called hundreds of times per
+        // replication and so is promoted to fully optimised (tier-1) code like any other hot method.
         long events = 0;
-        while (_events.EarliestTime <= _end)
+        while (true)
         {
-            var next = _events.Pop();
-            events++;
-            if (next.IsArrival)
+            int done = RunChunk(ChunkEvents);
+            events += done;
+            if (done < ChunkEvents)
             {
-                OnArrivalCandidate(next.Time, next.Unit);
-            }
-            else
-            {
-                OnServiceEnd(next.Time, next.Unit, next.Patient);
+                break;
             }
 
+            // Chunks divide the check interval, so cancellation and progress come every 65,536 events as before.
             if ((events & CancellationCheckMask) == 0)
             {
                 if (cancellation.IsCancellationRequested)
@@ -109,7 +115,7 @@ internal sealed partial class SimulationEngine
                     return false;
                 }
 
-                progress?.Invoke(next.Time / _end);
+                progress?.Invoke(_lastEventTime / _end);
             }
         }
 
@@ -120,6 +126,35 @@ internal sealed partial class SimulationEngine
         }
 
         return true;
+    }
+
+    /// <summary>
+    /// Processes events up to the end of the replication or <paramref name="maxEvents"/> of them, whichever comes
+    /// first, and returns how many it processed.
+    /// </summary>
+    private int RunChunk(int maxEvents)
+    {
+        var events = _events;
+        double end = _end;
+        int done = 0;
+        double time = _lastEventTime;
+        while (done < maxEvents && events.EarliestTime <= end)
+        {
+            var next = events.Pop();
+            done++;
+            time = next.Time;
+            if (next.IsArrival)
+            {
+                OnArrivalCandidate(next.Time, next.Unit);
+            }
+            else
+            {
+                OnServiceEnd(next.Time, next.Unit, next.Patient);
+            }
+        }
+
+        _lastEventTime = time;
+        return done;
     }
 
     private void OnArrivalCandidate(double now, int group)
@@ -345,17 +380,32 @@ internal sealed partial class SimulationEngine
         }
 
         state.QueueArea += queued * span;
-        int row = unit * 24;
 
-        // Times are not negative, so truncation is the floor; most spans end within the hour they start in.
-        long hour = (long)from;
-        while (now > hour + 1.0)
+        // The hour the span starts in is usually the one the unit's previous update ended in, so it is cached in
+        // the unit: the floor and the modulo 24 are needed only when the span starts in a later hour. The additions
+        // are the same, in the same order, as splitting from scratch, so results do not change by a bit. HourEnd
+        // starts at 0, below any span's start, so the first update computes it. Times are not negative, so
+        // truncation is the floor.
+        double hourEnd = state.HourEnd;
+        int slot = state.HourSlot;
+        if (from >= hourEnd)
         {
-            _queueAreaByHour[row + (int)(hour % 24)] += queued * (hour + 1.0 - from);
-            hour++;
-            from = hour;
+            long hour = (long)from;
+            hourEnd = hour + 1.0;
+            slot = (unit * 24) + (int)(hour % 24);
         }
 
-        _queueAreaByHour[row + (int)(hour % 24)] += queued * (now - from);
+        // Most spans end within the hour they start in.
+        while (now > hourEnd)
+        {
+            _queueAreaByHour[slot] += queued * (hourEnd - from);
+            from = hourEnd;
+            hourEnd += 1.0;
+            slot = (slot + 1) % 24 == 0 ? slot - 23 : slot + 1;
+        }
+
+        _queueAreaByHour[slot] += queued * (now - from);
+        state.HourEnd = hourEnd;
+        state.HourSlot = slot;
     }
 }
