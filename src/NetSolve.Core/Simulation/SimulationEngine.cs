@@ -8,11 +8,6 @@ internal sealed partial class SimulationEngine
 {
     private const int CancellationCheckMask = (1 << 16) - 1;
 
-    // Events per call of RunChunk: small enough that a replication makes the hundreds of calls after which the
-    // runtime compiles a method fully optimised, and a power of two no larger than the cancellation check interval
-    // so that chunk ends fall on every check.
-    private const int ChunkEvents = 1 << 11;
-
     private readonly CompiledNetwork _network;
     private readonly MetricLayout _layout;
     private readonly double[] _waitThresholdsHours;
@@ -40,7 +35,6 @@ internal sealed partial class SimulationEngine
     private readonly int[] _groupHistogram;
     private long _entered;
     private long _networkTurnedAway;
-    private double _lastEventTime;
 
     public SimulationEngine(CompiledNetwork network, MetricLayout layout, double[] waitThresholdsHours, double warmupHours, double durationHours, ulong seed, int replication)
     {
@@ -93,20 +87,20 @@ internal sealed partial class SimulationEngine
             }
         }
 
-        // The loop runs in chunks of a method of its own. Run is entered once per replication, so the runtime would
-        // only ever execute its loop as on-stack-replacement code; RunChunk is called hundreds of times per
-        // replication and so is promoted to fully optimised (tier-1) code like any other hot method.
         long events = 0;
-        while (true)
+        while (_events.EarliestTime <= _end)
         {
-            int done = RunChunk(ChunkEvents);
-            events += done;
-            if (done < ChunkEvents)
+            var next = _events.Pop();
+            events++;
+            if (next.IsArrival)
             {
-                break;
+                OnArrivalCandidate(next.Time, next.Unit);
+            }
+            else
+            {
+                OnServiceEnd(next.Time, next.Unit, next.Patient);
             }
 
-            // Chunks divide the check interval, so cancellation and progress come every 65,536 events as before.
             if ((events & CancellationCheckMask) == 0)
             {
                 if (cancellation.IsCancellationRequested)
@@ -115,7 +109,7 @@ internal sealed partial class SimulationEngine
                     return false;
                 }
 
-                progress?.Invoke(_lastEventTime / _end);
+                progress?.Invoke(next.Time / _end);
             }
         }
 
@@ -126,35 +120,6 @@ internal sealed partial class SimulationEngine
         }
 
         return true;
-    }
-
-    /// <summary>
-    /// Processes events up to the end of the replication or <paramref name="maxEvents"/> of them, whichever comes
-    /// first, and returns how many it processed.
-    /// </summary>
-    private int RunChunk(int maxEvents)
-    {
-        var events = _events;
-        double end = _end;
-        int done = 0;
-        double time = _lastEventTime;
-        while (done < maxEvents && events.EarliestTime <= end)
-        {
-            var next = events.Pop();
-            done++;
-            time = next.Time;
-            if (next.IsArrival)
-            {
-                OnArrivalCandidate(next.Time, next.Unit);
-            }
-            else
-            {
-                OnServiceEnd(next.Time, next.Unit, next.Patient);
-            }
-        }
-
-        _lastEventTime = time;
-        return done;
     }
 
     private void OnArrivalCandidate(double now, int group)
