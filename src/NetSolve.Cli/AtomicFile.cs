@@ -7,7 +7,13 @@ internal static class AtomicFile
     public static void Write(string path, Action<Stream> write)
     {
         string full = Path.GetFullPath(path);
-        string temporary = Path.Combine(Path.GetDirectoryName(full) ?? ".", "." + Path.GetFileName(full) + ".tmp");
+        string folder = Path.GetDirectoryName(full) ?? ".";
+        if (!Directory.Exists(folder))
+        {
+            throw new InputException($"{path}: cannot write: the folder {folder} does not exist");
+        }
+
+        string temporary = Path.Combine(folder, "." + Path.GetFileName(full) + ".tmp");
         try
         {
             using (var stream = File.Create(temporary))

@@ -59,7 +59,8 @@ internal static class NetworkLoader
                     context.Report(warning.ToString());
                 }
 
-                return changed;
+                // The name travels into every table, JSON document, map and report: say that these are what-if numbers.
+                return changed with { Name = $"{changed.Name} (what-if: {string.Join(", ", overrides)})" };
             }
         }
 

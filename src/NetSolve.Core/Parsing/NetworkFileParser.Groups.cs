@@ -44,7 +44,7 @@ internal sealed partial class NetworkFileParser
             return null;
         }
 
-        int errorsBefore = diagnostics.Count(d => d.IsError);
+        int errorsBefore = Diagnostics.Count(d => d.IsError);
         var fields = Fields(mapping, GroupKeys, null);
         string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, null, $"groups.{id}.label") is YamlScalar labelScalar
             ? labelScalar.Value
@@ -70,7 +70,7 @@ internal sealed partial class NetworkFileParser
 
         var profile = fields.TryGetValue("arrival_profile", out var profileNode) ? ParseProfile(profileNode, id) : null;
         var services = fields.TryGetValue("services", out var servicesNode) ? ParseGroupServices(servicesNode, id, timeUnit, known) : [];
-        if (diagnostics.Count(d => d.IsError) > errorsBefore)
+        if (Diagnostics.Count(d => d.IsError) > errorsBefore)
         {
             return null;
         }

@@ -5,7 +5,7 @@ using NetSolve.Model;
 namespace NetSolve.Parsing;
 
 /// <summary>Turns the located YAML of a network file into a <see cref="Network"/>, collecting every problem.</summary>
-internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics)
+internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics) : NodeParser(diagnostics)
 {
     /// <summary>Largest finite server count; more is better written <c>unlimited</c> (Erlang C costs O(c)).</summary>
     public const int MaxServers = 1_000_000;
@@ -49,7 +49,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         var profile = fields.TryGetValue("arrival_profile", out var profileNode) ? ParseProfile(profileNode, null) : null;
         var groups = fields.TryGetValue("groups", out var groupsNode) ? ParseGroups(groupsNode, timeUnit, known) : [];
 
-        if (diagnostics.Any(d => d.IsError))
+        if (Diagnostics.Any(d => d.IsError))
         {
             return null;
         }
@@ -201,7 +201,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             }
         }
 
-        if (!diagnostics.Any(d => d.IsError) && !arrivals.Any(arrival => arrival.PerHour > 0.0))
+        if (!Diagnostics.Any(d => d.IsError) && !arrivals.Any(arrival => arrival.PerHour > 0.0))
         {
             Error(node.Location, null, DiagnosticCodes.NoArrivals, "no positive arrival rate: at least one unit needs patients arriving from outside");
         }
@@ -264,115 +264,6 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             $"{where}{(whereUnit is null ? string.Empty : "." + whereUnit)}: unknown unit '{key.Value}'{NearestName.Hint(key.Value, _unitLocations.Keys)}");
         return false;
     }
-
-    private Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
-    {
-        var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
-        foreach (var (key, value) in UniqueEntries(mapping, unitId))
-        {
-            if (Array.IndexOf(knownKeys, key.Value) < 0)
-            {
-                string hint = NearestName.Suggest(key.Value, knownKeys) is string best
-                    ? $"; did you mean '{best}'?"
-                    : $" (known keys: {string.Join(", ", knownKeys)})";
-                Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
-                continue;
-            }
-
-            fields[key.Value] = value;
-        }
-
-        return fields;
-    }
-
-    private IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
-    {
-        // Most mappings (a unit's fields, its routes) hold a handful of keys: a linear scan finds duplicates there
-        // without a dictionary per mapping, which matters for 100,000-unit files.
-        const int ScanLimit = 16;
-        var entries = mapping.Entries;
-        var seen = entries.Count > ScanLimit ? new Dictionary<string, SourceLocation>(entries.Count, StringComparer.Ordinal) : null;
-        for (int i = 0; i < entries.Count; i++)
-        {
-            var (key, value) = entries[i];
-            if (FirstOccurrence(entries, i, seen) is SourceLocation first)
-            {
-                Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
-                    $"duplicate key '{key.Value}' (first at line {first.Line})"));
-                continue;
-            }
-
-            seen?.Add(key.Value, key.Location);
-            yield return (key, value);
-        }
-    }
-
-    /// <summary>Where the key of entry <paramref name="index"/> first appeared, when it appeared before.</summary>
-    private static SourceLocation? FirstOccurrence(IReadOnlyList<KeyValuePair<YamlScalar, YamlNode>> entries, int index, Dictionary<string, SourceLocation>? seen)
-    {
-        string key = entries[index].Key.Value;
-        if (seen is not null)
-        {
-            return seen.TryGetValue(key, out var location) ? location : null;
-        }
-
-        for (int j = 0; j < index; j++)
-        {
-            if (string.Equals(entries[j].Key.Value, key, StringComparison.Ordinal))
-            {
-                return entries[j].Key.Location;
-            }
-        }
-
-        return null;
-    }
-
-    private delegate string? ValueParse(string text, out double value);
-
-    private double? Value(YamlNode node, string? unitId, string what, ValueParse parse, string? whatUnit = null)
-    {
-        if (node is not YamlScalar { IsNull: false } && Scalar(node, unitId, whatUnit is null ? what : $"{what} '{whatUnit}'") is null)
-        {
-            return null;
-        }
-
-        var scalar = (YamlScalar)node;
-        if (parse(scalar.Value, out double value) is string error)
-        {
-            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, whatUnit is null ? $"{what}: {error}" : $"{what} '{whatUnit}': {error}");
-            return null;
-        }
-
-        return value;
-    }
-
-    private YamlScalar? Scalar(YamlNode node, string? unitId, string what)
-    {
-        if (node is YamlScalar scalar && !scalar.IsNull)
-        {
-            return scalar;
-        }
-
-        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node is YamlScalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
-        return null;
-    }
-
-    private YamlMapping? Mapping(YamlNode node, string? unitId, string what)
-    {
-        if (node is YamlMapping mapping)
-        {
-            return mapping;
-        }
-
-        Error(node.Location, unitId, DiagnosticCodes.WrongShape, $"{what} must be a mapping of keys to values");
-        return null;
-    }
-
-    private void Error(SourceLocation location, string? unitId, string code, string message) =>
-        diagnostics.Add(Diagnostic.Error(code, location, unitId, message));
-
-    private void Warning(SourceLocation location, string? unitId, string code, string message) =>
-        diagnostics.Add(Diagnostic.Warning(code, location, unitId, message));
 
     /// <summary>Letters, digits, '_' and '-', starting with a letter (ASCII, as the contract's examples).</summary>
     private static bool IsUnitId(string id)

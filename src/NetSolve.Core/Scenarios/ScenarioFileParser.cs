@@ -5,14 +5,13 @@ using NetSolve.Parsing;
 namespace NetSolve.Scenarios;
 
 /// <summary>Turns the located YAML of a scenario file into changes on its base network, collecting every problem.</summary>
-internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResult> readBase)
+internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResult> readBase) : NodeParser([])
 {
     private static readonly string[] TopKeys =
         ["scenario", "base", "add_units", "servers", "service", "scale_arrivals", "arrivals", "routes", "close_units"];
 
     private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv"];
 
-    private readonly List<Diagnostic> _diagnostics = [];
 
     public ScenarioReadResult Parse(YamlNode root)
     {
@@ -35,7 +34,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         var read = readBase(baseScalar.Value);
         foreach (var diagnostic in read.Diagnostics)
         {
-            _diagnostics.Add(diagnostic.Location.Line == 0
+            Diagnostics.Add(diagnostic.Location.Line == 0
                 ? Diagnostic.Error(ChangeCodes.BadBase, baseScalar.Location, null, $"base network '{baseScalar.Value}': {diagnostic.Message}")
                 : diagnostic);
         }
@@ -77,13 +76,13 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         }
 
         Section(fields, "close_units", changes, CloseChange);
-        if (_diagnostics.Any(d => d.IsError))
+        if (Diagnostics.Any(d => d.IsError))
         {
             return Result(null);
         }
 
         var edit = NetworkEditor.Apply(network, changes, baseScalar.Location);
-        _diagnostics.AddRange(edit.Diagnostics);
+        Diagnostics.AddRange(edit.Diagnostics);
         return Result(edit.Network is Network changed
             ? new Scenario(name, fileName, network, [.. changes], changed)
             : null);
@@ -91,8 +90,8 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
     private ScenarioReadResult Result(Scenario? scenario)
     {
-        bool failed = _diagnostics.Any(d => d.IsError);
-        var sorted = _diagnostics
+        bool failed = Diagnostics.Any(d => d.IsError);
+        var sorted = Diagnostics
             .OrderBy(d => string.Equals(d.Location.File, fileName, StringComparison.Ordinal))
             .ThenBy(d => d.Location.Line)
             .ThenBy(d => d.Location.Column);
@@ -261,84 +260,4 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: the factor must be {(allowZero ? "0 or more" : "more than 0")}, not '{scalar.Value}'");
         return null;
     }
-
-    private Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
-    {
-        var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
-        foreach (var (key, value) in UniqueEntries(mapping, unitId))
-        {
-            if (Array.IndexOf(knownKeys, key.Value) < 0)
-            {
-                string hint = NearestName.Suggest(key.Value, knownKeys) is string best
-                    ? $"; did you mean '{best}'?"
-                    : $" (known keys: {string.Join(", ", knownKeys)})";
-                Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
-                continue;
-            }
-
-            fields[key.Value] = value;
-        }
-
-        return fields;
-    }
-
-    private IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
-    {
-        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
-        foreach (var (key, value) in mapping.Entries)
-        {
-            if (seen.TryGetValue(key.Value, out var first))
-            {
-                Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
-                    $"duplicate key '{key.Value}' (first at line {first.Line})"));
-                continue;
-            }
-
-            seen[key.Value] = key.Location;
-            yield return (key, value);
-        }
-    }
-
-    private delegate string? ValueParse(string text, out double value);
-
-    private double? Value(YamlNode node, string? unitId, string what, ValueParse parse)
-    {
-        if (Scalar(node, unitId, what) is not YamlScalar scalar)
-        {
-            return null;
-        }
-
-        if (parse(scalar.Value, out double value) is string error)
-        {
-            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: {error}");
-            return null;
-        }
-
-        return value;
-    }
-
-    private YamlScalar? Scalar(YamlNode node, string? unitId, string what)
-    {
-        if (node is YamlScalar scalar && !scalar.IsNull)
-        {
-            return scalar;
-        }
-
-        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node is YamlScalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
-        return null;
-    }
-
-    private YamlMapping? Mapping(YamlNode node, string? unitId, string what)
-    {
-        if (node is YamlMapping mapping)
-        {
-            return mapping;
-        }
-
-        Error(node.Location, unitId, DiagnosticCodes.WrongShape, $"{what} must be a mapping of keys to values");
-        return null;
-    }
-
-    private void Error(SourceLocation location, string? unitId, string code, string message) =>
-        _diagnostics.Add(Diagnostic.Error(code, location, unitId, message));
 }

@@ -1,0 +1,124 @@
+using System.Globalization;
+
+namespace NetSolve.Parsing;
+
+/// <summary>
+/// What every parser of located YAML needs: fields checked against known keys with a nearest-key hint,
+/// duplicate keys reported, values checked for shape and form, each problem collected as a diagnostic.
+/// </summary>
+/// <param name="diagnostics">Where problems are collected.</param>
+internal abstract class NodeParser(List<Diagnostic> diagnostics)
+{
+    /// <summary>Every problem found so far, in the order found.</summary>
+    protected List<Diagnostic> Diagnostics { get; } = diagnostics;
+
+    protected Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
+    {
+        var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
+        foreach (var (key, value) in UniqueEntries(mapping, unitId))
+        {
+            if (Array.IndexOf(knownKeys, key.Value) < 0)
+            {
+                string hint = NearestName.Suggest(key.Value, knownKeys) is string best
+                    ? $"; did you mean '{best}'?"
+                    : $" (known keys: {string.Join(", ", knownKeys)})";
+                Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
+                continue;
+            }
+
+            fields[key.Value] = value;
+        }
+
+        return fields;
+    }
+
+    protected IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
+    {
+        // Most mappings (a unit's fields, its routes) hold a handful of keys: a linear scan finds duplicates there
+        // without a dictionary per mapping, which matters for 100,000-unit files.
+        const int ScanLimit = 16;
+        var entries = mapping.Entries;
+        var seen = entries.Count > ScanLimit ? new Dictionary<string, SourceLocation>(entries.Count, StringComparer.Ordinal) : null;
+        for (int i = 0; i < entries.Count; i++)
+        {
+            var (key, value) = entries[i];
+            if (FirstOccurrence(entries, i, seen) is SourceLocation first)
+            {
+                Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
+                    $"duplicate key '{key.Value}' (first at line {first.Line})"));
+                continue;
+            }
+
+            seen?.Add(key.Value, key.Location);
+            yield return (key, value);
+        }
+    }
+
+    /// <summary>Where the key of entry <paramref name="index"/> first appeared, when it appeared before.</summary>
+    private static SourceLocation? FirstOccurrence(IReadOnlyList<KeyValuePair<YamlScalar, YamlNode>> entries, int index, Dictionary<string, SourceLocation>? seen)
+    {
+        string key = entries[index].Key.Value;
+        if (seen is not null)
+        {
+            return seen.TryGetValue(key, out var location) ? location : null;
+        }
+
+        for (int j = 0; j < index; j++)
+        {
+            if (string.Equals(entries[j].Key.Value, key, StringComparison.Ordinal))
+            {
+                return entries[j].Key.Location;
+            }
+        }
+
+        return null;
+    }
+
+    protected delegate string? ValueParse(string text, out double value);
+
+    protected double? Value(YamlNode node, string? unitId, string what, ValueParse parse, string? whatUnit = null)
+    {
+        if (node is not YamlScalar { IsNull: false } && Scalar(node, unitId, whatUnit is null ? what : $"{what} '{whatUnit}'") is null)
+        {
+            return null;
+        }
+
+        var scalar = (YamlScalar)node;
+        if (parse(scalar.Value, out double value) is string error)
+        {
+            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, whatUnit is null ? $"{what}: {error}" : $"{what} '{whatUnit}': {error}");
+            return null;
+        }
+
+        return value;
+    }
+
+    protected YamlScalar? Scalar(YamlNode node, string? unitId, string what)
+    {
+        if (node is YamlScalar scalar && !scalar.IsNull)
+        {
+            return scalar;
+        }
+
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node is YamlScalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
+        return null;
+    }
+
+    protected YamlMapping? Mapping(YamlNode node, string? unitId, string what)
+    {
+        if (node is YamlMapping mapping)
+        {
+            return mapping;
+        }
+
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, $"{what} must be a mapping of keys to values");
+        return null;
+    }
+
+    protected void Error(SourceLocation location, string? unitId, string code, string message) =>
+        Diagnostics.Add(Diagnostic.Error(code, location, unitId, message));
+
+    protected void Warning(SourceLocation location, string? unitId, string code, string message) =>
+        Diagnostics.Add(Diagnostic.Warning(code, location, unitId, message));
+
+}
