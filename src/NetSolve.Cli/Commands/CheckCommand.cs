@@ -8,17 +8,16 @@ internal static class CheckCommand
 {
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
-        var set = WhatIfOption.Create();
+        var input = new NetworkInput();
         var command = new Command("check", "Validate a network file: report every error and warning with file, line, column and unit.")
         {
-            file, set,
+            input.File, input.Set,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
+            var network = input.Load(parse, context);
             context.Out.Write(string.Create(CultureInfo.InvariantCulture,
-                $"{parse.GetValue(file)}: valid: {network.Units.Length} units, {network.Arrivals.Length} arrival streams, {network.Routes.Length} routes\n"));
+                $"{parse.GetValue(input.File)}: valid: {network.Units.Length} units, {network.Arrivals.Length} arrival streams, {network.Routes.Length} routes\n"));
             return ExitCodes.Success;
         });
         return command;

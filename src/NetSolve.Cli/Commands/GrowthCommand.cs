@@ -16,11 +16,10 @@ internal static class GrowthCommand
 
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
+        var input = new NetworkInput();
         var format = CommonOptions.Format();
         format.Description = "Output: table (for people, with a text chart), json (one document) or csv (one row per factor and unit, ready to plot).";
         var strain = CommonOptions.Strain();
-        var set = WhatIfOption.Create();
         var stream = new Option<string>("--stream") { Description = "Grow only the external arrivals at this unit; the other streams stay as they are.", HelpName = "UNIT" };
         var from = new Option<double>("--from") { Description = "First growth factor (default 1: today's demand).", DefaultValueFactory = _ => 1.0 };
         var to = new Option<double?>("--to") { Description = "Last growth factor (default: where the first unit to saturate reaches 98% utilisation; 2 when nothing saturates)." };
@@ -32,11 +31,11 @@ internal static class GrowthCommand
         var command = new Command("growth", "Demand growth: the order in which units saturate as arrivals grow, the factor at which the first unit is "
             + "strained and the first becomes unstable, and utilisation and mean wait per unit across growth factors.")
         {
-            file, format, strain, set, stream, from, to, steps,
+            input.File, format, strain, input.Set, stream, from, to, steps,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
+            var network = input.Load(parse, context);
             var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
             string? unit = parse.GetValue(stream);
             if (unit is not null)

@@ -13,7 +13,7 @@ internal static class MapCommand
 
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
+        var input = new NetworkInput();
         var output = OutputOption("Write the map here; the extension picks the format: .svg, .png (rendered from the SVG) or .dot (Graphviz).", Extensions);
         var direction = new Option<string>("--direction")
         {
@@ -23,11 +23,11 @@ internal static class MapCommand
         var strain = CommonOptions.Strain();
         var command = new Command("map", "Draw the bottleneck map: units filled by status, routes as lines as wide as their flow, arrivals and exits.")
         {
-            file, output, direction, strain,
+            input.File, input.Set, output, direction, strain,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context);
+            var network = input.Load(parse, context);
             var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
             var layout = MapLayoutBuilder.Build(solution, parse.GetValue(direction) == "right" ? MapDirection.LeftToRight : MapDirection.TopToBottom);
             string target = parse.GetValue(output)!;

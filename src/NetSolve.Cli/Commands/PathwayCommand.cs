@@ -15,22 +15,21 @@ internal static class PathwayCommand
 
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
+        var input = new NetworkInput();
         var format = CommonOptions.Format();
         format.Description = "Output: table (for people), json (one document) or csv (one row per unit reached, then the path).";
         var strain = CommonOptions.Strain();
-        var set = WhatIfOption.Create();
         var from = new Option<string>("--from") { Description = "The unit patients enter at: expected visits, chance of visiting and time for every unit they can reach.", HelpName = "UNIT" };
         var to = new Option<string>("--to") { Description = "Only this unit's chance of being visited (the others are left out).", HelpName = "UNIT" };
         var path = new Option<string>("--path") { Description = "A sequence of units, comma-separated: mean time along it and the chance of following it step by step.", HelpName = "A,B,C" };
         var command = new Command("pathway", "Pathways: the chance that a patient entering at one unit ever visits another, expected visits per unit, "
             + "and the mean time along a named sequence of units.")
         {
-            file, format, strain, set, from, to, path,
+            input.File, format, strain, input.Set, from, to, path,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
+            var network = input.Load(parse, context);
             var ids = network.Units.Select(unit => unit.Id).ToList();
             string? start = parse.GetValue(from);
             string? target = parse.GetValue(to);

@@ -37,6 +37,7 @@ internal static class ReportCommand
         };
         var output = MapCommand.OutputOption("Write the report here (.html): one file with everything inline, to open in any browser, e-mail or print.", Extensions);
         var strain = CommonOptions.Strain();
+        var set = WhatIfOption.Create();
         var simulate = new Option<bool>("--simulate")
         {
             Description = "Also simulate FILE and add the mean queue by hour of day (chart and table) and the formula against the simulation per unit.",
@@ -47,7 +48,7 @@ internal static class ReportCommand
         var duration = SimulationCliOptions.Duration("--duration", "With --simulate: simulated time measured in each replication, at least a day.", DefaultDuration, allowZero: false);
         var command = new Command("report", "Write the leadership report: finding, bottleneck map, unit table, waits as demand grows, scenarios, assumptions; with --simulate, queues by hour of day.")
         {
-            file, scenarios, output, strain, simulate, seed, replications, warmup, duration,
+            file, scenarios, output, strain, set, simulate, seed, replications, warmup, duration,
         };
         command.Validators.Add(result =>
         {
@@ -68,7 +69,14 @@ internal static class ReportCommand
         {
             double threshold = parse.GetValue(strain);
             var loader = new ScenarioLoader(context);
-            var baseline = NetworkSolver.Solve(loader.Load(parse.GetValue(file)!).Network, threshold);
+            string path = parse.GetValue(file)!;
+            var network = loader.Load(path).Network;
+            if (parse.GetValue(set) is { Length: > 0 } changes)
+            {
+                network = NetworkLoader.ApplyOverrides(network, path, changes, context);
+            }
+
+            var baseline = NetworkSolver.Solve(network, threshold);
             var alternatives = (parse.GetValue(scenarios) ?? [])
                 .Select(loader.Load)
                 .Select(scenario => new ReportScenario(scenario.Name, NetworkSolver.Solve(scenario.Network, threshold)))

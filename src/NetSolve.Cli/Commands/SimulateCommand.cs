@@ -14,7 +14,7 @@ internal static class SimulateCommand
 {
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
+        var input = new NetworkInput();
         var format = CommonOptions.Format();
         var strain = CommonOptions.Strain();
         var seed = SimulationCliOptions.Seed();
@@ -49,11 +49,11 @@ internal static class SimulateCommand
 
         var command = new Command("simulate", "Simulate the network: means with 95% confidence intervals, percentiles, waits over given times and queues by hour of day.")
         {
-            file, format, strain, seed, replications, warmup, duration, waitOver, compare, threads,
+            input.File, input.Set, format, strain, seed, replications, warmup, duration, waitOver, compare, threads,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context, forSimulation: true);
+            var network = input.Load(parse, context, forSimulation: true);
             var timeUnit = network.TimeUnit;
             var options = new SimulationOptions
             {

@@ -8,17 +8,16 @@ internal static class SolveCommand
 {
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
+        var input = new NetworkInput();
         var format = CommonOptions.Format();
         var strain = CommonOptions.Strain();
-        var set = WhatIfOption.Create();
         var command = new Command("solve", "Solve the network: load, utilisation, waits and headroom of every unit, bottleneck and network totals.")
         {
-            file, format, strain, set,
+            input.File, format, strain, input.Set,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
+            var network = input.Load(parse, context);
             var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
             SolutionOutput.Write(solution, parse.GetValue(format)!, context);
             return ExitCodes.Success;

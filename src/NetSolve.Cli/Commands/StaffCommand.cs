@@ -13,11 +13,10 @@ internal static class StaffCommand
 {
     public static Command Create(CliContext context)
     {
-        var file = CommonOptions.NetworkFile();
+        var input = new NetworkInput();
         var format = CommonOptions.Format();
         format.Description = "Output: table (for people), json (one document) or csv (one row per unit).";
         var strain = CommonOptions.Strain();
-        var set = WhatIfOption.Create();
         var maxUtil = new Option<double?>("--max-util") { Description = "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).", HelpName = "FRACTION" };
         var maxWait = new Option<string>("--max-wait") { Description = "Target: mean wait before service at most this (e.g. 30min, 4h).", HelpName = "DURATION" };
         var maxTime = new Option<string>("--max-time") { Description = "Target: mean time in unit, wait plus service, at most this.", HelpName = "DURATION" };
@@ -47,11 +46,11 @@ internal static class StaffCommand
         var command = new Command("staff", "Staffing: the fewest added servers (optionally weighted by cost) so that every unit meets the targets, "
             + "or with --budget N where N extra servers cut the mean time in network most.")
         {
-            file, format, strain, set, maxUtil, maxWait, maxTime, waitOver, atMost, cost, budget,
+            input.File, format, strain, input.Set, maxUtil, maxWait, maxTime, waitOver, atMost, cost, budget,
         };
         command.SetAction(parse =>
         {
-            var network = NetworkLoader.Load(parse.GetValue(file)!, context, parse.GetValue(set));
+            var network = input.Load(parse, context);
             var targets = Targets(network.TimeUnit, parse.GetValue(maxUtil), parse.GetValue(maxWait), parse.GetValue(maxTime), parse.GetValue(waitOver), parse.GetValue(atMost));
             var costs = Costs(network, parse.GetValue(cost) ?? []);
             var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
