@@ -206,7 +206,7 @@ public static class TrafficEquations
 
     private static void CheckResidual(RoutingTable routing, double[] flows)
     {
-        var inflow = (double[])routing.ExternalPerHour.ToArray().Clone();
+        var inflow = routing.ExternalPerHour.ToArray();
         for (int from = 0; from < routing.UnitCount; from++)
         {
             for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
