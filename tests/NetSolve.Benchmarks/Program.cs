@@ -1,9 +1,9 @@
 using BenchmarkDotNet.Running;
 using NetSolve.Benchmarks;
 
-if (args is ["cpu-time"])
+if (args is ["cpu-time", .. var sizes])
 {
-    CpuTimeMeasurement.Run(Console.Out);
+    CpuTimeMeasurement.Run(Console.Out, sizes.Length == 0 ? [10, 1000] : [.. sizes.Select(int.Parse)]);
     return;
 }
 
