@@ -60,8 +60,8 @@ internal struct Xoshiro256StarStar
         }
     }
 
-    /// <summary>An exponential variate with mean 1.</summary>
-    public double NextExponential() => -Math.Log(NextOpenDouble());
+    /// <summary>An exponential variate with mean 1, by the ziggurat method (<see cref="ExponentialZiggurat"/>).</summary>
+    public double NextExponential() => ExponentialZiggurat.Next(ref this);
 
     /// <summary>A standard normal variate by Marsaglia's polar method (the second variate is discarded).</summary>
     public double NextNormal()

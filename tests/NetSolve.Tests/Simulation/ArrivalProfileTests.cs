@@ -52,7 +52,8 @@ public sealed class ArrivalProfileTests
     {
         // Source: by reasoning from the model, no formula. A single server at mean load 0.5 that gets all its patients
         // from 08:00 to 20:00 runs at load 1 while open, so its queue builds through the day; with no arrivals after
-        // 20:00 and 4 services an hour it has long emptied by 03:00.
+        // 20:00 and 4 services an hour it clears 28 patients by 03:00, so a queue is left then only on the rare days
+        // when more were waiting at 20:00 (at load 1 the queue after 12 hours has a spread of about 10 patients).
         var hours = Enumerable.Range(0, 24).Select(h => h is >= 8 and < 20 ? 1.0 : 0.0);
         var unit = TestNetworks.Unit("minor_injuries", 1, 0.25);
         var network = TestNetworks.Single(unit, 2.0) with { ArrivalProfile = ArrivalProfile.Create(hours) };
@@ -65,7 +66,7 @@ public sealed class ArrivalProfileTests
         // hourly means is the overall mean queue, replication by replication and so also on average.
         Assert.Equal(result.MeanQueue.Mean, byHour.Average(hour => hour!.Value.Mean), 9);
         Assert.True(byHour[17]!.Value.Mean > 1.0);
-        Assert.Equal(0.0, byHour[3]!.Value.Mean);
+        Assert.InRange(byHour[3]!.Value.Mean, 0.0, 0.05);
         Assert.True(byHour[17]!.Value.Mean > byHour[9]!.Value.Mean);
     }
 }
