@@ -70,6 +70,71 @@ public sealed class GeneratorTests
     }
 
     [Fact]
+    public void The_ziggurat_layers_close_with_the_published_constants()
+    {
+        // Source: Marsaglia and Tsang, "The Ziggurat Method for Generating Random Variables", J. Stat. Software 5(8),
+        // 2000: for 256 layers of the exponential, r = 7.69711747013104972 and v = 3.949659822581572e-3 (constants
+        // from memory). Each layer has area v: the base plus the tail, e^−r·(r + 1), and the top layer, walked down to
+        // from r, x_1·(1 − e^−x_1), must both come out as v.
+        double r = ExponentialZiggurat.TailStart;
+        double v = ExponentialZiggurat.LayerArea;
+        double x1 = ExponentialZiggurat.RightEdges[1];
+
+        Assert.Equal(v, Math.Exp(-r) * (r + 1.0), 12);
+        Assert.Equal(v, x1 * (1.0 - Math.Exp(-x1)), 12);
+        Assert.Equal(0.0, ExponentialZiggurat.RightEdges[0]);
+        Assert.Equal(r, ExponentialZiggurat.RightEdges[^1]);
+    }
+
+    [Fact]
+    public void Exponential_draws_pass_a_chi_square_test_on_100_equally_likely_bins()
+    {
+        // Source: the Exp(1) distribution function F(x) = 1 − e^−x, so bin k of 100 equally likely bins is
+        // [−ln(1 − k/100), −ln(1 − (k+1)/100)). Chi-square with 99 degrees of freedom: the 0.1% critical value is about
+        // 148 (statistical tables, from memory). One million draws, a fixed seed.
+        const int n = 1_000_000;
+        const int bins = 100;
+        var random = new Xoshiro256StarStar(2000, 5);
+        var counts = new long[bins];
+        for (int i = 0; i < n; i++)
+        {
+            double x = random.NextExponential();
+            int bin = (int)((1.0 - Math.Exp(-x)) * bins);
+            counts[Math.Min(bin, bins - 1)]++;
+        }
+
+        double expected = (double)n / bins;
+        double chiSquare = counts.Sum(count => (count - expected) * (count - expected) / expected);
+
+        Assert.InRange(chiSquare, 0.0, 148.0);
+    }
+
+    [Fact]
+    public void Exponential_draws_reach_the_tail_beyond_the_top_layer_as_often_as_the_closed_form_says()
+    {
+        // Source: exact by hand from F(x) = 1 − e^−x. P(X > r) = e^−7.697 = 4.54e-4, so four million draws expect
+        // 1,817 beyond r (standard deviation about 43), and of those a share e^−1 beyond r + 1; and P(X < 0.05), inside
+        // the top layer's wedge, is 1 − e^−0.05 = 0.04877 (standard deviation 0.0001).
+        const int n = 4_000_000;
+        var random = new Xoshiro256StarStar(99, 1);
+        double r = ExponentialZiggurat.TailStart;
+        int beyond = 0;
+        int farBeyond = 0;
+        int near = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double x = random.NextExponential();
+            beyond += x > r ? 1 : 0;
+            farBeyond += x > r + 1.0 ? 1 : 0;
+            near += x < 0.05 ? 1 : 0;
+        }
+
+        Assert.InRange(beyond, 1_817 - 200, 1_817 + 200);
+        Assert.InRange((double)farBeyond / beyond, Math.Exp(-1.0) - 0.06, Math.Exp(-1.0) + 0.06);
+        Assert.InRange((double)near / n, 0.04877 - 0.0006, 0.04877 + 0.0006);
+    }
+
+    [Fact]
     public void Bounded_integers_cover_every_value_evenly()
     {
         // Source: exact by hand. 70,000 draws below 7 expect 10,000 each, standard deviation about 93.
