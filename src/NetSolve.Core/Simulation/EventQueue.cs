@@ -68,42 +68,63 @@ internal sealed class EventQueue
         payloads[hole] = new EventPayload(item.Unit, item.Patient);
     }
 
+    /// <summary>The earliest pending event; the queue must not be empty.</summary>
+    public SimulationEvent Earliest => new(_times[0], _payloads[0].Unit, _payloads[0].Patient);
+
     /// <summary>Removes and returns the earliest event; the queue must not be empty.</summary>
-    /// <remarks>
-    /// Floyd's bottom-up variant: the hole left at the root moves down along the smallest children to a leaf, then the
-    /// last event sifts up from there. The last event usually belongs near the bottom, so this saves most of the
-    /// comparisons of the textbook sift-down.
-    /// </remarks>
     public SimulationEvent Pop()
+    {
+        var top = Earliest;
+        RemoveEarliest();
+        return top;
+    }
+
+    /// <summary>Removes the earliest event; the queue must not be empty.</summary>
+    public void RemoveEarliest()
+    {
+        int count = --Count;
+        double lastTime = _times[count];
+        var lastPayload = _payloads[count];
+        _times[count] = double.PositiveInfinity;
+        if (count > 0)
+        {
+            Settle(lastTime, lastPayload, count);
+        }
+    }
+
+    /// <summary>
+    /// Removes the earliest event and adds <paramref name="item"/> in one pass: the event loop's commonest step, since
+    /// most events schedule exactly one more (the "hold" operation of event-list studies).
+    /// </summary>
+    public void ReplaceEarliest(in SimulationEvent item) => Settle(item.Time, new EventPayload(item.Unit, item.Patient), Count);
+
+    /// <summary>
+    /// Fills the hole at the root with (<paramref name="time"/>, <paramref name="payload"/>) among the first
+    /// <paramref name="count"/> slots. Floyd's bottom-up variant: the hole moves down along the smallest children to a
+    /// leaf, then the item sifts up from there. The item usually belongs near the bottom, so this saves most of the
+    /// comparisons of the textbook sift-down.
+    /// </summary>
+    private void Settle(double time, EventPayload payload, int count)
     {
         var times = _times;
         var payloads = _payloads;
-        var top = new SimulationEvent(times[0], payloads[0].Unit, payloads[0].Patient);
-        int count = --Count;
-        double lastTime = times[count];
-        var lastPayload = payloads[count];
-        times[count] = double.PositiveInfinity;
-        if (count == 0)
-        {
-            return top;
-        }
 
-        // The walk reads past bounds checks: every index is below Count + Arity, inside both arrays, because a slot
-        // with a child below Count is itself below Count and its other children are at most Arity − 1 further on.
-        ref double time = ref MemoryMarshal.GetArrayDataReference(times);
-        ref var payload = ref MemoryMarshal.GetArrayDataReference(payloads);
+        // The walk reads past bounds checks: every index is below count + Arity, inside both arrays, because a slot
+        // with a child below count is itself below count and its other children are at most Arity − 1 further on.
+        ref double timeAt = ref MemoryMarshal.GetArrayDataReference(times);
+        ref var payloadAt = ref MemoryMarshal.GetArrayDataReference(payloads);
         int hole = 0;
         int child = 1;
         while (child < count)
         {
             // Children past the last event are +∞ sentinels (the arrays keep Arity spare slots), so all four compare.
-            int left = child + (Unsafe.Add(ref time, child + 1) < Unsafe.Add(ref time, child) ? 1 : 0);
-            int right = child + 2 + (Unsafe.Add(ref time, child + 3) < Unsafe.Add(ref time, child + 2) ? 1 : 0);
+            int left = child + (Unsafe.Add(ref timeAt, child + 1) < Unsafe.Add(ref timeAt, child) ? 1 : 0);
+            int right = child + 2 + (Unsafe.Add(ref timeAt, child + 3) < Unsafe.Add(ref timeAt, child + 2) ? 1 : 0);
             // Written as 0 or 1, then negated into a mask: "? -1 : 0" compiled to a branch, "? 1 : 0" to a setcc.
-            int pickRight = Unsafe.Add(ref time, right) < Unsafe.Add(ref time, left) ? 1 : 0;
+            int pickRight = Unsafe.Add(ref timeAt, right) < Unsafe.Add(ref timeAt, left) ? 1 : 0;
             int smallest = left + ((right - left) & -pickRight);
-            Unsafe.Add(ref time, hole) = Unsafe.Add(ref time, smallest);
-            Unsafe.Add(ref payload, hole) = Unsafe.Add(ref payload, smallest);
+            Unsafe.Add(ref timeAt, hole) = Unsafe.Add(ref timeAt, smallest);
+            Unsafe.Add(ref payloadAt, hole) = Unsafe.Add(ref payloadAt, smallest);
             hole = smallest;
             child = (hole * Arity) + 1;
         }
@@ -111,7 +132,7 @@ internal sealed class EventQueue
         while (hole > 0)
         {
             int parent = (hole - 1) >> 2;
-            if (times[parent] <= lastTime)
+            if (times[parent] <= time)
             {
                 break;
             }
@@ -121,9 +142,8 @@ internal sealed class EventQueue
             hole = parent;
         }
 
-        times[hole] = lastTime;
-        payloads[hole] = lastPayload;
-        return top;
+        times[hole] = time;
+        payloads[hole] = payload;
     }
 
     /// <summary>Removes every event, keeping the arrays.</summary>

@@ -33,6 +33,7 @@ internal sealed partial class SimulationEngine
     private readonly long[] _groupExits;
     private readonly double[] _groupTimeSum;
     private readonly int[] _groupHistogram;
+    private bool _handledStillQueued;
     private long _entered;
     private long _networkTurnedAway;
 
@@ -90,7 +91,10 @@ internal sealed partial class SimulationEngine
         long events = 0;
         while (_events.EarliestTime <= _end)
         {
-            var next = _events.Pop();
+            // The event stays in the queue while it is handled: the first event it schedules takes its place in one
+            // pass (see Schedule), and it is removed on its own only if it schedules none.
+            var next = _events.Earliest;
+            _handledStillQueued = true;
             events++;
             if (next.IsArrival)
             {
@@ -99,6 +103,11 @@ internal sealed partial class SimulationEngine
             else
             {
                 OnServiceEnd(next.Time, next.Unit, next.Patient);
+            }
+
+            if (_handledStillQueued)
+            {
+                _events.RemoveEarliest();
             }
 
             if ((events & CancellationCheckMask) == 0)
@@ -125,7 +134,7 @@ internal sealed partial class SimulationEngine
     private void OnArrivalCandidate(double now, int group)
     {
         var plan = _groups[group];
-        _events.Push(new SimulationEvent(now + (_random.NextExponential() / plan.CandidatesPerHour), group, SimulationEvent.ArrivalMarker));
+        Schedule(new SimulationEvent(now + (_random.NextExponential() / plan.CandidatesPerHour), group, SimulationEvent.ArrivalMarker));
 
         // Thinning (Lewis and Shedler, 1979): candidates come at the peak rate; keep each with multiplier / peak.
         if (plan.HourOfDay is not null && _random.NextDouble() * plan.MaxMultiplier >= plan.MultiplierAt(now))
@@ -281,7 +290,21 @@ internal sealed partial class SimulationEngine
         }
 
         double service = _samplers[(record.Group * _units.Length) + unit].Sample(ref _random);
-        _events.Push(new SimulationEvent(now + service, unit, patient));
+        Schedule(new SimulationEvent(now + service, unit, patient));
+    }
+
+    /// <summary>Adds an event: in place of the event being handled if it is still queued, else as a new one.</summary>
+    private void Schedule(in SimulationEvent item)
+    {
+        if (_handledStillQueued)
+        {
+            _handledStillQueued = false;
+            _events.ReplaceEarliest(item);
+        }
+        else
+        {
+            _events.Push(item);
+        }
     }
 
     private void Leave(double now, int patient, int group)
