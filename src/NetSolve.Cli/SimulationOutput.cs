@@ -25,7 +25,17 @@ internal static class SimulationOutput
             case "csv":
                 using (var writer = new StringWriter())
                 {
-                    SimulationCsvWriter.Write(result, writer);
+                    // A CSV file holds one table, so the comparison takes the place of the per-unit table rather
+                    // than following it; its rows repeat the simulated means and half-widths they are judged on.
+                    if (formula is null)
+                    {
+                        SimulationCsvWriter.Write(result, writer);
+                    }
+                    else
+                    {
+                        ComparisonCsvWriter.Write(result, formula, writer);
+                    }
+
                     text = writer.ToString();
                 }
 

@@ -16,6 +16,7 @@ internal static class SimulateCommand
     {
         var input = new NetworkInput();
         var format = CommonOptions.Format();
+        format.Description = "Output: table (for people), json (the contract's document) or csv (one row per unit; with --compare, one row per unit and metric).";
         var strain = CommonOptions.Strain();
         var seed = SimulationCliOptions.Seed();
         var replications = SimulationCliOptions.Replications(SimulationOptions.DefaultReplications);

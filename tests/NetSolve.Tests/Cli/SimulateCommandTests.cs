@@ -1,5 +1,6 @@
 using System.Text.Json;
 using NetSolve.Cli;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Cli;
 
@@ -41,6 +42,26 @@ public sealed class SimulateCommandTests
         {
             Assert.True(root.GetProperty("totals").TryGetProperty(field, out _), field);
         }
+    }
+
+    [Fact]
+    public void With_compare_the_csv_has_a_row_per_unit_and_metric_with_the_verdicts_of_the_table()
+    {
+        string[] common = ["simulate", Example, "--replications", "3", "--warmup", "7d", "--duration", "28d", "--seed", "5", "--compare"];
+
+        var csv = Run([.. common, "--format", "csv"]);
+        var table = Run(common);
+
+        Assert.Equal(0, csv.Code);
+        Assert.Empty(csv.Error);
+        var rows = CsvRows.Parse(csv.Out);
+        Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit"], rows[0]);
+
+        // Source: the larkspur file has five units; the comparison judges seven metrics of each.
+        Assert.Equal(5 * 7, rows.Count - 1);
+        Assert.Equal(
+            ComparisonTableRows.Parse(table.Out).Select(row => (row.Unit, row.Metric, row.Verdict)),
+            rows.Skip(1).Select(row => (row[0], row[1], row[5])));
     }
 
     [Fact]
