@@ -4,7 +4,7 @@ using NetSolve.Cli;
 
 namespace NetSolve.Tests.Core.Cli;
 
-public class NetSolveAppTests
+public partial class NetSolveAppTests
 {
     private static readonly string Harbourside = Path.Combine(AppContext.BaseDirectory, "networks", "harbourside.yaml");
 

@@ -5,7 +5,7 @@ using NetSolve.Solving;
 
 namespace NetSolve.Tests.Core.Solving;
 
-public class ErlangFormulasTests
+public partial class ErlangFormulasTests
 {
     private const double Exact = 1e-12;
 

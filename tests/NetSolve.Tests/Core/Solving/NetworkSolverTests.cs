@@ -6,7 +6,7 @@ using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Core.Solving;
 
-public class NetworkSolverTests
+public partial class NetworkSolverTests
 {
     // Rounding of the contract's six printed decimals.
     private const double SixDecimals = 5e-7;
