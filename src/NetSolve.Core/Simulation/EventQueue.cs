@@ -146,6 +146,15 @@ internal sealed class EventQueue
         payloads[hole] = payload;
     }
 
+    /// <summary>The pending events, in no particular order.</summary>
+    public IEnumerable<SimulationEvent> Pending()
+    {
+        for (int i = 0; i < Count; i++)
+        {
+            yield return new SimulationEvent(_times[i], _payloads[i].Unit, _payloads[i].Patient);
+        }
+    }
+
     /// <summary>Removes every event, keeping the arrays.</summary>
     public void Clear()
     {

@@ -9,6 +9,9 @@ internal struct PatientRecord
     /// <summary>Time the patient arrived at the current unit, in hours.</summary>
     public double UnitArrival;
 
+    /// <summary>Time the patient's service at the current unit started, in hours (once it has).</summary>
+    public double ServiceStart;
+
     /// <summary>Group index: 0 for the default group.</summary>
     public int Group;
 }

@@ -123,11 +123,7 @@ internal sealed partial class SimulationEngine
         }
 
         EventCount = events;
-        for (int u = 0; u < _units.Length; u++)
-        {
-            Accumulate(u, _end);
-        }
-
+        CloseOpenSpans();
         return true;
     }
 
@@ -170,7 +166,6 @@ internal sealed partial class SimulationEngine
 
     private void OnServiceEnd(double now, int unit, int patient)
     {
-        Accumulate(unit, now);
         ref var state = ref _units[unit];
         ref var record = ref _patients[patient];
 
@@ -179,6 +174,7 @@ internal sealed partial class SimulationEngine
         // warm-up would leave out long stays that straddle the end of the run.
         if (now >= _warmupEnd)
         {
+            state.BusyArea += now - Math.Max(record.ServiceStart, _warmupEnd);
             double sojourn = now - record.UnitArrival;
             state.Completions++;
             state.SojournSum += sojourn;
@@ -247,7 +243,6 @@ internal sealed partial class SimulationEngine
             unit = candidate.DivertTo;
         }
 
-        Accumulate(unit, now);
         ref var state = ref _units[unit];
         if (counted)
         {
@@ -269,6 +264,7 @@ internal sealed partial class SimulationEngine
     private void StartService(double now, int unit, int patient)
     {
         ref var record = ref _patients[patient];
+        record.ServiceStart = now;
         if (now >= _warmupEnd)
         {
             ref var state = ref _units[unit];
@@ -278,6 +274,7 @@ internal sealed partial class SimulationEngine
             {
                 state.Waited++;
                 state.WaitSum += wait;
+                AddQueueSpan(unit, Math.Max(record.UnitArrival, _warmupEnd), now);
                 var thresholds = _waitThresholdsHours;
                 for (int t = 0; t < thresholds.Length; t++)
                 {
@@ -343,57 +340,58 @@ internal sealed partial class SimulationEngine
         return -1;
     }
 
-    /// <summary>Adds the time since the unit's last change, clipped to the statistics window, to its areas.</summary>
-    private void Accumulate(int unit, double now)
+    /// <summary>
+    /// Adds one patient's wait from <paramref name="from"/> to <paramref name="to"/> (inside the statistics window) to
+    /// the unit's queue area and to its area by hour of day.
+    /// </summary>
+    /// <remarks>
+    /// The area under the queue-length curve is the sum of the waits inside the window, so it is added up per patient
+    /// when a wait ends (and for those still waiting when the run ends) rather than at every change of the queue: a
+    /// patient who never waits costs nothing, and the busy area is added the same way when a service ends. Times are
+    /// not negative, so truncation is the floor.
+    /// </remarks>
+    private void AddQueueSpan(int unit, double from, double to)
     {
-        ref var state = ref _units[unit];
-        double from = state.LastChange;
-        state.LastChange = now;
-        if (now <= _warmupEnd)
+        _units[unit].QueueArea += to - from;
+        long hour = (long)from;
+        double hourEnd = hour + 1.0;
+        int slot = (unit * 24) + (int)(hour % 24);
+        while (to > hourEnd)
         {
-            return;
-        }
-
-        if (from < _warmupEnd)
-        {
-            from = _warmupEnd;
-        }
-
-        double span = now - from;
-        state.BusyArea += state.Busy * span;
-        int queued = state.Queued;
-        if (queued == 0)
-        {
-            return;
-        }
-
-        state.QueueArea += queued * span;
-
-        // The hour the span starts in is usually the one the unit's previous update ended in, so it is cached in
-        // the unit: the floor and the modulo 24 are needed only when the span starts in a later hour. The additions
-        // are the same, in the same order, as splitting from scratch, so results do not change by a bit. HourEnd
-        // starts at 0, below any span's start, so the first update computes it. Times are not negative, so
-        // truncation is the floor.
-        double hourEnd = state.HourEnd;
-        int slot = state.HourSlot;
-        if (from >= hourEnd)
-        {
-            long hour = (long)from;
-            hourEnd = hour + 1.0;
-            slot = (unit * 24) + (int)(hour % 24);
-        }
-
-        // Most spans end within the hour they start in.
-        while (now > hourEnd)
-        {
-            _queueAreaByHour[slot] += queued * (hourEnd - from);
+            _queueAreaByHour[slot] += hourEnd - from;
             from = hourEnd;
             hourEnd += 1.0;
             slot = (slot + 1) % 24 == 0 ? slot - 23 : slot + 1;
         }
 
-        _queueAreaByHour[slot] += queued * (now - from);
-        state.HourEnd = hourEnd;
-        state.HourSlot = slot;
+        _queueAreaByHour[slot] += to - from;
+    }
+
+    /// <summary>Adds the spans still open when the run ends: waits of queued patients and services in progress.</summary>
+    private void CloseOpenSpans()
+    {
+        if (_end <= _warmupEnd)
+        {
+            return;
+        }
+
+        for (int u = 0; u < _units.Length; u++)
+        {
+            var queue = _queues[u];
+            ref readonly var state = ref _units[u];
+            for (int k = 0; k < state.Queued; k++)
+            {
+                int patient = queue[(state.QueueHead + k) & (queue.Length - 1)];
+                AddQueueSpan(u, Math.Max(_patients[patient].UnitArrival, _warmupEnd), _end);
+            }
+        }
+
+        foreach (var pending in _events.Pending())
+        {
+            if (!pending.IsArrival)
+            {
+                _units[pending.Unit].BusyArea += _end - Math.Max(_patients[pending.Patient].ServiceStart, _warmupEnd);
+            }
+        }
     }
 }

@@ -15,14 +15,8 @@ internal struct UnitState
     public int Servers;
     public int Capacity;
     public int DivertTo;
-
-    // The hour-of-day slot (index into the engine's per-hour queue areas) and the end of the hour that the unit's
-    // last queue-area update fell in, so that an update within the same hour needs neither a floor nor a modulo.
-    public int HourSlot;
-    public double LastChange;
     public double BusyArea;
     public double QueueArea;
-    public double HourEnd;
     public double InverseScale;
     public double WaitSum;
     public double SojournSum;
