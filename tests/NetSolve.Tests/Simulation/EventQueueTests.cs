@@ -99,6 +99,33 @@ public sealed class EventQueueTests
         Assert.Empty(pending);
     }
 
+    [Fact]
+    public void Pending_lists_exactly_the_events_still_queued_and_clear_empties_the_queue()
+    {
+        // Source: exact by hand. The run's end adds the services still in progress from the pending events, so the
+        // list must hold each queued event once, with its payload, and nothing already removed.
+        var queue = new EventQueue(4);
+        for (int k = 1; k <= 30; k++)
+        {
+            queue.Push(new SimulationEvent(k * 0.5, k, 100 + k));
+        }
+
+        for (int k = 0; k < 10; k++)
+        {
+            queue.RemoveEarliest();
+        }
+
+        var pending = queue.Pending().OrderBy(e => e.Time).ToList();
+        Assert.Equal(Enumerable.Range(11, 20).Select(k => new SimulationEvent(k * 0.5, k, 100 + k)), pending);
+
+        queue.Clear();
+        Assert.Equal(0, queue.Count);
+        Assert.Empty(queue.Pending());
+        Assert.Equal(double.PositiveInfinity, queue.EarliestTime);
+        queue.Push(new SimulationEvent(2.0, 1, 1));
+        Assert.Equal(2.0, queue.Pop().Time);
+    }
+
     private static void PopAndCheck(EventQueue queue, List<double> pending)
     {
         double earliest = pending.Min();
