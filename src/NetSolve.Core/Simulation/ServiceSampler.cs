@@ -18,6 +18,12 @@ internal readonly struct ServiceSampler
         _samples = samples;
     }
 
+    /// <summary>True for exponential service, which the event loop draws inline as <see cref="ExponentialMeanHours"/> × Exp(1).</summary>
+    public bool IsExponential => _kind == ServiceKind.Exponential;
+
+    /// <summary>The mean in hours of exponential service; meaningless for other kinds.</summary>
+    public double ExponentialMeanHours => _a;
+
     /// <summary>Precomputes the parameters of <paramref name="service"/>.</summary>
     public static ServiceSampler For(ServiceDistribution service)
     {

@@ -47,7 +47,7 @@ internal sealed partial class SimulationEngine
         _random = new Xoshiro256StarStar(seed, (ulong)replication);
         int n = network.UnitCount;
         int groups = network.Groups.Length;
-        _events = new EventQueue(groups + 64);
+        _events = new EventQueue(groups + 16);
         _units = new UnitState[n];
         _queues = new int[n][];
         for (int i = 0; i < n; i++)
@@ -174,7 +174,7 @@ internal sealed partial class SimulationEngine
         // warm-up would leave out long stays that straddle the end of the run.
         if (now >= _warmupEnd)
         {
-            state.BusyArea += now - Math.Max(record.ServiceStart, _warmupEnd);
+            state.BusyArea += now - InWindow(record.ServiceStart);
             double sojourn = now - record.UnitArrival;
             state.Completions++;
             state.SojournSum += sojourn;
@@ -274,7 +274,7 @@ internal sealed partial class SimulationEngine
             {
                 state.Waited++;
                 state.WaitSum += wait;
-                AddQueueSpan(unit, Math.Max(record.UnitArrival, _warmupEnd), now);
+                AddQueueSpan(unit, InWindow(record.UnitArrival), now);
                 var thresholds = _waitThresholdsHours;
                 for (int t = 0; t < thresholds.Length; t++)
                 {
@@ -286,7 +286,8 @@ internal sealed partial class SimulationEngine
             }
         }
 
-        double service = _samplers[(record.Group * _units.Length) + unit].Sample(ref _random);
+        ref readonly var sampler = ref _samplers[(record.Group * _units.Length) + unit];
+        double service = sampler.IsExponential ? sampler.ExponentialMeanHours * _random.NextExponential() : sampler.Sample(ref _random);
         Schedule(new SimulationEvent(now + service, unit, patient));
     }
 
@@ -340,6 +341,10 @@ internal sealed partial class SimulationEngine
         return -1;
     }
 
+    /// <summary>The later of <paramref name="time"/> and the end of the warm-up: where a span inside the window starts.</summary>
+    /// <remarks>A plain comparison: Math.Max also orders NaN and −0, which these times never are, at a cost per call.</remarks>
+    private double InWindow(double time) => time > _warmupEnd ? time : _warmupEnd;
+
     /// <summary>
     /// Adds one patient's wait from <paramref name="from"/> to <paramref name="to"/> (inside the statistics window) to
     /// the unit's queue area and to its area by hour of day.
@@ -382,7 +387,7 @@ internal sealed partial class SimulationEngine
             for (int k = 0; k < state.Queued; k++)
             {
                 int patient = queue[(state.QueueHead + k) & (queue.Length - 1)];
-                AddQueueSpan(u, Math.Max(_patients[patient].UnitArrival, _warmupEnd), _end);
+                AddQueueSpan(u, InWindow(_patients[patient].UnitArrival), _end);
             }
         }
 
@@ -390,7 +395,7 @@ internal sealed partial class SimulationEngine
         {
             if (!pending.IsArrival)
             {
-                _units[pending.Unit].BusyArea += _end - Math.Max(_patients[pending.Patient].ServiceStart, _warmupEnd);
+                _units[pending.Unit].BusyArea += _end - InWindow(_patients[pending.Patient].ServiceStart);
             }
         }
     }
