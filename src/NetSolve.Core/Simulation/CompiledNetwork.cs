@@ -134,8 +134,7 @@ internal sealed class CompiledNetwork
             EntryUnits = [.. entryUnits],
             EntryCumulative = [.. entryCumulative],
             RouteOffsets = [.. routing.Offsets],
-            RouteTargets = [.. routing.Targets],
-            RouteCumulative = cumulative,
+            Routes = [.. cumulative.Select((probability, k) => new RouteChoice(probability, routing.Targets[k]))],
         };
     }
 }

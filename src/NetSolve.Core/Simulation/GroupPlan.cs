@@ -28,11 +28,11 @@ internal sealed class GroupPlan
     /// <summary>Row starts of the routes out of each unit (length units + 1).</summary>
     public required int[] RouteOffsets { get; init; }
 
-    /// <summary>Destination unit of each route.</summary>
-    public required int[] RouteTargets { get; init; }
-
-    /// <summary>Cumulative probability of each route within its row; a draw above the last leaves the network.</summary>
-    public required double[] RouteCumulative { get; init; }
+    /// <summary>
+    /// The routes, row by row: each with its cumulative probability within its row (a draw above the last leaves the
+    /// network) beside its destination, so choosing a route reads one array.
+    /// </summary>
+    public required RouteChoice[] Routes { get; init; }
 
     /// <summary>The arrival-rate multiplier in force at <paramref name="hours"/> after Monday 00:00.</summary>
     public double MultiplierAt(double hours)
@@ -47,3 +47,9 @@ internal sealed class GroupPlan
         return DayOfWeek is null ? multiplier : multiplier * DayOfWeek[(int)(wholeHours / 24 % 7)];
     }
 }
+
+/// <summary>One route of a <see cref="GroupPlan"/>: taken by a uniform draw below <paramref name="Cumulative"/> that is
+/// not below the previous route's.</summary>
+/// <param name="Cumulative">Probability of this route and those before it in its row.</param>
+/// <param name="Target">Destination unit.</param>
+internal readonly record struct RouteChoice(double Cumulative, int Target);

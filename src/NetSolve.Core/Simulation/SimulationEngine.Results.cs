@@ -27,7 +27,7 @@ internal sealed partial class SimulationEngine
             row[_layout.Unit(u, MetricLayout.MeanWaitHours)] = state.Starts > 0 ? state.WaitSum / state.Starts : 0.0;
             row[_layout.Unit(u, MetricLayout.MeanInUnit)] = inUnit;
             row[_layout.Unit(u, MetricLayout.MeanTimeInUnitHours)] = state.Completions > 0 ? state.SojournSum / state.Completions : double.NaN;
-            row[_layout.Unit(u, MetricLayout.FullProbability)] = Ratio(state.Full, state.Offered, 0.0);
+            row[_layout.Unit(u, MetricLayout.FullProbability)] = Ratio(state.Full, state.Accepted + state.Full, 0.0);
             row[_layout.Unit(u, MetricLayout.TurnedAwayPerHour)] = state.TurnedAway / window;
             row[_layout.Unit(u, MetricLayout.DivertedPerHour)] = state.Diverted / window;
             for (int p = 0; p < MetricLayout.Percentiles.Length; p++)

@@ -208,11 +208,6 @@ internal sealed partial class SimulationEngine
         for (int hops = 0; ; hops++)
         {
             ref var candidate = ref _units[unit];
-            if (counted)
-            {
-                candidate.Offered++;
-            }
-
             if (candidate.Busy + candidate.Queued < candidate.Capacity)
             {
                 break;
@@ -329,12 +324,12 @@ internal sealed partial class SimulationEngine
         }
 
         double draw = _random.NextDouble();
-        var cumulative = plan.RouteCumulative;
+        var routes = plan.Routes;
         for (int k = start; k < stop; k++)
         {
-            if (draw < cumulative[k])
+            if (draw < routes[k].Cumulative)
             {
-                return plan.RouteTargets[k];
+                return routes[k].Target;
             }
         }
 

@@ -3,8 +3,10 @@ using System.Runtime.InteropServices;
 namespace NetSolve.Simulation;
 
 /// <summary>
-/// One unit's mutable state and counters during a replication, kept together so an event touches one or two cache
-/// lines per unit: the fields every event reads come first.
+/// One unit's mutable state and counters during a replication. The fields most events touch come first, in 64 bytes
+/// (the size of a cache line); counters of rarer things (waits, full units) follow. Patients offered to the unit are
+/// not counted apart: each is either accepted or finds the unit full, so offered = <see cref="Accepted"/> +
+/// <see cref="Full"/>.
 /// </summary>
 [StructLayout(LayoutKind.Sequential)]
 internal struct UnitState
@@ -16,16 +18,16 @@ internal struct UnitState
     public int Capacity;
     public int DivertTo;
     public double BusyArea;
-    public double QueueArea;
     public double InverseScale;
-    public double WaitSum;
     public double SojournSum;
-    public long Offered;
+    public long Completions;
     public long Accepted;
+
+    public long Starts;
+    public long Waited;
+    public double WaitSum;
+    public double QueueArea;
     public long Full;
     public long TurnedAway;
     public long Diverted;
-    public long Starts;
-    public long Waited;
-    public long Completions;
 }
