@@ -7,16 +7,17 @@ namespace NetSolve.Simulation;
 
 /// <summary>
 /// Pending events by time: a tournament tree over a pool of event slots. Each slot holds one pending event (or none);
-/// each inner node of a complete binary tree over the slots holds the slot with the earliest time below it, so the
-/// root names the earliest event. Adding, replacing or removing an event changes one slot and recomputes its path to
+/// each inner node of a complete binary tree over the slots holds the earliest time below it and the slot it belongs
+/// to, so the root names the earliest event. Adding, replacing or removing an event changes one slot and recomputes its path to
 /// the root: O(log n). Allocates only when the pool grows past the most events ever pending at once. Not thread-safe.
 /// </summary>
 /// <remarks>
 /// Why this shape rather than a heap: walking up from a slot visits fixed places (node / 2, its sibling node ^ 1),
 /// whatever the times, so the loads of a whole path can start at once and only the running minimum waits on them,
-/// where a heap's walk down must compare one level before it knows where the next is. Times are stored as their IEEE
+/// where a heap's walk down must compare one level before it knows where the next is; and each node keeps its
+/// winner's time beside its slot, so a level needs no second load through the slot. Times are stored as their IEEE
 /// bit patterns, which order like the times themselves for times ≥ 0 and +∞ (the mark of a free slot): the minimum is
-/// then picked with integer flag moves, not branches, since which of two times is earlier is a coin toss the branch
+/// then picked with integer arithmetic, not branches, since which of two times is earlier is a coin toss the branch
 /// predictor would lose about half the time. Free slots are reused last-freed first, so the slot of the event just
 /// handled, whose path is in cache, is usually the next one taken.
 /// </remarks>
@@ -24,9 +25,10 @@ internal sealed class EventQueue
 {
     private static readonly long FreeKey = BitConverter.DoubleToInt64Bits(double.PositiveInfinity);
 
+    // Node n of the tree (1 is the root; leaves are _leaves + slot) holds the earliest key below it and its slot.
     private long[] _keys = [];
-    private EventPayload[] _payloads = [];
     private int[] _winners = [];
+    private EventPayload[] _payloads = [];
     private int[] _free = [];
     private int _freeCount;
     private int _leaves;
@@ -41,16 +43,15 @@ internal sealed class EventQueue
     public int Count { get; private set; }
 
     /// <summary>The time of the earliest pending event, or +∞ when the queue is empty.</summary>
-    public double EarliestTime => BitConverter.Int64BitsToDouble(_keys[_winners[1]]);
+    public double EarliestTime => BitConverter.Int64BitsToDouble(_keys[1]);
 
     /// <summary>The earliest pending event; the queue must not be empty.</summary>
     public SimulationEvent Earliest
     {
         get
         {
-            int slot = _winners[1];
-            var payload = _payloads[slot];
-            return new SimulationEvent(BitConverter.Int64BitsToDouble(_keys[slot]), payload.Unit, payload.Patient);
+            var payload = _payloads[_winners[1]];
+            return new SimulationEvent(BitConverter.Int64BitsToDouble(_keys[1]), payload.Unit, payload.Patient);
         }
     }
 
@@ -79,7 +80,7 @@ internal sealed class EventQueue
     public void RemoveEarliest()
     {
         int slot = _winners[1];
-        _keys[slot] = FreeKey;
+        _keys[_leaves + slot] = FreeKey;
         _free[_freeCount++] = slot;
         Count--;
         Replay(slot);
@@ -96,10 +97,11 @@ internal sealed class EventQueue
     {
         for (int slot = 0; slot < _leaves; slot++)
         {
-            if (_keys[slot] != FreeKey)
+            long key = _keys[_leaves + slot];
+            if (key != FreeKey)
             {
                 var payload = _payloads[slot];
-                yield return new SimulationEvent(BitConverter.Int64BitsToDouble(_keys[slot]), payload.Unit, payload.Patient);
+                yield return new SimulationEvent(BitConverter.Int64BitsToDouble(key), payload.Unit, payload.Patient);
             }
         }
     }
@@ -115,7 +117,7 @@ internal sealed class EventQueue
     private void Set(int slot, in SimulationEvent item)
     {
         Debug.Assert(item.Time >= 0.0, "Keys order like times only for times that are not negative.");
-        _keys[slot] = BitConverter.DoubleToInt64Bits(item.Time);
+        _keys[_leaves + slot] = BitConverter.DoubleToInt64Bits(item.Time);
         _payloads[slot] = new EventPayload(item.Unit, item.Patient);
         Replay(slot);
     }
@@ -124,20 +126,21 @@ internal sealed class EventQueue
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void Replay(int slot)
     {
-        // Every index is inside its array: nodes run from 1 to 2·leaves − 1 and winners name slots below leaves.
+        // Every index is inside both arrays: nodes run from 1 to 2·leaves − 1.
         ref int winners = ref MemoryMarshal.GetArrayDataReference(_winners);
         ref long keys = ref MemoryMarshal.GetArrayDataReference(_keys);
+        int node = _leaves + slot;
         int best = slot;
-        long bestKey = Unsafe.Add(ref keys, slot);
-        for (int node = _leaves + slot; node > 1; node >>= 1)
+        long bestKey = Unsafe.Add(ref keys, node);
+        for (; node > 1; node >>= 1)
         {
-            int other = Unsafe.Add(ref winners, node ^ 1);
-            long otherKey = Unsafe.Add(ref keys, other);
-
-            // Written as 0 or 1, then negated into a mask, so the JIT emits a setcc rather than a branch.
-            long takeOther = otherKey < bestKey ? 1 : 0;
-            best += (other - best) & (int)-takeOther;
-            bestKey += (otherKey - bestKey) & -takeOther;
+            // All ones when the sibling's key is smaller, else zero: keys are below 2^63, so the difference cannot
+            // overflow, and the JIT compiles a conditional select in a loop to a branch, but this to plain arithmetic.
+            long difference = Unsafe.Add(ref keys, node ^ 1) - bestKey;
+            long takeOther = difference >> 63;
+            bestKey += difference & takeOther;
+            best += (Unsafe.Add(ref winners, node ^ 1) - best) & (int)takeOther;
+            Unsafe.Add(ref keys, node >> 1) = bestKey;
             Unsafe.Add(ref winners, node >> 1) = best;
         }
     }
@@ -146,32 +149,36 @@ internal sealed class EventQueue
     private void Resize(int leaves)
     {
         int old = _leaves;
-        Array.Resize(ref _keys, leaves);
+        var keys = new long[2 * leaves];
+        keys.AsSpan().Fill(FreeKey);
+        _keys.AsSpan(old, old).CopyTo(keys.AsSpan(leaves));
         Array.Resize(ref _payloads, leaves);
-        _keys.AsSpan(old).Fill(FreeKey);
         _free = new int[leaves];
         _freeCount = 0;
         for (int slot = leaves - 1; slot >= 0; slot--)
         {
-            if (_keys[slot] == FreeKey)
+            if (keys[leaves + slot] == FreeKey)
             {
                 _free[_freeCount++] = slot;
             }
         }
 
-        _leaves = leaves;
-        _winners = new int[2 * leaves];
+        var winners = new int[2 * leaves];
         for (int slot = 0; slot < leaves; slot++)
         {
-            _winners[leaves + slot] = slot;
+            winners[leaves + slot] = slot;
         }
 
         for (int node = leaves - 1; node >= 1; node--)
         {
-            int left = _winners[2 * node];
-            int right = _winners[(2 * node) + 1];
-            _winners[node] = _keys[right] < _keys[left] ? right : left;
+            int child = 2 * node + (keys[(2 * node) + 1] < keys[2 * node] ? 1 : 0);
+            keys[node] = keys[child];
+            winners[node] = winners[child];
         }
+
+        _keys = keys;
+        _winners = winners;
+        _leaves = leaves;
     }
 
     private readonly record struct EventPayload(int Unit, int Patient);
