@@ -6,7 +6,9 @@ namespace NetSolve.Simulation;
 /// </summary>
 internal sealed partial class SimulationEngine
 {
-    private const int CancellationCheckMask = (1 << 16) - 1;
+    // Cancellation is checked after every chunk of events and progress reported every 16 chunks (65,536 events).
+    private const int ChunkEvents = 4096;
+    private const int ChunksPerProgress = 16;
 
     private readonly CompiledNetwork _network;
     private readonly MetricLayout _layout;
@@ -70,6 +72,41 @@ internal sealed partial class SimulationEngine
         _groupHistogram = new int[groups * TimeHistogram.Bins];
     }
 
+    /// <summary>
+    /// Handles up to <see cref="ChunkEvents"/> events, fewer only when the run reaches its end. The loop lives in a
+    /// method of its own, called thousands of times per replication, rather than in <see cref="Run"/>, which is called
+    /// once: the runtime optimises a method fully, with the profile of its first calls, only after it has been called
+    /// a few dozen times, and before that runs a long loop in a method entered once as a less optimised version
+    /// (measured about 30% slower per event on the 10-unit benchmark).
+    /// </summary>
+    private int RunChunk()
+    {
+        int handled = 0;
+        while (handled < ChunkEvents && _events.EarliestTime <= _end)
+        {
+            // The event stays in the queue while it is handled: the first event it schedules takes its place in one
+            // pass (see Schedule), and it is removed on its own only if it schedules none.
+            var next = _events.Earliest;
+            _handledStillQueued = true;
+            handled++;
+            if (next.IsArrival)
+            {
+                OnArrivalCandidate(next.Time, next.Unit);
+            }
+            else
+            {
+                OnServiceEnd(next.Time, next.Unit, next.Patient);
+            }
+
+            if (_handledStillQueued)
+            {
+                _events.RemoveEarliest();
+            }
+        }
+
+        return handled;
+    }
+
     /// <summary>Events processed so far.</summary>
     public long EventCount { get; private set; }
 
@@ -89,36 +126,24 @@ internal sealed partial class SimulationEngine
         }
 
         long events = 0;
-        while (_events.EarliestTime <= _end)
+        for (long chunks = 1; ; chunks++)
         {
-            // The event stays in the queue while it is handled: the first event it schedules takes its place in one
-            // pass (see Schedule), and it is removed on its own only if it schedules none.
-            var next = _events.Earliest;
-            _handledStillQueued = true;
-            events++;
-            if (next.IsArrival)
+            int done = RunChunk();
+            events += done;
+            if (done < ChunkEvents)
             {
-                OnArrivalCandidate(next.Time, next.Unit);
-            }
-            else
-            {
-                OnServiceEnd(next.Time, next.Unit, next.Patient);
+                break;
             }
 
-            if (_handledStillQueued)
+            if (cancellation.IsCancellationRequested)
             {
-                _events.RemoveEarliest();
+                EventCount = events;
+                return false;
             }
 
-            if ((events & CancellationCheckMask) == 0)
+            if (chunks % ChunksPerProgress == 0)
             {
-                if (cancellation.IsCancellationRequested)
-                {
-                    EventCount = events;
-                    return false;
-                }
-
-                progress?.Invoke(next.Time / _end);
+                progress?.Invoke(_events.EarliestTime / _end);
             }
         }
 
