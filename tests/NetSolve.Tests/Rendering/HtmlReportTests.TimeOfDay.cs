@@ -138,7 +138,7 @@ public partial class HtmlReportTests
         // An invented minor injuries unit without an arrival profile: 2 treatment bays, 3 min each, 30 patients an hour.
         var unit = NetSolve.Tests.Simulation.TestNetworks.Unit("treatment", 2, 0.05);
         var network = NetSolve.Tests.Simulation.TestNetworks.Single(unit, 30.0);
-        var options = new SimulationOptions { Seed = 11, Replications = 8, WarmupHours = 24, DurationHours = 120 * 24 };
+        var options = new SimulationOptions { Seed = 11, Replications = 16, WarmupHours = 24, DurationHours = 120 * 24 };
         var simulation = Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken);
         string html = HtmlReport.Write(NetworkSolver.Solve(network), [], simulation);
 
