@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using System.Xml.Linq;
 using NetSolve.Model;
 using NetSolve.Output;
 using NetSolve.Rendering.Map;
@@ -73,9 +74,11 @@ public static class HtmlReport
         var layout = MapLayoutBuilder.Build(baseline);
         var map = SvgMapWriter.Write(layout).Root!;
         // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
-        string maxWidth = Invariant.Coordinate(Math.Ceiling(double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture) * MaxMapEnlargement));
-        html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n")
-            .Append("<div class=\"map-frame\" style=\"max-width:").Append(maxWidth).Append("px\">\n")
+        double mapWidth = double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture);
+        double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
+        html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n");
+        AppendPrintNote(html, map, mapWidth, maxWidthPx);
+        html.Append("<div class=\"map-frame\" style=\"max-width:").Append(Invariant.Coordinate(maxWidthPx)).Append("px\">\n")
             .Append(map.ToString()).Append("\n</div>\n")
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
@@ -109,6 +112,25 @@ public static class HtmlReport
         html.Append("<footer>Made with NetSolve. A unit is strained at ")
             .Append(Invariant.Percent(baseline.StrainThreshold)).Append(" utilisation or more.</footer>\n</body>\n</html>\n");
         return html.ToString();
+    }
+
+    /// <summary>
+    /// In print the map is reduced to fit one page; when its smallest text then falls below a readable size, a note
+    /// (hidden on screen) says so and points to the HTML file, rather than letting the map run over several pages.
+    /// </summary>
+    private static void AppendPrintNote(StringBuilder html, XElement map, double mapWidth, double maxWidthPx)
+    {
+        double mapHeight = double.Parse(map.Attribute("height")!.Value, CultureInfo.InvariantCulture);
+        double smallestFont = map.Descendants().Attributes("font-size").Min(size => double.Parse(size.Value, CultureInfo.InvariantCulture));
+        double printedPt = MapPrintFit.PrintedPoints(mapWidth, mapHeight, maxWidthPx, smallestFont);
+        if (printedPt >= MapPrintFit.MinReadablePt)
+        {
+            return;
+        }
+
+        html.Append("<p class=\"map-print-note\" id=\"map-print-note\">This map is too large for one page, so the printout shrinks it to fit: its smallest text comes out at about ")
+            .Append(printedPt.ToString("0.0", CultureInfo.InvariantCulture))
+            .Append(" pt, which may be hard to read. Open the report's HTML file on a screen to see the map at full size.</p>\n");
     }
 
     private static void AppendGrowth(StringBuilder html, NetworkSolution baseline)

@@ -1,9 +1,15 @@
+using System.Globalization;
+
 namespace NetSolve.Rendering.Report;
 
 /// <summary>The report's stylesheet: screen, and print on A4 or Letter (15 mm margins fit both).</summary>
+/// <remarks>
+/// In print the map section is kept on one page: the map is held to <see cref="MapPrintFit.MaxPrintedHeightMm"/> (its
+/// view box keeps it whole and in proportion inside that box) and the section may not break.
+/// </remarks>
 internal static class ReportStyles
 {
-    public const string Css = """
+    public static string Css { get; } = string.Create(CultureInfo.InvariantCulture, $$"""
         :root { color-scheme: light; }
         body { font-family: 'DejaVu Sans', 'Liberation Sans', Arial, Helvetica, sans-serif; color: #111111; background: #FFFFFF;
                margin: 0 auto; max-width: 64rem; padding: 1.5rem; line-height: 1.45; }
@@ -22,6 +28,7 @@ internal static class ReportStyles
         .chart-frame { max-width: 54rem; margin: 0 auto; }
         td.status { text-align: left; white-space: nowrap; font-weight: bold; }
         .note { color: #3A3A3A; font-size: 0.85rem; }
+        .map-print-note { display: none; }
         .caution { border: 2px solid #22313F; padding: 0.6rem 0.9rem; }
         footer { margin-top: 2rem; color: #3A3A3A; font-size: 0.85rem; }
         @page { margin: 15mm; }
@@ -34,7 +41,9 @@ internal static class ReportStyles
           thead { display: table-header-group; }
           th { background: #EEF1F4; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
           td.status, .finding { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
-          figure#map-figure { break-inside: auto; }
+          #map { break-inside: avoid-page; }
+          #map-figure svg { max-height: {{MapPrintFit.MaxPrintedHeightMm}}mm; }
+          .map-print-note { display: block; font-size: 9pt; border-left: 4px solid #22313F; padding: 0.1rem 0.5rem; margin: 0 0 0.4rem; }
         }
-        """;
+        """);
 }

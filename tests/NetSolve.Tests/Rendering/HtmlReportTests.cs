@@ -103,6 +103,50 @@ public partial class HtmlReportTests
     }
 
     [Fact]
+    public void In_print_the_map_section_is_kept_on_one_page_and_the_map_held_to_the_height_limit()
+    {
+        string html = Report("harbourside");
+        string print = html[html.IndexOf("@media print", StringComparison.Ordinal)..];
+
+        Assert.Contains("#map { break-inside: avoid-page; }", print, StringComparison.Ordinal);
+        Assert.Contains("#map-figure svg { max-height: 190mm; }", print, StringComparison.Ordinal);
+        Assert.DoesNotContain("break-inside: auto", html, StringComparison.Ordinal);
+        Assert.Matches("<svg viewBox=\"0 0 [0-9.]+ [0-9.]+\"[^>]* class=\"bottleneck-map\"", html);
+    }
+
+    [Fact]
+    public void A_map_that_prints_legibly_on_one_page_has_no_print_note()
+    {
+        // By hand: the harbourside map (479 x 856) shown at most 599 px wide is reduced to the 190 mm (718 px) limit,
+        // a scale of 718 / 856 = 0.84: its 12-unit text prints at 12 x 0.84 x 72/96 = 7.5 pt, above 6 pt.
+        Assert.DoesNotContain("id=\"map-print-note\"", Report("harbourside"), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_tall_map_has_a_print_note_above_it_giving_the_size_its_text_prints_at()
+    {
+        var solution = RenderingFixtures.Generated(40, 1);
+        string html = HtmlReport.Write(solution);
+        string svg = html[html.IndexOf("<svg", html.IndexOf("id=\"map-figure\"", StringComparison.Ordinal), StringComparison.Ordinal)..];
+        var map = SvgMap.Parse(svg[..(svg.IndexOf("</svg>", StringComparison.Ordinal) + 6)]);
+
+        // The map at A4 width, or at most 125% of its own: its height at that scale runs past the height limit, so
+        // the height sets the scale, and its smallest text (12 units) prints at 12 x (limit / height) px x 72/96 pt.
+        double limitPx = 190.0 / 25.4 * 96.0;
+        double widthPx = Math.Min(180.0 / 25.4 * 96.0, Math.Ceiling(map.Width * 1.25));
+        Assert.True(map.Height * widthPx / map.Width > limitPx);
+        double printedPt = map.FontSizes.Min() * (limitPx / map.Height) * 72.0 / 96.0;
+        Assert.True(printedPt < 6.0);
+
+        var note = Regex.Match(html, "<p class=\"map-print-note\" id=\"map-print-note\">(.*?)</p>");
+        Assert.True(note.Success);
+        Assert.Contains(printedPt.ToString("0.0", System.Globalization.CultureInfo.InvariantCulture) + " pt", note.Groups[1].Value, StringComparison.Ordinal);
+        Assert.Contains("Open the report's HTML file on a screen", System.Net.WebUtility.HtmlDecode(note.Groups[1].Value), StringComparison.Ordinal);
+        int section = html.IndexOf("id=\"map\"", StringComparison.Ordinal);
+        Assert.InRange(note.Index, section, html.IndexOf("class=\"map-frame\"", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Scenarios_are_compared_side_by_side_with_the_baseline()
     {
         var baseline = RenderingFixtures.Example("harbourside");

@@ -6,7 +6,7 @@ using NetSolve.Solving;
 namespace NetSolve.Tests.Rendering;
 
 /// <summary>Opens the report in Debian's chromium, headless, through Playwright; .ci/run installs chromium.</summary>
-public class ReportInBrowserTests
+public partial class ReportInBrowserTests
 {
     private const string Chromium = "/usr/bin/chromium";
 
