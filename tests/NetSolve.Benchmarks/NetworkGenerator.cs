@@ -75,7 +75,7 @@ public static class NetworkGenerator
             AddRoutes(i, ids, totals, maxRoutesPerUnit, random, routes, yamlRoutes);
         }
 
-        var network = new Network($"Generated network of {unitCount} units (seed {seed})", TimeUnit.Hour,
+        var network = new Network(FormattableString.Invariant($"Generated network of {unitCount} units (seed {seed})"), TimeUnit.Hour,
             units.MoveToImmutable(), arrivals.ToImmutable(), routes.ToImmutable());
         string yaml = $"name: {network.Name}\ntime_unit: hour\nunits:\n{yamlUnits}arrivals:\n{yamlArrivals}routes:\n{yamlRoutes}";
         return new GeneratedNetwork(yaml, network);

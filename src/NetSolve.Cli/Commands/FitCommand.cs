@@ -42,7 +42,7 @@ internal static class FitCommand
 
             string[] header =
             [
-                $"Estimated by netsolve fit from {Path.GetFileName(path)}: {fitted.Patients} patients, {visits.Count} stays,",
+                string.Create(CultureInfo.InvariantCulture, $"Estimated by netsolve fit from {Path.GetFileName(path)}: {fitted.Patients} patients, {visits.Count} stays,"),
                 string.Create(CultureInfo.InvariantCulture, $"arrivals over {TimeConstants.FromHours(fitted.WindowHours, unit):0.##} {TimeConstants.Name(unit)}s. Servers are the most patients seen in service at once:"),
                 "check them against the roster before planning with this file.",
             ];

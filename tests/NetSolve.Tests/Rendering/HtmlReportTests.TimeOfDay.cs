@@ -64,7 +64,7 @@ public partial class HtmlReportTests
         var table = TimeOfDayTable(html);
 
         // Source: the larkspur file: the ward holds at most its 240 beds (capacity = servers), so nobody waits there.
-        Assert.DoesNotContain("ward", table.Units);
+        Assert.DoesNotContain("ward", table.Units, StringComparer.Ordinal);
         Assert.Equal(byPeak, table.Units);
         Assert.Equal(24, table.Rows.Count);
         for (int hour = 0; hour < 24; hour++)
@@ -151,12 +151,12 @@ public partial class HtmlReportTests
 
         var table = TimeOfDayTable(html);
         Assert.Equal(["treatment"], table.Units);
-        var hours = table.Rows.Select((row, hour) => ($"hour {hour:00}", new Estimate(row[0].Mean, row[0].Half, options.Replications), ErlangCMeanQueue)).ToList();
+        var hours = table.Rows.Select((row, hour) => (FormattableString.Invariant($"hour {hour:00}"), new Estimate(row[0].Mean, row[0].Half, options.Replications), ErlangCMeanQueue)).ToList();
         Bonferroni.AssertAllInside(hours);
 
         // The intervals are narrow enough to mean something: each widened half-width is under 30% of the queue.
         double widen = Bonferroni.Widening(hours.Count, options.Replications);
-        Assert.All(hours, h => Assert.True(h.Item2.HalfWidth!.Value * widen < 0.3 * ErlangCMeanQueue, $"{h.Item1}: half-width {h.Item2.HalfWidth}"));
+        Assert.All(hours, h => Assert.True(h.Item2.HalfWidth!.Value * widen < 0.3 * ErlangCMeanQueue, FormattableString.Invariant($"{h.Item1}: half-width {h.Item2.HalfWidth}")));
     }
 
     [Fact]

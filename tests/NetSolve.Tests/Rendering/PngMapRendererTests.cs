@@ -45,8 +45,8 @@ public class PngMapRendererTests
         }
 
         // The box is mostly fill; text drawn in the real font darkens some of it (an empty box would have none).
-        Assert.True(filled > total / 2, $"{filled} of {total} pixels in the fill colour");
-        Assert.True(dark > total / 50, $"{dark} of {total} pixels dark: no text was drawn");
+        Assert.True(filled > total / 2, FormattableString.Invariant($"{filled} of {total} pixels in the fill colour"));
+        Assert.True(dark > total / 50, FormattableString.Invariant($"{dark} of {total} pixels dark: no text was drawn"));
     }
 
     private static bool Near(SKColor a, SKColor b) =>
