@@ -37,7 +37,7 @@ internal static class FitCommand
             }
             catch (ArgumentException exception)
             {
-                throw new InputException($"{path}: {exception.Message.Split(" (Parameter", 2)[0]}");
+                throw new InputException($"{path}: {exception.Message.Split(" (Parameter", 2)[0]}", exception);
             }
 
             string[] header =

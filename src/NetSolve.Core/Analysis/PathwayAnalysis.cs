@@ -130,7 +130,7 @@ public static class PathwayAnalysis
         return new PathResult([.. unitIds], times.MoveToImmutable(), probability);
     }
 
-    private static void Require(Dictionary<string, int> index, string unitId)
+    private static void Require(IReadOnlyDictionary<string, int> index, string unitId)
     {
         if (!index.ContainsKey(unitId))
         {
