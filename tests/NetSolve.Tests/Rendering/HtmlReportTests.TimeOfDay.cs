@@ -138,7 +138,10 @@ public partial class HtmlReportTests
         // An invented minor injuries unit without an arrival profile: 2 treatment bays, 3 min each, 30 patients an hour.
         var unit = NetSolve.Tests.Simulation.TestNetworks.Unit("treatment", 2, 0.05);
         var network = NetSolve.Tests.Simulation.TestNetworks.Single(unit, 30.0);
-        var options = new SimulationOptions { Seed = 11, Replications = 8, WarmupHours = 24, DurationHours = 120 * 24 };
+        // 16 replications: with 8, the half-width check at the end failed for about 45% of seeds (measured over seeds
+        // 1-300, with the ziggurat and with the earlier logarithm sampler alike), so it held only by the luck of the seed;
+        // with 16 it held for all 300.
+        var options = new SimulationOptions { Seed = 11, Replications = 16, WarmupHours = 24, DurationHours = 120 * 24 };
         var simulation = Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken);
         string html = HtmlReport.Write(NetworkSolver.Solve(network), [], simulation);
 
