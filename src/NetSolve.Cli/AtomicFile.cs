@@ -26,7 +26,7 @@ internal static class AtomicFile
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
             TryDelete(temporary);
-            throw new InputException($"{path}: cannot write: {exception.Message}");
+            throw new InputException($"{path}: cannot write: {exception.Message}", exception);
         }
         catch
         {

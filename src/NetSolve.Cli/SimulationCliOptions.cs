@@ -59,6 +59,6 @@ internal static partial class SimulationCliOptions
         return allowZero && ZeroDurationRegex().IsMatch(text) ? 0.0 : null;
     }
 
-    [GeneratedRegex("^0*(?:\\.0*)?(?: ?(?:s|min|h|d))?$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex("^0*(?:\\.0*)?(?: ?(?:s|min|h|d))?$", RegexOptions.CultureInvariant, matchTimeoutMilliseconds: 1000)]
     private static partial Regex ZeroDurationRegex();
 }

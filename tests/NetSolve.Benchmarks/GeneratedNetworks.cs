@@ -15,7 +15,7 @@ public static class GeneratedNetworks
     public static Network Build(int unitCount, int seed)
     {
         var random = new Random(seed);
-        var ids = Enumerable.Range(0, unitCount).Select(i => $"unit{i:D5}").ToArray();
+        var ids = Enumerable.Range(0, unitCount).Select(i => FormattableString.Invariant($"unit{i:D5}")).ToArray();
         var routes = ImmutableArray.CreateBuilder<Route>();
         for (int i = 0; i < unitCount; i++)
         {

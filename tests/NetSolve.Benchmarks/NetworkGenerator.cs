@@ -5,11 +5,6 @@ using NetSolve.Model;
 
 namespace NetSolve.Benchmarks;
 
-/// <summary>A generated network: the same network as YAML text and as a model value.</summary>
-/// <param name="Yaml">The network file text.</param>
-/// <param name="Network">The network the text describes.</param>
-public sealed record GeneratedNetwork(string Yaml, Network Network);
-
 /// <summary>
 /// Builds random valid networks from a seed: every unit routes to at most a given number of others, and every set
 /// of units has an exit, so the traffic equations always have a solution.
@@ -75,7 +70,7 @@ public static class NetworkGenerator
             AddRoutes(i, ids, totals, maxRoutesPerUnit, random, routes, yamlRoutes);
         }
 
-        var network = new Network($"Generated network of {unitCount} units (seed {seed})", TimeUnit.Hour,
+        var network = new Network(FormattableString.Invariant($"Generated network of {unitCount} units (seed {seed})"), TimeUnit.Hour,
             units.MoveToImmutable(), arrivals.ToImmutable(), routes.ToImmutable());
         string yaml = $"name: {network.Name}\ntime_unit: hour\nunits:\n{yamlUnits}arrivals:\n{yamlArrivals}routes:\n{yamlRoutes}";
         return new GeneratedNetwork(yaml, network);

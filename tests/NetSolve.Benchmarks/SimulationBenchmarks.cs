@@ -27,7 +27,7 @@ public class SimulationBenchmarks
         var network = BenchmarkNetworks.Build(Units, seed: 2026);
         _network = CompiledNetwork.Compile(network);
         _layout = new MetricLayout(network.Units.Length, 0, 0);
-        Console.WriteLine($"// Units={Units}: {Run()} events per invocation");
+        Console.WriteLine(FormattableString.Invariant($"// Units={Units}: {Run()} events per invocation"));
     }
 
     [Benchmark]

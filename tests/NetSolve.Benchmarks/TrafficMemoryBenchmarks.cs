@@ -23,7 +23,7 @@ public class TrafficMemoryBenchmarks
     public void Setup()
     {
         _routing = RoutingTable.Build(NetworkGenerator.Generate(Units, seed: 11, maxRoutesPerUnit: 5, arrivalShare: 1.0).Network);
-        Console.WriteLine($"// units {Units}: {Routes} routes");
+        Console.WriteLine(FormattableString.Invariant($"// units {Units}: {Routes} routes"));
     }
 
     [Benchmark(Description = "traffic equations (automatic method)")]

@@ -37,12 +37,12 @@ internal static class FitCommand
             }
             catch (ArgumentException exception)
             {
-                throw new InputException($"{path}: {exception.Message.Split(" (Parameter", 2)[0]}");
+                throw new InputException($"{path}: {exception.Message.Split(" (Parameter", 2)[0]}", exception);
             }
 
             string[] header =
             [
-                $"Estimated by netsolve fit from {Path.GetFileName(path)}: {fitted.Patients} patients, {visits.Count} stays,",
+                string.Create(CultureInfo.InvariantCulture, $"Estimated by netsolve fit from {Path.GetFileName(path)}: {fitted.Patients} patients, {visits.Count} stays,"),
                 string.Create(CultureInfo.InvariantCulture, $"arrivals over {TimeConstants.FromHours(fitted.WindowHours, unit):0.##} {TimeConstants.Name(unit)}s. Servers are the most patients seen in service at once:"),
                 "check them against the roster before planning with this file.",
             ];

@@ -63,7 +63,7 @@ internal static class PathwayCommand
                 }
                 catch (ArgumentException exception)
                 {
-                    throw new InputException($"netsolve: pathway: {exception.Message.Split(" (Parameter", StringSplitOptions.None)[0]}");
+                    throw new InputException($"netsolve: pathway: {exception.Message.Split(" (Parameter", StringSplitOptions.None)[0]}", exception);
                 }
             }
 

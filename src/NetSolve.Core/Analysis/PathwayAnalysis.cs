@@ -43,7 +43,7 @@ public static class PathwayAnalysis
             string id = result.Unit.Id;
             if (!(visits[j] > 0.0))
             {
-                if (probabilityFor?.Contains(id) == true)
+                if (probabilityFor?.Contains(id, StringComparer.Ordinal) == true)
                 {
                     builder.Add(new PathwayVisit(id, 0.0, 0.0, 0.0)); // asked for, and never reached from here
                 }
@@ -51,7 +51,7 @@ public static class PathwayAnalysis
                 continue;
             }
 
-            double? probability = probabilityFor is null || probabilityFor.Contains(id) ? VisitProbability(network, fromUnitId, id) : null;
+            double? probability = probabilityFor is null || probabilityFor.Contains(id, StringComparer.Ordinal) ? VisitProbability(network, fromUnitId, id) : null;
             double? time = result.MeanTimeInUnitHours is double perVisit ? visits[j] * perVisit : null;
             builder.Add(new PathwayVisit(id, visits[j], probability, time));
         }
@@ -130,7 +130,7 @@ public static class PathwayAnalysis
         return new PathResult([.. unitIds], times.MoveToImmutable(), probability);
     }
 
-    private static void Require(Dictionary<string, int> index, string unitId)
+    private static void Require(IReadOnlyDictionary<string, int> index, string unitId)
     {
         if (!index.ContainsKey(unitId))
         {

@@ -70,7 +70,7 @@ public static class NetworkFitter
         double mean = stays.Average(stay => stay.ServiceHours);
         if (!(mean > 0.0))
         {
-            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"unit '{id}': every stay has zero length, so no service time can be measured"));
+            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"unit '{id}': every stay has zero length, so no service time can be measured"), nameof(stays));
         }
 
         double variance = stays.Count > 1 ? stays.Sum(stay => Math.Pow(stay.ServiceHours - mean, 2)) / (stays.Count - 1) : 0.0;

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 
 namespace NetSolve.Model;
 
@@ -56,7 +57,7 @@ public sealed record ArrivalProfile
     {
         if (values.Length != length)
         {
-            throw new ArgumentException($"Expected {length} multipliers, got {values.Length}.", name);
+            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"Expected {length} multipliers, got {values.Length}."), name);
         }
 
         if (values.Any(value => !double.IsFinite(value) || value < 0.0) || values.Sum() <= 0.0)

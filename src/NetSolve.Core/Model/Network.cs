@@ -33,7 +33,7 @@ public sealed record Network(
     public double AllExternalArrivalsPerHour => ExternalArrivalsPerHour + Groups.Sum(group => group.ExternalArrivalsPerHour);
 
     /// <summary>Maps each unit id to its position in <see cref="Units"/>. Builds a new dictionary on each call.</summary>
-    public Dictionary<string, int> BuildIndex()
+    public IReadOnlyDictionary<string, int> BuildIndex()
     {
         var index = new Dictionary<string, int>(Units.Length, StringComparer.Ordinal);
         for (int i = 0; i < Units.Length; i++)

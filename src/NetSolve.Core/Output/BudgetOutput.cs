@@ -20,7 +20,7 @@ public static class BudgetOutput
         ArgumentNullException.ThrowIfNull(output);
         var timeUnit = plan.Before.Network.TimeUnit;
         string suffix = TimeConstants.Suffix(timeUnit);
-        output.Write($"{plan.Before.Network.Name}: where {plan.Budget} extra servers cut the mean time in network most  (times in {TimeConstants.Name(timeUnit)}s)\n\n");
+        output.Write(string.Create(CultureInfo.InvariantCulture, $"{plan.Before.Network.Name}: where {plan.Budget} extra servers cut the mean time in network most  (times in {TimeConstants.Name(timeUnit)}s)\n\n"));
         var index = plan.Before.Network.BuildIndex();
         var table = new TextTable("unit", ">servers", ">added", ">for stability", ">util now", ">util after", $">wait now ({suffix})", $">wait after ({suffix})");
         foreach (var unit in plan.Units)

@@ -1,3 +1,4 @@
+using System.Globalization;
 using NetSolve.Model;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -36,7 +37,7 @@ public static class ComparisonTableWriter
         table.Write(output);
         output.Write(outside == 0
             ? "\nevery formula value lies inside the simulation's 95% interval\n"
-            : $"\n{outside} formula value(s) outside the simulation's 95% interval: the formulas' assumptions "
+            : string.Create(CultureInfo.InvariantCulture, $"\n{outside} formula value(s) outside the simulation's 95% interval: the formulas' assumptions ")
               + "(exponential service, constant arrival rate, no capacity limit, one patient group) may not hold here; "
               + "about 1 in 20 values falls outside by chance alone\n");
     }

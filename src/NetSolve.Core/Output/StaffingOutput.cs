@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text.Json;
 using NetSolve.Analysis;
 using NetSolve.Model;
@@ -57,8 +58,8 @@ public static class StaffingOutput
             table.Add(
                 unit.UnitId,
                 before.Unit.Servers.ToString(),
-                unit.RequiredServers?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? (unit.CurrentServers is null ? "unlimited" : "impossible"),
-                unit.Added == 0 ? Numbers.Missing : "+" + unit.Added.ToString(System.Globalization.CultureInfo.InvariantCulture),
+                unit.RequiredServers?.ToString(CultureInfo.InvariantCulture) ?? (unit.CurrentServers is null ? "unlimited" : "impossible"),
+                unit.Added == 0 ? Numbers.Missing : "+" + unit.Added.ToString(CultureInfo.InvariantCulture),
                 unit.Added == 0 ? Numbers.Missing : Numbers.Compact(unit.Cost),
                 Numbers.Percent(before.Utilisation),
                 Numbers.Percent(after?.Utilisation),
@@ -76,7 +77,7 @@ public static class StaffingOutput
 
         if (plan.IsFeasible)
         {
-            output.Write($"added: {plan.TotalAdded} servers in all, cost {Numbers.Compact(plan.TotalCost)}; mean time in network "
+            output.Write(string.Create(CultureInfo.InvariantCulture, $"added: {plan.TotalAdded} servers in all, cost {Numbers.Compact(plan.TotalCost)}; mean time in network ")
                 + $"{Numbers.Compact(Hours(plan.Before.Totals.MeanTimeInSystemHours, timeUnit))} -> {Numbers.Compact(Hours(plan.After!.Totals.MeanTimeInSystemHours, timeUnit))} {suffix}\n");
             output.Write("Each unit's number is the exact minimum: flows do not depend on servers and every measure falls as servers are added, so units are searched one by one.\n");
         }
@@ -151,7 +152,7 @@ public static class StaffingOutput
             var before = plan.Before.Units[i];
             var after = plan.After?.Units[i];
             output.Write(string.Join(',',
-                SolutionCsvWriter.Text(unit.UnitId), unit.CurrentServers?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "unlimited",
+                SolutionCsvWriter.Text(unit.UnitId), unit.CurrentServers?.ToString(CultureInfo.InvariantCulture) ?? "unlimited",
                 SolutionCsvWriter.Number(unit.RequiredServers), SolutionCsvWriter.Number(unit.Added), SolutionCsvWriter.Number(unit.CostPerServer),
                 SolutionCsvWriter.Number(unit.Cost), SolutionCsvWriter.Number(before.Utilisation), SolutionCsvWriter.Number(after?.Utilisation),
                 SolutionCsvWriter.Number(Wait(before, timeUnit)), SolutionCsvWriter.Number(after is null ? null : Wait(after, timeUnit)),

@@ -280,6 +280,6 @@ internal sealed partial class NetworkFileParser
         }
     }
 
-    [GeneratedRegex("^divert to (?<unit>[A-Za-z][A-Za-z0-9_-]*)$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex("^divert to (?<unit>[A-Za-z][A-Za-z0-9_-]*)$", RegexOptions.CultureInvariant, matchTimeoutMilliseconds: 1000)]
     private static partial Regex DivertRegex();
 }

@@ -8,7 +8,7 @@ public sealed record NetworkLocations(
     IReadOnlyDictionary<string, SourceLocation> Routes)
 {
     /// <summary>Group id to the location of its key under <c>groups</c>; empty without groups.</summary>
-    public IReadOnlyDictionary<string, SourceLocation> Groups { get; init; } = new Dictionary<string, SourceLocation>();
+    public IReadOnlyDictionary<string, SourceLocation> Groups { get; init; } = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
 
     /// <summary>The best place to point at for a unit: its routes if it has any, else its definition.</summary>
     public SourceLocation For(string unitId) =>

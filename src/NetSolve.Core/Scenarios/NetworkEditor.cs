@@ -44,7 +44,7 @@ public static partial class NetworkEditor
         return UnitIdRegex().IsMatch(id);
     }
 
-    [GeneratedRegex("^[A-Za-z][A-Za-z0-9_-]*$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex("^[A-Za-z][A-Za-z0-9_-]*$", RegexOptions.CultureInvariant, matchTimeoutMilliseconds: 1000)]
     private static partial Regex UnitIdRegex();
 
     private sealed class Edit(Network network, SourceLocation origin)

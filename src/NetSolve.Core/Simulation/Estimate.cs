@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using MathNet.Numerics.Distributions;
 
 namespace NetSolve.Simulation;
@@ -6,6 +7,7 @@ namespace NetSolve.Simulation;
 /// <param name="Mean">The mean of the replications' values.</param>
 /// <param name="HalfWidth">t(0.975, n − 1) · s / √n; null with fewer than two replications.</param>
 /// <param name="Replications">How many replications had a value.</param>
+[StructLayout(LayoutKind.Auto)]
 public readonly record struct Estimate(double Mean, double? HalfWidth, int Replications)
 {
     /// <summary>The confidence level of <see cref="HalfWidth"/>.</summary>

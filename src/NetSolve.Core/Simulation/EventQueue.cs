@@ -181,5 +181,6 @@ internal sealed class EventQueue
         _leaves = leaves;
     }
 
+    [StructLayout(LayoutKind.Sequential)]
     private readonly record struct EventPayload(int Unit, int Patient);
 }

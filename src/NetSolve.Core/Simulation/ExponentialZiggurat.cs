@@ -109,5 +109,6 @@ internal static class ExponentialZiggurat
 
     /// <param name="InsideBelow">Positions (53-bit) below this are under the curve for sure.</param>
     /// <param name="Scale">x_i / 2^53: position × scale is the point along the layer.</param>
+    [StructLayout(LayoutKind.Sequential)]
     private readonly record struct Layer(ulong InsideBelow, double Scale);
 }

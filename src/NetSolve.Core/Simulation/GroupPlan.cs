@@ -47,9 +47,3 @@ internal sealed class GroupPlan
         return DayOfWeek is null ? multiplier : multiplier * DayOfWeek[(int)(wholeHours / 24 % 7)];
     }
 }
-
-/// <summary>One route of a <see cref="GroupPlan"/>: taken by a uniform draw below <paramref name="Cumulative"/> that is
-/// not below the previous route's.</summary>
-/// <param name="Cumulative">Probability of this route and those before it in its row.</param>
-/// <param name="Target">Destination unit.</param>
-internal readonly record struct RouteChoice(double Cumulative, int Target);

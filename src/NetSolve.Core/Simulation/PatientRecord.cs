@@ -1,6 +1,9 @@
+using System.Runtime.InteropServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>A patient in the network: when they entered it and their current unit, and their group. Pooled by index.</summary>
+[StructLayout(LayoutKind.Sequential)]
 internal struct PatientRecord
 {
     /// <summary>Time the patient entered the network, in hours.</summary>

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Diagnostics.CodeAnalysis;
 using System.Globalization;
 
 namespace NetSolve.Simulation;
@@ -35,6 +36,7 @@ public sealed record SimulationOptions
     public int MaxDegreeOfParallelism { get; init; } = -1;
 
     /// <summary>Throws <see cref="ArgumentException"/> naming the first option out of range.</summary>
+    [SuppressMessage("Usage", "MA0015:Specify the parameter name in ArgumentException", Justification = "The parameter name is the option property out of range, which callers look for.")]
     public void Validate()
     {
         if (Replications < 1)

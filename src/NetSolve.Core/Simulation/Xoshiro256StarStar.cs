@@ -1,9 +1,12 @@
+using System.Runtime.InteropServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>
 /// The xoshiro256** generator (Blackman and Vigna, "Scrambled linear pseudorandom number generators", 2018):
 /// 256 bits of state, period 2^256 − 1, a few nanoseconds per draw. Mutable; one per replication, never shared.
 /// </summary>
+[StructLayout(LayoutKind.Sequential)]
 internal struct Xoshiro256StarStar
 {
     private const double UnitScale = 1.0 / (1UL << 53);

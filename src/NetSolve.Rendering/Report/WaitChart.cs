@@ -99,6 +99,6 @@ public static partial class WaitChart
         });
     }
 
-    [System.Text.RegularExpressions.GeneratedRegex(@"\bcl_[0-9a-f]+\b")]
+    [System.Text.RegularExpressions.GeneratedRegex(@"\bcl_[0-9a-f]+\b", System.Text.RegularExpressions.RegexOptions.None, matchTimeoutMilliseconds: 1000)]
     private static partial System.Text.RegularExpressions.Regex ClipIdRegex();
 }

@@ -16,7 +16,7 @@ public sealed class BudgetAllocationTests
         {
             int count = 2 + random.Next(2);
             var units = Enumerable.Range(0, count)
-                .Select(k => ($"u{k}", 1 + random.Next(4), 0.2 + random.NextDouble()))
+                .Select(k => (FormattableString.Invariant($"u{k}"), 1 + random.Next(4), 0.2 + random.NextDouble()))
                 .ToArray();
             var arrivals = units.Select(u => (u.Item1, (0.3 + (0.6 * random.NextDouble())) * u.Item2 / u.Item3)).ToArray();
             var solution = NetworkSolver.Solve(SmallNetworks.Build(units, arrivals));

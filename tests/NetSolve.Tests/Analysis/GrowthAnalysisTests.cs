@@ -14,7 +14,7 @@ public sealed class GrowthAnalysisTests
         var solution = NetworkSolver.Solve(SmallNetworks.Example("harbourside.yaml"));
         var growth = GrowthAnalysis.Run(solution);
         var expected = solution.Units.Where(u => u.Headroom is not null).OrderBy(u => u.Headroom).ToList();
-        Assert.Equal(expected.Select(u => u.Unit.Id), growth.Saturation.Select(p => p.UnitId));
+        Assert.Equal(expected.Select(u => u.Unit.Id), growth.Saturation.Select(p => p.UnitId), StringComparer.Ordinal);
         foreach (var point in growth.Saturation)
         {
             var unit = solution.Units.Single(u => u.Unit.Id == point.UnitId);

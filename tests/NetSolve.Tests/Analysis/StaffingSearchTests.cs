@@ -54,10 +54,10 @@ public sealed class StaffingSearchTests
             [("emergency", "ward", 0.1)]);
         var solution = NetworkSolver.Solve(network);
         var targets = new StaffingTargets(MaxUtilisation: 0.8);
-        var plan = StaffingSearch.MeetTargets(solution, targets, new Dictionary<string, double> { ["ward"] = 2.5 });
+        var plan = StaffingSearch.MeetTargets(solution, targets, new Dictionary<string, double>(StringComparer.Ordinal) { ["ward"] = 2.5 });
         // Exact by hand: emergency a = 1.5 → c = ⌈1.5/0.8⌉ = 2 (no change); ward λ = 0.3/h, a = 7.2 → ⌈7.2/0.8⌉ = 9 < 10 today.
         Assert.Equal([0, 0], plan.Units.Select(u => u.Added));
-        var tighter = StaffingSearch.MeetTargets(solution, new StaffingTargets(MaxUtilisation: 0.6), new Dictionary<string, double> { ["ward"] = 2.5 });
+        var tighter = StaffingSearch.MeetTargets(solution, new StaffingTargets(MaxUtilisation: 0.6), new Dictionary<string, double>(StringComparer.Ordinal) { ["ward"] = 2.5 });
         // ⌈1.5/0.6⌉ = 3 (+1 at cost 1) and ⌈7.2/0.6⌉ = 12 (+2 at cost 2.5): 3 servers, cost 6.
         Assert.Equal(3, tighter.TotalAdded);
         Assert.Equal(6.0, tighter.TotalCost, 1e-12);

@@ -127,9 +127,9 @@ public sealed class SimulateCommandTests
         Assert.Equal("hour", header[0]);
 
         // Source: the larkspur file: the ward's capacity equals its beds, so nobody waits there; the others have queues.
-        Assert.DoesNotContain("ward", header);
+        Assert.DoesNotContain("ward", header, StringComparer.Ordinal);
         Assert.Equal(["00", "01", "02", "03", "04", "05", "06", "07", "08", "09", "10", "11", "12", "13", "14", "15", "16", "17", "18", "19", "20", "21", "22", "23", "peak"],
-            lines[(title + 3)..(title + 28)].Select(line => line.Split(' ')[0]));
+            lines[(title + 3)..(title + 28)].Select(line => line.Split(' ')[0]), StringComparer.Ordinal);
         Assert.Equal("1 other unit(s) not shown: their queues peak lower or stay at 0 (every unit is in --format json and csv)", lines[title + 28]);
     }
 
@@ -150,7 +150,7 @@ public sealed class SimulateCommandTests
         Assert.Equal(24, unit.GetProperty("mean_queue_by_hour").GetArrayLength());
         Assert.Equal(24, unit.GetProperty("mean_queue_by_hour_ci").GetArrayLength());
         string[] header = csv.Out.Split('\n')[0].Split(',');
-        Assert.Equal(Enumerable.Range(0, 24).Select(h => $"mean_queue_h{h:00}"), header[^24..]);
+        Assert.Equal(Enumerable.Range(0, 24).Select(h => FormattableString.Invariant($"mean_queue_h{h:00}")), header[^24..], StringComparer.Ordinal);
         string[] firstRow = csv.Out.Split('\n')[1].Split(',');
         Assert.Equal(header.Length, firstRow.Length);
         Assert.Equal(unit.GetProperty("mean_queue_by_hour")[23].GetDouble(), double.Parse(firstRow[^1], System.Globalization.CultureInfo.InvariantCulture));

@@ -69,7 +69,7 @@ public sealed class NetworkFitterTests
         var read = NetworkReader.ReadText(text.ToString(), "fitted.yaml");
 
         Assert.False(read.HasErrors, string.Join("\n", read.Diagnostics));
-        Assert.Equal(fitted.Network.Units.Select(unit => unit.Id), read.Network!.Units.Select(unit => unit.Id));
+        Assert.Equal(fitted.Network.Units.Select(unit => unit.Id), read.Network!.Units.Select(unit => unit.Id), StringComparer.Ordinal);
         Assert.Equal(fitted.Network.ExternalArrivalsPerHour, read.Network.ExternalArrivalsPerHour, 1e-5);
     }
 

@@ -59,7 +59,7 @@ public sealed class ComparisonCsvWriterTests
             Assert.Equal(shown.Simulated, SimulationTableWriter.WithHalfWidth(simulated, 1.0));
         }
 
-        Assert.All(verdictsPresent, verdict => Assert.Contains(verdict, csvRows.Select(row => row[5])));
+        Assert.All(verdictsPresent, verdict => Assert.Contains(verdict, csvRows.Select(row => row[5]), StringComparer.Ordinal));
     }
 
     [Fact]

@@ -37,7 +37,7 @@ public class BottleneckMapTests
         var solution = RenderingFixtures.Solved(example);
         var map = Draw(solution);
 
-        Assert.Equal(solution.Units.Select(u => u.Unit.Id), map.Units.Select(u => u.Id));
+        Assert.Equal(solution.Units.Select(u => u.Unit.Id), map.Units.Select(u => u.Id), StringComparer.Ordinal);
         foreach (var result in solution.Units)
         {
             var box = map.Unit(result.Unit.Id);
@@ -193,7 +193,7 @@ public class BottleneckMapTests
         Assert.Equal(40, solution.Units.Length);
         string svg = SvgMapWriter.WriteString(MapLayoutBuilder.Build(solution));
         var map = SvgMap.Parse(svg);
-        File.WriteAllText(Path.Combine(RenderingFixtures.OutputFolder(), $"generated-40-seed{seed}.svg"), svg);
+        File.WriteAllText(Path.Combine(RenderingFixtures.OutputFolder(), FormattableString.Invariant($"generated-40-seed{seed}.svg")), svg);
 
         AssertNoOverlap(map);
         AssertFlowsTouchTheirBoxes(map);
@@ -205,7 +205,7 @@ public class BottleneckMapTests
         const double printableMm = 210.0 - (2 * 15.0);
         const double minimumPt = 6.0;
         double smallestPt = map.FontSizes.Min() * (printableMm / map.Width) * (72.0 / 25.4);
-        Assert.True(smallestPt >= minimumPt, $"smallest text prints at {smallestPt:0.00} pt on A4 (map {map.Width:0} wide)");
+        Assert.True(smallestPt >= minimumPt, FormattableString.Invariant($"smallest text prints at {smallestPt:0.00} pt on A4 (map {map.Width:0} wide)"));
     }
 
     internal static void AssertNoOverlap(SvgMap map)
@@ -227,8 +227,8 @@ public class BottleneckMapTests
         {
             double start = map.Unit(flow.From).Box.DistanceToBorder(flow.Start);
             double end = map.Unit(flow.To).Box.DistanceToBorder(flow.Tip);
-            Assert.True(start <= tolerance, $"{flow.From} -> {flow.To} starts {start:0.00} from its source box");
-            Assert.True(end <= tolerance, $"{flow.From} -> {flow.To} ends {end:0.00} from its target box");
+            Assert.True(start <= tolerance, FormattableString.Invariant($"{flow.From} -> {flow.To} starts {start:0.00} from its source box"));
+            Assert.True(end <= tolerance, FormattableString.Invariant($"{flow.From} -> {flow.To} ends {end:0.00} from its target box"));
         }
     }
 
@@ -240,7 +240,7 @@ public class BottleneckMapTests
             {
                 var (width, ascent, descent) = FontMeasure.Measure(text.Text, text.FontSize, text.IsBold);
                 string where = $"'{text.Text}' in {unit.Id}";
-                Assert.True(text.X >= unit.Box.X && text.X + width <= unit.Box.Right, $"{where}: {text.X:0.0}+{width:0.0} outside {unit.Box.X:0.0}..{unit.Box.Right:0.0}");
+                Assert.True(text.X >= unit.Box.X && text.X + width <= unit.Box.Right, FormattableString.Invariant($"{where}: {text.X:0.0}+{width:0.0} outside {unit.Box.X:0.0}..{unit.Box.Right:0.0}"));
                 Assert.True(text.Baseline - ascent >= unit.Box.Y && text.Baseline + descent <= unit.Box.Bottom, $"{where}: vertical overflow");
             }
         }

@@ -22,7 +22,7 @@ public class HarbourLightsPaletteTests
         var style = HarbourLightsPalette.For(status);
 
         // Source: WCAG 2.1 success criterion 1.4.3 (Contrast, Minimum): 4.5:1 for text.
-        Assert.True(Wcag.Contrast(style.Text, style.Fill) >= 4.5, $"{status}: {Wcag.Contrast(style.Text, style.Fill):0.00}");
+        Assert.True(Wcag.Contrast(style.Text, style.Fill) >= 4.5, FormattableString.Invariant($"{status}: {Wcag.Contrast(style.Text, style.Fill):0.00}"));
     }
 
     [Theory]
@@ -52,7 +52,7 @@ public class HarbourLightsPaletteTests
         for (int i = 1; i < fills.Count; i++)
         {
             Assert.True(Wcag.Luminance(fills[i]) < Wcag.Luminance(fills[i - 1]));
-            Assert.True(Wcag.Contrast(fills[i], fills[i - 1]) >= 1.5, $"{fills[i - 1]} vs {fills[i]}: {Wcag.Contrast(fills[i], fills[i - 1]):0.00}");
+            Assert.True(Wcag.Contrast(fills[i], fills[i - 1]) >= 1.5, FormattableString.Invariant($"{fills[i - 1]} vs {fills[i]}: {Wcag.Contrast(fills[i], fills[i - 1]):0.00}"));
         }
     }
 
@@ -61,8 +61,8 @@ public class HarbourLightsPaletteTests
     {
         // Source: WCAG 2.1 success criterion 1.4.1 (Use of Color): colour is not the only means of conveying information.
         var styles = HarbourLightsPalette.Order.Select(HarbourLightsPalette.For).ToList();
-        Assert.Equal(styles.Count, styles.Select(s => s.Word).Distinct().Count());
-        Assert.Equal(styles.Count, styles.Select(s => s.Glyph).Distinct().Count());
+        Assert.Equal(styles.Count, styles.Select(s => s.Word).Distinct(StringComparer.Ordinal).Count());
+        Assert.Equal(styles.Count, styles.Select(s => s.Glyph).Distinct(StringComparer.Ordinal).Count());
         Assert.Equal(styles.Count, styles.Select(s => (s.BorderDash, s.DoubleBorder)).Distinct().Count());
     }
 }

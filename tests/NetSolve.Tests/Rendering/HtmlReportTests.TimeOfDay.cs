@@ -64,7 +64,7 @@ public partial class HtmlReportTests
         var table = TimeOfDayTable(html);
 
         // Source: the larkspur file: the ward holds at most its 240 beds (capacity = servers), so nobody waits there.
-        Assert.DoesNotContain("ward", table.Units);
+        Assert.DoesNotContain("ward", table.Units, StringComparer.Ordinal);
         Assert.Equal(byPeak, table.Units);
         Assert.Equal(24, table.Rows.Count);
         for (int hour = 0; hour < 24; hour++)
@@ -138,6 +138,9 @@ public partial class HtmlReportTests
         // An invented minor injuries unit without an arrival profile: 2 treatment bays, 3 min each, 30 patients an hour.
         var unit = NetSolve.Tests.Simulation.TestNetworks.Unit("treatment", 2, 0.05);
         var network = NetSolve.Tests.Simulation.TestNetworks.Single(unit, 30.0);
+        // 16 replications: with 8, the half-width check at the end failed for about 45% of seeds (measured over seeds
+        // 1-300, with the ziggurat and with the earlier logarithm sampler alike), so it held only by the luck of the seed;
+        // with 16 it held for all 300.
         var options = new SimulationOptions { Seed = 11, Replications = 16, WarmupHours = 24, DurationHours = 120 * 24 };
         var simulation = Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken);
         string html = HtmlReport.Write(NetworkSolver.Solve(network), [], simulation);
@@ -151,12 +154,12 @@ public partial class HtmlReportTests
 
         var table = TimeOfDayTable(html);
         Assert.Equal(["treatment"], table.Units);
-        var hours = table.Rows.Select((row, hour) => ($"hour {hour:00}", new Estimate(row[0].Mean, row[0].Half, options.Replications), ErlangCMeanQueue)).ToList();
+        var hours = table.Rows.Select((row, hour) => (FormattableString.Invariant($"hour {hour:00}"), new Estimate(row[0].Mean, row[0].Half, options.Replications), ErlangCMeanQueue)).ToList();
         Bonferroni.AssertAllInside(hours);
 
         // The intervals are narrow enough to mean something: each widened half-width is under 30% of the queue.
         double widen = Bonferroni.Widening(hours.Count, options.Replications);
-        Assert.All(hours, h => Assert.True(h.Item2.HalfWidth!.Value * widen < 0.3 * ErlangCMeanQueue, $"{h.Item1}: half-width {h.Item2.HalfWidth}"));
+        Assert.All(hours, h => Assert.True(h.Item2.HalfWidth!.Value * widen < 0.3 * ErlangCMeanQueue, FormattableString.Invariant($"{h.Item1}: half-width {h.Item2.HalfWidth}")));
     }
 
     [Fact]

@@ -49,8 +49,8 @@ public partial class HtmlReportTests
         Assert.DoesNotContain("href=", html, StringComparison.OrdinalIgnoreCase);
 
         // Namespace names are identifiers, never fetched; any other http(s) text would be a reference.
-        var addresses = AddressRegex().Matches(html).Select(m => m.Value).Distinct().ToList();
-        Assert.All(addresses, a => Assert.Contains(a, NamespaceNames));
+        var addresses = AddressRegex().Matches(html).Select(m => m.Value).Distinct(StringComparer.Ordinal).ToList();
+        Assert.All(addresses, a => Assert.Contains(a, NamespaceNames, StringComparer.Ordinal));
         Assert.Contains("default-src 'none'", html, StringComparison.Ordinal);
     }
 

@@ -9,6 +9,6 @@ internal static class LocatorAssert
     {
         Assert.True(await locator.IsVisibleAsync(), $"{locator} is not visible");
         var box = await locator.BoundingBoxAsync();
-        Assert.True(box is not null && box.Width >= minWidth && box.Height > 0, $"{locator} is {box?.Width ?? 0} px wide");
+        Assert.True(box is not null && box.Width >= minWidth && box.Height > 0, FormattableString.Invariant($"{locator} is {box?.Width ?? 0} px wide"));
     }
 }

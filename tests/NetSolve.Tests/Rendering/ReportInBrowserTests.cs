@@ -1,3 +1,4 @@
+using System.Globalization;
 using Microsoft.Playwright;
 using NetSolve.Rendering.Report;
 using NetSolve.Simulation;
@@ -111,7 +112,7 @@ public partial class ReportInBrowserTests
 
             lock (requests)
             {
-                Assert.All(requests, url => Assert.Contains(url, pages));
+                Assert.All(requests, url => Assert.Contains(url, pages, StringComparer.Ordinal));
             }
         }
         finally
@@ -127,7 +128,7 @@ public partial class ReportInBrowserTests
         await tab.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
         int scrollWidth = await tab.EvaluateAsync<int>("document.documentElement.scrollWidth");
         string wide = await tab.EvaluateAsync<string>(
-            "Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > " + A4PrintableWidthPx + ").slice(0, 5).map(e => e.tagName + '#' + e.id + '.' + e.className + ' ' + Math.round(e.getBoundingClientRect().right)).join('; ')");
-        Assert.True(scrollWidth <= A4PrintableWidthPx, $"printed page is {scrollWidth} px wide: {wide}");
+            "Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > " + A4PrintableWidthPx.ToString(CultureInfo.InvariantCulture) + ").slice(0, 5).map(e => e.tagName + '#' + e.id + '.' + e.className + ' ' + Math.round(e.getBoundingClientRect().right)).join('; ')");
+        Assert.True(scrollWidth <= A4PrintableWidthPx, FormattableString.Invariant($"printed page is {scrollWidth} px wide: {wide}"));
     }
 }

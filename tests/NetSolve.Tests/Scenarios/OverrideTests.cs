@@ -81,7 +81,7 @@ public sealed class OverrideTests
             [("emergency", "imaging", 0.3), ("emergency", "ward", 0.1), ("imaging", "ward", 0.2)]);
         var edit = NetworkEditor.Apply(network, [new CloseUnit(default, "imaging", "ward")], default);
         var changed = edit.Network!;
-        Assert.Equal(["emergency", "ward"], changed.Units.Select(u => u.Id));
+        Assert.Equal(["emergency", "ward"], changed.Units.Select(u => u.Id), StringComparer.Ordinal);
         // The 0.3 that went to imaging now goes to the ward, added to the 0.1 already there.
         Assert.Equal(0.4, changed.Routes.Single(r => r.From == "emergency" && r.To == "ward").Probability, 1e-15);
         Assert.Single(changed.Routes);

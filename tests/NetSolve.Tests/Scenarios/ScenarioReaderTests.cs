@@ -36,7 +36,7 @@ public sealed class ScenarioReaderTests
     {
         var scenario = ScenarioReader.ReadFile(Path.Combine(ScenariosFolder, "harbourside-ambulatory-care.yaml")).Scenario!;
         var network = scenario.Network;
-        Assert.Equal(["emergency", "imaging", "lab", "ward", "ambulatory"], network.Units.Select(u => u.Id));
+        Assert.Equal(["emergency", "imaging", "lab", "ward", "ambulatory"], network.Units.Select(u => u.Id), StringComparer.Ordinal);
         // Exact by hand: every stream x1.05, then ambulatory set to 1.5/h.
         Assert.Equal(11.5 * 1.05, network.Arrivals.Single(a => a.UnitId == "emergency").PerHour, 1e-12);
         Assert.Equal(1.5, network.Arrivals.Single(a => a.UnitId == "ambulatory").PerHour, 1e-12);
@@ -60,7 +60,7 @@ public sealed class ScenarioReaderTests
         File.Copy(Path.Combine(SmallNetworks.NetworksFolder, "harbourside.yaml"), Path.Combine(folder, "harbourside.yaml"));
         File.WriteAllText(Path.Combine(folder, "scenario.yaml"), yaml);
         var result = ScenarioReader.ReadText(yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(folder, basePath)));
-        Assert.Equal([expected], result.Diagnostics.Where(d => d.IsError).Select(d => d.ToString()));
+        Assert.Equal([expected], result.Diagnostics.Where(d => d.IsError).Select(d => d.ToString()), StringComparer.Ordinal);
         Directory.Delete(folder, recursive: true);
     }
 
@@ -74,7 +74,8 @@ public sealed class ScenarioReaderTests
                 "scenario.yaml:4:5: unit 'ambulatory': missing 'service' (the mean time a patient holds a server, e.g. 45min)",
                 "scenario.yaml:5:5: unit 'ambulatory': unknown key 'servce'; did you mean 'service'?",
             ],
-            result.Diagnostics.Where(d => d.IsError).Select(d => d.ToString()));
+            result.Diagnostics.Where(d => d.IsError).Select(d => d.ToString()),
+            StringComparer.Ordinal);
     }
 
     [Fact]

@@ -83,7 +83,7 @@ public partial class NetSolveAppTests
 
         Assert.Equal(2, exitCode);
         Assert.Equal(string.Empty, output);
-        Assert.NotEqual(string.Empty, error);
+        Assert.NotEqual(string.Empty, error, StringComparer.Ordinal);
         AssertNoStackTrace(error);
     }
 
@@ -198,7 +198,7 @@ public partial class NetSolveAppTests
     [Fact]
     public void Json_reports_times_and_rates_in_the_files_time_unit()
     {
-        string path = Path.Combine(Path.GetTempPath(), $"netsolve-minutes-{Environment.ProcessId}.yaml");
+        string path = Path.Combine(Path.GetTempPath(), FormattableString.Invariant($"netsolve-minutes-{Environment.ProcessId}.yaml"));
         File.WriteAllText(path, "time_unit: minute\nunits:\n  desk:\n    servers: 1\n    service: 15\narrivals:\n  desk: 3/h\n");
         try
         {
@@ -224,7 +224,7 @@ public partial class NetSolveAppTests
     [Fact]
     public void An_unstable_network_exits_0_and_says_so_in_json_without_NaN()
     {
-        string path = Path.Combine(Path.GetTempPath(), $"netsolve-unstable-{Environment.ProcessId}.yaml");
+        string path = Path.Combine(Path.GetTempPath(), FormattableString.Invariant($"netsolve-unstable-{Environment.ProcessId}.yaml"));
         File.WriteAllText(path, "units:\n  clinic:\n    servers: 2\n    service: 1h\narrivals:\n  clinic: 3/h\n");
         try
         {

@@ -74,7 +74,7 @@ public class NetworkReaderTests
     [InlineData(3, true)]
     public void Five_megabytes_of_junk_give_one_located_error_and_no_exception(int seed, bool binary)
     {
-        string path = Path.Combine(Path.GetTempPath(), $"netsolve-junk-{seed}-{Environment.ProcessId}.yaml");
+        string path = Path.Combine(Path.GetTempPath(), FormattableString.Invariant($"netsolve-junk-{seed}-{Environment.ProcessId}.yaml"));
         File.WriteAllBytes(path, Junk(seed, binary, 5 * 1024 * 1024));
         try
         {

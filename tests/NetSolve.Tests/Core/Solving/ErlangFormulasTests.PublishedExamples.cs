@@ -30,8 +30,8 @@ public partial class ErlangFormulasTests
         double load = ExampleCallsPerHour * ExampleCallSeconds / TimeConstants.SecondsPerHour;
 
         Assert.Equal(20.0, load, Exact);
-        Assert.True(ErlangFormulas.WaitProbability(26, load) <= 0.15, $"C(26, 20) = {ErlangFormulas.WaitProbability(26, load)}");
-        Assert.True(ErlangFormulas.WaitProbability(25, load) > 0.15, $"C(25, 20) = {ErlangFormulas.WaitProbability(25, load)}");
+        Assert.True(ErlangFormulas.WaitProbability(26, load) <= 0.15, FormattableString.Invariant($"C(26, 20) = {ErlangFormulas.WaitProbability(26, load)}"));
+        Assert.True(ErlangFormulas.WaitProbability(25, load) > 0.15, FormattableString.Invariant($"C(25, 20) = {ErlangFormulas.WaitProbability(25, load)}"));
     }
 
     [Fact]

@@ -103,8 +103,8 @@ public partial class ErlangFormulasTests
         double wait = ErlangFormulas.WaitProbability(100_000, 99_990.0);
         double blocking = ErlangFormulas.BlockingProbability(100_000, 99_990.0);
 
-        Assert.True(double.IsFinite(wait) && wait is > 0.0 and <= 1.0, $"P(wait) = {wait}");
-        Assert.True(double.IsFinite(blocking) && blocking is > 0.0 and < 1.0, $"B = {blocking}");
+        Assert.True(double.IsFinite(wait) && wait is > 0.0 and <= 1.0, FormattableString.Invariant($"P(wait) = {wait}"));
+        Assert.True(double.IsFinite(blocking) && blocking is > 0.0 and < 1.0, FormattableString.Invariant($"B = {blocking}"));
         Assert.True(wait > blocking);
     }
 

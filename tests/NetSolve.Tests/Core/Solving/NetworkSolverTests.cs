@@ -128,7 +128,7 @@ public partial class NetworkSolverTests
         {
             double?[] values = [unit.ArrivalsPerHour, unit.VisitsPerPatient, unit.OfferedLoad, unit.Utilisation, unit.WaitProbability,
                 unit.MeanQueue, unit.MeanWaitHours, unit.MeanInUnit, unit.MeanTimeInUnitHours, unit.Headroom];
-            Assert.All(values, value => Assert.True(value is null || double.IsFinite(value.Value), $"{unit.Unit.Id}: {value}"));
+            Assert.All(values, value => Assert.True(value is null || double.IsFinite(value.Value), FormattableString.Invariant($"{unit.Unit.Id}: {value}")));
             Assert.InRange(unit.WaitProbability, 0.0, 1.0);
         }
     }
@@ -147,9 +147,9 @@ public partial class NetworkSolverTests
             var routing = RoutingTable.Build(network);
             var dense = TrafficEquations.Solve(routing, TrafficSolveMethod.Dense);
             var sparse = TrafficEquations.Solve(routing, TrafficSolveMethod.Sparse);
-            AssertFlowConserved(network, dense, $"trial {trial}, dense");
-            AssertFlowConserved(network, sparse, $"trial {trial}, sparse");
-            AssertFlowConserved(network, TrafficEquations.Solve(routing), $"trial {trial}, automatic");
+            AssertFlowConserved(network, dense, FormattableString.Invariant($"trial {trial}, dense"));
+            AssertFlowConserved(network, sparse, FormattableString.Invariant($"trial {trial}, sparse"));
+            AssertFlowConserved(network, TrafficEquations.Solve(routing), FormattableString.Invariant($"trial {trial}, automatic"));
             for (int i = 0; i < units; i++)
             {
                 Assert.Equal(dense[i], sparse[i], 1e-7 * Math.Max(1.0, dense[i]));
@@ -160,7 +160,7 @@ public partial class NetworkSolverTests
         {
             int units = random.Next(TrafficEquations.DenseLimit + 1, TrafficEquations.DenseLimit + 3_000);
             var network = NetworkGenerator.Generate(units, seed: random.Next(), maxRoutesPerUnit: 5, arrivalShare: 0.5).Network;
-            AssertFlowConserved(network, TrafficEquations.Solve(RoutingTable.Build(network)), $"large trial {trial}");
+            AssertFlowConserved(network, TrafficEquations.Solve(RoutingTable.Build(network)), FormattableString.Invariant($"large trial {trial}"));
         }
     }
 
@@ -176,12 +176,12 @@ public partial class NetworkSolverTests
         double exits = 0.0;
         for (int i = 0; i < flows.Length; i++)
         {
-            Assert.True(double.IsFinite(flows[i]) && flows[i] >= 0.0, $"{what}: flow {flows[i]} at unit {i}");
+            Assert.True(double.IsFinite(flows[i]) && flows[i] >= 0.0, FormattableString.Invariant($"{what}: flow {flows[i]} at unit {i}"));
             exits += flows[i] * Math.Max(0.0, 1.0 - routedOut[i]);
         }
 
         double external = network.Arrivals.Sum(arrival => arrival.PerHour);
-        Assert.True(Math.Abs(external - exits) <= 1e-8 * external, $"{what}: external {external}, exits {exits}");
+        Assert.True(Math.Abs(external - exits) <= 1e-8 * external, FormattableString.Invariant($"{what}: external {external}, exits {exits}"));
     }
 
     // Source: the network file contract, status rule: utilisation >= 1 is unstable, its waits are absent, and the
