@@ -50,7 +50,7 @@ public partial class ReportInBrowserTests
                 File.WriteAllText(network, ChainYaml(TallUnitCount));
                 var error = new StringWriter();
                 int code = NetSolveApp.Run(["report", network, "-o", report], new CliContext(new StringWriter(), error));
-                Assert.True(code == 0, $"netsolve report exited {code}: {error}");
+                Assert.True(code == 0, string.Create(CultureInfo.InvariantCulture, $"netsolve report exited {code}: {error}"));
             }
             else
             {
@@ -84,7 +84,7 @@ public partial class ReportInBrowserTests
         var (mapWidth, mapHeight) = await ViewBoxSize(map);
         double widestPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
         double atPageWidthPx = mapHeight * Math.Min(A4PrintableWidthPx, widestPx) / mapWidth;
-        Assert.True(atPageWidthPx > 2 * PrintableAreas[0].HeightPx, $"the {shape} map is {atPageWidthPx:0} px tall at A4 width: less than two pages");
+        Assert.True(atPageWidthPx > 2 * PrintableAreas[0].HeightPx, string.Create(CultureInfo.InvariantCulture, $"the {shape} map is {atPageWidthPx:0} px tall at A4 width: less than two pages"));
 
         // On screen, as before: as wide as its column up to 125% of its own width, in proportion, no note.
         var screen = (await map.BoundingBoxAsync())!;
@@ -100,8 +100,8 @@ public partial class ReportInBrowserTests
 
             // The whole section (heading, note, map, caption) fits the printable height and may not break.
             var section = (await tab.Locator("#map").BoundingBoxAsync())!;
-            Assert.True(section.Height <= heightPx, $"{paper}: the map section is {section.Height:0} px tall, the page {heightPx} px");
-            Assert.Contains(await tab.Locator("#map").EvaluateAsync<string>("e => getComputedStyle(e).breakInside"), KeptTogether);
+            Assert.True(section.Height <= heightPx, string.Create(CultureInfo.InvariantCulture, $"{paper}: the map section is {section.Height:0} px tall, the page {heightPx} px"));
+            Assert.Contains(await tab.Locator("#map").EvaluateAsync<string>("e => getComputedStyle(e).breakInside"), (IEnumerable<string>)KeptTogether, StringComparer.Ordinal);
 
             // Scaled alike across and down, the whole view box drawn inside the map's box (nothing clipped) and the page.
             var drawn = await map.EvaluateAsync<PrintedDrawing>(
