@@ -1,5 +1,6 @@
 using System.Text.Json;
 using NetSolve.Model;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Core.Cli;
 
@@ -24,30 +25,6 @@ public partial class NetSolveAppTests
           agents: 600/h
         """;
 
-    // Source: FabTime Inc., "M/M/1 Queues in Series with Rework", www.fabtime.com/MM1Rework.shtml. Three single-machine
-    // workstations processing 2.0 lots per hour, 1.0 lot per hour in, 20% of lots leaving workstation one reworked and
-    // sent back to it. Published: expected system cycle time "2.81 hours".
-    private const string ReworkExample = """
-        name: Published rework loop
-        units:
-          step_one:
-            servers: 1
-            service: 30min
-          rework:
-            servers: 1
-            service: 30min
-          step_two:
-            servers: 1
-            service: 30min
-        arrivals:
-          step_one: 1/h
-        routes:
-          step_one:
-            rework: 0.2
-            step_two: 0.8
-          rework:
-            step_one: 1
-        """;
 
     [Fact]
     public void Solve_gives_the_published_Erlang_C_example_for_26_25_and_30_servers()
@@ -84,7 +61,7 @@ public partial class NetSolveAppTests
     public void Solve_gives_the_published_cycle_time_of_a_rework_loop()
     {
         using var folder = new TemporaryFolder();
-        string path = folder.Write("rework-example.yaml", ReworkExample);
+        string path = folder.Write("rework-example.yaml", PublishedNetworks.ReworkLoop);
 
         var (exitCode, output, error) = Run("solve", path, "--format", "json");
 

@@ -56,28 +56,7 @@ public partial class NetworkSolverTests
     [Fact]
     public void A_rework_loop_solves_to_the_published_flows_and_cycle_time()
     {
-        const string Yaml = """
-            name: Published rework loop
-            units:
-              step_one:
-                servers: 1
-                service: 30min
-              rework:
-                servers: 1
-                service: 30min
-              step_two:
-                servers: 1
-                service: 30min
-            arrivals:
-              step_one: 1/h
-            routes:
-              step_one:
-                rework: 0.2
-                step_two: 0.8
-              rework:
-                step_one: 1
-            """;
-        var solution = NetworkSolver.Solve(TestNetworks.Parse(Yaml));
+        var solution = NetworkSolver.Solve(TestNetworks.Parse(PublishedNetworks.ReworkLoop));
         double[] flows = [.. solution.Units.Select(unit => unit.ArrivalsPerHour)];
 
         // The flows are sums of a geometric series, exact on the page.
