@@ -143,7 +143,7 @@ internal sealed partial class SimulationEngine
 
             if (chunks % ChunksPerProgress == 0)
             {
-                progress?.Invoke(_events.EarliestTime / _end);
+                progress?.Invoke(Math.Min(_events.EarliestTime / _end, 1.0));
             }
         }
 
