@@ -26,7 +26,7 @@ public static class SimulationCsvWriter
         output.Write(string.Join(",", header) + "\n");
         foreach (var unit in result.Units)
         {
-            var cells = new List<string> { Quote(unit.Unit.Id), Quote(unit.Unit.Label), unit.Unit.Servers.ToString() };
+            var cells = new List<string> { SolutionCsvWriter.Text(unit.Unit.Id), SolutionCsvWriter.Text(unit.Unit.Label), unit.Unit.Servers.ToString() };
             foreach (var (estimate, factor) in new[]
             {
                 (unit.ArrivalsPerHour, scale.RateFactor), (unit.Utilisation, 1.0), (unit.WaitProbability, 1.0),
@@ -47,7 +47,4 @@ public static class SimulationCsvWriter
     }
 
     private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
-
-    private static string Quote(string text) =>
-        text.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + text.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : text;
 }
