@@ -21,7 +21,7 @@ public static class SimulationCsvWriter
         }
 
         header.AddRange(["time_in_unit_p50", "time_in_unit_p90", "time_in_unit_p95", "time_in_unit_p99"]);
-        header.AddRange(thresholds.Select(t => "p_wait_over_" + Number(scale.Time(t))));
+        header.AddRange(thresholds.Select(t => "p_wait_over_" + SolutionCsvWriter.Number(scale.Time(t))));
         header.AddRange(Enumerable.Range(0, TimeOfDayQueues.HoursOfDay).Select(h => "mean_queue_h" + h.ToString("00", CultureInfo.InvariantCulture)));
         output.Write(string.Join(",", header) + "\n");
         foreach (var unit in result.Units)
@@ -35,16 +35,14 @@ public static class SimulationCsvWriter
                 (unit.TurnedAwayPerHour, scale.RateFactor), (unit.DivertedPerHour, scale.RateFactor),
             })
             {
-                cells.Add(Number(estimate.Mean * factor));
-                cells.Add(estimate.HalfWidth is double half ? Number(half * factor) : string.Empty);
+                cells.Add(SolutionCsvWriter.Number(estimate.Mean * factor));
+                cells.Add(estimate.HalfWidth is double half ? SolutionCsvWriter.Number(half * factor) : string.Empty);
             }
 
-            cells.AddRange(unit.TimeInUnitPercentiles.Select(p => p.Hours is Estimate hours ? Number(hours.Mean * scale.TimeFactor) : string.Empty));
-            cells.AddRange(unit.WaitOver.Select(over => Number(over.Probability.Mean)));
-            cells.AddRange(unit.MeanQueueByHour.Select(hour => hour is Estimate estimate ? Number(estimate.Mean) : string.Empty));
+            cells.AddRange(unit.TimeInUnitPercentiles.Select(p => p.Hours is Estimate hours ? SolutionCsvWriter.Number(hours.Mean * scale.TimeFactor) : string.Empty));
+            cells.AddRange(unit.WaitOver.Select(over => SolutionCsvWriter.Number(over.Probability.Mean)));
+            cells.AddRange(unit.MeanQueueByHour.Select(hour => hour is Estimate estimate ? SolutionCsvWriter.Number(estimate.Mean) : string.Empty));
             output.Write(string.Join(",", cells) + "\n");
         }
     }
-
-    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 }
