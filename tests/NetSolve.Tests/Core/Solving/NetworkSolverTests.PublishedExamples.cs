@@ -17,13 +17,12 @@ public partial class NetworkSolverTests
     /// <summary>For values a source works out in exact arithmetic (for example 0.8 / (1 − 0.8) = 4).</summary>
     private const double ExactArithmetic = 1e-9;
 
-    // Source: worked solution of problem 2.6.1, an M/M/1 queue with mean interarrival time 1.25 min and mean service
-    // time 1 min, published on RPubs: rstudio-pubs-static.s3.amazonaws.com/305152_deb4ef47278a4a20a136768a8293127e.html
-    // (the problem set is chapter 2 of Kelton, Smith and Sturrock, Simio and Simulation: Modeling, Analysis,
-    // Applications; that attribution is from memory). Published, in exact arithmetic: λ = 0.8 per minute, μ = 1 per
-    // minute, ρ = 0.8, L = 4, W = 5 minutes, Wq = 4 minutes, Lq = 3.2.
+    // Source: textbook closed forms for the M/M/1 queue, worked by hand (D. Gross, J. F. Shortle, J. M. Thompson and
+    // C. M. Harris, Fundamentals of Queueing Theory, 4th ed., Wiley 2008, section 2.2; the section number is from
+    // memory). With λ = 0.8 and μ = 1 per minute: ρ = λ/μ = 0.8, L = ρ/(1 − ρ) = 4, Lq = ρ²/(1 − ρ) = 3.2,
+    // W = 1/(μ − λ) = 5 minutes, Wq = ρ/(μ − λ) = 4 minutes; exact arithmetic.
     [Fact]
-    public void A_single_server_at_rho_0_8_matches_the_published_M_M_1_solution_in_minutes()
+    public void A_single_server_at_rho_0_8_matches_the_textbook_M_M_1_closed_forms_in_minutes()
     {
         const string Yaml = """
             name: Published M/M/1 example
