@@ -1,5 +1,5 @@
 using System.Text;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 

@@ -1,4 +1,4 @@
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli;

@@ -1,6 +1,6 @@
 using System.CommandLine;
 using NetSolve.Analysis;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;

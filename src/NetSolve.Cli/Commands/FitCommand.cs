@@ -3,7 +3,7 @@ using System.Globalization;
 using System.Text;
 using NetSolve.Fitting;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Parsing;
 
 namespace NetSolve.Cli.Commands;

@@ -2,7 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using NetSolve.Analysis;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Parsing;
 using NetSolve.Solving;
 

@@ -1,6 +1,6 @@
 using System.Text;
 using Microsoft.Msagl.Core.Geometry.Curves;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using MsaglPoint = Microsoft.Msagl.Core.Geometry.Point;
 
 namespace NetSolve.Rendering.Map;

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 
 namespace NetSolve.Rendering.Map;
 

@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 using Microsoft.Msagl.Core.Geometry.Curves;
 using Microsoft.Msagl.Core.Layout;

@@ -1,6 +1,5 @@
 using System.Xml.Linq;
 using NetSolve.Model;
-using NetSolve.Rendering.Text;
 
 namespace NetSolve.Rendering.Map;
 

@@ -1,5 +1,4 @@
 using Microsoft.Msagl.Core.Geometry.Curves;
-using NetSolve.Rendering.Text;
 using MsaglPoint = Microsoft.Msagl.Core.Geometry.Point;
 
 namespace NetSolve.Rendering.Map;

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Xml.Linq;
 using NetSolve.Model;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Map;

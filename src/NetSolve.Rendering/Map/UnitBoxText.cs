@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Map;

@@ -1,5 +1,5 @@
 using System.Globalization;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Report;

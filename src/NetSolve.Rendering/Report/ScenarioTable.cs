@@ -1,7 +1,6 @@
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Output;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 using static System.Net.WebUtility;
 

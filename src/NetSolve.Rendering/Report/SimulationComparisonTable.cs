@@ -1,6 +1,7 @@
+using NetSolve.Analysis;
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 using static System.Net.WebUtility;
@@ -37,7 +38,7 @@ internal static class SimulationComparisonTable
         for (int i = 0; i < simulation.Units.Length; i++)
         {
             var simulated = simulation.Units[i];
-            var wait = Comparison.ForUnit(simulated, formula.Units[i]).Single(metric => metric.Name == "mean_wait");
+            var wait = FormulaSimulationComparison.ForUnit(simulated, formula.Units[i]).Single(metric => metric.Name == "mean_wait");
             var tail = simulated.TimeInUnitPercentiles.FirstOrDefault(p => Math.Abs(p.Percent - TailPercent) < PercentSlack)?.Hours;
             html.Append("<tr data-unit=\"").Append(HtmlEncode(simulated.Unit.Id)).Append("\"><td>").Append(HtmlEncode(simulated.Unit.Label)).Append("</td>")
                 .Append(HtmlReport.Cell(HtmlReport.Time(wait.Formula * scale.TimeFactor)))

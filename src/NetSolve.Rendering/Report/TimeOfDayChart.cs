@@ -1,5 +1,5 @@
 using System.Globalization;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Simulation;
 using ScottPlot;
 

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Simulation;
 using static System.Net.WebUtility;
 

@@ -1,6 +1,6 @@
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 using static System.Net.WebUtility;
 

@@ -1,6 +1,6 @@
 using System.Globalization;
 using NetSolve.Model;
-using NetSolve.Rendering.Text;
+using NetSolve.Presentation;
 using ScottPlot;
 
 namespace NetSolve.Rendering.Report;

@@ -1,6 +1,6 @@
 using System.Text.Json;
 using NetSolve.Cli;
-using NetSolve.Output;
+using NetSolve.Presentation;
 
 namespace NetSolve.Tests.Analysis;
 

@@ -1,6 +1,6 @@
 using NetSolve.Fitting;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Parsing;
 
 namespace NetSolve.Tests.Fitting;

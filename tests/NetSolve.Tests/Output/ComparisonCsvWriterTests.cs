@@ -1,6 +1,6 @@
 using System.Globalization;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using System.Xml.Linq;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Rendering.Report;
 using NetSolve.Simulation;
 using NetSolve.Solving;

@@ -1,5 +1,5 @@
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;
 

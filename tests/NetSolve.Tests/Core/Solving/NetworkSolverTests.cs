@@ -1,6 +1,6 @@
 using NetSolve.Benchmarks;
 using NetSolve.Model;
-using NetSolve.Output;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;
 

@@ -2,7 +2,7 @@ using System.Text.Json;
 using NetSolve.Analysis;
 using NetSolve.Model;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes pathway results (<see cref="PathwayResult"/>, <see cref="PathResult"/>) as a table, JSON or CSV.</summary>
 /// <remarks>Times are in the network's time unit, which every format states.</remarks>

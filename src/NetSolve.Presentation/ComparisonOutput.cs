@@ -4,7 +4,7 @@ using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a <see cref="ComparisonResult"/> as tables for people, as JSON, or as long-format CSV.</summary>
 /// <remarks>Every time is in the base network's time unit, which every format states.</remarks>

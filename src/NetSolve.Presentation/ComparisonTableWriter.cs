@@ -1,9 +1,10 @@
+using NetSolve.Analysis;
 using System.Globalization;
 using NetSolve.Model;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes formula against simulation, one row per unit and metric, with the verdict.</summary>
 public static class ComparisonTableWriter
@@ -21,9 +22,9 @@ public static class ComparisonTableWriter
         int outside = 0;
         for (int i = 0; i < simulated.Units.Length; i++)
         {
-            foreach (var metric in Comparison.ForUnit(simulated.Units[i], formula.Units[i]))
+            foreach (var metric in FormulaSimulationComparison.ForUnit(simulated.Units[i], formula.Units[i]))
             {
-                double factor = metric.Factor(scale);
+                double factor = scale.FactorFor(metric.Dimension);
                 table.Add(
                     simulated.Units[i].Unit.Id,
                     metric.Name,

@@ -1,4 +1,4 @@
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>A plain-text table with aligned columns: text left-aligned, numbers right-aligned.</summary>
 /// <remarks>Mutable builder; not thread-safe. Output uses only spaces and '-' so it survives any terminal or file.</remarks>

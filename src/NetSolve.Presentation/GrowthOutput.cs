@@ -3,7 +3,7 @@ using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a <see cref="GrowthResult"/> as a table for people, as JSON, or as long-format CSV ready to plot.</summary>
 /// <remarks>Times are in the network's time unit, which every format states.</remarks>

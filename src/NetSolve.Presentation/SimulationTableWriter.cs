@@ -1,9 +1,10 @@
+using NetSolve.Analysis;
 using System.Globalization;
 using NetSolve.Model;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>
 /// Writes a simulation for people: the unit table (each mean with ± its 95% half-width), times in unit by percentile,

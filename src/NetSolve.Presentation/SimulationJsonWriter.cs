@@ -1,10 +1,11 @@
+using NetSolve.Analysis;
 using System.Collections.Immutable;
 using System.Text.Json;
 using NetSolve.Model;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>
 /// Writes a simulation as the <c>solve</c> document plus confidence and percentile fields: each simulated metric
@@ -93,7 +94,7 @@ public static class SimulationJsonWriter
         HourlyArray(json, "mean_queue_by_hour_ci", unit.MeanQueueByHour, estimate => estimate.HalfWidth);
         if (formula is not null)
         {
-            WriteComparison(json, Comparison.ForUnit(unit, formula), scale);
+            WriteComparison(json, FormulaSimulationComparison.ForUnit(unit, formula), scale);
         }
 
         json.WriteEndObject();
@@ -104,7 +105,7 @@ public static class SimulationJsonWriter
         json.WriteStartObject("compare");
         foreach (var metric in metrics)
         {
-            double factor = metric.Factor(scale);
+            double factor = scale.FactorFor(metric.Dimension);
             json.WriteStartObject(metric.Name);
             SolutionJsonWriter.Number(json, "formula", metric.Formula * factor);
             json.WriteNumber("simulated", metric.Simulated.Mean * factor);

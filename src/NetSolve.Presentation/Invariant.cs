@@ -1,9 +1,9 @@
 using System.Globalization;
 
-namespace NetSolve.Rendering.Text;
+namespace NetSolve.Presentation;
 
 /// <summary>Number formatting for every rendered output: invariant culture, units always shown.</summary>
-internal static class Invariant
+public static class Invariant
 {
     /// <summary>Magnitudes below this print as "&lt; 0.001": too small to plan with, and kept out of exponent form.</summary>
     public const double Smallest = 0.001;
@@ -37,7 +37,7 @@ internal static class Invariant
     }
 
     /// <summary>Two significant digits below 10, for the tight space of a map box: 0.0385 gives <c>0.039</c>; from 10 up as <see cref="Number"/>.</summary>
-    public static string Short(double value)
+    public static string Brief(double value)
     {
         double magnitude = Math.Abs(value);
         if (magnitude >= 10.0 || value == 0.0)

@@ -1,13 +1,14 @@
+using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes formula against simulation as CSV: a header, then one row per unit and metric, with the verdict.</summary>
 /// <remarks>
 /// The rows, their order and the verdicts are those of <see cref="ComparisonTableWriter"/>, because both take them
-/// from <see cref="Comparison.ForUnit"/>. Unlike the table, numbers keep round-trip precision: a program that
+/// from <see cref="FormulaSimulationComparison.ForUnit"/>. Unlike the table, numbers keep round-trip precision: a program that
 /// recomputes a verdict from the CSV must see the values the verdict was made from. Invariant culture; an empty cell
 /// stands for a value that does not exist (the formula of an unstable unit, the interval of a single replication).
 /// </remarks>
@@ -39,9 +40,9 @@ public static class ComparisonCsvWriter
         for (int i = 0; i < simulated.Units.Length; i++)
         {
             string unitId = SolutionCsvWriter.Text(simulated.Units[i].Unit.Id);
-            foreach (var metric in Comparison.ForUnit(simulated.Units[i], formula.Units[i]))
+            foreach (var metric in FormulaSimulationComparison.ForUnit(simulated.Units[i], formula.Units[i]))
             {
-                double factor = metric.Factor(scale);
+                double factor = scale.FactorFor(metric.Dimension);
                 output.Write(string.Join(
                     ',',
                     unitId,

@@ -1,6 +1,6 @@
 using System.Globalization;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>How numbers look in tables meant for people: invariant culture, a sensible number of digits.</summary>
 public static class Numbers

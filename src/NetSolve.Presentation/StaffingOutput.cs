@@ -4,7 +4,7 @@ using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a <see cref="StaffingPlan"/> (the targets search) as a table, JSON or CSV.</summary>
 /// <remarks>Times are in the network's time unit, which every format states. The table carries no caution; the caller adds it.</remarks>

@@ -1,9 +1,9 @@
 using NetSolve.Model;
 
-namespace NetSolve.Rendering.Text;
+namespace NetSolve.Presentation;
 
 /// <summary>Turns Core's hours and rates per hour into the network's own time unit, with the unit written beside.</summary>
-internal static class Units
+public static class Units
 {
     /// <summary>A duration stored in hours, printed in <paramref name="unit"/>: <c>0.52 h</c>, or <c>&lt; 0.001 h</c> when tiny.</summary>
     public static string Time(double hours, TimeUnit unit) =>
@@ -13,7 +13,7 @@ internal static class Units
     public static string ShortTime(double hours, TimeUnit unit)
     {
         double value = TimeConstants.FromHours(hours, unit);
-        string number = value > 0.0 && value < Invariant.Smallest ? "< 0.001" : Invariant.Short(value);
+        string number = value > 0.0 && value < Invariant.Smallest ? "< 0.001" : Invariant.Brief(value);
         return number + " " + TimeConstants.Suffix(unit);
     }
 
@@ -21,7 +21,7 @@ internal static class Units
     public static string ShortRate(double perHour, TimeUnit unit)
     {
         double value = TimeConstants.RateFromPerHour(perHour, unit);
-        string number = value > 0.0 && value < Invariant.Smallest ? "< 0.001" : Invariant.Short(value);
+        string number = value > 0.0 && value < Invariant.Smallest ? "< 0.001" : Invariant.Brief(value);
         return number + "/" + TimeConstants.Suffix(unit);
     }
 

@@ -1,4 +1,4 @@
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>The planning caution every report carries: staffing and capacity advice can hurt patients if misread.</summary>
 public static class Caution

@@ -2,7 +2,7 @@ using System.Text.Json;
 using NetSolve.Model;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a solution as the contract's JSON document (one document, units in file order).</summary>
 public static class SolutionJsonWriter

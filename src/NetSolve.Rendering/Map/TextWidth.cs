@@ -1,4 +1,4 @@
-namespace NetSolve.Rendering.Text;
+namespace NetSolve.Rendering.Map;
 
 /// <summary>
 /// Estimates how wide a line of text renders, so boxes can be sized without a font at hand.

@@ -1,7 +1,7 @@
 using System.Globalization;
 using NetSolve.Model;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a network as a v1 network file, times in its time unit, readable by <see cref="Parsing.NetworkReader"/>.</summary>
 public static class NetworkYamlWriter

@@ -1,6 +1,6 @@
 using NetSolve.Model;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Factors that turn Core's hours and rates per hour into a network's time unit.</summary>
 /// <param name="Unit">The time unit to report in.</param>
@@ -14,6 +14,14 @@ public readonly record struct TimeScale(TimeUnit Unit)
 
     /// <summary>Hours in <see cref="Unit"/>.</summary>
     public double Time(double hours) => hours * TimeFactor;
+
+    /// <summary>The factor that converts a value of <paramref name="dimension"/> from hours to <see cref="Unit"/>.</summary>
+    public double FactorFor(MetricDimension dimension) => dimension switch
+    {
+        MetricDimension.Time => TimeFactor,
+        MetricDimension.Rate => RateFactor,
+        _ => 1.0,
+    };
 
     /// <summary>A rate per hour, per <see cref="Unit"/>.</summary>
     public double Rate(double perHour) => perHour * RateFactor;

@@ -1,4 +1,4 @@
-namespace NetSolve.Output;
+namespace NetSolve.Model;
 
 /// <summary>What a compared metric measures, so it can be converted to the network's time unit.</summary>
 public enum MetricDimension

@@ -1,9 +1,8 @@
 using System.Collections.Immutable;
-using NetSolve.Analysis;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Analysis;
 
 /// <summary>
 /// The contract's status words for simulated units: a unit without a capacity whose simulated arrivals × mean service

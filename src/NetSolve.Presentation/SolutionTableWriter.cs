@@ -1,7 +1,7 @@
 using NetSolve.Model;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a solution as an aligned table for people, with status flags that stand out without colour.</summary>
 public static class SolutionTableWriter

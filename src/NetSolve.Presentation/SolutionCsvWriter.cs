@@ -1,7 +1,7 @@
 using System.Globalization;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a solution as CSV: a header, then one row per unit; columns as in the JSON contract.</summary>
 public static class SolutionCsvWriter

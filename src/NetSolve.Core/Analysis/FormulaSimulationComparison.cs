@@ -1,11 +1,12 @@
 using System.Collections.Immutable;
+using NetSolve.Model;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Analysis;
 
 /// <summary>Pairs each unit's formula metrics with the simulated ones for the side-by-side view.</summary>
-public static class Comparison
+public static class FormulaSimulationComparison
 {
     /// <summary>The compared metrics of one unit, in the contract's order.</summary>
     public static ImmutableArray<ComparedMetric> ForUnit(SimulatedUnit simulated, UnitResult formula)

@@ -1,6 +1,7 @@
+using NetSolve.Model;
 using NetSolve.Simulation;
 
-namespace NetSolve.Output;
+namespace NetSolve.Analysis;
 
 /// <summary>One metric of one unit, formula against simulation, with the verdict.</summary>
 /// <param name="Name">The contract's field name (<c>utilisation</c>, <c>mean_wait</c>, ...).</param>
@@ -9,14 +10,6 @@ namespace NetSolve.Output;
 /// <param name="Dimension">Whether the values are times, rates or plain numbers (for conversion).</param>
 public sealed record ComparedMetric(string Name, double? Formula, Estimate Simulated, MetricDimension Dimension)
 {
-    /// <summary>The factor that converts the values to <paramref name="scale"/>'s time unit.</summary>
-    public double Factor(TimeScale scale) => Dimension switch
-    {
-        MetricDimension.Time => scale.TimeFactor,
-        MetricDimension.Rate => scale.RateFactor,
-        _ => 1.0,
-    };
-
     /// <summary>
     /// <c>inside</c> when the formula lies in the simulation's 95% interval, <c>outside</c> when not,
     /// <c>no formula</c> for an unstable unit, <c>no interval</c> with a single replication.

@@ -1,7 +1,7 @@
 using NetSolve.Model;
 using NetSolve.Solving;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>A unit's results converted to the network's time unit, the numbers every output format prints.</summary>
 /// <remarks>Field names follow the JSON contract; times are in <see cref="Network.TimeUnit"/>, rates per that unit.</remarks>

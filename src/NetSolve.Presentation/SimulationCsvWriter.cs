@@ -1,7 +1,7 @@
 using System.Globalization;
 using NetSolve.Simulation;
 
-namespace NetSolve.Output;
+namespace NetSolve.Presentation;
 
 /// <summary>Writes a simulation as CSV: one row per unit, each metric followed by its 95% half-width.</summary>
 public static class SimulationCsvWriter
