@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Solution;
 using NetSolve.Presentation;
 using NetSolve.Solving;
 

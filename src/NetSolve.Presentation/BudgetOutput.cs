@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using System.Globalization;
 using System.Text.Json;
 using NetSolve.Analysis;
@@ -74,8 +75,8 @@ public static class BudgetOutput
             json.WriteString("impossible", plan.Impossible);
         }
 
-        SolutionJsonWriter.Number(json, "mean_time_in_system_before", Hours(plan.Before.Totals.MeanTimeInSystemHours, timeUnit));
-        SolutionJsonWriter.Number(json, "mean_time_in_system_after", Hours(plan.After?.Totals.MeanTimeInSystemHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "mean_time_in_system_before", Hours(plan.Before.Totals.MeanTimeInSystemHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "mean_time_in_system_after", Hours(plan.After?.Totals.MeanTimeInSystemHours, timeUnit));
         json.WriteStartArray("units");
         foreach (var unit in plan.Units)
         {
@@ -87,9 +88,9 @@ public static class BudgetOutput
             json.WriteNumber("added", unit.Added);
             json.WriteNumber("added_for_stability", unit.NeededForStability);
             json.WriteNumber("utilisation_before", before.Utilisation);
-            SolutionJsonWriter.Number(json, "utilisation_after", after?.Utilisation);
-            SolutionJsonWriter.Number(json, "mean_wait_before", Wait(before, timeUnit));
-            SolutionJsonWriter.Number(json, "mean_wait_after", after is null ? null : Wait(after, timeUnit));
+            JsonTableWriter.WriteNumber(json, "utilisation_after", after?.Utilisation);
+            JsonTableWriter.WriteNumber(json, "mean_wait_before", Wait(before, timeUnit));
+            JsonTableWriter.WriteNumber(json, "mean_wait_after", after is null ? null : Wait(after, timeUnit));
             json.WriteEndObject();
         }
 
@@ -111,9 +112,9 @@ public static class BudgetOutput
             var before = plan.Before.Units[index[unit.UnitId]];
             var after = plan.After?.Units[index[unit.UnitId]];
             output.Write(string.Join(',',
-                SolutionCsvWriter.Text(unit.UnitId), SolutionCsvWriter.Number(unit.CurrentServers), SolutionCsvWriter.Number(unit.Added),
-                SolutionCsvWriter.Number(unit.NeededForStability), SolutionCsvWriter.Number(before.Utilisation), SolutionCsvWriter.Number(after?.Utilisation),
-                SolutionCsvWriter.Number(Wait(before, timeUnit)), SolutionCsvWriter.Number(after is null ? null : Wait(after, timeUnit)),
+                MachineFormat.CsvText(unit.UnitId), MachineFormat.Csv(unit.CurrentServers), MachineFormat.Csv(unit.Added),
+                MachineFormat.Csv(unit.NeededForStability), MachineFormat.Csv(before.Utilisation), MachineFormat.Csv(after?.Utilisation),
+                MachineFormat.Csv(Wait(before, timeUnit)), MachineFormat.Csv(after is null ? null : Wait(after, timeUnit)),
                 TimeConstants.Name(timeUnit)) + "\n");
         }
     }

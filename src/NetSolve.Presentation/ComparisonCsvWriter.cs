@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Simulation;
@@ -39,7 +40,7 @@ public static class ComparisonCsvWriter
         output.Write(Header + "\n");
         for (int i = 0; i < simulated.Units.Length; i++)
         {
-            string unitId = SolutionCsvWriter.Text(simulated.Units[i].Unit.Id);
+            string unitId = MachineFormat.CsvText(simulated.Units[i].Unit.Id);
             foreach (var metric in FormulaSimulationComparison.ForUnit(simulated.Units[i], formula.Units[i]))
             {
                 double factor = scale.FactorFor(metric.Dimension);
@@ -47,10 +48,10 @@ public static class ComparisonCsvWriter
                     ',',
                     unitId,
                     metric.Name,
-                    SolutionCsvWriter.Number(metric.Formula * factor),
-                    SolutionCsvWriter.Number(metric.Simulated.Mean * factor),
-                    SolutionCsvWriter.Number(metric.Simulated.HalfWidth * factor),
-                    SolutionCsvWriter.Text(metric.Verdict),
+                    MachineFormat.Csv(metric.Formula * factor),
+                    MachineFormat.Csv(metric.Simulated.Mean * factor),
+                    MachineFormat.Csv(metric.Simulated.HalfWidth * factor),
+                    MachineFormat.CsvText(metric.Verdict),
                     timeUnit) + "\n");
             }
         }

@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using System.Globalization;
 using System.Text.Json;
 using NetSolve.Analysis;
@@ -117,17 +118,17 @@ public static class ComparisonOutput
         output.Write(CsvHeader + "\n");
         foreach (var scenario in comparison.Scenarios)
         {
-            string name = SolutionCsvWriter.Text(scenario.Name);
+            string name = MachineFormat.CsvText(scenario.Name);
             void Row(string unit, string metric, MetricChange change) => output.Write(string.Join(',', name, unit, metric,
-                SolutionCsvWriter.Number(change.Before), SolutionCsvWriter.Number(change.After), SolutionCsvWriter.Number(change.Absolute),
-                SolutionCsvWriter.Number(change.Relative), unitName) + "\n");
+                MachineFormat.Csv(change.Before), MachineFormat.Csv(change.After), MachineFormat.Csv(change.Absolute),
+                MachineFormat.Csv(change.Relative), unitName) + "\n");
 
             Row(string.Empty, "external_arrival_rate", Rate(scenario.ExternalArrivalsPerHour, timeUnit));
             Row(string.Empty, "mean_in_system", scenario.MeanInSystem);
             Row(string.Empty, "mean_time_in_system", Hours(scenario.MeanTimeInSystemHours, timeUnit));
             foreach (var unit in scenario.Units)
             {
-                string id = SolutionCsvWriter.Text(unit.UnitId);
+                string id = MachineFormat.CsvText(unit.UnitId);
                 Row(id, "servers", unit.Servers);
                 Row(id, "arrival_rate", Rate(unit.ArrivalsPerHour, timeUnit));
                 Row(id, "utilisation", unit.Utilisation);
@@ -171,7 +172,7 @@ public static class ComparisonOutput
             : $"new bottleneck: {now} (was {was})";
     }
 
-    private static string StatusName(UnitResult? result, string absent = Added) => result is null ? absent : UnitView.StatusName(result.Status);
+    private static string StatusName(UnitResult? result, string absent = Added) => result is null ? absent : StatusWords.Name(result.Status);
 
     private static string StatusCell(UnitComparison unit) => unit.StatusChanged
         ? $"{StatusName(unit.Before)} -> {StatusName(unit.After, Closed)}"
@@ -215,10 +216,10 @@ public static class ComparisonOutput
     private static void Change(Utf8JsonWriter json, string name, MetricChange change)
     {
         json.WriteStartObject(name);
-        SolutionJsonWriter.Number(json, "base", change.Before);
-        SolutionJsonWriter.Number(json, "scenario", change.After);
-        SolutionJsonWriter.Number(json, "change", change.Absolute);
-        SolutionJsonWriter.Number(json, "relative_change", change.Relative);
+        JsonTableWriter.WriteNumber(json, "base", change.Before);
+        JsonTableWriter.WriteNumber(json, "scenario", change.After);
+        JsonTableWriter.WriteNumber(json, "change", change.Absolute);
+        JsonTableWriter.WriteNumber(json, "relative_change", change.Relative);
         json.WriteEndObject();
     }
 }

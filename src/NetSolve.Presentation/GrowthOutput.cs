@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using System.Text.Json;
 using NetSolve.Analysis;
 using NetSolve.Model;
@@ -108,16 +109,16 @@ public static class GrowthOutput
         output.Write(CsvHeader + "\n");
         foreach (var step in growth.Steps)
         {
-            string factor = SolutionCsvWriter.Number(step.Factor);
+            string factor = MachineFormat.Csv(step.Factor);
             foreach (var unit in step.Solution.Units)
             {
                 output.Write(string.Join(',',
                     factor,
-                    SolutionCsvWriter.Text(unit.Unit.Id),
-                    SolutionCsvWriter.Number(unit.Utilisation),
-                    SolutionCsvWriter.Number(unit.MeanWaitHours is double w ? TimeConstants.FromHours(w, timeUnit) : null),
-                    SolutionCsvWriter.Number(unit.MeanTimeInUnitHours is double t ? TimeConstants.FromHours(t, timeUnit) : null),
-                    UnitView.StatusName(unit.Status),
+                    MachineFormat.CsvText(unit.Unit.Id),
+                    MachineFormat.Csv(unit.Utilisation),
+                    MachineFormat.Csv(unit.MeanWaitHours is double w ? TimeConstants.FromHours(w, timeUnit) : null),
+                    MachineFormat.Csv(unit.MeanTimeInUnitHours is double t ? TimeConstants.FromHours(t, timeUnit) : null),
+                    StatusWords.Name(unit.Status),
                     unitName) + "\n");
             }
         }
@@ -199,16 +200,16 @@ public static class GrowthOutput
         json.WriteNumber("factor", step.Factor);
         json.WriteNumber("external_arrival_rate", TimeConstants.RateFromPerHour(solution.Totals.ExternalArrivalsPerHour, timeUnit));
         json.WriteBoolean("stable", solution.IsStable);
-        SolutionJsonWriter.Number(json, "mean_time_in_system", solution.Totals.MeanTimeInSystemHours is double h ? TimeConstants.FromHours(h, timeUnit) : null);
+        JsonTableWriter.WriteNumber(json, "mean_time_in_system", solution.Totals.MeanTimeInSystemHours is double h ? TimeConstants.FromHours(h, timeUnit) : null);
         json.WriteStartArray("units");
         foreach (var unit in solution.Units)
         {
             json.WriteStartObject();
             json.WriteString("id", unit.Unit.Id);
             json.WriteNumber("utilisation", unit.Utilisation);
-            SolutionJsonWriter.Number(json, "mean_wait", unit.MeanWaitHours is double w ? TimeConstants.FromHours(w, timeUnit) : null);
-            SolutionJsonWriter.Number(json, "mean_time_in_unit", unit.MeanTimeInUnitHours is double t ? TimeConstants.FromHours(t, timeUnit) : null);
-            json.WriteString("status", UnitView.StatusName(unit.Status));
+            JsonTableWriter.WriteNumber(json, "mean_wait", unit.MeanWaitHours is double w ? TimeConstants.FromHours(w, timeUnit) : null);
+            JsonTableWriter.WriteNumber(json, "mean_time_in_unit", unit.MeanTimeInUnitHours is double t ? TimeConstants.FromHours(t, timeUnit) : null);
+            json.WriteString("status", StatusWords.Name(unit.Status));
             json.WriteEndObject();
         }
 

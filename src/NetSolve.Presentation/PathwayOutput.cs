@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using System.Text.Json;
 using NetSolve.Analysis;
 using NetSolve.Model;
@@ -66,15 +67,15 @@ public static class PathwayOutput
         {
             json.WriteStartObject("from");
             json.WriteString("unit", pathway.FromUnitId);
-            SolutionJsonWriter.Number(json, "mean_time_in_system", Hours(pathway.MeanTimeInNetworkHours, timeUnit));
+            JsonTableWriter.WriteNumber(json, "mean_time_in_system", Hours(pathway.MeanTimeInNetworkHours, timeUnit));
             json.WriteStartArray("units");
             foreach (var unit in pathway.Units)
             {
                 json.WriteStartObject();
                 json.WriteString("id", unit.UnitId);
                 json.WriteNumber("expected_visits", unit.ExpectedVisits);
-                SolutionJsonWriter.Number(json, "visit_probability", unit.VisitProbability);
-                SolutionJsonWriter.Number(json, "expected_time", Hours(unit.ExpectedTimeHours, timeUnit));
+                JsonTableWriter.WriteNumber(json, "visit_probability", unit.VisitProbability);
+                JsonTableWriter.WriteNumber(json, "expected_time", Hours(unit.ExpectedTimeHours, timeUnit));
                 json.WriteEndObject();
             }
 
@@ -94,12 +95,12 @@ public static class PathwayOutput
             {
                 json.WriteStartObject();
                 json.WriteString("id", path.UnitIds[k]);
-                SolutionJsonWriter.Number(json, "mean_time_in_unit", Hours(path.MeanTimesHours[k], timeUnit));
+                JsonTableWriter.WriteNumber(json, "mean_time_in_unit", Hours(path.MeanTimesHours[k], timeUnit));
                 json.WriteEndObject();
             }
 
             json.WriteEndArray();
-            SolutionJsonWriter.Number(json, "mean_time", Hours(path.MeanTimeHours, timeUnit));
+            JsonTableWriter.WriteNumber(json, "mean_time", Hours(path.MeanTimeHours, timeUnit));
             json.WriteNumber("step_probability", path.StepProbability);
             json.WriteEndObject();
         }
@@ -117,16 +118,16 @@ public static class PathwayOutput
         output.Write(CsvHeader + "\n");
         foreach (var unit in pathway?.Units ?? [])
         {
-            output.Write(string.Join(',', SolutionCsvWriter.Text(pathway!.FromUnitId), SolutionCsvWriter.Text(unit.UnitId),
-                SolutionCsvWriter.Number(unit.ExpectedVisits), SolutionCsvWriter.Number(unit.VisitProbability),
-                SolutionCsvWriter.Number(Hours(unit.ExpectedTimeHours, network.TimeUnit)), unitName) + "\n");
+            output.Write(string.Join(',', MachineFormat.CsvText(pathway!.FromUnitId), MachineFormat.CsvText(unit.UnitId),
+                MachineFormat.Csv(unit.ExpectedVisits), MachineFormat.Csv(unit.VisitProbability),
+                MachineFormat.Csv(Hours(unit.ExpectedTimeHours, network.TimeUnit)), unitName) + "\n");
         }
 
         for (int k = 0; k < (path?.UnitIds.Length ?? 0); k++)
         {
-            output.Write(string.Join(',', "path", SolutionCsvWriter.Text(path!.UnitIds[k]), string.Empty,
-                k == path.UnitIds.Length - 1 ? SolutionCsvWriter.Number(path.StepProbability) : string.Empty,
-                SolutionCsvWriter.Number(Hours(path.MeanTimesHours[k], network.TimeUnit)), unitName) + "\n");
+            output.Write(string.Join(',', "path", MachineFormat.CsvText(path!.UnitIds[k]), string.Empty,
+                k == path.UnitIds.Length - 1 ? MachineFormat.Csv(path.StepProbability) : string.Empty,
+                MachineFormat.Csv(Hours(path.MeanTimesHours[k], network.TimeUnit)), unitName) + "\n");
         }
     }
 

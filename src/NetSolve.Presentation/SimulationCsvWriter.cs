@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using System.Globalization;
 using NetSolve.Simulation;
 
@@ -21,12 +22,12 @@ public static class SimulationCsvWriter
         }
 
         header.AddRange(["time_in_unit_p50", "time_in_unit_p90", "time_in_unit_p95", "time_in_unit_p99"]);
-        header.AddRange(thresholds.Select(t => "p_wait_over_" + SolutionCsvWriter.Number(scale.Time(t))));
+        header.AddRange(thresholds.Select(t => "p_wait_over_" + MachineFormat.Csv(scale.Time(t))));
         header.AddRange(Enumerable.Range(0, TimeOfDayQueues.HoursOfDay).Select(h => "mean_queue_h" + h.ToString("00", CultureInfo.InvariantCulture)));
         output.Write(string.Join(",", header) + "\n");
         foreach (var unit in result.Units)
         {
-            var cells = new List<string> { SolutionCsvWriter.Text(unit.Unit.Id), SolutionCsvWriter.Text(unit.Unit.Label), unit.Unit.Servers.ToString() };
+            var cells = new List<string> { MachineFormat.CsvText(unit.Unit.Id), MachineFormat.CsvText(unit.Unit.Label), unit.Unit.Servers.ToString() };
             foreach (var (estimate, factor) in new[]
             {
                 (unit.ArrivalsPerHour, scale.RateFactor), (unit.Utilisation, 1.0), (unit.WaitProbability, 1.0),
@@ -35,13 +36,13 @@ public static class SimulationCsvWriter
                 (unit.TurnedAwayPerHour, scale.RateFactor), (unit.DivertedPerHour, scale.RateFactor),
             })
             {
-                cells.Add(SolutionCsvWriter.Number(estimate.Mean * factor));
-                cells.Add(estimate.HalfWidth is double half ? SolutionCsvWriter.Number(half * factor) : string.Empty);
+                cells.Add(MachineFormat.Csv(estimate.Mean * factor));
+                cells.Add(estimate.HalfWidth is double half ? MachineFormat.Csv(half * factor) : string.Empty);
             }
 
-            cells.AddRange(unit.TimeInUnitPercentiles.Select(p => p.Hours is Estimate hours ? SolutionCsvWriter.Number(hours.Mean * scale.TimeFactor) : string.Empty));
-            cells.AddRange(unit.WaitOver.Select(over => SolutionCsvWriter.Number(over.Probability.Mean)));
-            cells.AddRange(unit.MeanQueueByHour.Select(hour => hour is Estimate estimate ? SolutionCsvWriter.Number(estimate.Mean) : string.Empty));
+            cells.AddRange(unit.TimeInUnitPercentiles.Select(p => p.Hours is Estimate hours ? MachineFormat.Csv(hours.Mean * scale.TimeFactor) : string.Empty));
+            cells.AddRange(unit.WaitOver.Select(over => MachineFormat.Csv(over.Probability.Mean)));
+            cells.AddRange(unit.MeanQueueByHour.Select(hour => hour is Estimate estimate ? MachineFormat.Csv(estimate.Mean) : string.Empty));
             output.Write(string.Join(",", cells) + "\n");
         }
     }

@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using NetSolve.Analysis;
 using System.Collections.Immutable;
 using System.Text.Json;
@@ -63,7 +64,7 @@ public static class SimulationJsonWriter
         json.WriteStartObject();
         json.WriteString("id", model.Id);
         json.WriteString("label", model.Label);
-        SolutionJsonWriter.Number(json, "servers", model.Servers.IsUnlimited ? null : model.Servers.Count);
+        JsonTableWriter.WriteNumber(json, "servers", model.Servers.IsUnlimited ? null : model.Servers.Count);
         Pair(json, "arrival_rate", unit.ArrivalsPerHour, scale.RateFactor);
         json.WriteNumber("visits_per_patient", entered > 0.0 ? unit.ArrivalsPerHour.Mean / entered : 0.0);
         json.WriteNumber("offered_load", offered);
@@ -73,9 +74,9 @@ public static class SimulationJsonWriter
         Pair(json, "mean_wait", unit.MeanWaitHours, scale.TimeFactor);
         Pair(json, "mean_in_unit", unit.MeanInUnit, 1.0);
         Pair(json, "mean_time_in_unit", unit.MeanTimeInUnitHours, scale.TimeFactor);
-        SolutionJsonWriter.Number(json, "headroom", !model.Servers.IsUnlimited && offered > 0.0 ? model.Servers.Count / offered : null);
-        json.WriteString("status", UnitView.StatusName(status));
-        SolutionJsonWriter.Number(json, "capacity", model.Capacity);
+        JsonTableWriter.WriteNumber(json, "headroom", !model.Servers.IsUnlimited && offered > 0.0 ? model.Servers.Count / offered : null);
+        json.WriteString("status", StatusWords.Name(status));
+        JsonTableWriter.WriteNumber(json, "capacity", model.Capacity);
         Pair(json, "p_full", unit.FullProbability, 1.0);
         Pair(json, "turned_away_rate", unit.TurnedAwayPerHour, scale.RateFactor);
         Pair(json, "diverted_rate", unit.DivertedPerHour, scale.RateFactor);
@@ -107,9 +108,9 @@ public static class SimulationJsonWriter
         {
             double factor = scale.FactorFor(metric.Dimension);
             json.WriteStartObject(metric.Name);
-            SolutionJsonWriter.Number(json, "formula", metric.Formula * factor);
+            JsonTableWriter.WriteNumber(json, "formula", metric.Formula * factor);
             json.WriteNumber("simulated", metric.Simulated.Mean * factor);
-            SolutionJsonWriter.Number(json, "simulated_ci", metric.Simulated.HalfWidth * factor);
+            JsonTableWriter.WriteNumber(json, "simulated_ci", metric.Simulated.HalfWidth * factor);
             json.WriteString("verdict", metric.Verdict);
             json.WriteEndObject();
         }
@@ -182,7 +183,7 @@ public static class SimulationJsonWriter
     /// <summary>Writes <c>name</c> and <c>name_ci</c>, scaled; both null when there is no estimate.</summary>
     private static void Pair(Utf8JsonWriter json, string name, Estimate? estimate, double factor)
     {
-        SolutionJsonWriter.Number(json, name, estimate?.Mean * factor);
-        SolutionJsonWriter.Number(json, name + "_ci", estimate?.HalfWidth * factor);
+        JsonTableWriter.WriteNumber(json, name, estimate?.Mean * factor);
+        JsonTableWriter.WriteNumber(json, name + "_ci", estimate?.HalfWidth * factor);
     }
 }

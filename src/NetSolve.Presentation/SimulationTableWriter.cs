@@ -43,7 +43,7 @@ public static class SimulationTableWriter
                 WithHalfWidth(unit.MeanInUnit, 1.0),
                 WithHalfWidth(unit.MeanTimeInUnitHours, scale.TimeFactor),
                 model.Capacity is null ? Numbers.Missing : WithHalfWidth(unit.FullProbability, 1.0),
-                SolutionTableWriter.Marker(statuses[i]) + " " + UnitView.StatusName(statuses[i]));
+                StatusWords.Marker(statuses[i]) + " " + StatusWords.Name(statuses[i]));
         }
 
         table.Write(output);

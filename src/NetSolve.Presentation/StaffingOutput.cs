@@ -1,3 +1,4 @@
+using NetSolve.Presentation.Formats;
 using System.Globalization;
 using System.Text.Json;
 using NetSolve.Analysis;
@@ -93,17 +94,17 @@ public static class StaffingOutput
         json.WriteString("network", plan.Before.Network.Name);
         json.WriteString("time_unit", TimeConstants.Name(timeUnit));
         json.WriteStartObject("targets");
-        SolutionJsonWriter.Number(json, "max_utilisation", plan.Targets.MaxUtilisation);
-        SolutionJsonWriter.Number(json, "max_mean_wait", Hours(plan.Targets.MaxMeanWaitHours, timeUnit));
-        SolutionJsonWriter.Number(json, "max_mean_time_in_unit", Hours(plan.Targets.MaxMeanTimeInUnitHours, timeUnit));
-        SolutionJsonWriter.Number(json, "wait_over", Hours(plan.Targets.WaitTail?.WaitHours, timeUnit));
-        SolutionJsonWriter.Number(json, "wait_over_at_most", plan.Targets.WaitTail?.MaxProbability);
+        JsonTableWriter.WriteNumber(json, "max_utilisation", plan.Targets.MaxUtilisation);
+        JsonTableWriter.WriteNumber(json, "max_mean_wait", Hours(plan.Targets.MaxMeanWaitHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "max_mean_time_in_unit", Hours(plan.Targets.MaxMeanTimeInUnitHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "wait_over", Hours(plan.Targets.WaitTail?.WaitHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "wait_over_at_most", plan.Targets.WaitTail?.MaxProbability);
         json.WriteEndObject();
         json.WriteBoolean("feasible", plan.IsFeasible);
         json.WriteNumber("total_added", plan.TotalAdded);
         json.WriteNumber("total_cost", plan.TotalCost);
-        SolutionJsonWriter.Number(json, "mean_time_in_system_before", Hours(plan.Before.Totals.MeanTimeInSystemHours, timeUnit));
-        SolutionJsonWriter.Number(json, "mean_time_in_system_after", Hours(plan.After?.Totals.MeanTimeInSystemHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "mean_time_in_system_before", Hours(plan.Before.Totals.MeanTimeInSystemHours, timeUnit));
+        JsonTableWriter.WriteNumber(json, "mean_time_in_system_after", Hours(plan.After?.Totals.MeanTimeInSystemHours, timeUnit));
         json.WriteStartArray("units");
         for (int i = 0; i < plan.Units.Length; i++)
         {
@@ -112,16 +113,16 @@ public static class StaffingOutput
             var after = plan.After?.Units[i];
             json.WriteStartObject();
             json.WriteString("id", unit.UnitId);
-            SolutionJsonWriter.Number(json, "servers", unit.CurrentServers);
-            SolutionJsonWriter.Number(json, "required", unit.RequiredServers);
+            JsonTableWriter.WriteNumber(json, "servers", unit.CurrentServers);
+            JsonTableWriter.WriteNumber(json, "required", unit.RequiredServers);
             json.WriteNumber("added", unit.Added);
             json.WriteNumber("cost_per_server", unit.CostPerServer);
             json.WriteNumber("cost", unit.Cost);
             json.WriteNumber("utilisation_before", before.Utilisation);
-            SolutionJsonWriter.Number(json, "utilisation_after", after?.Utilisation);
-            SolutionJsonWriter.Number(json, "mean_wait_before", Wait(before, timeUnit));
-            SolutionJsonWriter.Number(json, "mean_wait_after", after is null ? null : Wait(after, timeUnit));
-            SolutionJsonWriter.Number(json, "p_wait_over_after", after is null ? null : LongWait(after, plan.Targets));
+            JsonTableWriter.WriteNumber(json, "utilisation_after", after?.Utilisation);
+            JsonTableWriter.WriteNumber(json, "mean_wait_before", Wait(before, timeUnit));
+            JsonTableWriter.WriteNumber(json, "mean_wait_after", after is null ? null : Wait(after, timeUnit));
+            JsonTableWriter.WriteNumber(json, "p_wait_over_after", after is null ? null : LongWait(after, plan.Targets));
             if (unit.Impossible is null)
             {
                 json.WriteNull("impossible");
@@ -152,11 +153,11 @@ public static class StaffingOutput
             var before = plan.Before.Units[i];
             var after = plan.After?.Units[i];
             output.Write(string.Join(',',
-                SolutionCsvWriter.Text(unit.UnitId), unit.CurrentServers?.ToString(CultureInfo.InvariantCulture) ?? "unlimited",
-                SolutionCsvWriter.Number(unit.RequiredServers), SolutionCsvWriter.Number(unit.Added), SolutionCsvWriter.Number(unit.CostPerServer),
-                SolutionCsvWriter.Number(unit.Cost), SolutionCsvWriter.Number(before.Utilisation), SolutionCsvWriter.Number(after?.Utilisation),
-                SolutionCsvWriter.Number(Wait(before, timeUnit)), SolutionCsvWriter.Number(after is null ? null : Wait(after, timeUnit)),
-                SolutionCsvWriter.Number(after is null ? null : LongWait(after, plan.Targets)), TimeConstants.Name(timeUnit)) + "\n");
+                MachineFormat.CsvText(unit.UnitId), unit.CurrentServers?.ToString(CultureInfo.InvariantCulture) ?? "unlimited",
+                MachineFormat.Csv(unit.RequiredServers), MachineFormat.Csv(unit.Added), MachineFormat.Csv(unit.CostPerServer),
+                MachineFormat.Csv(unit.Cost), MachineFormat.Csv(before.Utilisation), MachineFormat.Csv(after?.Utilisation),
+                MachineFormat.Csv(Wait(before, timeUnit)), MachineFormat.Csv(after is null ? null : Wait(after, timeUnit)),
+                MachineFormat.Csv(after is null ? null : LongWait(after, plan.Targets)), TimeConstants.Name(timeUnit)) + "\n");
         }
     }
 

@@ -1,0 +1,66 @@
+using System.Text.Json;
+using NetSolve.Model;
+using NetSolve.Presentation.Metrics;
+
+namespace NetSolve.Presentation.Formats;
+
+/// <summary>Writes a <see cref="ResultTable"/>'s rows as JSON objects keyed by the contract's ids.</summary>
+public static class JsonTableWriter
+{
+    /// <summary>Writes an array property <paramref name="name"/> with one object per row.</summary>
+    public static void WriteArray(ResultTable table, string name, Utf8JsonWriter json)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        ArgumentNullException.ThrowIfNull(json);
+        json.WriteStartArray(name);
+        foreach (var row in table.Rows)
+        {
+            WriteObject(table, row, json);
+        }
+
+        json.WriteEndArray();
+    }
+
+    /// <summary>Writes one row as an object: numbers in the network's time unit, absent values as null.</summary>
+    public static void WriteObject(ResultTable table, IReadOnlyList<Cell> row, Utf8JsonWriter json)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        ArgumentNullException.ThrowIfNull(row);
+        ArgumentNullException.ThrowIfNull(json);
+        json.WriteStartObject();
+        foreach (int i in table.ColumnsFor(Audience.Machines))
+        {
+            WriteCell(json, table.Columns[i].Id, row[i], table.TimeUnit);
+        }
+
+        json.WriteEndObject();
+    }
+
+    /// <summary>Writes one named value: a string for text, a number, or null when absent.</summary>
+    public static void WriteCell(Utf8JsonWriter json, string name, Cell cell, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(json);
+        if (cell.Text is string text)
+        {
+            json.WriteString(name, text);
+        }
+        else
+        {
+            WriteNumber(json, name, MachineFormat.Value(cell, timeUnit));
+        }
+    }
+
+    /// <summary>Writes a number, or null when absent.</summary>
+    public static void WriteNumber(Utf8JsonWriter json, string name, double? value)
+    {
+        ArgumentNullException.ThrowIfNull(json);
+        if (value is double number)
+        {
+            json.WriteNumber(name, number);
+        }
+        else
+        {
+            json.WriteNull(name);
+        }
+    }
+}

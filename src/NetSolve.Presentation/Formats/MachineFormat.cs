@@ -1,0 +1,50 @@
+using System.Globalization;
+using NetSolve.Model;
+using NetSolve.Presentation.Metrics;
+
+namespace NetSolve.Presentation.Formats;
+
+/// <summary>
+/// How numbers look for programs (JSON, CSV): the network's own time unit, full round-trip precision, invariant
+/// culture. Unchanged by the people's style so that scripts reading them never break.
+/// </summary>
+public static class MachineFormat
+{
+    /// <summary>The number of <paramref name="cell"/> in <paramref name="timeUnit"/>; null when absent or text.</summary>
+    public static double? Value(Cell cell, TimeUnit timeUnit) =>
+        cell.Number is double value ? Convert(value, cell.Dimension, timeUnit) : null;
+
+    /// <summary>Converts a value in Core's units (hours, per hour) to <paramref name="timeUnit"/>.</summary>
+    public static double Convert(double value, MetricDimension dimension, TimeUnit timeUnit) => dimension switch
+    {
+        MetricDimension.Time => TimeConstants.FromHours(value, timeUnit),
+        MetricDimension.Rate => TimeConstants.RateFromPerHour(value, timeUnit),
+        _ => value,
+    };
+
+    /// <summary>A number for CSV: round-trip precision; empty for null.</summary>
+    public static string Csv(double? value) => value?.ToString("R", CultureInfo.InvariantCulture) ?? string.Empty;
+
+    /// <summary>One CSV cell: text quoted when needed, servers <c>unlimited</c> when absent, other absent values empty.</summary>
+    public static string CsvCell(Cell cell, TimeUnit timeUnit)
+    {
+        if (cell.Text is string text)
+        {
+            return CsvText(text);
+        }
+
+        if (cell.Number is null && cell.Dimension == MetricDimension.Servers)
+        {
+            return PeopleFormat.Unlimited;
+        }
+
+        return Csv(Value(cell, timeUnit));
+    }
+
+    /// <summary>Quotes a text cell when it holds a comma, quote or line break (RFC 4180).</summary>
+    public static string CsvText(string value)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        return value.AsSpan().IndexOfAny(",\"\n\r") >= 0 ? "\"" + value.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : value;
+    }
+}

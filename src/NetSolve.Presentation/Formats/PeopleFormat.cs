@@ -1,0 +1,144 @@
+using System.Globalization;
+using NetSolve.Model;
+using NetSolve.Presentation.Metrics;
+
+namespace NetSolve.Presentation.Formats;
+
+/// <summary>
+/// How every number looks where people read it (tables, report, map): invariant culture, about four significant
+/// digits, never an exponent, and each time in the unit that reads best for it with the unit written beside.
+/// </summary>
+/// <remarks>
+/// Rules, in docs/map-and-report.md: a time under an hour is shown in minutes, under two days in hours, else in days;
+/// a value too small to plan with is shown as <c>&lt; 0.001 min</c> or <c>&lt; 0.0001</c>; values from 1,000 up are
+/// grouped by thousands; probabilities have three decimals, shares are percentages with one decimal, factors
+/// (headroom, growth) three decimals. Thread-safe.
+/// </remarks>
+public static class PeopleFormat
+{
+    /// <summary>A value that does not exist (the wait of an unstable unit).</summary>
+    public const string Missing = "-";
+
+    /// <summary>Servers with no limit.</summary>
+    public const string Unlimited = "unlimited";
+
+    /// <summary>Magnitudes below this are shown as "&lt; 0.0001": too small to plan with.</summary>
+    public const double SmallestNumber = 1e-4;
+
+    /// <summary>Magnitudes from this up are shown as "&gt; 1,000,000,000,000,000" rather than as a long row of digits.</summary>
+    public const double LargestNumber = 1e15;
+
+    /// <summary>Times below this many minutes are shown as "&lt; 0.001 min".</summary>
+    public const double SmallestMinutes = 0.001;
+
+    /// <summary>Times from this many hours up are shown in days.</summary>
+    public const double HoursBeforeDays = 48.0;
+
+    private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
+
+    /// <summary>One cell; rates per <paramref name="timeUnit"/> without their unit (the header says it).</summary>
+    public static string Cell(Cell cell, TimeUnit timeUnit)
+    {
+        if (cell.Text is string text)
+        {
+            return cell.Marker is string marker ? marker + " " + text : text;
+        }
+
+        if (cell.Number is not double value)
+        {
+            return cell.Dimension == MetricDimension.Servers ? Unlimited : Missing;
+        }
+
+        return cell.Dimension switch
+        {
+            MetricDimension.Time => Time(value),
+            MetricDimension.Rate => Number(TimeConstants.RateFromPerHour(value, timeUnit)),
+            MetricDimension.Probability => Probability(value),
+            MetricDimension.Fraction => Percent(value),
+            MetricDimension.Factor => Factor(value),
+            MetricDimension.Servers => value.ToString("#,0", Invariant),
+            _ => Number(value),
+        };
+    }
+
+    /// <summary>About four significant digits, grouped from 1,000, never an exponent: <c>0.1867</c>, <c>158.8</c>, <c>1,200</c>.</summary>
+    public static string Number(double value)
+    {
+        double magnitude = Math.Abs(value);
+        if (magnitude == 0.0)
+        {
+            return "0";
+        }
+
+        if (magnitude < SmallestNumber)
+        {
+            return value > 0.0 ? "< 0.0001" : "> -0.0001";
+        }
+
+        if (magnitude >= LargestNumber)
+        {
+            return value > 0.0 ? "> 1,000,000,000,000,000" : "< -1,000,000,000,000,000";
+        }
+
+        string format = magnitude switch
+        {
+            >= 1000.0 => "#,0",
+            >= 100.0 => "0.0",
+            >= 10.0 => "0.00",
+            >= 1.0 => "0.000",
+            _ => "0.0000",
+        };
+        return value.ToString(format, Invariant);
+    }
+
+    /// <summary>A time stored in hours, in minutes, hours or days, whichever reads best: <c>4.175 min</c>, <c>14.76 h</c>, <c>5.503 d</c>.</summary>
+    public static string Time(double hours)
+    {
+        double magnitude = Math.Abs(hours);
+        if (magnitude == 0.0)
+        {
+            return "0";
+        }
+
+        if (magnitude < 1.0)
+        {
+            double minutes = hours * TimeConstants.MinutesPerHour;
+            return Math.Abs(minutes) < SmallestMinutes ? (minutes > 0.0 ? "< 0.001 min" : "> -0.001 min") : Number(minutes) + " min";
+        }
+
+        return magnitude < HoursBeforeDays ? Number(hours) + " h" : Number(hours / TimeConstants.HoursPerDay) + " d";
+    }
+
+    /// <summary>A rate stored per hour, per <paramref name="timeUnit"/> with the unit: <c>11.50/h</c>.</summary>
+    public static string Rate(double perHour, TimeUnit timeUnit) =>
+        Number(TimeConstants.RateFromPerHour(perHour, timeUnit)) + "/" + TimeConstants.Suffix(timeUnit);
+
+    /// <summary>A probability with three decimals: <c>0.253</c>; <c>&lt; 0.001</c> when above 0 but smaller.</summary>
+    public static string Probability(double value) =>
+        value > 0.0 && value < 0.0005 ? "< 0.001" : value.ToString("0.000", Invariant);
+
+    /// <summary>A share as a percentage with one decimal: <c>84.9%</c>; <c>&lt; 0.1%</c> when above 0 but smaller.</summary>
+    public static string Percent(double fraction) =>
+        fraction > 0.0 && fraction < 0.0005 ? "< 0.1%" : Number1(fraction * 100.0) + "%";
+
+    /// <summary>A change of a share in percentage points with its sign: <c>+3.2 pt</c>.</summary>
+    public static string Points(double change) => (change * 100.0).ToString("+0.0;-0.0;0.0", Invariant) + " pt";
+
+    /// <summary>A relative change as a signed percentage: <c>+12.5%</c>, <c>-4.0%</c>.</summary>
+    public static string SignedPercent(double relative) =>
+        Math.Abs(relative) >= LargestNumber / 100.0 ? (relative > 0.0 ? "+" : "-") + "> 1e13%"
+            : (relative * 100.0).ToString("+#,0.0;-#,0.0;0.0", Invariant) + "%";
+
+    /// <summary>A signed number for changes: <c>+1.418</c>, <c>-0.2</c>; as <see cref="Number"/> with a plus sign.</summary>
+    public static string SignedNumber(double value) => value > 0.0 ? "+" + Number(value) : Number(value);
+
+    /// <summary>A signed time for changes: <c>+4.2 min</c>.</summary>
+    public static string SignedTime(double hours) => hours > 0.0 ? "+" + Time(hours) : Time(hours);
+
+    /// <summary>A factor with three decimals: <c>1.178</c>; grouped from 1,000.</summary>
+    public static string Factor(double value) =>
+        Math.Abs(value) >= 1000.0 ? Number(value) : value.ToString("0.000", Invariant);
+
+    private static string Number1(double value) =>
+        Math.Abs(value) >= LargestNumber ? Number(value) : value.ToString("#,0.0", Invariant);
+}

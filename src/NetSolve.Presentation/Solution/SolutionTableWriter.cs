@@ -1,0 +1,57 @@
+using NetSolve.Model;
+using NetSolve.Presentation.Formats;
+using NetSolve.Solving;
+
+namespace NetSolve.Presentation.Solution;
+
+/// <summary>Writes a solution for people: a title, the unit table, the network totals and a one-line finding.</summary>
+public static class SolutionTableWriter
+{
+    /// <summary>Writes the title line, the unit table, the totals and the finding.</summary>
+    public static void Write(NetworkSolution solution, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        ArgumentNullException.ThrowIfNull(output);
+        output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)})\n\n");
+        PeopleTableWriter.Write(UnitColumns.Table(solution), output);
+        output.Write("\n" + Totals(solution) + "\n");
+        output.Write(Finding(solution) + "\n");
+    }
+
+    /// <summary>What every table for people says in its title: the rates' time unit and the strain threshold.</summary>
+    public static string Title(TimeUnit timeUnit, double strainThreshold) =>
+        $"rates per {TimeConstants.Name(timeUnit)}, strain threshold {PeopleFormat.Percent(strainThreshold)}";
+
+    /// <summary>One line: external arrivals, and when stable the patients and mean time in the network.</summary>
+    public static string Totals(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        var totals = solution.Totals;
+        string arrivals = "external arrivals " + PeopleFormat.Rate(totals.ExternalArrivalsPerHour, solution.Network.TimeUnit);
+        return solution.IsStable && totals is { MeanInSystem: double inSystem, MeanTimeInSystemHours: double hours }
+            ? $"{arrivals}   patients in network {PeopleFormat.Number(inSystem)}   mean time in network {PeopleFormat.Time(hours)}"
+            : arrivals + "   network totals: none, the network is unstable";
+    }
+
+    /// <summary>One sentence: which units are unstable, or which saturates first and at what growth.</summary>
+    public static string Finding(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        var unstable = solution.Units.Where(unit => unit.Status == UnitStatus.Unstable).Select(unit => unit.Unit.Id).ToList();
+        var bottleneck = solution.Units.FirstOrDefault(unit => unit.Status == UnitStatus.Bottleneck);
+        var parts = new List<string>();
+        if (unstable.Count > 0)
+        {
+            parts.Add($"UNSTABLE: {string.Join(", ", unstable)} cannot keep up with demand (utilisation at or above 100%); queues grow without limit");
+        }
+
+        if (bottleneck is { Headroom: double headroom })
+        {
+            parts.Add(unstable.Count > 0
+                ? $"next to saturate: {bottleneck.Unit.Id} (headroom x{PeopleFormat.Factor(headroom)})"
+                : $"bottleneck: {bottleneck.Unit.Id} saturates first, when all arrivals grow by {PeopleFormat.Percent(headroom - 1.0)} (headroom x{PeopleFormat.Factor(headroom)})");
+        }
+
+        return parts.Count == 0 ? "no unit with finite servers carries load" : string.Join("; ", parts);
+    }
+}

@@ -1,0 +1,69 @@
+using System.Collections.Immutable;
+using NetSolve.Model;
+using NetSolve.Presentation.Metrics;
+using NetSolve.Solving;
+
+namespace NetSolve.Presentation.Solution;
+
+/// <summary>
+/// The registry of a solved unit's metrics: the contract's id (JSON field, CSV column), the header people read, the
+/// dimension and the accessor. Table, CSV, JSON, report and map all read a unit through these.
+/// </summary>
+public static class UnitColumns
+{
+    /// <summary>The unit's id.</summary>
+    public static readonly Column<UnitResult> Id = Columns.Words<UnitResult>("id", "unit", result => result.Unit.Id);
+
+    /// <summary>The unit's display name.</summary>
+    public static readonly Column<UnitResult> Label = Columns.Words<UnitResult>("label", "label", result => result.Unit.Label, Audience.Machines);
+
+    /// <summary>Servers; absent for unlimited.</summary>
+    public static readonly Column<UnitResult> Servers = new("servers", "servers", MetricDimension.Servers, result => Cell.Of(result.Unit.Servers));
+
+    /// <summary>Total flow into the unit.</summary>
+    public static readonly Column<UnitResult> ArrivalRate = Columns.Number<UnitResult>("arrival_rate", "arrivals", MetricDimension.Rate, result => result.ArrivalsPerHour);
+
+    /// <summary>Mean visits per patient entering the network.</summary>
+    public static readonly Column<UnitResult> Visits = Columns.Number<UnitResult>("visits_per_patient", "visits", MetricDimension.Plain, result => result.VisitsPerPatient);
+
+    /// <summary>Offered load in erlangs.</summary>
+    public static readonly Column<UnitResult> OfferedLoad = Columns.Number<UnitResult>("offered_load", "load", MetricDimension.Plain, result => result.OfferedLoad);
+
+    /// <summary>Utilisation: load over servers.</summary>
+    public static readonly Column<UnitResult> Utilisation = Columns.Number<UnitResult>("utilisation", "util", MetricDimension.Fraction, result => result.Utilisation);
+
+    /// <summary>The chance an arriving patient waits.</summary>
+    public static readonly Column<UnitResult> WaitProbability = Columns.Number<UnitResult>("p_wait", "P(wait)", MetricDimension.Probability, result => result.WaitProbability);
+
+    /// <summary>Mean number waiting.</summary>
+    public static readonly Column<UnitResult> MeanQueue = Columns.Number<UnitResult>("mean_queue", "queue", MetricDimension.Count, result => result.MeanQueue);
+
+    /// <summary>Mean wait before service.</summary>
+    public static readonly Column<UnitResult> MeanWait = Columns.Number<UnitResult>("mean_wait", "wait", MetricDimension.Time, result => result.MeanWaitHours);
+
+    /// <summary>Mean number in the unit.</summary>
+    public static readonly Column<UnitResult> MeanInUnit = Columns.Number<UnitResult>("mean_in_unit", "in unit", MetricDimension.Count, result => result.MeanInUnit);
+
+    /// <summary>Mean time in the unit, wait plus service.</summary>
+    public static readonly Column<UnitResult> MeanTimeInUnit = Columns.Number<UnitResult>("mean_time_in_unit", "time", MetricDimension.Time, result => result.MeanTimeInUnitHours);
+
+    /// <summary>Servers over load: how far every arrival rate can grow.</summary>
+    public static readonly Column<UnitResult> Headroom = Columns.Number<UnitResult>("headroom", "headroom", MetricDimension.Factor, result => result.Headroom);
+
+    /// <summary>The contract's status word.</summary>
+    public static readonly Column<UnitResult> Status = new("status", "status", MetricDimension.Plain, result => StatusWords.Cell(result.Status));
+
+    /// <summary>Every column, in the contract's order.</summary>
+    public static readonly ImmutableArray<Column<UnitResult>> All =
+    [
+        Id, Label, Servers, ArrivalRate, Visits, OfferedLoad, Utilisation, WaitProbability, MeanQueue, MeanWait,
+        MeanInUnit, MeanTimeInUnit, Headroom, Status,
+    ];
+
+    /// <summary>The unit table of <paramref name="solution"/>.</summary>
+    public static ResultTable Table(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        return ResultTable.Build(All, solution.Units, solution.Network.TimeUnit);
+    }
+}
