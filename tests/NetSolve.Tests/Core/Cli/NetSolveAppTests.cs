@@ -254,7 +254,7 @@ public partial class NetSolveAppTests
         Assert.EndsWith(",bottleneck", lines[4], StringComparison.Ordinal);
     }
 
-    // Common practice: golden output, reviewed by eye; NETSOLVE_UPDATE_GOLDEN=1 rewrites it for review in the diff.
+    // Common practice: golden output, reviewed by eye; NETSOLVE_APPROVE=1 rewrites it for review in the diff.
     [Fact]
     public void The_harbourside_table_matches_the_golden_file()
     {
@@ -289,15 +289,6 @@ public partial class NetSolveAppTests
         }
     }
 
-    private static void AssertGolden(string name, string actual)
-    {
-        string path = Path.Combine(SourceTree.Root, "tests", "NetSolve.Tests", "Core", "Cli", name);
-        if (Environment.GetEnvironmentVariable("NETSOLVE_UPDATE_GOLDEN") == "1")
-        {
-            File.WriteAllText(path, actual);
-        }
-
-        Assert.True(File.Exists(path), $"no golden file {path}; run with NETSOLVE_UPDATE_GOLDEN=1 and review it");
-        Assert.Equal(File.ReadAllText(path), actual);
-    }
+    private static void AssertGolden(string name, string actual) =>
+        Approval.Verify(Path.Combine(SourceTree.Root, "tests", "NetSolve.Tests", "Core", "Cli", name), actual);
 }
