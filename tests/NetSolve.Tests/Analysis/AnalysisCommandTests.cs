@@ -1,10 +1,12 @@
 using System.Text.Json;
 using NetSolve.Output;
+using NetSolve.Tests.Support;
 using static NetSolve.Tests.Support.CliRun;
 using static NetSolve.Tests.Support.TestFiles;
 
 namespace NetSolve.Tests.Analysis;
 
+[Collection(CultureSensitiveCollection.Name)]
 public sealed class AnalysisCommandTests
 {
     [Fact]

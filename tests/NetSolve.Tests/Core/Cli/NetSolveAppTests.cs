@@ -6,6 +6,7 @@ using static NetSolve.Tests.Support.TestFiles;
 
 namespace NetSolve.Tests.Core.Cli;
 
+[Collection(CultureSensitiveCollection.Name)]
 public partial class NetSolveAppTests
 {
     private static readonly string Harbourside = Network("harbourside");
