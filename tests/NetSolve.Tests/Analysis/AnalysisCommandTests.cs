@@ -1,17 +1,18 @@
 using System.Text.Json;
-using NetSolve.Cli;
 using NetSolve.Presentation;
+using NetSolve.Tests.Support;
+using static NetSolve.Tests.Support.CliRun;
+using static NetSolve.Tests.Support.TestFiles;
 
 namespace NetSolve.Tests.Analysis;
 
+[Collection(CultureSensitiveCollection.Name)]
 public sealed class AnalysisCommandTests
 {
-    private static string Network(string name) => Path.Combine(SmallNetworks.NetworksFolder, name);
-
     [Fact]
     public void Comparing_a_file_with_itself_reports_no_status_change_and_an_unchanged_bottleneck()
     {
-        var (code, output, _) = Run("compare", Network("harbourside.yaml"), Network("harbourside.yaml"));
+        var (code, output, _) = Run("compare", Network("harbourside"), Network("harbourside"));
         Assert.Equal(0, code);
         Assert.Contains("status changes: none", output, StringComparison.Ordinal);
         Assert.Contains("bottleneck: ward (unchanged)", output, StringComparison.Ordinal);
@@ -21,7 +22,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Compare_json_gives_zero_change_for_every_unit_against_itself()
     {
-        var (code, output, _) = Run("compare", Network("kestrel-general.yaml"), Network("kestrel-general.yaml"), "--format", "json");
+        var (code, output, _) = Run("compare", Network("kestrel-general"), Network("kestrel-general"), "--format", "json");
         Assert.Equal(0, code);
         using var document = JsonDocument.Parse(output);
         foreach (var unit in document.RootElement.GetProperty("scenarios")[0].GetProperty("units").EnumerateArray())
@@ -34,7 +35,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Growth_json_states_the_time_unit_and_twenty_steps()
     {
-        var (code, output, _) = Run("growth", Network("millbrook-clinic.yaml"), "--format", "json");
+        var (code, output, _) = Run("growth", Network("millbrook-clinic"), "--format", "json");
         Assert.Equal(0, code);
         using var document = JsonDocument.Parse(output);
         Assert.Equal("minute", document.RootElement.GetProperty("time_unit").GetString());
@@ -46,7 +47,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Growth_csv_has_one_row_per_factor_and_unit()
     {
-        var (code, output, _) = Run("growth", Network("millbrook-clinic.yaml"), "--format", "csv", "--steps", "4");
+        var (code, output, _) = Run("growth", Network("millbrook-clinic"), "--format", "csv", "--steps", "4");
         Assert.Equal(0, code);
         var lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries);
         Assert.Equal(GrowthOutput.CsvHeader, lines[0]);
@@ -56,7 +57,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Growth_table_carries_the_caution_and_the_time_unit()
     {
-        var (code, output, _) = Run("growth", Network("harbourside.yaml"), "--stream", "emergency");
+        var (code, output, _) = Run("growth", Network("harbourside"), "--stream", "emergency");
         Assert.Equal(0, code);
         Assert.Contains("times in hours", output, StringComparison.Ordinal);
         Assert.Contains("Mean wait (h)", output, StringComparison.Ordinal);
@@ -66,7 +67,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void An_unknown_stream_is_one_line_with_a_suggestion_and_exit_1()
     {
-        var (code, output, error) = Run("growth", Network("harbourside.yaml"), "--stream", "emergancy");
+        var (code, output, error) = Run("growth", Network("harbourside"), "--stream", "emergancy");
         Assert.Equal(1, code);
         Assert.Empty(output);
         Assert.EndsWith("netsolve: --stream emergancy: unknown unit 'emergancy'; did you mean 'emergency'?\n", error, StringComparison.Ordinal);
@@ -75,7 +76,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void A_bad_override_on_solve_is_one_line_and_exit_1_with_nothing_on_stdout()
     {
-        var (code, output, error) = Run("solve", Network("millbrook-clinic.yaml"), "--set", "servers.xrya=2");
+        var (code, output, error) = Run("solve", Network("millbrook-clinic"), "--set", "servers.xrya=2");
         Assert.Equal(1, code);
         Assert.Empty(output);
         Assert.Equal("--set servers.xrya=2: unknown unit 'xrya'; did you mean 'xray'?\n", error);
@@ -84,7 +85,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Solve_with_an_override_shows_the_changed_servers()
     {
-        var (code, output, _) = Run("solve", Network("millbrook-clinic.yaml"), "--set", "servers.clinician=4", "--format", "json");
+        var (code, output, _) = Run("solve", Network("millbrook-clinic"), "--set", "servers.clinician=4", "--format", "json");
         Assert.Equal(0, code);
         using var document = JsonDocument.Parse(output);
         Assert.Equal(4, document.RootElement.GetProperty("units")[1].GetProperty("servers").GetInt32());
@@ -93,19 +94,19 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Staff_meets_a_utilisation_target_and_prints_the_caution()
     {
-        var (code, output, _) = Run("staff", Network("millbrook-clinic.yaml"), "--max-util", "0.7", "--format", "json");
+        var (code, output, _) = Run("staff", Network("millbrook-clinic"), "--max-util", "0.7", "--format", "json");
         Assert.Equal(0, code);
         using var document = JsonDocument.Parse(output);
         // Exact by hand: clinician a = 2.25 → ⌈2.25/0.7⌉ = 4 (+1); reception a = 0.45, x-ray a = 0.375: no change.
         Assert.Equal(1, document.RootElement.GetProperty("total_added").GetInt32());
-        var (_, table, _) = Run("staff", Network("millbrook-clinic.yaml"), "--max-util", "0.7");
+        var (_, table, _) = Run("staff", Network("millbrook-clinic"), "--max-util", "0.7");
         Assert.Contains(Caution.Text, table, StringComparison.Ordinal);
     }
 
     [Fact]
     public void Staff_with_an_impossible_target_names_each_unit_and_why()
     {
-        var (code, output, error) = Run("staff", Network("millbrook-clinic.yaml"), "--max-time", "5min");
+        var (code, output, error) = Run("staff", Network("millbrook-clinic"), "--max-time", "5min");
         Assert.Equal(1, code);
         Assert.Empty(output);
         Assert.Equal(
@@ -117,7 +118,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Staff_with_a_zero_utilisation_target_names_the_busy_units()
     {
-        var (code, _, error) = Run("staff", Network("millbrook-clinic.yaml"), "--max-util", "0");
+        var (code, _, error) = Run("staff", Network("millbrook-clinic"), "--max-util", "0");
         Assert.Equal(1, code);
         Assert.Equal(3, error.Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
         Assert.Contains("netsolve: staff: unit 'reception' cannot meet the targets: a maximum utilisation of 0 cannot be met while patients arrive\n", error, StringComparison.Ordinal);
@@ -126,7 +127,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Staff_budget_places_every_server()
     {
-        var (code, output, _) = Run("staff", Network("harbourside.yaml"), "--budget", "5", "--format", "json");
+        var (code, output, _) = Run("staff", Network("harbourside"), "--budget", "5", "--format", "json");
         Assert.Equal(0, code);
         using var document = JsonDocument.Parse(output);
         Assert.Equal(5, document.RootElement.GetProperty("placed").GetInt32());
@@ -135,7 +136,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Pathway_reports_the_chance_of_reaching_the_ward()
     {
-        var (code, output, _) = Run("pathway", Network("harbourside.yaml"), "--from", "emergency", "--to", "ward", "--format", "json");
+        var (code, output, _) = Run("pathway", Network("harbourside"), "--from", "emergency", "--to", "ward", "--format", "json");
         Assert.Equal(0, code);
         using var document = JsonDocument.Parse(output);
         var ward = document.RootElement.GetProperty("from").GetProperty("units").EnumerateArray().Single(u => u.GetProperty("id").GetString() == "ward");
@@ -145,7 +146,7 @@ public sealed class AnalysisCommandTests
     [Fact]
     public void Compare_without_scenarios_or_overrides_is_an_input_error()
     {
-        var (code, _, error) = Run("compare", Network("harbourside.yaml"));
+        var (code, _, error) = Run("compare", Network("harbourside"));
         Assert.Equal(1, code);
         Assert.Equal("netsolve: compare: give at least one SCENARIO file, or --set changes, to compare with the base\n", error[error.IndexOf("netsolve:", StringComparison.Ordinal)..]);
     }
@@ -156,10 +157,10 @@ public sealed class AnalysisCommandTests
         var culture = System.Globalization.CultureInfo.CurrentCulture;
         try
         {
-            var (_, invariant, _) = Run("growth", Network("harbourside.yaml"), "--format", "csv", "--steps", "3");
+            var (_, invariant, _) = Run("growth", Network("harbourside"), "--format", "csv", "--steps", "3");
             System.Globalization.CultureInfo.CurrentCulture = new System.Globalization.CultureInfo("de-DE");
-            var (_, german, _) = Run("growth", Network("harbourside.yaml"), "--format", "csv", "--steps", "3");
-            var (_, table, _) = Run("growth", Network("harbourside.yaml"));
+            var (_, german, _) = Run("growth", Network("harbourside"), "--format", "csv", "--steps", "3");
+            var (_, table, _) = Run("growth", Network("harbourside"));
             Assert.Equal(invariant, german);
             Assert.Contains("x1.000", table, StringComparison.Ordinal);
         }
@@ -167,13 +168,5 @@ public sealed class AnalysisCommandTests
         {
             System.Globalization.CultureInfo.CurrentCulture = culture;
         }
-    }
-
-    private static (int Code, string Output, string Error) Run(params string[] args)
-    {
-        using var output = new StringWriter();
-        using var error = new StringWriter();
-        int code = NetSolveApp.Run(args, new CliContext(output, error));
-        return (code, output.ToString(), error.ToString());
     }
 }

@@ -1,19 +1,17 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Analysis;
 
 /// <summary>Networks for the analysis tests: small ones built in code, and the example files.</summary>
 internal static class SmallNetworks
 {
-    /// <summary>The folder the example networks are copied to beside the test assembly.</summary>
-    public static string NetworksFolder => Path.Combine(AppContext.BaseDirectory, "networks");
-
     /// <summary>An example network from networks/, read and validated.</summary>
     public static Network Example(string fileName)
     {
-        var result = NetworkReader.ReadFile(Path.Combine(NetworksFolder, fileName));
+        var result = NetworkReader.ReadFile(Path.Combine(TestFiles.NetworksFolder, fileName));
         Assert.False(result.HasErrors, string.Join("\n", result.Diagnostics));
         return result.Network!;
     }

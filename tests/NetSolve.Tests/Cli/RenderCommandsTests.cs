@@ -1,6 +1,7 @@
 using System.Xml.Linq;
-using NetSolve.Cli;
 using NetSolve.Tests.Rendering;
+using static NetSolve.Tests.Support.CliRun;
+using static NetSolve.Tests.Support.TestFiles;
 
 namespace NetSolve.Tests.Cli;
 
@@ -11,16 +12,6 @@ public sealed class RenderCommandsTests : IDisposable
     public RenderCommandsTests() => Directory.CreateDirectory(_folder);
 
     public void Dispose() => Directory.Delete(_folder, recursive: true);
-
-    private static string Network(string name) => Path.Combine(AppContext.BaseDirectory, "networks", name + ".yaml");
-
-    private static (int Code, string Out, string Error) Run(params string[] args)
-    {
-        var output = new StringWriter();
-        var error = new StringWriter();
-        int code = NetSolveApp.Run(args, new CliContext(output, error));
-        return (code, output.ToString(), error.ToString());
-    }
 
     [Theory]
     [InlineData("map.svg")]
@@ -69,7 +60,7 @@ public sealed class RenderCommandsTests : IDisposable
     public void Report_takes_scenario_files_and_names_them_as_the_scenario_does()
     {
         string target = Path.Combine(_folder, "report.html");
-        string scenario = Path.Combine(AppContext.BaseDirectory, "networks", "scenarios", "harbourside-winter-beds.yaml");
+        string scenario = Scenario("harbourside-winter-beds");
         var (code, _, _) = Run("report", Network("harbourside"), scenario, "-o", target);
 
         Assert.Equal(0, code);
@@ -137,8 +128,8 @@ public sealed class RenderCommandsTests : IDisposable
     {
         string down = Path.Combine(_folder, "down.svg");
         string right = Path.Combine(_folder, "right.svg");
-        Assert.Equal(0, Run("map", Network("kestrel-general"), "-o", down).Code);
-        Assert.Equal(0, Run("map", Network("kestrel-general"), "-o", right, "--direction", "right").Code);
+        Assert.Equal(0, Run("map", Network("kestrel-general"), "-o", down).ExitCode);
+        Assert.Equal(0, Run("map", Network("kestrel-general"), "-o", right, "--direction", "right").ExitCode);
 
         var tall = SvgMap.Parse(File.ReadAllText(down));
         var wide = SvgMap.Parse(File.ReadAllText(right));
@@ -156,8 +147,8 @@ public sealed class RenderCommandsTests : IDisposable
         var without = Run("report", example, "-o", plain);
         var with = Run("report", example, "-o", simulated, "--simulate", "--seed", "3", "--replications", "2", "--warmup", "7d", "--duration", "60d");
 
-        Assert.Equal(0, without.Code);
-        Assert.Equal(0, with.Code);
+        Assert.Equal(0, without.ExitCode);
+        Assert.Equal(0, with.ExitCode);
         Assert.Equal($"report written to {simulated}\n", with.Out);
         string plainHtml = File.ReadAllText(plain);
         string simulatedHtml = File.ReadAllText(simulated);
@@ -180,8 +171,8 @@ public sealed class RenderCommandsTests : IDisposable
         string second = Path.Combine(_folder, "second.html");
         string[] common = ["report", Network("larkspur-simulation"), "--simulate", "--seed", "9", "-r", "2", "--warmup", "1d", "--duration", "14d"];
 
-        Assert.Equal(0, Run([.. common, "-o", first]).Code);
-        Assert.Equal(0, Run([.. common, "-o", second]).Code);
+        Assert.Equal(0, Run([.. common, "-o", first]).ExitCode);
+        Assert.Equal(0, Run([.. common, "-o", second]).ExitCode);
         Assert.Equal(File.ReadAllText(first), File.ReadAllText(second));
     }
 

@@ -1,20 +1,12 @@
 using System.Text.Json;
-using NetSolve.Cli;
 using NetSolve.Tests.Support;
+using static NetSolve.Tests.Support.CliRun;
 
 namespace NetSolve.Tests.Cli;
 
 public sealed class SimulateCommandTests
 {
-    private static readonly string Example = Path.Combine("networks", "larkspur-simulation.yaml");
-
-    private static (int Code, string Out, string Error) Run(params string[] args)
-    {
-        using var output = new StringWriter();
-        using var error = new StringWriter();
-        int code = NetSolveApp.Run(args, new CliContext(output, error));
-        return (code, output.ToString(), error.ToString());
-    }
+    private static readonly string Example = TestFiles.Network("larkspur-simulation");
 
     [Fact]
     public void Json_has_the_solve_shape_plus_confidence_percentile_and_run_fields()
@@ -52,7 +44,7 @@ public sealed class SimulateCommandTests
         var csv = Run([.. common, "--format", "csv"]);
         var table = Run(common);
 
-        Assert.Equal(0, csv.Code);
+        Assert.Equal(0, csv.ExitCode);
         Assert.Empty(csv.Error);
         var rows = CsvRows.Parse(csv.Out);
         Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit"], rows[0]);
@@ -72,7 +64,7 @@ public sealed class SimulateCommandTests
         var one = Run([.. common, "--threads", "1"]);
         var two = Run([.. common, "--threads", "2"]);
 
-        Assert.Equal(0, one.Code);
+        Assert.Equal(0, one.ExitCode);
         Assert.Equal(one.Out, two.Out);
     }
 
@@ -136,14 +128,14 @@ public sealed class SimulateCommandTests
     [Fact]
     public void Without_an_arrival_profile_the_table_has_no_hourly_section_but_json_and_csv_carry_it()
     {
-        string steady = Path.Combine("networks", "harbourside.yaml");
+        string steady = TestFiles.Network("harbourside");
         string[] common = ["simulate", steady, "--replications", "2", "--warmup", "2d", "--duration", "7d"];
 
         var table = Run(common);
         var json = Run([.. common, "--format", "json"]);
         var csv = Run([.. common, "--format", "csv"]);
 
-        Assert.Equal(0, table.Code);
+        Assert.Equal(0, table.ExitCode);
         Assert.DoesNotContain("mean queue by hour", table.Out, StringComparison.Ordinal);
         using var document = JsonDocument.Parse(json.Out);
         var unit = document.RootElement.GetProperty("units")[0];

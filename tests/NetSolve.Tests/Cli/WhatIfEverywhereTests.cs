@@ -1,11 +1,12 @@
-using NetSolve.Cli;
+using NetSolve.Tests.Support;
+using static NetSolve.Tests.Support.CliRun;
 
 namespace NetSolve.Tests.Cli;
 
 /// <summary>Every command that reads a network takes <c>--set</c> and reports a bad change the same way (issue: what-if on every command).</summary>
 public sealed class WhatIfEverywhereTests
 {
-    private static readonly string Harbourside = Path.Combine(AppContext.BaseDirectory, "networks", "harbourside.yaml");
+    private static readonly string Harbourside = TestFiles.Network("harbourside");
 
     public static TheoryData<string[]> Commands()
     {
@@ -56,13 +57,5 @@ public sealed class WhatIfEverywhereTests
         {
             File.Delete(target);
         }
-    }
-
-    private static (int ExitCode, string Out, string Error) Run(string[] args)
-    {
-        var output = new StringWriter();
-        var error = new StringWriter();
-        int exitCode = NetSolveApp.Run(args, new CliContext(output, error));
-        return (exitCode, output.ToString(), error.ToString());
     }
 }

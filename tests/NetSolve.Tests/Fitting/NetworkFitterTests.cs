@@ -2,6 +2,7 @@ using NetSolve.Fitting;
 using NetSolve.Model;
 using NetSolve.Presentation;
 using NetSolve.Parsing;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Fitting;
 
@@ -76,7 +77,7 @@ public sealed class NetworkFitterTests
     [Fact]
     public void The_bundled_demo_log_recovers_the_parameters_it_was_generated_with()
     {
-        string text = File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "networks", "logs", "rowan-urgent-care.csv"));
+        string text = File.ReadAllText(TestFiles.Log("rowan-urgent-care"));
         var fitted = Fit(text);
         var urgent = fitted.Units.Single(unit => unit.Id == "urgent_care");
 

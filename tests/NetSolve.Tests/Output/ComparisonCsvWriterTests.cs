@@ -7,6 +7,7 @@ using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Output;
 
+[Collection(CultureSensitiveCollection.Name)]
 public sealed class ComparisonCsvWriterTests
 {
     // The file format forbids commas and quotes in ids, but Core takes any id, so the writer must still quote it.

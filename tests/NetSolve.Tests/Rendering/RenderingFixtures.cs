@@ -1,6 +1,7 @@
 using NetSolve.Model;
 using NetSolve.Parsing;
 using NetSolve.Solving;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Rendering;
 
@@ -9,8 +10,7 @@ internal static class RenderingFixtures
 {
     public static Network Example(string name)
     {
-        string path = Path.Combine(AppContext.BaseDirectory, "networks", name + ".yaml");
-        var result = NetworkReader.ReadFile(path);
+        var result = NetworkReader.ReadFile(TestFiles.Network(name));
         Assert.True(result.Network is not null, string.Join("\n", result.Diagnostics));
         return result.Network!;
     }

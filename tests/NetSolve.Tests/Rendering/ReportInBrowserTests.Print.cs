@@ -2,8 +2,8 @@ using System.Globalization;
 using System.Text;
 using System.Text.RegularExpressions;
 using Microsoft.Playwright;
-using NetSolve.Cli;
 using NetSolve.Rendering.Report;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Rendering;
 
@@ -48,8 +48,7 @@ public partial class ReportInBrowserTests
                 // Through the command line, as a planner would run it.
                 string network = Path.Combine(folder, "chain.yaml");
                 File.WriteAllText(network, ChainYaml(TallUnitCount));
-                var error = new StringWriter();
-                int code = NetSolveApp.Run(["report", network, "-o", report], new CliContext(new StringWriter(), error));
+                var (code, _, error) = CliRun.Run("report", network, "-o", report);
                 Assert.True(code == 0, string.Create(CultureInfo.InvariantCulture, $"netsolve report exited {code}: {error}"));
             }
             else

@@ -3,6 +3,7 @@ using NetSolve.Parsing;
 using NetSolve.Scenarios;
 using NetSolve.Solving;
 using NetSolve.Tests.Analysis;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Scenarios;
 
@@ -26,7 +27,7 @@ public sealed class OverrideTests
     public void An_override_equals_editing_the_file(string text, string original, string edited)
     {
         // Source: the same network written two ways; both are solved from scratch.
-        string path = Path.Combine(SmallNetworks.NetworksFolder, "harbourside.yaml");
+        string path = TestFiles.Network("harbourside");
         string yaml = File.ReadAllText(path);
         Assert.Contains(original, yaml, StringComparison.Ordinal);
         var expected = NetworkReader.ReadText(yaml.Replace(original, edited, StringComparison.Ordinal), path).Network!;
@@ -37,7 +38,7 @@ public sealed class OverrideTests
     [Fact]
     public void Scaling_every_stream_equals_editing_every_rate()
     {
-        string path = Path.Combine(SmallNetworks.NetworksFolder, "harbourside.yaml");
+        string path = TestFiles.Network("harbourside");
         string yaml = File.ReadAllText(path).Replace("11.5/h", "12.65/h", StringComparison.Ordinal).Replace("18/d", "19.8/d", StringComparison.Ordinal);
         var changed = Apply(SmallNetworks.Example("harbourside.yaml"), "arrivals*=1.1");
         GrowthAnalysisTests.AssertSameMetrics(NetworkSolver.Solve(NetworkReader.ReadText(yaml, path).Network!), NetworkSolver.Solve(changed));

@@ -1,12 +1,13 @@
 using NetSolve.Scenarios;
 using NetSolve.Solving;
 using NetSolve.Tests.Analysis;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Scenarios;
 
 public sealed class ScenarioReaderTests
 {
-    private static string ScenariosFolder => Path.Combine(SmallNetworks.NetworksFolder, "scenarios");
+    private static string ScenariosFolder => Path.Combine(TestFiles.NetworksFolder, "scenarios");
 
     [Fact]
     public void Every_example_scenario_reads_and_solves()
@@ -57,7 +58,7 @@ public sealed class ScenarioReaderTests
     public void A_bad_scenario_file_gives_located_one_line_errors(string yaml, string expected)
     {
         string folder = SmallNetworks.TemporaryFolder();
-        File.Copy(Path.Combine(SmallNetworks.NetworksFolder, "harbourside.yaml"), Path.Combine(folder, "harbourside.yaml"));
+        File.Copy(TestFiles.Network("harbourside"), Path.Combine(folder, "harbourside.yaml"));
         File.WriteAllText(Path.Combine(folder, "scenario.yaml"), yaml);
         var result = ScenarioReader.ReadText(yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(folder, basePath)));
         Assert.Equal([expected], result.Diagnostics.Where(d => d.IsError).Select(d => d.ToString()), StringComparer.Ordinal);
@@ -68,7 +69,7 @@ public sealed class ScenarioReaderTests
     public void Every_problem_in_a_scenario_file_is_reported_in_file_order()
     {
         const string Yaml = "base: harbourside.yaml\nadd_units:\n  ambulatory:\n    servers: 3\n    servce: 1h\n";
-        var result = ScenarioReader.ReadText(Yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(SmallNetworks.NetworksFolder, basePath)));
+        var result = ScenarioReader.ReadText(Yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(TestFiles.NetworksFolder, basePath)));
         Assert.Equal(
             [
                 "scenario.yaml:4:5: unit 'ambulatory': missing 'service' (the mean time a patient holds a server, e.g. 45min)",
@@ -83,7 +84,7 @@ public sealed class ScenarioReaderTests
     {
         // networks/millbrook-clinic.yaml is in minutes: service 15 is 15 min = 0.25 h, arrivals 12 are 12/min = 720/h.
         const string Yaml = "base: millbrook-clinic.yaml\nservice:\n  clinician: 15\narrivals:\n  reception: 12\n";
-        var result = ScenarioReader.ReadText(Yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(SmallNetworks.NetworksFolder, basePath)));
+        var result = ScenarioReader.ReadText(Yaml, "scenario.yaml", basePath => NetSolve.Parsing.NetworkReader.ReadFile(Path.Combine(TestFiles.NetworksFolder, basePath)));
         var network = result.Scenario!.Network;
         Assert.Equal(0.25, network.Units.Single(u => u.Id == "clinician").MeanServiceHours, 1e-15);
         Assert.Equal(720.0, network.Arrivals.Single(a => a.UnitId == "reception").PerHour, 1e-12);
@@ -92,7 +93,7 @@ public sealed class ScenarioReaderTests
     [Fact]
     public void A_network_file_reads_as_a_scenario_with_no_changes()
     {
-        var result = ScenarioReader.ReadFile(Path.Combine(SmallNetworks.NetworksFolder, "millbrook-clinic.yaml"));
+        var result = ScenarioReader.ReadFile(TestFiles.Network("millbrook-clinic"));
         Assert.Empty(result.Scenario!.Changes);
         Assert.Same(result.Scenario.Base, result.Scenario.Network);
         Assert.Equal("millbrook-clinic", result.Scenario.Name);

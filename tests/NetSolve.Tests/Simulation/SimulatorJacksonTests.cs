@@ -2,6 +2,7 @@ using NetSolve.Model;
 using NetSolve.Parsing;
 using NetSolve.Simulation;
 using NetSolve.Solving;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Simulation;
 
@@ -25,7 +26,7 @@ public sealed class SimulatorJacksonTests
     [InlineData("harbourside.yaml", 24.0 * 364, 24.0 * 28)]
     public void Simulated_means_of_the_example_networks_agree_with_the_Jackson_solution(string file, double durationHours, double warmupHours)
     {
-        var network = NetworkReader.ReadFile(Path.Combine("networks", file)).Network!;
+        var network = NetworkReader.ReadFile(Path.Combine(TestFiles.NetworksFolder, file)).Network!;
         var options = new SimulationOptions { Seed = 7, Replications = 10, WarmupHours = warmupHours, DurationHours = durationHours };
 
         // The formulas ignore service_cv (harbourside's imaging has 0.6, with a warning); the simulation uses it.

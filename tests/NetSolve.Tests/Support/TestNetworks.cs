@@ -6,14 +6,11 @@ namespace NetSolve.Tests.Support;
 /// <summary>Reads network text or files for tests and fails the test with the diagnostics when invalid.</summary>
 internal static class TestNetworks
 {
-    /// <summary>The folder the test project copies <c>networks/*.yaml</c> into.</summary>
-    public static string NetworksFolder => Path.Combine(AppContext.BaseDirectory, "networks");
-
     /// <summary>Every example network file name, for data-driven tests.</summary>
     public static TheoryData<string> ExampleFiles()
     {
         var data = new TheoryData<string>();
-        foreach (var path in Directory.EnumerateFiles(NetworksFolder, "*.yaml").Order(StringComparer.Ordinal))
+        foreach (var path in Directory.EnumerateFiles(TestFiles.NetworksFolder, "*.yaml").Order(StringComparer.Ordinal))
         {
             data.Add(Path.GetFileName(path));
         }
@@ -30,7 +27,7 @@ internal static class TestNetworks
 
     public static Network Example(string fileName)
     {
-        var result = NetworkReader.ReadFile(Path.Combine(NetworksFolder, fileName));
+        var result = NetworkReader.ReadFile(Path.Combine(TestFiles.NetworksFolder, fileName));
         Assert.False(result.HasErrors, string.Join("\n", result.Diagnostics));
         return result.Network!;
     }

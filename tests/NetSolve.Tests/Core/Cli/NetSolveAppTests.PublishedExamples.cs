@@ -1,6 +1,7 @@
 using System.Text.Json;
 using NetSolve.Model;
 using NetSolve.Tests.Support;
+using static NetSolve.Tests.Support.CliRun;
 
 namespace NetSolve.Tests.Core.Cli;
 

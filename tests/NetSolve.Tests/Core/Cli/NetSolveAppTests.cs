@@ -1,22 +1,15 @@
 using System.Globalization;
 using System.Text.Json;
-using NetSolve.Cli;
+using NetSolve.Tests.Support;
+using static NetSolve.Tests.Support.CliRun;
+using static NetSolve.Tests.Support.TestFiles;
 
 namespace NetSolve.Tests.Core.Cli;
 
+[Collection(CultureSensitiveCollection.Name)]
 public partial class NetSolveAppTests
 {
-    private static readonly string Harbourside = Path.Combine(AppContext.BaseDirectory, "networks", "harbourside.yaml");
-
-    private static string TestData(string folder, string file) => Path.Combine(AppContext.BaseDirectory, "TestData", folder, file);
-
-    private static (int ExitCode, string Out, string Error) Run(params string[] args)
-    {
-        using var output = new StringWriter(CultureInfo.InvariantCulture);
-        using var error = new StringWriter(CultureInfo.InvariantCulture);
-        int exitCode = NetSolveApp.Run(args, new CliContext(output, error));
-        return (exitCode, output.ToString(), error.ToString());
-    }
+    private static readonly string Harbourside = Network("harbourside");
 
     private static void AssertNoStackTrace(string stderr)
     {
@@ -59,7 +52,7 @@ public partial class NetSolveAppTests
     [InlineData("", "")]
     public void Unreadable_input_exits_1_with_one_line_and_no_stack_trace(string folder, string file)
     {
-        string path = folder.Length == 0 ? Path.Combine(AppContext.BaseDirectory, "TestData", "Invalid") : TestData(folder, file);
+        string path = folder.Length == 0 ? TestDataFolder("Invalid") : TestData(folder, file);
         var (exitCode, output, error) = Run("solve", path);
 
         Assert.Equal(1, exitCode);
@@ -262,7 +255,7 @@ public partial class NetSolveAppTests
         Assert.EndsWith(",bottleneck", lines[4], StringComparison.Ordinal);
     }
 
-    // Common practice: golden output, reviewed by eye; NETSOLVE_UPDATE_GOLDEN=1 rewrites it for review in the diff.
+    // Common practice: golden output, reviewed by eye; NETSOLVE_APPROVE=1 rewrites it for review in the diff.
     [Fact]
     public void The_harbourside_table_matches_the_golden_file()
     {
@@ -297,27 +290,6 @@ public partial class NetSolveAppTests
         }
     }
 
-    private static void AssertGolden(string name, string actual)
-    {
-        // Found from the test's output folder, not the compiler's source path: CI builds map source paths to "/_/".
-        string path = Path.Combine(RepositoryRoot(), "tests", "NetSolve.Tests", "Core", "Cli", name);
-        if (Environment.GetEnvironmentVariable("NETSOLVE_UPDATE_GOLDEN") == "1")
-        {
-            File.WriteAllText(path, actual);
-        }
-
-        Assert.True(File.Exists(path), $"no golden file {path}; run with NETSOLVE_UPDATE_GOLDEN=1 and review it");
-        Assert.Equal(File.ReadAllText(path), actual);
-    }
-
-    private static string RepositoryRoot()
-    {
-        var directory = new DirectoryInfo(AppContext.BaseDirectory);
-        while (directory is not null && !File.Exists(Path.Combine(directory.FullName, "NetSolve.sln")))
-        {
-            directory = directory.Parent;
-        }
-
-        return directory?.FullName ?? throw new InvalidOperationException("NetSolve.sln not found above the test output folder");
-    }
+    private static void AssertGolden(string name, string actual) =>
+        Approval.Verify(Path.Combine(SourceTree.Root, "tests", "NetSolve.Tests", "Core", "Cli", name), actual);
 }

@@ -1,5 +1,6 @@
 using System.Text;
 using NetSolve.Parsing;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Core.Parsing;
 
@@ -20,7 +21,7 @@ public sealed class BlockYamlReaderTests
     [Fact]
     public void Every_example_network_takes_the_fast_path_and_matches_YamlDotNet()
     {
-        foreach (var path in Directory.GetFiles(Path.Combine(AppContext.BaseDirectory, "networks"), "*.yaml", SearchOption.AllDirectories))
+        foreach (var path in Directory.GetFiles(TestFiles.NetworksFolder, "*.yaml", SearchOption.AllDirectories))
         {
             string text = File.ReadAllText(path);
             if (!text.Contains("\n  - ", StringComparison.Ordinal) && !text.Contains('[', StringComparison.Ordinal))

@@ -1,14 +1,15 @@
 using NetSolve.Benchmarks;
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Core.Parsing;
 
 public class NetworkReaderTests
 {
-    private static string InvalidFolder => Path.Combine(AppContext.BaseDirectory, "TestData", "Invalid");
+    private static string InvalidFolder => TestFiles.TestDataFolder("Invalid");
 
-    private static string WarningsFolder => Path.Combine(AppContext.BaseDirectory, "TestData", "Warnings");
+    private static string WarningsFolder => TestFiles.TestDataFolder("Warnings");
 
     public static TheoryData<string> InvalidFiles() => FilesIn(InvalidFolder);
 
