@@ -1,6 +1,7 @@
 using System.CommandLine;
 using NetSolve.Analysis;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Scenarios;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;

@@ -3,6 +3,7 @@ using System.Globalization;
 using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Growth;
 using NetSolve.Parsing;
 using NetSolve.Solving;
 

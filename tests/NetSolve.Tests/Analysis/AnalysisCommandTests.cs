@@ -1,5 +1,6 @@
 using System.Text.Json;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Growth;
 using NetSolve.Tests.Support;
 using static NetSolve.Tests.Support.CliRun;
 using static NetSolve.Tests.Support.TestFiles;
@@ -55,12 +56,13 @@ public sealed class AnalysisCommandTests
     }
 
     [Fact]
-    public void Growth_table_carries_the_caution_and_the_time_unit()
+    public void Growth_table_carries_the_caution_and_each_wait_with_its_unit()
     {
         var (code, output, _) = Run("growth", Network("harbourside"), "--stream", "emergency");
         Assert.Equal(0, code);
-        Assert.Contains("times in hours", output, StringComparison.Ordinal);
-        Assert.Contains("Mean wait (h)", output, StringComparison.Ordinal);
+        Assert.Contains("rates per hour", output, StringComparison.Ordinal);
+        Assert.Contains("Mean wait by growth factor", output, StringComparison.Ordinal);
+        Assert.Contains(" min\n", output, StringComparison.Ordinal); // each wait carries its own unit now, not the header
         Assert.Contains(Caution.Text, output, StringComparison.Ordinal);
     }
 
