@@ -1,7 +1,7 @@
 using System.CommandLine;
 using NetSolve.Analysis;
 using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Pathways;
 using NetSolve.Parsing;
 using NetSolve.Solving;
 

@@ -3,6 +3,7 @@ using System.Globalization;
 using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Staffing;
 using NetSolve.Parsing;
 using NetSolve.Solving;
 

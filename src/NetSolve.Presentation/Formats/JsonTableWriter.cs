@@ -36,6 +36,21 @@ public static class JsonTableWriter
         json.WriteEndObject();
     }
 
+    /// <summary>
+    /// Writes the fields of one row into the object being written, for documents that put a result's values beside
+    /// other fields rather than in an object of their own.
+    /// </summary>
+    public static void WriteFields(ResultTable table, IReadOnlyList<Cell> row, Utf8JsonWriter json)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        ArgumentNullException.ThrowIfNull(row);
+        ArgumentNullException.ThrowIfNull(json);
+        foreach (int i in table.ColumnsFor(Audience.Machines))
+        {
+            WriteCell(json, table.Columns[i].Id, row[i], table.TimeUnit);
+        }
+    }
+
     /// <summary>Writes one named value: a string for text, a number, or null when absent.</summary>
     public static void WriteCell(Utf8JsonWriter json, string name, Cell cell, TimeUnit timeUnit)
     {
