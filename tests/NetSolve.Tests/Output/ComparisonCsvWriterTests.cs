@@ -26,6 +26,14 @@ public sealed class ComparisonCsvWriterTests
     }
 
     [Fact]
+    public void The_header_is_the_ids_of_the_registry_columns_for_programs()
+    {
+        var run = SimulateAndSolve(replications: 3);
+
+        Assert.Equal(ComparisonCsvWriter.Header, CsvTableWriter.Header(ComparedMetricColumns.Table(run.Simulated, run.Formula)));
+    }
+
+    [Fact]
     public void Each_unit_has_one_row_per_compared_metric_in_file_order()
     {
         var rows = CsvRows.Parse(Csv(SimulateAndSolve(replications: 3)));
