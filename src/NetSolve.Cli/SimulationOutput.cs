@@ -1,5 +1,6 @@
 using System.Text;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 

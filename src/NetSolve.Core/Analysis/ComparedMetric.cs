@@ -7,7 +7,7 @@ namespace NetSolve.Analysis;
 /// <param name="Name">The contract's field name (<c>utilisation</c>, <c>mean_wait</c>, ...).</param>
 /// <param name="Formula">The formula's value, in hours for times; null when the formula has none (an unstable unit).</param>
 /// <param name="Simulated">The simulated estimate, in hours for times.</param>
-/// <param name="Dimension">Whether the values are times, rates or plain numbers (for conversion).</param>
+/// <param name="Dimension">What the values measure: times and rates are converted to the file's time unit, the rest decides how people read them.</param>
 public sealed record ComparedMetric(string Name, double? Formula, Estimate Simulated, MetricDimension Dimension)
 {
     /// <summary>

@@ -16,11 +16,11 @@ public static class FormulaSimulationComparison
         return
         [
             new("arrival_rate", formula.ArrivalsPerHour, simulated.ArrivalsPerHour, MetricDimension.Rate),
-            new("utilisation", formula.Utilisation, simulated.Utilisation, MetricDimension.Plain),
-            new("p_wait", formula.WaitProbability, simulated.WaitProbability, MetricDimension.Plain),
-            new("mean_queue", formula.MeanQueue, simulated.MeanQueue, MetricDimension.Plain),
+            new("utilisation", formula.Utilisation, simulated.Utilisation, MetricDimension.Fraction),
+            new("p_wait", formula.WaitProbability, simulated.WaitProbability, MetricDimension.Probability),
+            new("mean_queue", formula.MeanQueue, simulated.MeanQueue, MetricDimension.Count),
             new("mean_wait", formula.MeanWaitHours, simulated.MeanWaitHours, MetricDimension.Time),
-            new("mean_in_unit", formula.MeanInUnit, simulated.MeanInUnit, MetricDimension.Plain),
+            new("mean_in_unit", formula.MeanInUnit, simulated.MeanInUnit, MetricDimension.Count),
             new("mean_time_in_unit", formula.MeanTimeInUnitHours, simulated.MeanTimeInUnitHours, MetricDimension.Time),
         ];
     }

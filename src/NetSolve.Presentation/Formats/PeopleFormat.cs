@@ -49,6 +49,11 @@ public static class PeopleFormat
             return cell.Dimension == MetricDimension.Servers ? Unlimited : Missing;
         }
 
+        if (cell.HalfWidth is double halfWidth)
+        {
+            return WithHalfWidth(value, halfWidth, cell.Dimension, timeUnit);
+        }
+
         return cell.Dimension switch
         {
             MetricDimension.Time => Time(value),
@@ -94,19 +99,13 @@ public static class PeopleFormat
     /// <summary>A time stored in hours, in minutes, hours or days, whichever reads best: <c>4.175 min</c>, <c>14.76 h</c>, <c>5.503 d</c>.</summary>
     public static string Time(double hours)
     {
-        double magnitude = Math.Abs(hours);
-        if (magnitude == 0.0)
+        if (hours == 0.0)
         {
             return "0";
         }
 
-        if (magnitude < 1.0)
-        {
-            double minutes = hours * TimeConstants.MinutesPerHour;
-            return Math.Abs(minutes) < SmallestMinutes ? (minutes > 0.0 ? "< 0.001 min" : "> -0.001 min") : Number(minutes) + " min";
-        }
-
-        return magnitude < HoursBeforeDays ? Number(hours) + " h" : Number(hours / TimeConstants.HoursPerDay) + " d";
+        var unit = ReadableUnit(hours);
+        return TimeIn(hours, unit) + " " + TimeConstants.Suffix(unit);
     }
 
     /// <summary>A rate stored per hour, per <paramref name="timeUnit"/> with the unit: <c>11.50/h</c>.</summary>
@@ -118,8 +117,7 @@ public static class PeopleFormat
         value > 0.0 && value < 0.0005 ? "< 0.001" : value.ToString("0.000", Invariant);
 
     /// <summary>A share as a percentage with one decimal: <c>84.9%</c>; <c>&lt; 0.1%</c> when above 0 but smaller.</summary>
-    public static string Percent(double fraction) =>
-        fraction > 0.0 && fraction < 0.0005 ? "< 0.1%" : Number1(fraction * 100.0) + "%";
+    public static string Percent(double fraction) => PercentNumber(fraction) + "%";
 
     /// <summary>A change of a share in percentage points with its sign: <c>+3.2 pt</c>.</summary>
     public static string Points(double change) => (change * 100.0).ToString("+0.0;-0.0;0.0", Invariant) + " pt";
@@ -138,6 +136,60 @@ public static class PeopleFormat
     /// <summary>A factor with three decimals: <c>1.178</c>; grouped from 1,000.</summary>
     public static string Factor(double value) =>
         Math.Abs(value) >= 1000.0 ? Number(value) : value.ToString("0.000", Invariant);
+
+    /// <summary>
+    /// A simulated mean with ± the half-width of its 95% interval, both in the same unit, written once after them:
+    /// <c>4.175 ± 0.3100 min</c>, <c>69.6 ± 0.3%</c>, <c>0.042 ± 0.013</c>; a rate per <paramref name="timeUnit"/> without its unit.
+    /// </summary>
+    /// <remarks>A time's unit is the one that reads best for the mean (for the half-width when the mean is 0).</remarks>
+    public static string WithHalfWidth(double mean, double halfWidth, MetricDimension dimension, TimeUnit timeUnit)
+    {
+        const string PlusMinus = " \u00B1 ";
+        switch (dimension)
+        {
+            case MetricDimension.Time:
+                if (mean == 0.0 && halfWidth == 0.0)
+                {
+                    return "0" + PlusMinus + "0";
+                }
+
+                var unit = ReadableUnit(mean != 0.0 ? mean : halfWidth);
+                return TimeIn(mean, unit) + PlusMinus + TimeIn(halfWidth, unit) + " " + TimeConstants.Suffix(unit);
+            case MetricDimension.Rate:
+                return Number(TimeConstants.RateFromPerHour(mean, timeUnit)) + PlusMinus + Number(TimeConstants.RateFromPerHour(halfWidth, timeUnit));
+            case MetricDimension.Probability:
+                return Probability(mean) + PlusMinus + Probability(halfWidth);
+            case MetricDimension.Fraction:
+                return PercentNumber(mean) + PlusMinus + PercentNumber(halfWidth) + "%";
+            default:
+                return Number(mean) + PlusMinus + Number(halfWidth);
+        }
+    }
+
+    /// <summary>The unit a time of <paramref name="hours"/> reads best in: minutes under an hour, hours under two days, else days.</summary>
+    private static TimeUnit ReadableUnit(double hours)
+    {
+        double magnitude = Math.Abs(hours);
+        return magnitude < 1.0 ? TimeUnit.Minute : magnitude < HoursBeforeDays ? TimeUnit.Hour : TimeUnit.Day;
+    }
+
+    /// <summary>The number of a time in <paramref name="unit"/>, without the unit; minutes too small to plan with as <c>&lt; 0.001</c>.</summary>
+    private static string TimeIn(double hours, TimeUnit unit)
+    {
+        switch (unit)
+        {
+            case TimeUnit.Minute:
+                double minutes = hours * TimeConstants.MinutesPerHour;
+                return minutes != 0.0 && Math.Abs(minutes) < SmallestMinutes ? (minutes > 0.0 ? "< 0.001" : "> -0.001") : Number(minutes);
+            case TimeUnit.Hour:
+                return Number(hours);
+            default:
+                return Number(hours / TimeConstants.HoursPerDay);
+        }
+    }
+
+    private static string PercentNumber(double fraction) =>
+        fraction > 0.0 && fraction < 0.0005 ? "< 0.1" : Number1(fraction * 100.0);
 
     private static string Number1(double value) =>
         Math.Abs(value) >= LargestNumber ? Number(value) : value.ToString("#,0.0", Invariant);

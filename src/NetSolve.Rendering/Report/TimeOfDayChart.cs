@@ -1,5 +1,5 @@
 using System.Globalization;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
 using ScottPlot;
 

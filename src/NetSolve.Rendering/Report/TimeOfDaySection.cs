@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using NetSolve.Model;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
 using static System.Net.WebUtility;
 

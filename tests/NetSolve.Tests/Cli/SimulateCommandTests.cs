@@ -57,6 +57,16 @@ public sealed class SimulateCommandTests
     }
 
     [Fact]
+    public void With_one_replication_the_comparison_says_no_formula_value_could_be_judged()
+    {
+        var (code, output, _) = Run("simulate", Example, "--replications", "1", "--warmup", "1d", "--duration", "7d", "--compare");
+
+        Assert.Equal(0, code);
+        Assert.Contains("\nno formula value could be judged: one replication gives no interval (use --replications 2 or more)\n", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("every formula value lies inside", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void The_same_seed_prints_the_same_document_whatever_the_thread_count()
     {
         string[] common = ["simulate", Example, "--format", "csv", "--replications", "4", "--warmup", "3d", "--duration", "14d", "--seed", "31"];

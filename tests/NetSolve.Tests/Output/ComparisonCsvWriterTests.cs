@@ -1,6 +1,8 @@
 using System.Globalization;
 using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Metrics;
+using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;
@@ -22,6 +24,14 @@ public sealed class ComparisonCsvWriterTests
         string csv = Csv(SimulateAndSolve(replications: 3));
 
         Assert.Equal("unit,metric,formula,simulated,simulated_ci,verdict,time_unit", csv.Split('\n')[0]);
+    }
+
+    [Fact]
+    public void The_header_is_the_ids_of_the_registry_columns_for_programs()
+    {
+        var run = SimulateAndSolve(replications: 3);
+
+        Assert.Equal(ComparisonCsvWriter.Header, CsvTableWriter.Header(ComparedMetricColumns.Table(run.Simulated, run.Formula)));
     }
 
     [Fact]
@@ -54,10 +64,12 @@ public sealed class ComparisonCsvWriterTests
             var (csv, shown) = (csvRows[i], tableRows[i]);
             Assert.Equal((shown.Unit, shown.Metric, shown.Verdict), (csv[0], csv[1], csv[5]));
 
-            // Rounded as the table rounds, the CSV's full-precision numbers must print what the table printed.
-            Assert.Equal(shown.Formula, Numbers.Compact(Number(csv[2])));
-            var simulated = new Estimate(Number(csv[3])!.Value, Number(csv[4]), replications);
-            Assert.Equal(shown.Simulated, SimulationTableWriter.WithHalfWidth(simulated, 1.0));
+            // Rounded as the table rounds, the CSV's full-precision numbers must print what the table printed. The CSV is in
+            // minutes (the network's time unit) and the table formats Core's hours, so the test converts back.
+            var dimension = DimensionOf(csv[1]);
+            Assert.Equal(shown.Formula, PeopleFormat.Cell(Cell.Of(Hours(Number(csv[2]), dimension), dimension), TimeUnit.Minute));
+            var simulated = Cell.WithHalfWidth(Hours(Number(csv[3]), dimension), Hours(Number(csv[4]), dimension), dimension);
+            Assert.Equal(shown.Simulated, PeopleFormat.Cell(simulated, TimeUnit.Minute));
         }
 
         Assert.All(verdictsPresent, verdict => Assert.Contains(verdict, csvRows.Select(row => row[5]), StringComparer.Ordinal));
@@ -119,6 +131,24 @@ public sealed class ComparisonCsvWriterTests
         ComparisonCsvWriter.Write(run.Simulated, run.Formula, output);
         return output.ToString();
     }
+
+    // The dimension of each compared metric, as FormulaSimulationComparison declares it.
+    private static MetricDimension DimensionOf(string metric) => metric switch
+    {
+        "arrival_rate" => MetricDimension.Rate,
+        "utilisation" => MetricDimension.Fraction,
+        "p_wait" => MetricDimension.Probability,
+        "mean_wait" or "mean_time_in_unit" => MetricDimension.Time,
+        _ => MetricDimension.Count,
+    };
+
+    // Back from the CSV's minutes to Core's hours: 60 minutes to the hour, 60 arrivals per hour for one a minute.
+    private static double? Hours(double? value, MetricDimension dimension) => dimension switch
+    {
+        MetricDimension.Time => value / 60.0,
+        MetricDimension.Rate => value * 60.0,
+        _ => value,
+    };
 
     private static double? Number(string cell) =>
         cell.Length == 0 ? null : double.Parse(cell, NumberStyles.Float, CultureInfo.InvariantCulture);

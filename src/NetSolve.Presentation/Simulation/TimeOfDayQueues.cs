@@ -1,7 +1,7 @@
 using NetSolve.Model;
 using NetSolve.Simulation;
 
-namespace NetSolve.Presentation;
+namespace NetSolve.Presentation.Simulation;
 
 /// <summary>
 /// Which units the time-of-day views show: the mean queue by hour of day, for the units whose queue peaks highest.

@@ -1,0 +1,35 @@
+using System.Collections.Immutable;
+using NetSolve.Analysis;
+using NetSolve.Model;
+using NetSolve.Simulation;
+using NetSolve.Solving;
+
+namespace NetSolve.Presentation.Simulation;
+
+/// <summary>One metric of one unit, formula against simulation, with the time unit its file is in.</summary>
+/// <param name="UnitId">The unit's id.</param>
+/// <param name="Metric">The compared metric and its verdict.</param>
+/// <param name="TimeUnit">The network's time unit, which CSV rows name so each stands on its own when filtered.</param>
+public sealed record ComparisonRow(string UnitId, ComparedMetric Metric, TimeUnit TimeUnit)
+{
+    /// <summary>The rows of one unit, in the contract's order of metrics.</summary>
+    public static ImmutableArray<ComparisonRow> OfUnit(SimulatedUnit simulated, UnitResult formula, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(simulated);
+        return [.. FormulaSimulationComparison.ForUnit(simulated, formula).Select(metric => new ComparisonRow(simulated.Unit.Id, metric, timeUnit))];
+    }
+
+    /// <summary>The rows of every unit in file order.</summary>
+    /// <exception cref="ArgumentException"><paramref name="formula"/> is not a solution of the simulated network.</exception>
+    public static ImmutableArray<ComparisonRow> Of(SimulationResult simulated, NetworkSolution formula)
+    {
+        ArgumentNullException.ThrowIfNull(simulated);
+        ArgumentNullException.ThrowIfNull(formula);
+        if (formula.Units.Length != simulated.Units.Length)
+        {
+            throw new ArgumentException("The formula solution must be of the simulated network: one result per unit.", nameof(formula));
+        }
+
+        return [.. simulated.Units.SelectMany((unit, i) => OfUnit(unit, formula.Units[i], simulated.Network.TimeUnit))];
+    }
+}

@@ -1,0 +1,153 @@
+using System.Collections.Immutable;
+using System.Text.Json;
+using NetSolve.Model;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Metrics;
+using NetSolve.Simulation;
+using NetSolve.Solving;
+
+namespace NetSolve.Presentation.Simulation;
+
+/// <summary>
+/// Writes a simulation as the <c>solve</c> document plus confidence and percentile fields: each simulated metric
+/// <c>x</c> has <c>x_ci</c>, the half-width of its 95% interval (null with one replication), and a
+/// <c>simulation</c> object says how the run was made. With a formula solution each unit also gets <c>compare</c>.
+/// </summary>
+/// <remarks>
+/// The document nests objects a flat table cannot hold, so the nesting is written here; every value is read through
+/// the registries (<see cref="SimulatedUnitColumns"/> and the others) and converted by <see cref="MachineFormat"/>.
+/// </remarks>
+public static class SimulationJsonWriter
+{
+    /// <summary>Writes <paramref name="result"/> (and the comparison when <paramref name="formula"/> is given), indented, UTF-8.</summary>
+    public static void Write(SimulationResult result, Stream output, NetworkSolution? formula = null, double strainThreshold = Defaults.StrainThreshold)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        using var json = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true });
+        var timeUnit = result.Network.TimeUnit;
+        var rows = SimulatedUnitRow.Of(result, strainThreshold);
+        json.WriteStartObject();
+        json.WriteString("network", result.Network.Name);
+        json.WriteString("time_unit", TimeConstants.Name(timeUnit));
+        json.WriteBoolean("stable", rows.All(row => row.Status != UnitStatus.Unstable));
+        WriteRun(json, result);
+        var units = ResultTable.Build(SimulatedUnitColumns.ForJson, rows, timeUnit);
+        json.WriteStartArray("units");
+        for (int i = 0; i < rows.Length; i++)
+        {
+            json.WriteStartObject();
+            WriteFields(json, units, units.Rows[i]);
+            WriteUnitDetails(json, rows[i].Simulated, timeUnit);
+            if (formula is not null)
+            {
+                WriteComparison(json, ComparisonRow.OfUnit(rows[i].Simulated, formula.Units[i], timeUnit), timeUnit);
+            }
+
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+        WriteTotals(json, result.Totals!, timeUnit);
+        WriteGroups(json, result.Groups, timeUnit);
+        json.WriteEndObject();
+        json.Flush();
+    }
+
+    private static void WriteRun(Utf8JsonWriter json, SimulationResult result)
+    {
+        var options = result.Options;
+        var timeUnit = result.Network.TimeUnit;
+        json.WriteStartObject("simulation");
+        json.WriteNumber("seed", options.Seed);
+        json.WriteNumber("replications", options.Replications);
+        json.WriteNumber("replications_finished", result.ReplicationsFinished);
+        json.WriteBoolean("complete", result.IsComplete);
+        JsonTableWriter.WriteCell(json, "warmup", Cell.Of(options.WarmupHours, MetricDimension.Time), timeUnit);
+        JsonTableWriter.WriteCell(json, "duration", Cell.Of(options.DurationHours, MetricDimension.Time), timeUnit);
+        json.WriteNumber("events", result.Events);
+        json.WriteNumber("confidence_level", Estimate.ConfidenceLevel);
+        json.WriteEndObject();
+    }
+
+    /// <summary>The nested fields of a unit: percentiles, P(wait &gt; t) and the mean queue by hour of day.</summary>
+    private static void WriteUnitDetails(Utf8JsonWriter json, SimulatedUnit unit, TimeUnit timeUnit)
+    {
+        WritePercentiles(json, "time_in_unit_percentiles", unit.TimeInUnitPercentiles, timeUnit);
+        JsonTableWriter.WriteArray(ResultTable.Build(WaitOverColumns.ForJson, unit.WaitOver, timeUnit), "p_wait_over", json);
+        WriteHourly(json, "mean_queue_by_hour", unit.MeanQueueByHour, EstimateCell.Mean, timeUnit);
+        WriteHourly(json, "mean_queue_by_hour_ci", unit.MeanQueueByHour, EstimateCell.HalfWidth, timeUnit);
+    }
+
+    /// <summary>One object per compared metric, keyed by its name.</summary>
+    private static void WriteComparison(Utf8JsonWriter json, ImmutableArray<ComparisonRow> rows, TimeUnit timeUnit)
+    {
+        var table = ResultTable.Build(ComparedMetricColumns.ForJson, rows, timeUnit);
+        json.WriteStartObject("compare");
+        for (int i = 0; i < rows.Length; i++)
+        {
+            json.WritePropertyName(rows[i].Metric.Name);
+            JsonTableWriter.WriteObject(table, table.Rows[i], json);
+        }
+
+        json.WriteEndObject();
+    }
+
+    private static void WriteTotals(Utf8JsonWriter json, SimulatedTotals totals, TimeUnit timeUnit)
+    {
+        var table = ResultTable.Build(SimulatedTotalsColumns.ForJson, [totals], timeUnit);
+        json.WriteStartObject("totals");
+        WriteFields(json, table, table.Rows[0]);
+        WritePercentiles(json, "time_in_system_percentiles", totals.TimeInSystemPercentiles, timeUnit);
+        json.WriteEndObject();
+    }
+
+    private static void WriteGroups(Utf8JsonWriter json, ImmutableArray<SimulatedGroup> groups, TimeUnit timeUnit)
+    {
+        var table = ResultTable.Build(SimulatedGroupColumns.ForJson, groups, timeUnit);
+        json.WriteStartArray("groups");
+        for (int i = 0; i < groups.Length; i++)
+        {
+            json.WriteStartObject();
+            WriteFields(json, table, table.Rows[i]);
+            WritePercentiles(json, "time_in_system_percentiles", groups[i].TimeInSystemPercentiles, timeUnit);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+    }
+
+    private static void WritePercentiles(Utf8JsonWriter json, string name, ImmutableArray<PercentileEstimate> percentiles, TimeUnit timeUnit)
+    {
+        var table = PercentileColumns.Table(name, percentiles, timeUnit);
+        json.WritePropertyName(name);
+        JsonTableWriter.WriteObject(table, table.Rows[0], json);
+    }
+
+    /// <summary>An array of one number per hour of day; null for an hour not measured (or without a half-width).</summary>
+    private static void WriteHourly(Utf8JsonWriter json, string name, ImmutableArray<Estimate?> byHour, Func<Estimate?, MetricDimension, Cell> cell, TimeUnit timeUnit)
+    {
+        json.WriteStartArray(name);
+        foreach (var hour in byHour)
+        {
+            if (MachineFormat.Value(cell(hour, MetricDimension.Count), timeUnit) is double number)
+            {
+                json.WriteNumberValue(number);
+            }
+            else
+            {
+                json.WriteNullValue();
+            }
+        }
+
+        json.WriteEndArray();
+    }
+
+    /// <summary>The fields of one row, without opening an object: nested fields follow them in the same object.</summary>
+    private static void WriteFields(Utf8JsonWriter json, ResultTable table, IReadOnlyList<Cell> row)
+    {
+        foreach (int i in table.ColumnsFor(Audience.Machines))
+        {
+            JsonTableWriter.WriteCell(json, table.Columns[i].Id, row[i], table.TimeUnit);
+        }
+    }
+}

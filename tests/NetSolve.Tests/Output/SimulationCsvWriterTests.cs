@@ -1,0 +1,31 @@
+using System.Globalization;
+using NetSolve.Presentation.Simulation;
+using NetSolve.Tests.Support;
+
+namespace NetSolve.Tests.Output;
+
+public sealed class SimulationCsvWriterTests
+{
+    [Fact]
+    public void The_header_is_the_registry_ids_with_percentiles_waits_over_and_the_24_hours_last()
+    {
+        var (simulated, _) = SimulationRuns.Larkspur();
+        using var output = new StringWriter(CultureInfo.InvariantCulture);
+        SimulationCsvWriter.Write(simulated, output);
+        var rows = CsvRows.Parse(output.ToString());
+
+        // Source: docs/simulation.md, "CSV": id, label, servers, each metric from arrival_rate to diverted_rate with its
+        // _ci, the percentiles time_in_unit_p50 to _p99, one p_wait_over_T per --wait-over time (here 1 hour), the hours.
+        string[] expected =
+        [
+            .. SimulatedUnitColumns.ForCsv.Select(column => column.Id),
+            "time_in_unit_p50", "time_in_unit_p90", "time_in_unit_p95", "time_in_unit_p99", "p_wait_over_1",
+            .. Enumerable.Range(0, 24).Select(hour => FormattableString.Invariant($"mean_queue_h{hour:00}")),
+        ];
+        Assert.Equal(expected, rows[0]);
+        Assert.Equal(["id", "label", "servers", "arrival_rate", "arrival_rate_ci"], rows[0][..5]);
+        Assert.Equal(["diverted_rate", "diverted_rate_ci"], rows[0][21..23]);
+        Assert.All(rows, row => Assert.Equal(expected.Length, row.Length));
+        Assert.Equal(simulated.Units.Length + 1, rows.Count);
+    }
+}
