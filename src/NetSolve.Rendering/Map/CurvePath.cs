@@ -1,6 +1,5 @@
 using System.Text;
 using Microsoft.Msagl.Core.Geometry.Curves;
-using NetSolve.Presentation;
 using MsaglPoint = Microsoft.Msagl.Core.Geometry.Point;
 
 namespace NetSolve.Rendering.Map;
@@ -66,5 +65,5 @@ internal static class CurvePath
     }
 
     private static void Pair(StringBuilder path, MapPoint point) =>
-        path.Append(Invariant.Coordinate(point.X)).Append(' ').Append(Invariant.Coordinate(point.Y)).Append(' ');
+        path.Append(Coordinates.Format(point.X)).Append(' ').Append(Coordinates.Format(point.Y)).Append(' ');
 }

@@ -1,7 +1,6 @@
 using System.Globalization;
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Presentation;
 
 namespace NetSolve.Rendering.Map;
 
@@ -54,7 +53,7 @@ public static class DotMapWriter
     {
         dot.Append("  ").Append(Quote(from)).Append(" -> ").Append(Quote(to))
             .Append(" [label=").Append(Quote(rate))
-            .Append(", penwidth=").Append(Invariant.Coordinate(width))
+            .Append(", penwidth=").Append(Coordinates.Format(width))
             .Append(", color=").Append(Quote(colour));
         if (dashed)
         {
@@ -70,7 +69,7 @@ public static class DotMapWriter
         string label = string.Join("\n", node.Lines.Select(line => line.Text));
         string border = style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
         return string.Create(CultureInfo.InvariantCulture,
-            $"style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Invariant.Coordinate(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}");
+            $"style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Coordinates.Format(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}");
     }
 
     /// <summary>A DOT quoted string: backslash and double quote escaped, line breaks as <c>\n</c>.</summary>

@@ -5,7 +5,7 @@ namespace NetSolve.Rendering.Map;
 
 /// <summary>A laid-out bottleneck map, ready to draw: boxes and flow lines in map units, y downwards.</summary>
 /// <param name="Title">The network's name.</param>
-/// <param name="TimeUnit">The time unit every printed time and rate uses.</param>
+/// <param name="TimeUnit">The network's time unit: every rate is written per it; times take the unit that reads best (PeopleFormat).</param>
 /// <param name="Direction">The main direction of flow.</param>
 /// <param name="Width">Width of the laid-out graph, margins included.</param>
 /// <param name="Height">Height of the laid-out graph, margins included.</param>

@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
 using NetSolve.Solving;
 using Microsoft.Msagl.Core.Geometry.Curves;
 using Microsoft.Msagl.Core.Layout;
@@ -80,7 +80,7 @@ public static class MapLayoutBuilder
         foreach (var (route, perHour) in routes)
         {
             double stroke = StrokeWidth(perHour, maxPerHour);
-            string rateText = Units.ShortRate(perHour, timeUnit);
+            string rateText = PeopleFormat.Rate(perHour, timeUnit);
             var edge = new MsaglEdge(graphNodes[index[route.From]], graphNodes[index[route.To]]);
             edge.EdgeGeometry.TargetArrowhead = new Arrowhead { Length = Math.Max(MinArrowLength, ArrowLengthPerStroke * stroke) };
             graph.Edges.Add(edge);
@@ -187,7 +187,7 @@ public static class MapLayoutBuilder
             tip = isArrival ? new MapPoint(node.Left, node.Top + StubInset) : new MapPoint(node.Right - StubInset, node.Bottom + StubLength);
         }
 
-        return new MapStub(perHour, Units.ShortRate(perHour, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
+        return new MapStub(perHour, PeopleFormat.Rate(perHour, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
     }
 
     /// <summary>A route runs backwards when its target's centre is not further along the main direction than its source's.</summary>

@@ -1,5 +1,6 @@
 using System.Xml.Linq;
 using NetSolve.Model;
+using NetSolve.Presentation;
 
 namespace NetSolve.Rendering.Map;
 
@@ -47,14 +48,14 @@ internal static class MapLegend
         foreach (var status in HarbourLightsPalette.Order)
         {
             var style = HarbourLightsPalette.For(status);
-            string text = style.Glyph + " " + style.Word;
+            string text = HarbourLightsPalette.Text(status);
             items.Add(new LegendItem(text, (x, y) =>
             {
                 var swatch = SvgMapWriter.Box(x, y, SvgMapWriter.SwatchWidth, SvgMapWriter.SwatchHeight, style.Fill, style.Border, Math.Min(style.BorderWidth, 2.5), style.BorderDash);
                 return new XElement(
                     Svg + "g",
                     new XAttribute("class", "legend-status"),
-                    new XAttribute("data-status", SvgMapWriter.StatusName(status)),
+                    new XAttribute("data-status", StatusWords.Name(status)),
                     swatch,
                     SvgMapWriter.Text(x + SvgMapWriter.SwatchWidth + 6.0, y + 13.0, MapTypography.DetailSize, text, bold: true));
             }));
@@ -65,7 +66,7 @@ internal static class MapLegend
         items.Add(LineItem("in from outside / out", MapColours.BoundaryLine, string.Empty));
         string unit = TimeConstants.Name(timeUnit);
         items.Add(TextItem("line width \u221D patients per " + unit));
-        items.Add(TextItem("wait = mean wait before service, in " + unit + "s"));
+        items.Add(TextItem("wait = mean wait before service"));
         return items;
     }
 

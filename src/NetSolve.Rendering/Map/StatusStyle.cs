@@ -1,8 +1,8 @@
 namespace NetSolve.Rendering.Map;
 
-/// <summary>How one unit status is drawn: colours, border, glyph and word. Status never rests on colour alone.</summary>
-/// <param name="Word">The status word written on the box, e.g. <c>BOTTLENECK</c>.</param>
-/// <param name="Glyph">A shape drawn before the word; each status has its own.</param>
+/// <summary>How one unit status is drawn: colours, border and glyph. Status never rests on colour alone.</summary>
+/// <remarks>The word written after the glyph is the contract's, from <see cref="Presentation.StatusWords"/>.</remarks>
+/// <param name="Glyph">A shape drawn before the status word; each status has its own.</param>
 /// <param name="Fill">Box fill, <c>#RRGGBB</c>.</param>
 /// <param name="Text">Text colour on that fill, <c>#RRGGBB</c>.</param>
 /// <param name="Border">Border colour, <c>#RRGGBB</c>.</param>
@@ -10,7 +10,6 @@ namespace NetSolve.Rendering.Map;
 /// <param name="BorderDash">SVG <c>stroke-dasharray</c>, empty for a solid line.</param>
 /// <param name="DoubleBorder">True to draw a second border inside the first.</param>
 public sealed record StatusStyle(
-    string Word,
     string Glyph,
     string Fill,
     string Text,

@@ -2,7 +2,6 @@ using System.Globalization;
 using System.Xml.Linq;
 using NetSolve.Model;
 using NetSolve.Presentation;
-using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Map;
 
@@ -36,9 +35,9 @@ public static class SvgMapWriter
 
         var root = new XElement(
             Svg + "svg",
-            new XAttribute("viewBox", FormattableString.Invariant($"0 0 {Invariant.Coordinate(width)} {Invariant.Coordinate(height)}")),
-            new XAttribute("width", Invariant.Coordinate(width)),
-            new XAttribute("height", Invariant.Coordinate(height)),
+            new XAttribute("viewBox", FormattableString.Invariant($"0 0 {Coordinates.Format(width)} {Coordinates.Format(height)}")),
+            new XAttribute("width", Coordinates.Format(width)),
+            new XAttribute("height", Coordinates.Format(height)),
             new XAttribute("role", "img"),
             new XAttribute("class", "bottleneck-map"),
             new XAttribute("font-family", MapTypography.FontFamily),
@@ -49,7 +48,7 @@ public static class SvgMapWriter
             new XElement(
                 Svg + "g",
                 new XAttribute("class", "graph"),
-                new XAttribute("transform", FormattableString.Invariant($"translate({Invariant.Coordinate(offsetX)} {Invariant.Coordinate(headerHeight)})")),
+                new XAttribute("transform", FormattableString.Invariant($"translate({Coordinates.Format(offsetX)} {Coordinates.Format(headerHeight)})")),
                 new XElement(Svg + "g", new XAttribute("class", "flows"), layout.Edges.Select(Flow)),
                 new XElement(Svg + "g", new XAttribute("class", "nodes"), layout.Nodes.Select(Node)),
                 new XElement(Svg + "g", new XAttribute("class", "rates"), layout.Edges.Select(Rate))));
@@ -59,7 +58,7 @@ public static class SvgMapWriter
     /// <summary>The map as SVG text, without an XML declaration so it can also be inlined in HTML.</summary>
     public static string WriteString(MapLayout layout) => Write(layout).Root!.ToString(SaveOptions.None);
 
-    internal static XAttribute Attr(string name, double value) => new(name, Invariant.Coordinate(value));
+    internal static XAttribute Attr(string name, double value) => new(name, Coordinates.Format(value));
 
     private static string Description(MapLayout layout)
     {
@@ -112,7 +111,7 @@ public static class SvgMapWriter
             edge.ArrowTip,
             new MapPoint(edge.ArrowBase.X + (nx * half), edge.ArrowBase.Y + (ny * half)),
             new MapPoint(edge.ArrowBase.X - (nx * half), edge.ArrowBase.Y - (ny * half)),
-        }.Select(p => Invariant.Coordinate(p.X) + "," + Invariant.Coordinate(p.Y)));
+        }.Select(p => Coordinates.Format(p.X) + "," + Coordinates.Format(p.Y)));
         return new XElement(Svg + "polygon", new XAttribute("class", "arrowhead"), new XAttribute("points", points), new XAttribute("fill", fill));
     }
 
@@ -121,9 +120,9 @@ public static class SvgMapWriter
         var style = HarbourLightsPalette.For(node.Status);
         var group = new XElement(
             Svg + "g",
-            new XAttribute("class", "unit status-" + StatusName(node.Status)),
+            new XAttribute("class", "unit status-" + StatusWords.Name(node.Status)),
             new XAttribute("data-unit", node.UnitId),
-            new XAttribute("data-status", StatusName(node.Status)),
+            new XAttribute("data-status", StatusWords.Name(node.Status)),
             new XElement(Svg + "title", node.UnitId + ": " + string.Join("; ", node.Lines.Select(line => line.Text))));
         foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit") })
         {
@@ -234,16 +233,6 @@ public static class SvgMapWriter
 
         return rect;
     }
-
-    /// <summary>The lower-case contract word for a status: <c>ok</c>, <c>strained</c>, <c>bottleneck</c>, <c>unstable</c>.</summary>
-    public static string StatusName(UnitStatus status) => status switch
-    {
-        UnitStatus.Ok => "ok",
-        UnitStatus.Strained => "strained",
-        UnitStatus.Bottleneck => "bottleneck",
-        UnitStatus.Unstable => "unstable",
-        _ => throw new ArgumentOutOfRangeException(nameof(status), status, "Unknown unit status."),
-    };
 
     internal static string KindName(MapEdgeKind kind) => kind switch
     {

@@ -1,11 +1,17 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Solution;
 using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Map;
 
-/// <summary>The lines written in a unit's box: label, status glyph and word, servers and utilisation, mean wait.</summary>
+/// <summary>The lines written in a unit's box: label, status glyph and word, servers and utilisation, mean wait, rates in and out.</summary>
+/// <remarks>
+/// Every value is the registry's (<see cref="UnitColumns"/>) in <see cref="PeopleFormat"/>, so a box shows exactly
+/// what the solve table shows: <c>1,200 servers</c>, <c>84.9% busy</c>, <c>wait 4.177 min</c>. Two waits are words
+/// rather than numbers: <c>no wait</c> at a unit with unlimited servers, <c>wait unbounded</c> at an unstable one.
+/// </remarks>
 internal static class UnitBoxText
 {
     public static ImmutableArray<MapTextLine> For(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
@@ -16,23 +22,22 @@ internal static class UnitBoxText
             lines.Add(new MapTextLine(part, MapTypography.LabelSize, IsBold: true));
         }
 
-        var style = HarbourLightsPalette.For(result.Status);
-        lines.Add(Detail(style.Glyph + " " + style.Word, bold: true));
-        lines.Add(Detail(Servers(result), bold: false));
+        lines.Add(Detail(HarbourLightsPalette.Text(result.Status), bold: true));
+        lines.Add(Detail(Servers(result, timeUnit), bold: false));
         if (!result.Unit.Servers.IsUnlimited)
         {
-            lines.Add(Detail(Invariant.Percent(result.Utilisation) + " busy", bold: false));
+            lines.Add(Detail(ShownValue.Of(UnitColumns.Utilisation, result, timeUnit) + " busy", bold: false));
         }
 
         lines.Add(Detail(Wait(result, timeUnit), bold: false));
         if (arrivalPerHour > 0.0)
         {
-            lines.Add(Detail("in " + Units.ShortRate(arrivalPerHour, timeUnit), bold: false));
+            lines.Add(Detail("in " + PeopleFormat.Rate(arrivalPerHour, timeUnit), bold: false));
         }
 
         if (exitPerHour > 0.0)
         {
-            lines.Add(Detail("out " + Units.ShortRate(exitPerHour, timeUnit), bold: false));
+            lines.Add(Detail("out " + PeopleFormat.Rate(exitPerHour, timeUnit), bold: false));
         }
 
         return lines.ToImmutable();
@@ -40,13 +45,14 @@ internal static class UnitBoxText
 
     private static MapTextLine Detail(string text, bool bold) => new(text, MapTypography.DetailSize, bold);
 
-    public static string Servers(UnitResult result) => result.Unit.Servers.IsUnlimited
-        ? "unlimited servers"
-        : Invariant.Number(result.Unit.Servers.Count) + (result.Unit.Servers.Count == 1 ? " server" : " servers");
+    /// <summary>The servers as the table shows them, then the word: <c>1 server</c>, <c>1,200 servers</c>, <c>unlimited servers</c>.</summary>
+    public static string Servers(UnitResult result, TimeUnit timeUnit) =>
+        ShownValue.Of(UnitColumns.Servers, result, timeUnit) + (result.Unit.Servers.Count == 1 ? " server" : " servers");
 
+    /// <summary>The mean wait as the table shows it (<c>wait 4.177 min</c>); <c>no wait</c> or <c>wait unbounded</c> where it is no number to plan with.</summary>
     public static string Wait(UnitResult result, TimeUnit timeUnit)
     {
-        if (result.MeanWaitHours is not double waitHours)
+        if (result.MeanWaitHours is null)
         {
             return "wait unbounded";
         }
@@ -56,7 +62,7 @@ internal static class UnitBoxText
             return "no wait";
         }
 
-        return "wait " + Units.ShortTime(waitHours, timeUnit);
+        return "wait " + ShownValue.Of(UnitColumns.MeanWait, result, timeUnit);
     }
 
     /// <summary>Greedy word wrap at <see cref="MapTypography.MaxLabelWidth"/>; a single long word keeps its own line.</summary>

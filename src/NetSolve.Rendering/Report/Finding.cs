@@ -1,5 +1,5 @@
-using System.Globalization;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Solution;
 using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Report;
@@ -10,15 +10,17 @@ public static class Finding
     /// <summary>One sentence for <paramref name="solution"/>.</summary>
     /// <remarks>
     /// Unstable units come first (they are over capacity at today's demand); otherwise the bottleneck unit(s) and
-    /// their headroom, the factor by which every arrival rate can grow before they reach full utilisation.
+    /// their headroom, the factor by which every arrival rate can grow before they reach full utilisation. Numbers
+    /// read as in the tables (<see cref="PeopleFormat"/>).
     /// </remarks>
     public static string Summarise(NetworkSolution solution)
     {
         ArgumentNullException.ThrowIfNull(solution);
+        var timeUnit = solution.Network.TimeUnit;
         var unstable = solution.Units.Where(u => u.Status == UnitStatus.Unstable).ToList();
         if (unstable.Count > 0)
         {
-            string names = Join(unstable.Select(u => u.Unit.Label + " (" + Invariant.Percent(u.Utilisation) + " busy)"));
+            string names = Join(unstable.Select(u => u.Unit.Label + " (" + ShownValue.Of(UnitColumns.Utilisation, u, timeUnit) + " busy)"));
             return unstable.Count == 1
                 ? names + " is over capacity at today's demand: its queue grows without limit."
                 : names + " are over capacity at today's demand: their queues grow without limit.";
@@ -31,7 +33,7 @@ public static class Finding
         }
 
         double headroom = first[0].Headroom!.Value;
-        string growth = string.Create(CultureInfo.InvariantCulture, $"a factor of {Invariant.Factor(headroom)} ({(headroom - 1.0) * 100.0:+0.0;-0.0}%)");
+        string growth = $"a factor of {ShownValue.Of(UnitColumns.Headroom, first[0], timeUnit)} ({PeopleFormat.SignedPercent(headroom - 1.0)})";
         string who = Join(first.Select(u => u.Unit.Label));
         return first.Count == 1
             ? $"{who} saturates first: it reaches full utilisation when demand grows by {growth}."

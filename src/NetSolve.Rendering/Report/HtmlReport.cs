@@ -3,6 +3,7 @@ using System.Text;
 using System.Xml.Linq;
 using NetSolve.Model;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
 using NetSolve.Rendering.Map;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -66,8 +67,8 @@ public static class HtmlReport
             .Append("<style>\n").Append(ReportStyles.Css).Append("</style>\n</head>\n<body>\n");
 
         html.Append("<header>\n<h1>").Append(HtmlEncode(network.Name)).Append("</h1>\n")
-            .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Times in ").Append(unit)
-            .Append("s, rates per ").Append(unit).Append(".</p>\n</header>\n");
+            .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Rates per ").Append(unit)
+            .Append("; each time is written with its unit (min, h or d).</p>\n</header>\n");
         html.Append("<p class=\"finding\" id=\"finding\"><strong>Finding:</strong> ").Append(HtmlEncode(Finding.Summarise(baseline))).Append("</p>\n");
 
         var layout = MapLayoutBuilder.Build(baseline);
@@ -77,7 +78,7 @@ public static class HtmlReport
         double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
         html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n");
         AppendPrintNote(html, map, mapWidth, maxWidthPx);
-        html.Append("<div class=\"map-frame\" style=\"max-width:").Append(Invariant.Coordinate(maxWidthPx)).Append("px\">\n")
+        html.Append("<div class=\"map-frame\" style=\"max-width:").Append(Coordinates.Format(maxWidthPx)).Append("px\">\n")
             .Append(map.ToString()).Append("\n</div>\n")
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
@@ -109,7 +110,7 @@ public static class HtmlReport
 
         html.Append("</ul>\n<p class=\"caution\" id=\"caution\"><strong>Planning caution:</strong> ").Append(HtmlEncode(PlanningCaution)).Append("</p>\n</section>\n");
         html.Append("<footer>Made with NetSolve. A unit is strained at ")
-            .Append(Invariant.Percent(baseline.StrainThreshold)).Append(" utilisation or more.</footer>\n</body>\n</html>\n");
+            .Append(PeopleFormat.Percent(baseline.StrainThreshold)).Append(" utilisation or more.</footer>\n</body>\n</html>\n");
         return html.ToString();
     }
 
@@ -136,7 +137,7 @@ public static class HtmlReport
     {
         var growth = WaitGrowth.Compute(baseline);
         html.Append("<section id=\"growth\">\n<h2>Mean wait as demand grows</h2>\n");
-        string? chart = WaitChart.Svg(growth, baseline.Network.TimeUnit);
+        string? chart = WaitChart.Svg(growth);
         if (chart is null)
         {
             html.Append("<p>No chart: ").Append(baseline.IsStable
@@ -148,8 +149,8 @@ public static class HtmlReport
         var shown = WaitChart.Shown(growth);
         html.Append("<figure id=\"growth-figure\">\n<div class=\"chart-frame\">\n").Append(StripDeclaration(chart)).Append("\n</div>\n")
             .Append("<figcaption>Every arrival rate multiplied by the same factor, from today's demand (1.0) to ")
-            .Append(Invariant.Factor(growth.Factors[^1])).Append(", just below the first saturation at ")
-            .Append(Invariant.Factor(growth.SaturationFactor!.Value)).Append(". ");
+            .Append(PeopleFormat.Factor(growth.Factors[^1])).Append(", just below the first saturation at ")
+            .Append(PeopleFormat.Factor(growth.SaturationFactor!.Value)).Append(". ");
         if (shown.Count < growth.Curves.Length)
         {
             html.Append(string.Create(CultureInfo.InvariantCulture, $"Showing the {shown.Count} units with the longest waits at the last factor; the other {growth.Curves.Length - shown.Count} wait less. "));
@@ -164,15 +165,15 @@ public static class HtmlReport
         return start > 0 ? svg[start..] : svg;
     }
 
-    internal static string StatusCell(UnitStatus status)
+    /// <summary>The colours and border of a status cell, as the map draws the unit's box.</summary>
+    internal static IEnumerable<KeyValuePair<string, string>> StatusAttributes(UnitStatus status)
     {
         var style = HarbourLightsPalette.For(status);
         string border = style.DoubleBorder ? "double" : style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
-        return string.Create(CultureInfo.InvariantCulture,
-            $"<td class=\"status\" data-status=\"{SvgMapWriter.StatusName(status)}\" style=\"background:{style.Fill};color:{style.Text};border:3px {border} {style.Border}\">{HtmlEncode(style.Glyph + " " + style.Word)}</td>");
+        yield return new("class", "status");
+        yield return new("data-status", StatusWords.Name(status));
+        yield return new("style", $"background:{style.Fill};color:{style.Text};border:3px {border} {style.Border}");
     }
 
     internal static string Cell(string text) => "<td>" + HtmlEncode(text) + "</td>";
-
-    internal static string Time(double? value) => value is double v ? Numbers.Compact(v) : "unbounded";
 }

@@ -5,7 +5,8 @@ namespace NetSolve.Rendering.Report;
 /// <summary>The report's stylesheet: screen, and print on A4 or Letter (15 mm margins fit both).</summary>
 /// <remarks>
 /// In print the map section is kept on one page: the map is held to <see cref="MapPrintFit.MaxPrintedHeightMm"/> (its
-/// view box keeps it whole and in proportion inside that box) and the section may not break.
+/// view box keeps it whole and in proportion inside that box) and the section may not break. The unit table's
+/// values do not wrap, so a time never loses its unit to the next line (<c>45.43</c> above <c>min</c>).
 /// </remarks>
 internal static class ReportStyles
 {
@@ -27,6 +28,7 @@ internal static class ReportStyles
         .map-frame { margin: 0 auto; }
         .chart-frame { max-width: 54rem; margin: 0 auto; }
         td.status { text-align: left; white-space: nowrap; font-weight: bold; }
+        #unit-table td:not(:first-child) { white-space: nowrap; }
         .note { color: #3A3A3A; font-size: 0.85rem; }
         .map-print-note { display: none; }
         .caution { border: 2px solid #22313F; padding: 0.6rem 0.9rem; }

@@ -1,6 +1,8 @@
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Solution;
+using NetSolve.Rendering.Map;
 using NetSolve.Solving;
 using static System.Net.WebUtility;
 
@@ -14,17 +16,18 @@ internal static class ScenarioTable
         var all = new List<ReportScenario> { new("Baseline: " + baseline.Network.Name, baseline) };
         all.AddRange(scenarios);
 
-        html.Append("<section id=\"scenarios\">\n<h2>Scenario comparison</h2>\n<p>Each scenario is solved on its own; times in its own file's time unit.</p>\n")
+        html.Append("<section id=\"scenarios\">\n<h2>Scenario comparison</h2>\n<p>Each scenario is solved on its own; each time is written with its unit.</p>\n")
             .Append("<table id=\"scenario-table\">\n<thead><tr><th>Scenario</th><th>Every unit stable</th><th>Saturates first</th><th>Headroom (\u00D7)</th><th>Mean time in hospital</th></tr></thead>\n<tbody>\n");
         foreach (var scenario in all)
         {
             var solution = scenario.Solution;
             var first = solution.Units.Where(u => u.Status == UnitStatus.Bottleneck).ToList();
+            var timeUnit = solution.Network.TimeUnit;
             html.Append("<tr><td>").Append(HtmlEncode(scenario.Name)).Append("</td>")
                 .Append(HtmlReport.Cell(solution.IsStable ? "yes" : "no"))
-                .Append(HtmlReport.Cell(first.Count == 0 ? Numbers.Missing : string.Join(", ", first.Select(u => u.Unit.Label))))
-                .Append(HtmlReport.Cell(first.Count == 0 ? Numbers.Missing : Numbers.Fixed(first[0].Headroom, 3)))
-                .Append(HtmlReport.Cell(solution.Totals.MeanTimeInSystemHours is double hours ? Units.Time(hours, solution.Network.TimeUnit) : "unbounded"))
+                .Append(HtmlReport.Cell(first.Count == 0 ? PeopleFormat.Missing : string.Join(", ", first.Select(u => u.Unit.Label))))
+                .Append(HtmlReport.Cell(first.Count == 0 ? PeopleFormat.Missing : ShownValue.Of(UnitColumns.Headroom, first[0], timeUnit)))
+                .Append(HtmlReport.Cell(ShownValue.Of(TotalsColumns.MeanTimeInSystem, solution.Totals, timeUnit)))
                 .Append("</tr>\n");
         }
 
@@ -53,11 +56,12 @@ internal static class ScenarioTable
         html.Append("</tbody>\n</table>\n</section>\n");
     }
 
+    /// <summary>A unit in one line, in the words and numbers of its map box: <c>◆ bottleneck, 88.3% busy, wait 45.43 min</c>.</summary>
     private static string Summary(UnitResult result, TimeUnit timeUnit)
     {
-        var style = Map.HarbourLightsPalette.For(result.Status);
-        string busy = result.Unit.Servers.IsUnlimited ? "unlimited" : Invariant.Percent(result.Utilisation) + " busy";
-        string wait = result.MeanWaitHours is double hours ? "wait " + Units.Time(hours, timeUnit) : "wait unbounded";
-        return style.Glyph + " " + style.Word + ", " + busy + ", " + wait;
+        string busy = result.Unit.Servers.IsUnlimited
+            ? UnitBoxText.Servers(result, timeUnit)
+            : ShownValue.Of(UnitColumns.Utilisation, result, timeUnit) + " busy";
+        return HarbourLightsPalette.Text(result.Status) + ", " + busy + ", " + UnitBoxText.Wait(result, timeUnit);
     }
 }

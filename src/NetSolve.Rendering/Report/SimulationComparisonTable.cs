@@ -1,7 +1,7 @@
 using NetSolve.Analysis;
 using System.Text;
-using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Solution;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 using static System.Net.WebUtility;
@@ -26,25 +26,22 @@ internal static class SimulationComparisonTable
     public static void Append(StringBuilder html, NetworkSolution formula, SimulationResult simulation)
     {
         var timeUnit = simulation.Network.TimeUnit;
-        var scale = new TimeScale(timeUnit);
-        string unit = TimeConstants.Suffix(timeUnit);
         html.Append("<section id=\"formula-vs-simulation\">\n<h2>Formula against simulation</h2>\n<p>")
             .Append(HtmlEncode(TimeOfDaySection.RunDescription(simulation)))
             .Append(" The formula column is the Jackson network above (exponential service, steady arrivals, no capacity limit, top-level arrivals only); ")
             .Append("the simulation also models every simulation key in the file. A 95% interval misses the true value about one time in twenty by chance.</p>\n")
-            .Append("<table id=\"comparison-table\">\n<thead><tr><th>Unit</th><th>Mean wait, formula (").Append(unit)
-            .Append(")</th><th>Mean wait, simulated (").Append(unit).Append(")</th><th>Formula inside the 95% interval</th><th>95th percentile of time in unit, simulated (")
-            .Append(unit).Append(")</th></tr></thead>\n<tbody>\n");
+            .Append("<table id=\"comparison-table\">\n<thead><tr><th>Unit</th><th>Mean wait, formula</th><th>Mean wait, simulated</th>")
+            .Append("<th>Formula inside the 95% interval</th><th>95th percentile of time in unit, simulated</th></tr></thead>\n<tbody>\n");
         for (int i = 0; i < simulation.Units.Length; i++)
         {
             var simulated = simulation.Units[i];
             var wait = FormulaSimulationComparison.ForUnit(simulated, formula.Units[i]).Single(metric => metric.Name == "mean_wait");
             var tail = simulated.TimeInUnitPercentiles.FirstOrDefault(p => Math.Abs(p.Percent - TailPercent) < PercentSlack)?.Hours;
             html.Append("<tr data-unit=\"").Append(HtmlEncode(simulated.Unit.Id)).Append("\"><td>").Append(HtmlEncode(simulated.Unit.Label)).Append("</td>")
-                .Append(HtmlReport.Cell(HtmlReport.Time(wait.Formula * scale.TimeFactor)))
-                .Append(HtmlReport.Cell(TimeOfDaySection.WithHalfWidth(wait.Simulated, scale.TimeFactor)))
+                .Append(HtmlReport.Cell(ShownValue.Of(UnitColumns.MeanWait, formula.Units[i], timeUnit)))
+                .Append(HtmlReport.Cell(TimeOfDaySection.WithHalfWidth(wait.Simulated, PeopleFormat.Time)))
                 .Append(HtmlReport.Cell(Verdict(wait.Verdict)))
-                .Append(HtmlReport.Cell(tail is Estimate hours ? TimeOfDaySection.WithHalfWidth(hours, scale.TimeFactor) : "no patient finished"))
+                .Append(HtmlReport.Cell(tail is Estimate hours ? TimeOfDaySection.WithHalfWidth(hours, PeopleFormat.Time) : "no patient finished"))
                 .Append("</tr>\n");
         }
 

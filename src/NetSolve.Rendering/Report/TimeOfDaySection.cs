@@ -1,7 +1,6 @@
 using System.Globalization;
 using System.Text;
-using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
 using static System.Net.WebUtility;
@@ -49,7 +48,7 @@ internal static class TimeOfDaySection
                 .Append(HtmlReport.Cell(HourRange(hour)));
             foreach (var unit in shown)
             {
-                html.Append(HtmlReport.Cell(unit.MeanQueueByHour[hour] is Estimate estimate ? WithHalfWidth(estimate) : "not measured"));
+                html.Append(HtmlReport.Cell(unit.MeanQueueByHour[hour] is Estimate estimate ? WithHalfWidth(estimate, PeopleFormat.Number) : "not measured"));
             }
 
             html.Append("</tr>\n");
@@ -58,22 +57,20 @@ internal static class TimeOfDaySection
         html.Append("</tbody>\n</table>\n<p class=\"note\">Each cell: mean patients waiting \u00B1 the half-width of its 95% confidence interval over the replications.</p>\n</section>\n");
     }
 
-    /// <summary>How the simulation was run, in one sentence, in the network's time unit.</summary>
+    /// <summary>How the simulation was run, in one sentence; times as the tables write them.</summary>
     public static string RunDescription(SimulationResult simulation)
     {
         var options = simulation.Options;
-        var unit = simulation.Network.TimeUnit;
-        var scale = new TimeScale(unit);
-        string name = TimeConstants.Name(unit) + "s";
         return string.Create(CultureInfo.InvariantCulture,
-            $"Simulated: {simulation.ReplicationsFinished} of {options.Replications} replications of {Numbers.Compact(scale.Time(options.DurationHours))} {name} each, after a warm-up of {Numbers.Compact(scale.Time(options.WarmupHours))} {name}, seed {options.Seed}.");
+            $"Simulated: {simulation.ReplicationsFinished} of {options.Replications} replications of {PeopleFormat.Time(options.DurationHours)} each, after a warm-up of {PeopleFormat.Time(options.WarmupHours)}, seed {options.Seed}.");
     }
 
-    /// <summary>A mean with ± its 95% half-width (the mean alone with one replication).</summary>
-    public static string WithHalfWidth(Estimate estimate, double factor = 1.0) =>
+    /// <summary>A mean with ± its 95% half-width (the mean alone with one replication), each written by <paramref name="format"/>.</summary>
+    /// <remarks>For times each part takes the unit that reads best for it, as every time for people does: <c>1.978 h ± 25.31 min</c>.</remarks>
+    public static string WithHalfWidth(Estimate estimate, Func<double, string> format) =>
         estimate.HalfWidth is double half
-            ? Numbers.Compact(estimate.Mean * factor) + " \u00B1 " + Numbers.Compact(half * factor)
-            : Numbers.Compact(estimate.Mean * factor);
+            ? format(estimate.Mean) + " \u00B1 " + format(half)
+            : format(estimate.Mean);
 
     private static string HourRange(int hour) =>
         string.Create(CultureInfo.InvariantCulture, $"{hour:00}:00\u2013{(hour + 1) % TimeOfDayQueues.HoursOfDay:00}:00");

@@ -1,35 +1,49 @@
+using System.Collections.Immutable;
+using System.Globalization;
 using System.Text;
-using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Metrics;
+using NetSolve.Presentation.Solution;
+using NetSolve.Rendering.Map;
 using NetSolve.Solving;
-using static System.Net.WebUtility;
 
 namespace NetSolve.Rendering.Report;
 
-/// <summary>The report's per-unit table: the contract's numbers in the network's time unit.</summary>
+/// <summary>The report's per-unit table: metrics of the registry, headers worded for leadership, values as the solve table shows them.</summary>
+/// <remarks>
+/// The columns are <see cref="UnitColumns"/>' own, relabelled and a few left out; values go through
+/// <see cref="PeopleFormat"/> by <see cref="HtmlTableWriter"/>. The status is the contract's word after the map's
+/// glyph, in the map's colours; rows are keyed by unit id (<c>data-unit</c>).
+/// </remarks>
 internal static class UnitTable
 {
+    /// <summary>The columns shown, in order; the id keys the rows and is not shown.</summary>
+    public static ImmutableArray<Column<UnitResult>> Columns { get; } =
+    [
+        UnitColumns.Id with { Audience = Audience.Machines },
+        UnitColumns.Label with { Header = "Unit", Audience = Audience.All },
+        UnitColumns.Status with { Header = "Status", Read = result => HarbourLightsPalette.Cell(result.Status) },
+        UnitColumns.Servers with { Header = "Servers" },
+        UnitColumns.ArrivalRate with { Header = "Arrivals" },
+        UnitColumns.Utilisation with { Header = "Utilisation" },
+        UnitColumns.WaitProbability with { Header = "Chance of waiting" },
+        UnitColumns.MeanWait with { Header = "Mean wait" },
+        UnitColumns.MeanTimeInUnit with { Header = "Mean time in unit" },
+        UnitColumns.Headroom with { Header = "Headroom (\u00D7)" },
+    ];
+
+    /// <summary>The table of <paramref name="solution"/>.</summary>
+    public static ResultTable Table(NetworkSolution solution) => ResultTable.Build(Columns, solution.Units, solution.Network.TimeUnit);
+
     public static void Append(StringBuilder html, NetworkSolution solution)
     {
-        string unit = TimeConstants.Suffix(solution.Network.TimeUnit);
-        html.Append("<table id=\"unit-table\">\n<thead><tr><th>Unit</th><th>Status</th><th>Servers</th><th>Arrivals (/")
-            .Append(unit).Append(")</th><th>Utilisation</th><th>Chance of waiting</th><th>Mean wait (").Append(unit)
-            .Append(")</th><th>Mean time in unit (").Append(unit).Append(")</th><th>Headroom (\u00D7)</th></tr></thead>\n<tbody>\n");
-        foreach (var result in solution.Units)
+        using var output = new StringWriter(html, CultureInfo.InvariantCulture);
+        HtmlTableWriter.Write(Table(solution), output, new HtmlTableOptions
         {
-            var view = UnitView.From(result, solution.Network.TimeUnit);
-            html.Append("<tr data-unit=\"").Append(HtmlEncode(view.Id)).Append("\"><td>").Append(HtmlEncode(view.Label)).Append("</td>")
-                .Append(HtmlReport.StatusCell(result.Status))
-                .Append(HtmlReport.Cell(view.Servers is int servers ? servers.ToString(System.Globalization.CultureInfo.InvariantCulture) : "unlimited"))
-                .Append(HtmlReport.Cell(Numbers.Compact(view.ArrivalRate)))
-                .Append(HtmlReport.Cell(view.Servers is null ? Numbers.Missing : Numbers.Percent(view.Utilisation)))
-                .Append(HtmlReport.Cell(Numbers.Percent(view.PWait)))
-                .Append(HtmlReport.Cell(HtmlReport.Time(view.MeanWait)))
-                .Append(HtmlReport.Cell(HtmlReport.Time(view.MeanTimeInUnit)))
-                .Append(HtmlReport.Cell(view.Headroom is double headroom ? Numbers.Fixed(headroom, 3) : Numbers.Missing))
-                .Append("</tr>\n");
-        }
-
-        html.Append("</tbody>\n</table>\n");
+            Id = "unit-table",
+            RowAttribute = "data-unit",
+            RowKey = UnitColumns.Id.Id,
+            CellAttributes = (row, column) => column.Id == UnitColumns.Status.Id ? HtmlReport.StatusAttributes(solution.Units[row].Status) : [],
+        });
     }
 }

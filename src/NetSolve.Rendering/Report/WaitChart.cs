@@ -1,6 +1,6 @@
 using System.Globalization;
 using NetSolve.Model;
-using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
 using ScottPlot;
 
 namespace NetSolve.Rendering.Report;
@@ -8,7 +8,9 @@ namespace NetSolve.Rendering.Report;
 /// <summary>Draws mean wait against demand growth with ScottPlot, as SVG.</summary>
 /// <remarks>
 /// Shows the units with the longest waits at the last factor (the first unit to saturate among them), at most
-/// <see cref="ChartSeriesStyles.Count"/>, and a vertical line at the saturation factor. Waits are in the network's time unit.
+/// <see cref="ChartSeriesStyles.Count"/>, and a vertical line at the saturation factor. The wait axis is in the unit
+/// that reads best for the longest wait drawn, by the rule every time for people follows (<see cref="PeopleFormat.Time"/>):
+/// minutes below an hour, hours below <see cref="PeopleFormat.HoursBeforeDays"/>, days beyond.
 /// </remarks>
 public static partial class WaitChart
 {
@@ -26,7 +28,7 @@ public static partial class WaitChart
     }
 
     /// <summary>The chart as an SVG document; null when <paramref name="growth"/> has no curves.</summary>
-    public static string? Svg(WaitGrowth growth, TimeUnit timeUnit)
+    public static string? Svg(WaitGrowth growth)
     {
         ArgumentNullException.ThrowIfNull(growth);
         if (growth.Curves.IsEmpty || growth.SaturationFactor is not double saturation)
@@ -38,6 +40,7 @@ public static partial class WaitChart
         plot.Font.Set("DejaVu Sans");
         double[] factors = [.. growth.Factors];
         var shown = Shown(growth);
+        var timeUnit = AxisUnit(shown.Max(curve => curve.WaitHours.Max()));
         for (int i = 0; i < shown.Count; i++)
         {
             double[] waits = shown[i].WaitHours.Select(hours => TimeConstants.FromHours(hours, timeUnit)).ToArray();
@@ -50,7 +53,7 @@ public static partial class WaitChart
         line.Color = Color.FromHex("#111111");
         line.LinePattern = LinePattern.Dashed;
         line.LineWidth = 1.5f;
-        line.LegendText = "first saturation \u00D7" + Invariant.Factor(saturation);
+        line.LegendText = "first saturation \u00D7" + PeopleFormat.Factor(saturation);
 
         plot.XLabel("Demand growth factor (\u00D7 today's arrivals)");
         plot.YLabel("Mean wait (" + TimeConstants.Name(timeUnit) + "s)");
@@ -66,6 +69,10 @@ public static partial class WaitChart
         plot.ShowLegend(Alignment.UpperLeft);
         return WithViewBox(RenumberIds(plot.GetSvgXml(Width, Height), "wait-chart-clip-"));
     }
+
+    /// <summary>The unit of the wait axis: the one <see cref="PeopleFormat.Time"/> would write <paramref name="longestHours"/> in.</summary>
+    internal static TimeUnit AxisUnit(double longestHours) =>
+        longestHours < 1.0 ? TimeUnit.Minute : longestHours < PeopleFormat.HoursBeforeDays ? TimeUnit.Hour : TimeUnit.Day;
 
     /// <summary>Adds a viewBox when the SVG has none, so the page can scale the chart to its column.</summary>
     internal static string WithViewBox(string svg)

@@ -157,7 +157,7 @@ public sealed class RenderCommandsTests : IDisposable
         Assert.Contains("<figure id=\"time-of-day-figure\">", simulatedHtml, StringComparison.Ordinal);
         Assert.Contains("<table id=\"time-of-day-table\">", simulatedHtml, StringComparison.Ordinal);
         Assert.Contains("<table id=\"comparison-table\">", simulatedHtml, StringComparison.Ordinal);
-        Assert.Contains("Simulated: 2 of 2 replications of 1440 hours each, after a warm-up of 168.0 hours, seed 3.", simulatedHtml, StringComparison.Ordinal);
+        Assert.Contains("Simulated: 2 of 2 replications of 60.00 d each, after a warm-up of 7.000 d, seed 3.", simulatedHtml, StringComparison.Ordinal);
 
         // Everything before the new sections is the plain report, unchanged.
         int cut = simulatedHtml.IndexOf("<section id=\"time-of-day\">", StringComparison.Ordinal);

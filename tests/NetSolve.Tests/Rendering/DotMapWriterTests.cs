@@ -23,8 +23,8 @@ public class DotMapWriterTests
             Assert.Contains($"\n  \"{route.From}\" -> \"{route.To}\" [label=", dot, StringComparison.Ordinal);
         }
 
-        Assert.Contains("\"arrivals:emergency\" -> \"emergency\" [label=\"11.5/h\"", dot, StringComparison.Ordinal);
-        Assert.Contains("\"emergency\" -> \"exit:emergency\" [label=\"4.3/h\"", dot, StringComparison.Ordinal);
+        Assert.Contains("\"arrivals:emergency\" -> \"emergency\" [label=\"11.50/h\"", dot, StringComparison.Ordinal);
+        Assert.Contains("\"emergency\" -> \"exit:emergency\" [label=\"4.301/h\"", dot, StringComparison.Ordinal);
         Assert.Matches("\"imaging\" -> \"emergency\" \\[[^\\]]*style=dashed", dot);
         Assert.Contains("peripheries=2", dot, StringComparison.Ordinal);
     }

@@ -61,7 +61,7 @@ public class HarbourLightsPaletteTests
     {
         // Source: WCAG 2.1 success criterion 1.4.1 (Use of Color): colour is not the only means of conveying information.
         var styles = HarbourLightsPalette.Order.Select(HarbourLightsPalette.For).ToList();
-        Assert.Equal(styles.Count, styles.Select(s => s.Word).Distinct(StringComparer.Ordinal).Count());
+        Assert.Equal(styles.Count, HarbourLightsPalette.Order.Select(HarbourLightsPalette.Text).Distinct(StringComparer.Ordinal).Count());
         Assert.Equal(styles.Count, styles.Select(s => s.Glyph).Distinct(StringComparer.Ordinal).Count());
         Assert.Equal(styles.Count, styles.Select(s => (s.BorderDash, s.DoubleBorder)).Distinct().Count());
     }

@@ -1,7 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using System.Xml.Linq;
-using NetSolve.Presentation;
 using NetSolve.Rendering.Report;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -74,7 +73,7 @@ public partial class HtmlReportTests
                 var simulated = expected.Units.Single(unit => unit.Unit.Id == table.Units[u]).MeanQueueByHour[hour]!.Value;
                 var (mean, half) = table.Rows[hour][u];
                 AssertShown(simulated.Mean, mean);
-                AssertShown(simulated.HalfWidth!.Value, half!.Value);
+                AssertShown(simulated.HalfWidth!.Value, half!);
             }
         }
     }
@@ -122,10 +121,10 @@ public partial class HtmlReportTests
             Assert.Equal(5, cells.Count);
             Assert.Equal(unit.Unit.Label, cells[0]);
             double formulaWait = formula.Units.Single(u => u.Unit.Id == unit.Unit.Id).MeanWaitHours!.Value;
-            AssertShown(formulaWait, Number(cells[1]));
+            AssertShown(formulaWait, cells[1]);
             var (wait, waitHalf) = MeanAndHalf(cells[2]);
             AssertShown(unit.MeanWaitHours.Mean, wait);
-            AssertShown(unit.MeanWaitHours.HalfWidth!.Value, waitHalf!.Value);
+            AssertShown(unit.MeanWaitHours.HalfWidth!.Value, waitHalf!);
             Assert.Equal(unit.MeanWaitHours.Contains(formulaWait) ? "yes" : "no", cells[3]);
             var p95 = unit.TimeInUnitPercentiles.Single(p => p.Percent == 95.0).Hours!.Value;
             AssertShown(p95.Mean, MeanAndHalf(cells[4]).Mean);
@@ -154,7 +153,7 @@ public partial class HtmlReportTests
 
         var table = TimeOfDayTable(html);
         Assert.Equal(["treatment"], table.Units);
-        var hours = table.Rows.Select((row, hour) => (FormattableString.Invariant($"hour {hour:00}"), new Estimate(row[0].Mean, row[0].Half, options.Replications), ErlangCMeanQueue)).ToList();
+        var hours = table.Rows.Select((row, hour) => (FormattableString.Invariant($"hour {hour:00}"), new Estimate(Number(row[0].Mean), Number(row[0].Half!), options.Replications), ErlangCMeanQueue)).ToList();
         Bonferroni.AssertAllInside(hours);
 
         // The intervals are narrow enough to mean something: each widened half-width is under 30% of the queue.
@@ -170,7 +169,7 @@ public partial class HtmlReportTests
         Assert.Throws<ArgumentException>("simulation", () => HtmlReport.Write(RenderingFixtures.Solved("harbourside"), [], simulation));
     }
 
-    private static (List<string> Units, List<List<(double Mean, double? Half)>> Rows) TimeOfDayTable(string html)
+    private static (List<string> Units, List<List<(string Mean, string? Half)>> Rows) TimeOfDayTable(string html)
     {
         int start = html.IndexOf("<table id=\"time-of-day-table\">", StringComparison.Ordinal);
         Assert.True(start > 0, "no time-of-day table");
@@ -189,15 +188,39 @@ public partial class HtmlReportTests
     private static List<string> Cells(string row) =>
         CellRegex().Matches(row).Select(m => System.Net.WebUtility.HtmlDecode(m.Groups[1].Value)).ToList();
 
-    private static (double Mean, double? Half) MeanAndHalf(string cell)
+    private static (string Mean, string? Half) MeanAndHalf(string cell)
     {
         string[] parts = cell.Split(" \u00B1 ");
-        return (Number(parts[0]), parts.Length > 1 ? Number(parts[1]) : null);
+        return (parts[0], parts.Length > 1 ? parts[1] : null);
     }
 
-    private static double Number(string text) => double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+    /// <summary>A plain number as the page shows it (PeopleFormat): digits grouped from 1,000, never an exponent.</summary>
+    private static double Number(string text) => double.Parse(text, NumberStyles.Float | NumberStyles.AllowThousands, CultureInfo.InvariantCulture);
 
-    /// <summary>The page shows about four significant digits (<see cref="Numbers.Compact"/>): equal to that rounding.</summary>
-    private static void AssertShown(double exact, double shown) =>
-        Assert.True(Math.Abs(exact - shown) <= 5e-5 + (5e-4 * Math.Abs(exact)), FormattableString.Invariant($"shown {shown}, simulated {exact}"));
+    /// <summary>
+    /// The page shows about four significant digits (PeopleFormat): equal to that rounding in the unit written beside the
+    /// number (min, h or d; <paramref name="exact"/> is in hours then), or below the bound of a "&lt; 0.001 min".
+    /// </summary>
+    private static void AssertShown(double exact, string shown)
+    {
+        string[] parts = shown.Split(' ');
+        bool below = parts[0] == "<";
+        if (below)
+        {
+            parts = parts[1..];
+        }
+
+        double hoursPerShownUnit = parts.Length == 1 ? 1.0 : parts[1] switch
+        {
+            "min" => 1.0 / 60.0,
+            "h" => 1.0,
+            "d" => 24.0,
+            _ => throw new FormatException($"'{shown}' has no time unit the page uses"),
+        };
+        double value = Number(parts[0]);
+        double expected = exact / hoursPerShownUnit;
+        Assert.True(
+            below ? expected < value : Math.Abs(expected - value) <= 5e-5 + (5e-4 * Math.Abs(expected)),
+            FormattableString.Invariant($"shown {shown}, simulated {exact}"));
+    }
 }

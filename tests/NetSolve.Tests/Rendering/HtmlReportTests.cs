@@ -78,15 +78,15 @@ public partial class HtmlReportTests
     }
 
     [Fact]
-    public void The_unit_table_shows_the_contract_numbers_in_the_network_time_unit()
+    public void The_unit_table_shows_the_contract_numbers_as_the_solve_table_does()
     {
         string html = Report("harbourside");
         var row = Regex.Match(html, "<tr data-unit=\"emergency\">.*?</tr>").Value;
 
         // Source: contract example for emergency: 32 servers, arrival_rate 18.699187, utilisation 0.681741,
-        // p_wait 0.027645, mean_wait 0.003167 h, mean_time_in_unit 1.169834 h, headroom 1.466832.
+        // p_wait 0.027645, mean_wait 0.003167 h = 0.19002 min, mean_time_in_unit 1.169834 h, headroom 1.466832.
         Assert.Equal(
-            ["Emergency department", "\u25CB OK", "32", "18.70", "68.2%", "2.8%", "0.0032", "1.170", "1.467"],
+            ["Emergency department", "\u25CB ok", "32", "18.70", "68.2%", "0.028", "0.1900 min", "1.170 h", "1.467"],
             CellRegex().Matches(row).Select(m => System.Net.WebUtility.HtmlDecode(m.Groups[1].Value)).ToArray());
     }
 
