@@ -1,5 +1,4 @@
 using NetSolve.Model;
-using NetSolve.Presentation;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;
 
@@ -35,13 +34,13 @@ public partial class NetworkSolverTests
               desk: 0.8
             """;
         var solution = NetworkSolver.Solve(TestNetworks.Parse(Yaml));
-        var desk = UnitView.From(solution.Units[0], TimeUnit.Minute);
+        var desk = solution.Units[0];
 
-        Assert.Equal(0.8, desk.ArrivalRate, ExactArithmetic);
+        Assert.Equal(0.8, TimeConstants.RateFromPerHour(desk.ArrivalsPerHour, TimeUnit.Minute), ExactArithmetic);
         Assert.Equal(0.8, desk.Utilisation, ExactArithmetic);
         Assert.Equal(4.0, desk.MeanInUnit!.Value, ExactArithmetic);
-        Assert.Equal(5.0, desk.MeanTimeInUnit!.Value, ExactArithmetic);
-        Assert.Equal(4.0, desk.MeanWait!.Value, ExactArithmetic);
+        Assert.Equal(5.0, TimeConstants.FromHours(desk.MeanTimeInUnitHours!.Value, TimeUnit.Minute), ExactArithmetic);
+        Assert.Equal(4.0, TimeConstants.FromHours(desk.MeanWaitHours!.Value, TimeUnit.Minute), ExactArithmetic);
         Assert.Equal(3.2, desk.MeanQueue!.Value, ExactArithmetic);
     }
 

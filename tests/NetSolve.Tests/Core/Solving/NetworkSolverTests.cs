@@ -1,6 +1,5 @@
 using NetSolve.Benchmarks;
 using NetSolve.Model;
-using NetSolve.Presentation;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;
 
@@ -16,21 +15,21 @@ public partial class NetworkSolverTests
     public void The_contract_example_gives_the_contract_numbers_for_emergency()
     {
         var solution = NetworkSolver.Solve(TestNetworks.Example("harbourside.yaml"));
-        var emergency = UnitView.From(solution.Units[0], TimeUnit.Hour);
+        var emergency = solution.Units[0];
 
-        Assert.Equal("emergency", emergency.Id);
-        Assert.Equal(32, emergency.Servers);
-        Assert.Equal(18.699187, emergency.ArrivalRate, SixDecimals);
+        Assert.Equal("emergency", emergency.Unit.Id);
+        Assert.Equal(32, emergency.Unit.Servers.Count);
+        Assert.Equal(18.699187, emergency.ArrivalsPerHour, SixDecimals);
         Assert.Equal(1.526464, emergency.VisitsPerPatient, SixDecimals);
         Assert.Equal(21.815718, emergency.OfferedLoad, SixDecimals);
         Assert.Equal(0.681741, emergency.Utilisation, SixDecimals);
-        Assert.Equal(0.027645, emergency.PWait, SixDecimals);
+        Assert.Equal(0.027645, emergency.WaitProbability, SixDecimals);
         Assert.Equal(0.059219, emergency.MeanQueue!.Value, SixDecimals);
-        Assert.Equal(0.003167, emergency.MeanWait!.Value, SixDecimals);
+        Assert.Equal(0.003167, emergency.MeanWaitHours!.Value, SixDecimals);
         Assert.Equal(21.874937, emergency.MeanInUnit!.Value, SixDecimals);
-        Assert.Equal(1.169834, emergency.MeanTimeInUnit!.Value, SixDecimals);
+        Assert.Equal(1.169834, emergency.MeanTimeInUnitHours!.Value, SixDecimals);
         Assert.Equal(1.466832, emergency.Headroom!.Value, SixDecimals);
-        Assert.Equal("ok", emergency.Status);
+        Assert.Equal(UnitStatus.Ok, emergency.Status);
     }
 
     // Source: the network file contract (v1): totals of the Harbourside example, and "the ward is the bottleneck,
