@@ -4,6 +4,9 @@ namespace NetSolve.Model;
 /// <remarks>Immutable. <c>default(Servers)</c> is not valid; use <see cref="Of"/> or <see cref="Unlimited"/>.</remarks>
 public readonly record struct Servers
 {
+    /// <summary>Largest finite number of servers; more is better written unlimited (Erlang C costs O(c)).</summary>
+    public const int MaxCount = 1_000_000;
+
     private Servers(int count) => Count = count;
 
     /// <summary>Unlimited servers (M/M/inf): nobody waits.</summary>

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 
 namespace NetSolve.Parsing;

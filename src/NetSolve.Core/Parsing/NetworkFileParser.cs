@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 
 namespace NetSolve.Parsing;
@@ -7,9 +8,6 @@ namespace NetSolve.Parsing;
 /// <summary>Turns the located YAML of a network file into a <see cref="Network"/>, collecting every problem.</summary>
 internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics) : NodeParser(diagnostics)
 {
-    /// <summary>Largest finite server count; more is better written <c>unlimited</c> (Erlang C costs O(c)).</summary>
-    public const int MaxServers = 1_000_000;
-
     private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups"];
     private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full"];
     private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
@@ -166,10 +164,10 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             return null;
         }
 
-        if (!int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count > MaxServers)
+        if (!int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count > Servers.MaxCount)
         {
             Error(scalar.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-                $"servers '{scalar.Value}' is more than {MaxServers}; write unlimited for a unit where nobody waits"));
+                $"servers '{scalar.Value}' is more than {Servers.MaxCount}; write unlimited for a unit where nobody waits"));
             return null;
         }
 
@@ -243,7 +241,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
                 }
             }
 
-            if (total > 1.0 + Solving.Tolerances.ProbabilitySum)
+            if (total > 1.0 + Tolerances.ProbabilitySum)
             {
                 Error(sourceKey.Location, from, DiagnosticCodes.RoutesOverOne, string.Create(CultureInfo.InvariantCulture,
                     $"routes add up to {total:0.######}, more than 1"));

@@ -1,4 +1,5 @@
 using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
 
@@ -97,10 +98,10 @@ public static class OverrideParser
             return null;
         }
 
-        if (!int.TryParse(value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count < 1 || count > NetworkFileParser.MaxServers)
+        if (!int.TryParse(value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count < 1 || count > Model.Servers.MaxCount)
         {
             return Fail(location, string.Create(CultureInfo.InvariantCulture,
-                $"servers must be a whole number from 1 to {NetworkFileParser.MaxServers}, or unlimited, not '{value}'"));
+                $"servers must be a whole number from 1 to {Model.Servers.MaxCount}, or unlimited, not '{value}'"));
         }
 
         change = new SetServers(location, unit, Model.Servers.Of(count));

@@ -1,4 +1,5 @@
 using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
 
@@ -186,13 +187,13 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
         if (scalar.IsPlain && scalar.Value.All(char.IsAsciiDigit)
             && int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count)
-            && count is >= 1 and <= NetworkFileParser.MaxServers)
+            && count is >= 1 and <= Servers.MaxCount)
         {
             return Servers.Of(count);
         }
 
         Error(scalar.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-            $"servers must be a whole number from 1 to {NetworkFileParser.MaxServers}, unlimited, or +N to add, not '{scalar.Value}'"));
+            $"servers must be a whole number from 1 to {Servers.MaxCount}, unlimited, or +N to add, not '{scalar.Value}'"));
         return null;
     }
 
