@@ -1,4 +1,5 @@
 using BenchmarkDotNet.Attributes;
+using NetSolve.Model;
 using NetSolve.Solving;
 
 namespace NetSolve.Benchmarks;

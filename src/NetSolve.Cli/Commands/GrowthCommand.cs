@@ -1,10 +1,10 @@
 using System.CommandLine;
 using System.Globalization;
 using NetSolve.Analysis;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Presentation;
 using NetSolve.Presentation.Growth;
-using NetSolve.Parsing;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;

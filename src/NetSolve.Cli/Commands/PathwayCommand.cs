@@ -1,8 +1,8 @@
 using System.CommandLine;
 using NetSolve.Analysis;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Presentation.Pathways;
-using NetSolve.Parsing;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;

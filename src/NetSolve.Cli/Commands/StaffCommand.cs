@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using NetSolve.Analysis;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Presentation;
 using NetSolve.Presentation.Staffing;

@@ -93,7 +93,7 @@ public static class BudgetAllocation
     private static int StableMinimum(double load) => (int)Math.Floor(load) + 1;
 
     private static double Gain(double load, int servers) =>
-        servers + 1 > Parsing.NetworkFileParser.MaxServers ? 0.0 : MeanQueue(servers, load) - MeanQueue(servers + 1, load);
+        servers + 1 > Servers.MaxCount ? 0.0 : MeanQueue(servers, load) - MeanQueue(servers + 1, load);
 
     private static ImmutableArray<UnitAllocation> Allocations(Network network, List<(int Index, double Load, int Current)> candidates, int[] servers, int[] forced) =>
     [

@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
-using NetSolve.Parsing;
 using NetSolve.Solving;
 
 namespace NetSolve.Analysis;
@@ -66,16 +66,16 @@ public static class PathwayAnalysis
         ArgumentNullException.ThrowIfNull(network);
         var entering = network with { Arrivals = [new Arrival(fromUnitId, 1.0)] };
         Require(network.BuildIndex(), fromUnitId);
-        var problems = new List<Diagnostic>();
-        var here = new SourceLocation(network.Name, 0, 0);
-        var everywhere = network.Units.ToDictionary(unit => unit.Id, _ => here, StringComparer.Ordinal);
-        StructureRules.Check(entering, new NetworkLocations(everywhere, everywhere), problems);
-        if (problems.FirstOrDefault(problem => problem.IsError) is Diagnostic closed)
+        var routing = RoutingTable.Build(entering);
+        if (ClosedUnitSets.Find(routing, routing.ReachedUnits()) is [var closed, ..])
         {
-            throw new ArgumentException($"Patients entering at '{fromUnitId}' can reach {closed.Subject} and never leave.", nameof(fromUnitId));
+            string subject = closed.Count == 1
+                ? $"unit '{network.Units[closed[0]].Id}'"
+                : "units " + string.Join(", ", closed.Select(i => $"'{network.Units[i].Id}'"));
+            throw new ArgumentException($"Patients entering at '{fromUnitId}' can reach {subject} and never leave.", nameof(fromUnitId));
         }
 
-        return TrafficEquations.Solve(RoutingTable.Build(entering));
+        return TrafficEquations.Solve(routing);
     }
 
     /// <summary>The chance that a patient entering at <paramref name="fromUnitId"/> ever visits <paramref name="toUnitId"/> (1 when they are the same).</summary>

@@ -1,7 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using NetSolve.Model;
-using NetSolve.Parsing;
 using NetSolve.Solving;
 
 namespace NetSolve.Analysis;
@@ -100,7 +99,7 @@ public static class StaffingSearch
             first--; // Ceiling of a rounded quotient can overshoot by one.
         }
 
-        if (first > NetworkFileParser.MaxServers)
+        if (first > Servers.MaxCount)
         {
             impossible = TooMany(first);
             return null;
@@ -112,7 +111,7 @@ public static class StaffingSearch
             blocking = load * blocking / (k + (load * blocking));
         }
 
-        for (long c = first; c <= NetworkFileParser.MaxServers; c++)
+        for (long c = first; c <= Servers.MaxCount; c++)
         {
             if (c > first)
             {
@@ -125,7 +124,7 @@ public static class StaffingSearch
             }
         }
 
-        impossible = TooMany(NetworkFileParser.MaxServers + 1L);
+        impossible = TooMany(Servers.MaxCount + 1L);
         return null;
     }
 
@@ -184,5 +183,5 @@ public static class StaffingSearch
     }
 
     private static string TooMany(long servers) => string.Create(CultureInfo.InvariantCulture,
-        $"would need {servers} servers or more, beyond the {NetworkFileParser.MaxServers} a unit may have");
+        $"would need {servers} servers or more, beyond the {Servers.MaxCount} a unit may have");
 }

@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
-using NetSolve.Parsing;
+using NetSolve.Diagnostics;
 
 namespace NetSolve.Fitting;
 

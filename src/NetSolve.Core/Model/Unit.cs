@@ -7,11 +7,21 @@ namespace NetSolve.Model;
 /// </remarks>
 /// <param name="Id">The unit id from the file: letters, digits, <c>_</c> and <c>-</c>, starting with a letter.</param>
 /// <param name="Label">The display name; the id when the file gives none.</param>
-/// <param name="Servers">Servers working at once.</param>
+/// <param name="Servers">Servers working at once; never <c>default(Servers)</c>.</param>
 /// <param name="MeanServiceHours">Mean time a patient holds a server, in hours; positive and finite.</param>
 /// <param name="ServiceCv">Coefficient of variation of the service time; 1 is exponential.</param>
 public sealed record Unit(string Id, string Label, Servers Servers, double MeanServiceHours, double ServiceCv = 1.0)
 {
+    private readonly Servers _servers = Made(Servers);
+
+    /// <summary>Servers working at once: made by <see cref="Servers.Of"/> or <see cref="Servers.Unlimited"/>.</summary>
+    /// <exception cref="ArgumentException">Set to <c>default(Servers)</c>, at construction or in <c>with</c>.</exception>
+    public Servers Servers
+    {
+        get => _servers;
+        init => _servers = Made(value);
+    }
+
     /// <summary>
     /// The service-time distribution given in the file; null when the file gives only <c>service</c> and
     /// <c>service_cv</c> (see <see cref="EffectiveService"/>). When set, its mean equals <see cref="MeanServiceHours"/>.
@@ -26,4 +36,8 @@ public sealed record Unit(string Id, string Label, Servers Servers, double MeanS
 
     /// <summary>The distribution the simulator uses: <see cref="Service"/>, or the v1 meaning of mean and cv.</summary>
     public ServiceDistribution EffectiveService => Service ?? ServiceDistribution.FromMeanAndCv(MeanServiceHours, ServiceCv);
+
+    private static Servers Made(Servers servers) => servers.IsValid
+        ? servers
+        : throw new ArgumentException("A unit's servers are made by Servers.Of(count) or Servers.Unlimited, never default(Servers).", nameof(servers));
 }

@@ -1,5 +1,7 @@
 using StringPool = System.Collections.Generic.Dictionary<string, string>.AlternateLookup<System.ReadOnlySpan<char>>;
 
+using NetSolve.Diagnostics;
+
 namespace NetSolve.Parsing;
 
 /// <summary>

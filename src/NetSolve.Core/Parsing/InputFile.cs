@@ -1,3 +1,5 @@
+using NetSolve.Diagnostics;
+
 namespace NetSolve.Parsing;
 
 /// <summary>Reads an input file's text, turning a missing file, a directory or an unreadable file into a diagnostic.</summary>

@@ -1,5 +1,6 @@
 using YamlDotNet.Core;
 using YamlDotNet.Core.Events;
+using NetSolve.Diagnostics;
 
 namespace NetSolve.Parsing;
 

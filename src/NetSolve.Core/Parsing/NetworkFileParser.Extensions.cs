@@ -1,6 +1,8 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Parsing.Values;
 
 namespace NetSolve.Parsing;
 
@@ -55,14 +57,14 @@ internal sealed partial class NetworkFileParser
             return ParseEmpirical(samplesNode, serviceNode, cvNode, owner, id, timeUnit, keyLocation);
         }
 
-        double? mean = serviceNode is null ? null : Value(serviceNode, id, "service", (string text, out double hours) => ValueParser.Duration(text, timeUnit, out hours));
+        double? mean = serviceNode is null ? null : Value(serviceNode, id, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit));
         if (serviceNode is null)
         {
             Error(owner.Location, id, DiagnosticCodes.MissingKey, "missing 'service' (the mean time a patient holds a server, e.g. 45min)");
         }
 
         double defaultCv = kind == ServiceKind.Deterministic ? 0.0 : 1.0;
-        double? cv = cvNode is null ? defaultCv : Value(cvNode, id, "service_cv", ValueParser.Number);
+        double? cv = cvNode is null ? defaultCv : Value(cvNode, id, "service_cv", NumberValue.Parse);
         if (cv < 0.0)
         {
             Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
@@ -117,7 +119,7 @@ internal sealed partial class NetworkFileParser
         var samples = new List<double>();
         foreach (var item in sequence.Items)
         {
-            if (Value(item, id, "service_samples", (string text, out double hours) => ValueParser.Duration(text, timeUnit, out hours)) is double hours)
+            if (Value(item, id, "service_samples", text => DurationValue.Parse(text, timeUnit)) is double hours)
             {
                 samples.Add(hours);
             }
@@ -232,7 +234,7 @@ internal sealed partial class NetworkFileParser
         var values = new List<double>();
         foreach (var item in sequence.Items)
         {
-            if (Value(item, null, where, ValueParser.Number) is double value)
+            if (Value(item, null, where, NumberValue.Parse) is double value)
             {
                 if (value < 0.0)
                 {

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 
 namespace NetSolve.Parsing;

@@ -1,15 +1,14 @@
 using System.Collections.Immutable;
 using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Parsing.Values;
 
 namespace NetSolve.Parsing;
 
 /// <summary>Turns the located YAML of a network file into a <see cref="Network"/>, collecting every problem.</summary>
 internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics) : NodeParser(diagnostics)
 {
-    /// <summary>Largest finite server count; more is better written <c>unlimited</c> (Erlang C costs O(c)).</summary>
-    public const int MaxServers = 1_000_000;
-
     private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups"];
     private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full"];
     private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
@@ -121,7 +120,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, id, "label") is YamlScalar labelScalar
             ? labelScalar.Value
             : id;
-        var servers = fields.TryGetValue("servers", out var serversNode) ? ParseServers(serversNode, id) : null;
+        var servers = fields.TryGetValue("servers", out var serversNode) ? ServersField(serversNode, id) : null;
         var service = ParseService(fields, mapping, id, timeUnit);
         if (serversNode is null)
         {
@@ -141,47 +140,6 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             : null;
     }
 
-    private Servers? ParseServers(YamlNode node, string id)
-    {
-        if (Scalar(node, id, "servers") is not YamlScalar scalar)
-        {
-            return null;
-        }
-
-        const string Expected = "servers must be a whole number of at least 1, or unlimited";
-        if (!scalar.IsPlain)
-        {
-            Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, written without quotes");
-            return null;
-        }
-
-        if (scalar.Value == "unlimited")
-        {
-            return Servers.Unlimited;
-        }
-
-        if (scalar.Value.Length == 0 || scalar.Value.AsSpan().ContainsAnyExceptInRange('0', '9'))
-        {
-            Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, not '{scalar.Value}'");
-            return null;
-        }
-
-        if (!int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count > MaxServers)
-        {
-            Error(scalar.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-                $"servers '{scalar.Value}' is more than {MaxServers}; write unlimited for a unit where nobody waits"));
-            return null;
-        }
-
-        if (count < 1)
-        {
-            Error(scalar.Location, id, DiagnosticCodes.BadValue, $"{Expected}, not '{scalar.Value}'");
-            return null;
-        }
-
-        return Servers.Of(count);
-    }
-
     private ImmutableArray<Arrival> ParseArrivals(YamlNode node, TimeUnit timeUnit, HashSet<string> known)
     {
         var arrivals = ImmutableArray.CreateBuilder<Arrival>();
@@ -194,7 +152,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
                     continue;
                 }
 
-                if (Value(value, key.Value, "arrival rate", (string text, out double perHour) => ValueParser.Rate(text, timeUnit, out perHour)) is double rate)
+                if (Value(value, key.Value, FieldLabels.ArrivalRate, text => RateValue.Parse(text, timeUnit)) is double rate)
                 {
                     arrivals.Add(new Arrival(key.Value, rate));
                 }
@@ -236,14 +194,14 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             {
                 // The names in messages are built only on error: a 100,000-unit file has hundreds of thousands of routes.
                 if (KnownUnit(targetKey, known, "routes", from, from)
-                    && Value(value, from, "route to", ValueParser.Probability, targetKey.Value) is double probability)
+                    && Value(value, from, FieldLabels.RouteTo, ProbabilityValue.Parse, targetKey.Value) is double probability)
                 {
                     routes.Add(new Route(from, targetKey.Value, probability));
                     total += probability;
                 }
             }
 
-            if (total > 1.0 + Solving.Tolerances.ProbabilitySum)
+            if (total > 1.0 + Tolerances.ProbabilitySum)
             {
                 Error(sourceKey.Location, from, DiagnosticCodes.RoutesOverOne, string.Create(CultureInfo.InvariantCulture,
                     $"routes add up to {total:0.######}, more than 1"));

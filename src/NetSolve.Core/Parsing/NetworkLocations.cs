@@ -1,3 +1,5 @@
+using NetSolve.Diagnostics;
+
 namespace NetSolve.Parsing;
 
 /// <summary>Where each unit and each unit's routes are written, for rules that run after parsing.</summary>

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using NetSolve.Diagnostics;
 
 namespace NetSolve.Parsing;
 

@@ -1,3 +1,5 @@
+using NetSolve.Diagnostics;
+
 namespace NetSolve.Parsing;
 
 /// <summary>A mapping, its entries in file order (duplicates kept so the reader can report them).</summary>

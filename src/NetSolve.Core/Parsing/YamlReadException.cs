@@ -1,3 +1,5 @@
+using NetSolve.Diagnostics;
+
 namespace NetSolve.Parsing;
 
 /// <summary>The text could not be read as YAML. Caught by <see cref="NetworkReader"/> and turned into a diagnostic.</summary>

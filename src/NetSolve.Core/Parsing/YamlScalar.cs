@@ -1,3 +1,5 @@
+using NetSolve.Diagnostics;
+
 namespace NetSolve.Parsing;
 
 /// <summary>A scalar: its text and whether it was written plain (unquoted).</summary>

@@ -1,5 +1,5 @@
+using NetSolve.Diagnostics;
 using NetSolve.Model;
-using NetSolve.Parsing;
 
 namespace NetSolve.Scenarios;
 

@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
-using NetSolve.Parsing;
 
 namespace NetSolve.Scenarios;
 

@@ -1,9 +1,9 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using System.Text.RegularExpressions;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
-using NetSolve.Solving;
 
 namespace NetSolve.Scenarios;
 
@@ -172,10 +172,10 @@ public static partial class NetworkEditor
             }
 
             long total = (long)unit.Servers.Count + add.Count;
-            if (total < 1 || total > NetworkFileParser.MaxServers)
+            if (total < 1 || total > Servers.MaxCount)
             {
                 Error(add.Location, unit.Id, ChangeCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-                    $"{unit.Servers.Count} servers {(add.Count < 0 ? "minus" : "plus")} {Math.Abs((long)add.Count)} gives {total}; a unit has 1 to {NetworkFileParser.MaxServers} servers"));
+                    $"{unit.Servers.Count} servers {(add.Count < 0 ? "minus" : "plus")} {Math.Abs((long)add.Count)} gives {total}; a unit has 1 to {Servers.MaxCount} servers"));
                 return;
             }
 

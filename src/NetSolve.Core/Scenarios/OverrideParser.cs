@@ -1,6 +1,6 @@
-using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
-using NetSolve.Parsing;
+using NetSolve.Parsing.Values;
 
 namespace NetSolve.Scenarios;
 
@@ -30,6 +30,10 @@ public static class OverrideParser
     /// <param name="timeUnit">The network's time unit, for bare numbers in durations and rates.</param>
     /// <param name="change">The change, when the text is valid.</param>
     /// <returns>Null on success, else the error.</returns>
+    /// <remarks>
+    /// Values are read by the value kinds of <see cref="Parsing.Values"/> and worded with <see cref="FieldLabels"/>,
+    /// as in network and scenario files, so a mistake reads the same wherever it is made.
+    /// </remarks>
     public static Diagnostic? Parse(string text, TimeUnit timeUnit, out NetworkChange? change)
     {
         ArgumentNullException.ThrowIfNull(text);
@@ -46,11 +50,6 @@ public static class OverrideParser
         string value = text[(equals + 1)..].Trim();
         string[] parts = path.Split('.');
         string field = parts[0];
-        if (value.Length == 0)
-        {
-            return Fail(location, "no value after '='");
-        }
-
         return field switch
         {
             "servers" => Servers(location, parts, op, value, out change),
@@ -82,29 +81,10 @@ public static class OverrideParser
 
         if (op == '+')
         {
-            if (!int.TryParse(value, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out int added))
-            {
-                return Fail(location, $"'{value}' is not a whole number of servers to add");
-            }
-
-            change = new AddServers(location, unit, added);
-            return null;
+            return Read(location, FieldLabels.Servers, value, AddedServersValue.Parse(value), added => new AddServers(location, unit, added), out change);
         }
 
-        if (value == "unlimited")
-        {
-            change = new SetServers(location, unit, Model.Servers.Unlimited);
-            return null;
-        }
-
-        if (!int.TryParse(value, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count < 1 || count > NetworkFileParser.MaxServers)
-        {
-            return Fail(location, string.Create(CultureInfo.InvariantCulture,
-                $"servers must be a whole number from 1 to {NetworkFileParser.MaxServers}, or unlimited, not '{value}'"));
-        }
-
-        change = new SetServers(location, unit, Model.Servers.Of(count));
-        return null;
+        return Read(location, FieldLabels.Servers, value, ServersValue.Parse(value), servers => new SetServers(location, unit, servers), out change);
     }
 
     private static Diagnostic? Service(SourceLocation location, string[] parts, char op, string value, TimeUnit timeUnit, out NetworkChange? change)
@@ -115,27 +95,13 @@ public static class OverrideParser
             return error;
         }
 
-        switch (op)
+        string unit = parts[1];
+        return op switch
         {
-            case '*':
-                if (Factor(location, value, allowZero: false, out double factor) is { } bad)
-                {
-                    return bad;
-                }
-
-                change = new ScaleService(location, parts[1], factor);
-                return null;
-            case '+':
-                return Fail(location, "service takes '=' (a duration) or '*=' (a factor), not '+='");
-            default:
-                if (ValueParser.Duration(value, timeUnit, out double hours) is string message)
-                {
-                    return Fail(location, "service: " + message);
-                }
-
-                change = new SetService(location, parts[1], hours);
-                return null;
-        }
+            '*' => Read(location, FieldLabels.Service, value, FactorValue.Positive(value), factor => new ScaleService(location, unit, factor), out change),
+            '+' => Fail(location, "service takes '=' (a duration) or '*=' (a factor), not '+='"),
+            _ => Read(location, FieldLabels.Service, value, DurationValue.Parse(value, timeUnit), hours => new SetService(location, unit, hours), out change),
+        };
     }
 
     private static Diagnostic? Arrivals(SourceLocation location, string[] parts, char op, string value, TimeUnit timeUnit, out NetworkChange? change)
@@ -148,18 +114,9 @@ public static class OverrideParser
 
         if (parts.Length == 1)
         {
-            if (op != '*')
-            {
-                return Fail(location, "arrivals=... needs a unit (arrivals.UNIT=RATE); to scale every stream write arrivals*=FACTOR");
-            }
-
-            if (Factor(location, value, allowZero: true, out double all) is { } bad)
-            {
-                return bad;
-            }
-
-            change = new ScaleArrivals(location, null, all);
-            return null;
+            return op == '*'
+                ? Read(location, FieldLabels.Arrivals, value, FactorValue.NotNegative(value), all => new ScaleArrivals(location, null, all), out change)
+                : Fail(location, "arrivals=... needs a unit (arrivals.UNIT=RATE); to scale every stream write arrivals*=FACTOR");
         }
 
         if (Unit(location, parts, "arrivals") is { } error)
@@ -167,24 +124,10 @@ public static class OverrideParser
             return error;
         }
 
-        if (op == '*')
-        {
-            if (Factor(location, value, allowZero: true, out double factor) is { } bad)
-            {
-                return bad;
-            }
-
-            change = new ScaleArrivals(location, parts[1], factor);
-            return null;
-        }
-
-        if (ValueParser.Rate(value, timeUnit, out double perHour) is string message)
-        {
-            return Fail(location, "arrivals: " + message);
-        }
-
-        change = new SetArrivals(location, parts[1], perHour);
-        return null;
+        string unit = parts[1];
+        return op == '*'
+            ? Read(location, FieldLabels.Arrivals, value, FactorValue.NotNegative(value), factor => new ScaleArrivals(location, unit, factor), out change)
+            : Read(location, FieldLabels.ArrivalRate, value, RateValue.Parse(value, timeUnit), perHour => new SetArrivals(location, unit, perHour), out change);
     }
 
     private static Diagnostic? RouteChange(SourceLocation location, string[] parts, char op, string value, out NetworkChange? change)
@@ -200,12 +143,26 @@ public static class OverrideParser
             return Fail(location, $"route takes '=' (a probability), not '{op}='");
         }
 
-        if (ValueParser.Probability(value, out double probability) is string message)
+        return Read(location, FieldLabels.For(FieldLabels.RouteTo, parts[2]), value, ProbabilityValue.Parse(value),
+            probability => new SetRoute(location, parts[1], parts[2], probability), out change);
+    }
+
+    /// <summary>The change made from <paramref name="result"/>, or its message for the field <paramref name="label"/>.</summary>
+    private static Diagnostic? Read<T>(SourceLocation location, string label, string value, ValueResult<T> result, Func<T, NetworkChange> make, out NetworkChange? change)
+        where T : struct
+    {
+        change = null;
+        if (value.Length == 0)
         {
-            return Fail(location, "route: " + message);
+            return Fail(location, $"{label} has no value");
         }
 
-        change = new SetRoute(location, parts[1], parts[2], probability);
+        if (!result.IsValid)
+        {
+            return Fail(location, result.MessageFor(label));
+        }
+
+        change = make(result.Value);
         return null;
     }
 
@@ -213,17 +170,6 @@ public static class OverrideParser
         parts.Length == 2 && parts[1].Length > 0
             ? null
             : Fail(location, $"{field} is written {field}.UNIT, with one unit id (e.g. {field}.ward)");
-
-    private static Diagnostic? Factor(SourceLocation location, string value, bool allowZero, out double factor)
-    {
-        if (ValueParser.Number(value, out factor) is string message)
-        {
-            return Fail(location, message);
-        }
-
-        bool ok = allowZero ? factor >= 0.0 : factor > 0.0;
-        return ok ? null : Fail(location, $"the factor must be {(allowZero ? "0 or more" : "more than 0")}, not '{value}'");
-    }
 
     private static Diagnostic Fail(SourceLocation location, string message) =>
         Diagnostic.Error(ChangeCodes.BadOverride, location, null, message);

@@ -1,6 +1,7 @@
-using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Parsing.Values;
 
 namespace NetSolve.Scenarios;
 
@@ -49,10 +50,10 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         Section(fields, "add_units", changes, (key, value) => AddUnit(key, value, timeUnit));
         Section(fields, "servers", changes, ServersChange);
         Section(fields, "service", changes, (key, value) => ServiceChange(key, value, timeUnit));
-        if (fields.TryGetValue("scale_arrivals", out var scaleNode) && Scalar(scaleNode, null, "scale_arrivals") is YamlScalar scale
-            && Factor(scale, null, "scale_arrivals", allowZero: true) is double all)
+        if (fields.TryGetValue("scale_arrivals", out var scaleNode)
+            && Value(scaleNode, null, "scale_arrivals", text => FactorValue.NotNegative(WithoutTimes(text))) is double all)
         {
-            changes.Add(new ScaleArrivals(scale.Location, null, all));
+            changes.Add(new ScaleArrivals(scaleNode.Location, null, all));
         }
 
         Section(fields, "arrivals", changes, (key, value) => ArrivalsChange(key, value, timeUnit));
@@ -67,7 +68,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
                 foreach (var (to, value) in UniqueEntries(targetMap, from.Value))
                 {
-                    if (Value(value, from.Value, $"route to '{to.Value}'", ValueParser.Probability) is double probability)
+                    if (Value(value, from.Value, FieldLabels.RouteTo, ProbabilityValue.Parse, to.Value) is double probability)
                     {
                         changes.Add(new SetRoute(to.Location, from.Value, to.Value, probability));
                     }
@@ -129,9 +130,9 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         {
             Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'servers' (a whole number of at least 1, or unlimited)");
         }
-        else if (Scalar(serversNode, id, "servers") is YamlScalar serversScalar)
+        else
         {
-            servers = NewServers(serversScalar, id);
+            servers = ServersField(serversNode, id);
         }
 
         double? hours = null;
@@ -141,10 +142,10 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         }
         else
         {
-            hours = Value(serviceNode, id, "service", (string text, out double value) => ValueParser.Duration(text, timeUnit, out value));
+            hours = Value(serviceNode, id, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit));
         }
 
-        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", ValueParser.Number) : 1.0;
+        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", NumberValue.Parse) : 1.0;
         if (cv < 0.0)
         {
             Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
@@ -158,74 +159,48 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
     private NetworkChange? ServersChange(YamlScalar key, YamlNode node)
     {
-        if (Scalar(node, key.Value, "servers") is not YamlScalar scalar)
+        if (node is YamlScalar { IsNull: false } scalar && (scalar.Value.StartsWith('+') || scalar.Value.StartsWith('-')))
         {
-            return null;
+            return Value(node, key.Value, FieldLabels.Servers, AddedServersValue.Parse) is int added ? new AddServers(key.Location, key.Value, added) : null;
         }
 
-        if (scalar.Value.StartsWith('+') || scalar.Value.StartsWith('-'))
-        {
-            if (!int.TryParse(scalar.Value, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out int added))
-            {
-                Error(scalar.Location, key.Value, DiagnosticCodes.BadValue, $"servers: '{scalar.Value}' is not a whole number of servers to add (write e.g. +2)");
-                return null;
-            }
-
-            return new AddServers(key.Location, key.Value, added);
-        }
-
-        return NewServers(scalar, key.Value) is Servers servers ? new SetServers(key.Location, key.Value, servers) : null;
-    }
-
-    private Servers? NewServers(YamlScalar scalar, string id)
-    {
-        if (scalar.IsPlain && scalar.Value == "unlimited")
-        {
-            return Servers.Unlimited;
-        }
-
-        if (scalar.IsPlain && scalar.Value.All(char.IsAsciiDigit)
-            && int.TryParse(scalar.Value, NumberStyles.None, CultureInfo.InvariantCulture, out int count)
-            && count is >= 1 and <= NetworkFileParser.MaxServers)
-        {
-            return Servers.Of(count);
-        }
-
-        Error(scalar.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-            $"servers must be a whole number from 1 to {NetworkFileParser.MaxServers}, unlimited, or +N to add, not '{scalar.Value}'"));
-        return null;
+        return ServersField(node, key.Value) is Servers servers ? new SetServers(key.Location, key.Value, servers) : null;
     }
 
     private NetworkChange? ServiceChange(YamlScalar key, YamlNode node, TimeUnit timeUnit)
     {
-        if (Scalar(node, key.Value, "service") is not YamlScalar scalar)
+        if (Scalar(node, key.Value, FieldLabels.Service) is not YamlScalar scalar)
         {
             return null;
         }
 
         if (scalar.Value.StartsWith('x'))
         {
-            return Factor(scalar, key.Value, "service", allowZero: false) is double factor ? new ScaleService(key.Location, key.Value, factor) : null;
+            return Value(scalar, key.Value, FieldLabels.Service, text => FactorValue.Positive(WithoutTimes(text))) is double factor
+                ? new ScaleService(key.Location, key.Value, factor)
+                : null;
         }
 
-        return Value(scalar, key.Value, "service", (string text, out double value) => ValueParser.Duration(text, timeUnit, out value)) is double hours
+        return Value(scalar, key.Value, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit)) is double hours
             ? new SetService(key.Location, key.Value, hours)
             : null;
     }
 
     private NetworkChange? ArrivalsChange(YamlScalar key, YamlNode node, TimeUnit timeUnit)
     {
-        if (Scalar(node, key.Value, "arrival rate") is not YamlScalar scalar)
+        if (Scalar(node, key.Value, FieldLabels.ArrivalRate) is not YamlScalar scalar)
         {
             return null;
         }
 
         if (scalar.Value.StartsWith('x'))
         {
-            return Factor(scalar, key.Value, "arrivals", allowZero: true) is double factor ? new ScaleArrivals(key.Location, key.Value, factor) : null;
+            return Value(scalar, key.Value, FieldLabels.Arrivals, text => FactorValue.NotNegative(WithoutTimes(text))) is double factor
+                ? new ScaleArrivals(key.Location, key.Value, factor)
+                : null;
         }
 
-        return Value(scalar, key.Value, "arrival rate", (string text, out double value) => ValueParser.Rate(text, timeUnit, out value)) is double perHour
+        return Value(scalar, key.Value, FieldLabels.ArrivalRate, text => RateValue.Parse(text, timeUnit)) is double perHour
             ? new SetArrivals(key.Location, key.Value, perHour)
             : null;
     }
@@ -243,21 +218,6 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             : null;
     }
 
-    private double? Factor(YamlScalar scalar, string? unitId, string what, bool allowZero)
-    {
-        string text = scalar.Value.StartsWith('x') ? scalar.Value[1..] : scalar.Value;
-        if (ValueParser.Number(text, out double factor) is string error)
-        {
-            Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: {error} (write a factor as e.g. x1.2)");
-            return null;
-        }
-
-        if (allowZero ? factor >= 0.0 : factor > 0.0)
-        {
-            return factor;
-        }
-
-        Error(scalar.Location, unitId, DiagnosticCodes.BadValue, $"{what}: the factor must be {(allowZero ? "0 or more" : "more than 0")}, not '{scalar.Value}'");
-        return null;
-    }
+    /// <summary>A factor as the scenario file writes it, <c>x1.2</c>, without its <c>x</c>; the factor alone is what <c>--set</c> takes after <c>*=</c>.</summary>
+    private static string WithoutTimes(string text) => text.StartsWith('x') ? text[1..] : text;
 }

@@ -1,5 +1,5 @@
 using System.Collections.Immutable;
-using NetSolve.Parsing;
+using NetSolve.Diagnostics;
 
 namespace NetSolve.Scenarios;
 

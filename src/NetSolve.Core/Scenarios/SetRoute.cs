@@ -1,4 +1,4 @@
-using NetSolve.Parsing;
+using NetSolve.Diagnostics;
 
 namespace NetSolve.Scenarios;
 

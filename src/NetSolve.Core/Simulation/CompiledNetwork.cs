@@ -1,5 +1,4 @@
 using NetSolve.Model;
-using NetSolve.Solving;
 
 namespace NetSolve.Simulation;
 

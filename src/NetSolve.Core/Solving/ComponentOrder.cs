@@ -1,3 +1,5 @@
+using NetSolve.Model;
+
 namespace NetSolve.Solving;
 
 /// <summary>

@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-using NetSolve.Analysis;
 using NetSolve.Model;
 
 namespace NetSolve.Solving;

@@ -1,4 +1,5 @@
 using System.Globalization;
+using NetSolve.Model;
 
 namespace NetSolve.Solving;
 

@@ -3,7 +3,7 @@ using NetSolve.Model;
 namespace NetSolve.Solving;
 
 /// <summary>Per-unit steady-state metrics: M/M/c by Erlang C, M/M/inf for unlimited servers.</summary>
-/// <remarks>Status is left as <see cref="UnitStatus.Ok"/> or <see cref="UnitStatus.Unstable"/>; <see cref="Analysis.StatusRule"/> assigns the rest.</remarks>
+/// <remarks>Status is left as <see cref="UnitStatus.Ok"/> or <see cref="UnitStatus.Unstable"/>; <see cref="StatusRule"/> assigns the rest.</remarks>
 public static class UnitMetrics
 {
     /// <summary>Metrics of <paramref name="unit"/> when patients arrive at <paramref name="arrivalsPerHour"/>.</summary>

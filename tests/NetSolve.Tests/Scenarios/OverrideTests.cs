@@ -1,3 +1,4 @@
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
 using NetSolve.Scenarios;
@@ -48,7 +49,7 @@ public sealed class OverrideTests
     [InlineData("servers.wrad=3", "--set servers.wrad=3: unknown unit 'wrad'; did you mean 'ward'?")]
     [InlineData("serverz.ward=3", "--set serverz.ward=3: unknown field 'serverz'; did you mean 'servers'?")]
     [InlineData("ward.servers=3", "--set ward.servers=3: unknown field 'ward' (fields: servers, service, arrivals, route)")]
-    [InlineData("servers.ward=0", "--set servers.ward=0: servers must be a whole number from 1 to 1000000, or unlimited, not '0'")]
+    [InlineData("servers.ward=0", "--set servers.ward=0: servers: '0' is not a number of servers (write a whole number from 1 to 1000000, or unlimited)")]
     [InlineData("servers.ward*=2", "--set servers.ward*=2: servers takes '=' (a number or unlimited) or '+=' (servers to add), not '*='")]
     [InlineData("service.lab=fast", "--set service.lab=fast: service: 'fast' is not a duration (write e.g. 45min, 2.5h, 3d, 30s, or a number in hours)")]
     [InlineData("route.emergency=0.2", "--set route.emergency=0.2: a route is written route.FROM.TO=P, e.g. route.emergency.imaging=0.2")]

@@ -48,13 +48,13 @@ public sealed class ScenarioReaderTests
     [Theory]
     [InlineData("base: harbourside.yaml\nserver:\n  ward: 320\n", "scenario.yaml:2:1: unknown key 'server'; did you mean 'servers'?")]
     [InlineData("base: harbourside.yaml\nservers:\n  wrd: 320\n", "scenario.yaml:3:3: unknown unit 'wrd'; did you mean 'ward'?")]
-    [InlineData("base: harbourside.yaml\nservers:\n  ward: many\n", "scenario.yaml:3:9: unit 'ward': servers must be a whole number from 1 to 1000000, unlimited, or +N to add, not 'many'")]
+    [InlineData("base: harbourside.yaml\nservers:\n  ward: many\n", "scenario.yaml:3:9: unit 'ward': servers: 'many' is not a number of servers (write a whole number from 1 to 1000000, or unlimited)")]
     [InlineData("base: nowhere.yaml\n", "scenario.yaml:1:7: base network 'nowhere.yaml': no such file")]
     [InlineData("base: harbourside.yaml\nclose_units:\n  lab:\n", "scenario.yaml:3:7: unit 'lab': say where its patients go instead: a unit id or 'leave network'")]
     [InlineData("base: harbourside.yaml\nclose_units:\n  lab: lab\n", "scenario.yaml:3:8: unit 'lab': cannot send its patients to itself; name another unit or 'leave network'")]
     [InlineData("base: harbourside.yaml\nroutes:\n  emergency:\n    ward: 0.5\n", "scenario.yaml:4:5: unit 'emergency': routes add up to 1.15, more than 1 (a changed route takes its difference from the patients leaving the network; lower another route of this unit too)")]
     [InlineData("base: harbourside.yaml\nadd_units:\n  ward:\n    servers: 3\n    service: 1h\n", "scenario.yaml:3:3: unit 'ward': already exists; change it instead of adding it")]
-    [InlineData("base: harbourside.yaml\nservice:\n  lab: x0\n", "scenario.yaml:3:8: unit 'lab': service: the factor must be more than 0, not 'x0'")]
+    [InlineData("base: harbourside.yaml\nservice:\n  lab: x0\n", "scenario.yaml:3:8: unit 'lab': service: the factor must be more than 0, not '0'")]
     public void A_bad_scenario_file_gives_located_one_line_errors(string yaml, string expected)
     {
         string folder = SmallNetworks.TemporaryFolder();

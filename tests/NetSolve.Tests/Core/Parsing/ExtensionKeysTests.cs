@@ -1,3 +1,4 @@
+using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
 

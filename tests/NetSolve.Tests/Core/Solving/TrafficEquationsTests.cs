@@ -1,3 +1,4 @@
+using NetSolve.Model;
 using NetSolve.Solving;
 using NetSolve.Tests.Support;
 

@@ -1,4 +1,4 @@
-namespace NetSolve.Solving;
+namespace NetSolve.Model;
 
 /// <summary>Every tolerance the solver and the parser use, in one place, each saying what it is relative to.</summary>
 public static class Tolerances

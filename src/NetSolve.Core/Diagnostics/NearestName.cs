@@ -1,4 +1,4 @@
-namespace NetSolve.Parsing;
+namespace NetSolve.Diagnostics;
 
 /// <summary>"Did you mean" suggestions by edit distance.</summary>
 public static class NearestName

@@ -1,4 +1,4 @@
-namespace NetSolve.Parsing;
+namespace NetSolve.Diagnostics;
 
 /// <summary>A place in a source file: 1-based line and column.</summary>
 /// <param name="File">The file name as the user gave it.</param>

@@ -1,4 +1,4 @@
-namespace NetSolve.Parsing;
+namespace NetSolve.Diagnostics;
 
 /// <summary>Stable diagnostic codes: NS01xx reading the file, NS02xx network rules.</summary>
 public static class DiagnosticCodes

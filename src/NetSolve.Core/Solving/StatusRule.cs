@@ -1,7 +1,7 @@
 using System.Collections.Immutable;
-using NetSolve.Solving;
+using NetSolve.Model;
 
-namespace NetSolve.Analysis;
+namespace NetSolve.Solving;
 
 /// <summary>Assigns each unit its contract status: unstable, bottleneck, strained or ok.</summary>
 public static class StatusRule

@@ -1,6 +1,4 @@
-using NetSolve.Model;
-
-namespace NetSolve.Solving;
+namespace NetSolve.Model;
 
 /// <summary>
 /// The routes of a network indexed by unit position, in compressed rows: the routes out of unit i are

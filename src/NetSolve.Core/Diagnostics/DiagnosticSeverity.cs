@@ -1,4 +1,4 @@
-namespace NetSolve.Parsing;
+namespace NetSolve.Diagnostics;
 
 /// <summary>Whether a diagnostic stops the solve.</summary>
 public enum DiagnosticSeverity

@@ -1,4 +1,4 @@
-namespace NetSolve.Parsing;
+namespace NetSolve.Diagnostics;
 
 /// <summary>One finding about an input file, located and worded for the planner.</summary>
 /// <param name="Severity">Error or warning.</param>

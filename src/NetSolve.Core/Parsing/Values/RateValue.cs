@@ -1,0 +1,35 @@
+using NetSolve.Model;
+
+namespace NetSolve.Parsing.Values;
+
+/// <summary>
+/// An arrival rate (<c>11.5</c>, <c>11.5/h</c>, <c>11.5 /h</c>, <c>280/d</c>, <c>0.2/min</c>, <c>3/s</c>), read into
+/// events per hour; a bare number is per the file's time unit. Finite and not negative; 0 is allowed (no arrivals).
+/// </summary>
+/// <remarks>Thread-safe.</remarks>
+public static class RateValue
+{
+    /// <summary>Reads <paramref name="text"/> as a rate in events per hour.</summary>
+    /// <param name="text">The text as written.</param>
+    /// <param name="timeUnit">The file's time unit, for a bare number.</param>
+    public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        if (!NumberText.Split(text, "/", out string number, out string suffix) || !NumberText.IsTimeSuffix(suffix)
+            || !NumberText.IsNumber(number, out double amount))
+        {
+            return ValueResult<double>.Invalid(
+                $"'{text}' is not a rate (write e.g. 11.5/h, 280/d, 0.2/min, or a number per {TimeConstants.Name(timeUnit)})");
+        }
+
+        double perHour = amount / NumberText.HoursPerSuffix(suffix, timeUnit);
+        if (!double.IsFinite(perHour))
+        {
+            return ValueResult<double>.Invalid($"'{text}' is too large for a rate");
+        }
+
+        return perHour >= 0.0
+            ? ValueResult<double>.Valid(perHour)
+            : ValueResult<double>.Invalid($"'{text}' is negative; an arrival rate is 0 or more");
+    }
+}
