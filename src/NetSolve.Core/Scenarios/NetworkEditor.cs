@@ -4,6 +4,7 @@ using System.Text.RegularExpressions;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Parsing.Values;
 
 namespace NetSolve.Scenarios;
 
@@ -75,7 +76,7 @@ public static partial class NetworkEditor
                     break;
                 case ScaleService scale when Find(scale.UnitId, scale.Location) is int i:
                     Touch(scale.UnitId, scale.Location);
-                    _units[i] = _units[i] with { MeanServiceHours = _units[i].MeanServiceHours * scale.Factor };
+                    ScaleServiceOf(i, scale);
                     break;
                 case SetArrivals set when Find(set.UnitId, set.Location) is int:
                     Touch(set.UnitId, set.Location);
@@ -161,6 +162,36 @@ public static partial class NetworkEditor
 
         private void Touch(string id, SourceLocation location) => _touched[id] = location;
 
+        /// <summary>Multiplies a unit's mean service time, refusing a product that is no usable duration (as a file would).</summary>
+        private void ScaleServiceOf(int index, ScaleService scale)
+        {
+            var unit = _units[index];
+            double hours = unit.MeanServiceHours * scale.Factor;
+            if (!DurationValue.IsUsableHours(hours))
+            {
+                Error(scale.Location, unit.Id, ChangeCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
+                    $"service: {unit.MeanServiceHours:0.######} h times {scale.Factor} is {(double.IsFinite(hours) ? "too short" : "too long")} for a duration"));
+                return;
+            }
+
+            _units[index] = unit with { MeanServiceHours = hours };
+        }
+
+        /// <summary>Multiplies one external stream, refusing a product too large for a rate (as a file would).</summary>
+        private void ScaleArrivalAt(int index, ScaleArrivals scale)
+        {
+            var arrival = _arrivals[index];
+            double perHour = arrival.PerHour * scale.Factor;
+            if (!double.IsFinite(perHour))
+            {
+                Error(scale.Location, arrival.UnitId, ChangeCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
+                    $"arrival rate: {arrival.PerHour:0.######}/h times {scale.Factor} is too large for a rate"));
+                return;
+            }
+
+            _arrivals[index] = arrival with { PerHour = perHour };
+        }
+
         private void AddTo(int index, AddServers add)
         {
             var unit = _units[index];
@@ -202,7 +233,7 @@ public static partial class NetworkEditor
             {
                 for (int k = 0; k < _arrivals.Count; k++)
                 {
-                    _arrivals[k] = _arrivals[k] with { PerHour = _arrivals[k].PerHour * scale.Factor };
+                    ScaleArrivalAt(k, scale);
                 }
 
                 return;
@@ -221,7 +252,7 @@ public static partial class NetworkEditor
                 return;
             }
 
-            _arrivals[existing] = _arrivals[existing] with { PerHour = _arrivals[existing].PerHour * scale.Factor };
+            ScaleArrivalAt(existing, scale);
         }
 
         private void SetRouteFraction(string from, string to, double probability)

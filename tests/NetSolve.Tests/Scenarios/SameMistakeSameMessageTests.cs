@@ -72,6 +72,28 @@ public sealed class SameMistakeSameMessageTests
         Assert.Equal(expected, FromSet(field, value, "*="));
     }
 
+    // Source: exact by hand. The ward's 3 d is 72 h: 72 × 1e307 overflows a double, 72 × 1e-320 is below the
+    // smallest normal double.
+    [Theory]
+    [InlineData("1e307", "service: 72 h times 1E+307 is too long for a duration")]
+    [InlineData("1e-320", "service: 72 h times 1E-320 is too short for a duration")]
+    public void A_factor_that_takes_a_time_out_of_range_gets_the_same_message_in_a_scenario_file_and_set(string factor, string expected)
+    {
+        Assert.Equal(expected, FromScenarioFile("service", "x" + factor));
+        Assert.Equal(expected, FromSetApplied("service.ward*=" + factor));
+    }
+
+    [Fact]
+    public void A_factor_that_takes_a_rate_out_of_range_gets_the_same_message_in_a_scenario_file_and_set()
+    {
+        // Source: exact by hand. Emergency arrivals of 11.5/h times 1e308 overflow a double.
+        const string Expected = "arrival rate: 11.5/h times 1E+308 is too large for a rate";
+        var scenario = ScenarioReader.ReadText("base: harbourside.yaml\nscale_arrivals: 1e308\n", "scenario.yaml", _ => NetworkReader.ReadFile(HarboursidePath));
+
+        Assert.Equal(Expected, OnlyError(scenario.Diagnostics));
+        Assert.Equal(Expected, FromSetApplied("arrivals*=1e308"));
+    }
+
     [Fact]
     public void A_field_with_no_value_gets_the_same_message_in_all_three()
     {
@@ -126,6 +148,13 @@ public sealed class SameMistakeSameMessageTests
         var problem = OverrideParser.Parse($"{path}{op}{value}", TimeUnit.Hour, out _);
         Assert.NotNull(problem);
         return problem.Message;
+    }
+
+    private static string FromSetApplied(string text)
+    {
+        var network = SmallNetworks.Example("harbourside.yaml");
+        Assert.Null(OverrideParser.Parse(text, network.TimeUnit, out var change));
+        return OnlyError(NetworkEditor.Apply(network, [change!], new Diagnostics.SourceLocation("harbourside.yaml", 0, 0)).Diagnostics);
     }
 
     private static string OnlyError(IEnumerable<Diagnostics.Diagnostic> diagnostics) =>
