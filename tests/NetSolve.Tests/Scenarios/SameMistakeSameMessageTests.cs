@@ -1,3 +1,4 @@
+using NetSolve.Tests.Analysis;
 using NetSolve.Tests.Support;
 using NetSolve.Model;
 using NetSolve.Parsing;
