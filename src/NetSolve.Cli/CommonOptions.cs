@@ -27,19 +27,15 @@ internal static class CommonOptions
     };
 
     /// <summary><c>--format table|json|csv</c>, read by our own parser so a bad value is one line naming the option.</summary>
-    public static Option<OutputFormat> Format(string description = FormatDescription)
+    public static Option<string> Format(string description = FormatDescription) => SettingOptions.Choice("--format", description, "table", Formats, "-f");
+
+    /// <summary>The format a valid <c>--format</c> value names.</summary>
+    public static OutputFormat FormatOf(string? value) => value switch
     {
-        var option = new Option<OutputFormat>("--format", "-f")
-        {
-            Description = description,
-            HelpName = string.Join("|", Formats),
-            DefaultValueFactory = _ => OutputFormat.Table,
-            CustomParser = result => SettingOptions.Read(result, text =>
-                (OptionValues.Choice("--format", text, Formats), Enum.TryParse(text, ignoreCase: true, out OutputFormat format) ? format : OutputFormat.Table)),
-        };
-        option.CompletionSources.Add(Formats);
-        return option;
-    }
+        "json" => OutputFormat.Json,
+        "csv" => OutputFormat.Csv,
+        _ => OutputFormat.Table,
+    };
 
     /// <summary><c>--strain</c>: utilisation at which a unit is flagged strained, read in invariant culture.</summary>
     public static Option<double> Strain() => SettingOptions.Number(

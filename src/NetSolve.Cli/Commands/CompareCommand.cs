@@ -54,7 +54,7 @@ internal static class CompareCommand
             }
 
             var result = NetworkComparison.Compare(baseScenario.Name, NetworkSolver.Solve(baseScenario.Network, threshold), compared);
-            new ResultOutput(context.Out, parse.GetValue(format), withCaution: true).Write(
+            new ResultOutput(context.Out, CommonOptions.FormatOf(parse.GetValue(format)), withCaution: true).Write(
                 json => ComparisonOutput.WriteJson(result, json),
                 csv => ComparisonOutput.WriteCsv(result, csv),
                 table => ComparisonOutput.WriteTable(result, table));

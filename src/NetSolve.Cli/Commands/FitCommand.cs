@@ -16,7 +16,7 @@ internal static class FitCommand
     {
         var log = new Argument<string>("LOG") { Description = "Movement log (CSV: patient,unit,arrived,started,left; see docs/movement-log.md)." };
         var output = new Option<string?>("--output", "-o") { Description = "Write the network file here (default: print it)." };
-        var timeUnit = SettingOptions.Choice("--time-unit", "Time unit of the network file written: minute, hour or day.", "hour", "minute", "hour", "day");
+        var timeUnit = SettingOptions.Choice("--time-unit", "Time unit of the network file written: minute, hour or day.", "hour", ["minute", "hour", "day"]);
         var name = new Option<string?>("--name") { Description = "Network name (default: the log's file name)." };
         var command = new Command("fit", "Estimate a network from a log of patient movements: arrival rates, routing fractions, service times and servers.")
         {

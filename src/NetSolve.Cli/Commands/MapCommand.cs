@@ -16,7 +16,7 @@ internal sealed class MapCommand() : NetworkCommand(
         "Write the map here; the extension picks the format: .svg, .png (rendered from the SVG) or .dot (Graphviz).", Extensions);
 
     private readonly Option<string> _direction = SettingOptions.Choice(
-        "--direction", "Main direction of patient flow on the map: down (top to bottom, for portrait pages) or right (left to right).", "down", "down", "right");
+        "--direction", "Main direction of patient flow on the map: down (top to bottom, for portrait pages) or right (left to right).", "down", ["down", "right"]);
 
     protected override string? FormatDescription => null;
 

@@ -55,7 +55,7 @@ internal abstract class NetworkCommand(string name, string description)
             string path = parse.GetValue(file)!;
             var warnings = new WarningLog(context);
             var network = NetworkLoader.Load(path, warnings, parse.GetValue(set), ForSimulation);
-            var output = new ResultOutput(context.Out, format is null ? OutputFormat.Table : parse.GetValue(format), TableCarriesCaution);
+            var output = new ResultOutput(context.Out, format is null ? OutputFormat.Table : CommonOptions.FormatOf(parse.GetValue(format)), TableCarriesCaution);
             double threshold = strain is null ? Defaults.StrainThreshold : parse.GetValue(strain);
             return Execute(new NetworkRequest(path, network, threshold, output, context, warnings, parse));
         });

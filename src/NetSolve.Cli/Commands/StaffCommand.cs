@@ -18,14 +18,15 @@ internal sealed class StaffCommand() : NetworkCommand(
 
     private readonly Option<double?> _maxUtil = SettingOptions.OptionalNumber(
         "--max-util", value => value is >= 0.0 and <= 1.0, text => Messages.NotNumber("--max-util", text, "a utilisation", "from 0 to 1", "write e.g. 0.85"),
-        "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).");
+        "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).",
+        "FRACTION");
 
-    private readonly Option<string> _maxWait = SettingOptions.Duration("--max-wait", Target, null, "Target: mean wait before service at most this (e.g. 30min, 4h).");
+    private readonly Option<string> _maxWait = SettingOptions.Duration("--max-wait", Target, null, "Target: mean wait before service at most this (e.g. 30min, 4h).", "DURATION");
 
-    private readonly Option<string> _maxTime = SettingOptions.Duration("--max-time", Target, null, "Target: mean time in unit, wait plus service, at most this.");
+    private readonly Option<string> _maxTime = SettingOptions.Duration("--max-time", Target, null, "Target: mean time in unit, wait plus service, at most this.", "DURATION");
 
     private readonly Option<string> _waitOver = SettingOptions.Duration(
-        "--wait-over", Target, null, "Target, with --at-most: the wait whose chance of being exceeded is limited (e.g. 4h).");
+        "--wait-over", Target, null, "Target, with --at-most: the wait whose chance of being exceeded is limited (e.g. 4h).", "DURATION");
 
     private readonly Option<double?> _atMost = new("--at-most")
     {
@@ -44,7 +45,7 @@ internal sealed class StaffCommand() : NetworkCommand(
     };
 
     private readonly Option<int?> _budget = SettingOptions.OptionalWholeNumber(
-        "--budget", 0, SettingLimits.MaxBudget, "Instead of targets: place this many extra servers where they cut the mean time in network most.");
+        "--budget", 0, SettingLimits.MaxBudget, "Instead of targets: place this many extra servers where they cut the mean time in network most.", "N");
 
     protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
 

@@ -18,9 +18,10 @@ internal static class SettingOptions
     };
 
     /// <summary>A whole number from <paramref name="min"/> to <paramref name="max"/>, or null when not given.</summary>
-    public static Option<int?> OptionalWholeNumber(string name, int min, int max, string description) => new(name)
+    public static Option<int?> OptionalWholeNumber(string name, int min, int max, string description, string? helpName = null) => new(name)
     {
         Description = description,
+        HelpName = helpName,
         CustomParser = result => Read<int?>(result, text => (OptionValues.WholeNumber(name, text, min, max, out int value), value)),
     };
 
@@ -33,18 +34,20 @@ internal static class SettingOptions
     };
 
     /// <summary>As <see cref="Number"/>, null when not given.</summary>
-    public static Option<double?> OptionalNumber(string name, Func<double, bool> accept, Func<string, string> problem, string description) => new(name)
+    public static Option<double?> OptionalNumber(string name, Func<double, bool> accept, Func<string, string> problem, string description, string? helpName = null) => new(name)
     {
         Description = description,
+        HelpName = helpName,
         CustomParser = result => Read<double?>(result, text => (OptionValues.Number(text, accept, out double value) ? null : problem(text), value)),
     };
 
     /// <summary>A duration as written (a bare number is in the file's time unit, so it becomes hours only once the file is read).</summary>
-    public static Option<string> Duration(string name, DurationRule rule, string? defaultValue, string description)
+    public static Option<string> Duration(string name, DurationRule rule, string? defaultValue, string description, string? helpName = null)
     {
         var option = new Option<string>(name)
         {
             Description = description,
+            HelpName = helpName,
             CustomParser = result => Read(result, text => (OptionValues.Duration(name, text, rule, null, out _), text)),
         };
         if (defaultValue is not null)
@@ -56,9 +59,9 @@ internal static class SettingOptions
     }
 
     /// <summary>One of <paramref name="choices"/>, shown in help as <c>a|b|c</c>.</summary>
-    public static Option<string> Choice(string name, string description, string defaultValue, params string[] choices)
+    public static Option<string> Choice(string name, string description, string defaultValue, string[] choices, params string[] aliases)
     {
-        var option = new Option<string>(name)
+        var option = new Option<string>(name, aliases)
         {
             Description = description,
             HelpName = string.Join("|", choices),
