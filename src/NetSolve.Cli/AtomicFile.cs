@@ -10,7 +10,7 @@ internal static class AtomicFile
         string folder = Path.GetDirectoryName(full) ?? ".";
         if (!Directory.Exists(folder))
         {
-            throw new InputException($"{path}: cannot write: the folder {folder} does not exist");
+            throw new InputException(Messages.NoFolder(path, folder));
         }
 
         string temporary = Path.Combine(folder, "." + Path.GetFileName(full) + ".tmp");
@@ -26,7 +26,7 @@ internal static class AtomicFile
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
             TryDelete(temporary);
-            throw new InputException($"{path}: cannot write: {exception.Message}", exception);
+            throw new InputException(Messages.CannotWrite(path, exception.Message), exception);
         }
         catch
         {

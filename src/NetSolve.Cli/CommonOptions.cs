@@ -1,5 +1,6 @@
 using System.CommandLine;
-using System.Globalization;
+using NetSolve.Cli.Output;
+using NetSolve.Cli.Settings;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli;
@@ -7,6 +8,11 @@ namespace NetSolve.Cli;
 /// <summary>Options shared by several commands, defined once so they read the same everywhere.</summary>
 internal static class CommonOptions
 {
+    /// <summary>What <c>--format</c> says when the command does not say more.</summary>
+    public const string FormatDescription = "Output: table (for people), json (the contract's document) or csv (one row per unit).";
+
+    private static readonly string[] Formats = ["table", "json", "csv"];
+
     /// <summary>Show the stack trace of an internal error.</summary>
     public static readonly Option<bool> Verbose = new("--verbose")
     {
@@ -14,37 +20,28 @@ internal static class CommonOptions
         Recursive = true,
     };
 
-    /// <summary>The network file argument.</summary>
+    /// <summary>The network file argument: a network file or a scenario file.</summary>
     public static Argument<string> NetworkFile() => new("FILE")
     {
-        Description = "Network file (YAML, see docs/network-file.md).",
+        Description = "Network file (YAML, see docs/network-file.md), or a scenario file (its base network with the changes, see docs/scenarios.md).",
     };
 
-    /// <summary><c>--format table|json|csv</c>.</summary>
-    public static Option<string> Format() => new Option<string>("--format", "-f")
+    /// <summary><c>--format table|json|csv</c>, read by our own parser so a bad value is one line naming the option.</summary>
+    public static Option<string> Format(string description = FormatDescription) => SettingOptions.Choice("--format", description, "table", Formats, "-f");
+
+    /// <summary>The format a valid <c>--format</c> value names.</summary>
+    public static OutputFormat FormatOf(string? value) => value switch
     {
-        Description = "Output: table (for people), json (the contract's document) or csv (one row per unit).",
-        DefaultValueFactory = _ => "table",
-    }.AcceptOnlyFromAmong("table", "json", "csv");
+        "json" => OutputFormat.Json,
+        "csv" => OutputFormat.Csv,
+        _ => OutputFormat.Table,
+    };
 
     /// <summary><c>--strain</c>: utilisation at which a unit is flagged strained, read in invariant culture.</summary>
-    public static Option<double> Strain() => new("--strain")
-    {
-        Description = "Utilisation at or above which a unit is flagged strained (default 0.85, the common planning rule of thumb).",
-        DefaultValueFactory = _ => Defaults.StrainThreshold,
-
-        // Our own parser: the built-in one reads numbers in the current culture (0.9 is 9 under de-DE) and its
-        // failure surfaced as an exception from a validator instead of a usage error.
-        CustomParser = result =>
-        {
-            string text = result.Tokens.Count == 1 ? result.Tokens[0].Value : string.Empty;
-            if (!double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) || !(value > 0.0 && value <= 1.0))
-            {
-                result.AddError($"--strain must be a number above 0 and at most 1, such as 0.85, not '{text}'");
-                return Defaults.StrainThreshold;
-            }
-
-            return value;
-        },
-    };
+    public static Option<double> Strain() => SettingOptions.Number(
+        "--strain",
+        value => value is > 0.0 and <= 1.0,
+        text => Messages.NotNumber("--strain", text, "a number", "above 0 and at most 1", "write e.g. 0.85"),
+        Defaults.StrainThreshold,
+        "Utilisation at or above which a unit is flagged strained (default 0.85, the common planning rule of thumb).");
 }

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using NetSolve.Cli.Commands;
+using NetSolve.Cli.Settings;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli;
@@ -14,13 +15,7 @@ internal static class NetSolveApp
         var parse = root.Parse(args);
         if (parse.Errors.Count > 0)
         {
-            foreach (var error in parse.Errors)
-            {
-                context.Report("netsolve: " + error.Message);
-            }
-
-            context.Report("Run 'netsolve --help' for usage.");
-            return ExitCodes.Usage;
+            return Usage(parse.Errors.Select(error => error.Message), context);
         }
 
         bool verbose = args.Contains("--verbose");
@@ -33,6 +28,10 @@ internal static class NetSolveApp
                 EnableDefaultExceptionHandler = false,
             });
         }
+        catch (UsageException exception)
+        {
+            return Usage(exception.Problems, context);
+        }
         catch (InputException exception)
         {
             context.Report(exception.Message);
@@ -40,19 +39,19 @@ internal static class NetSolveApp
         }
         catch (TrafficEquationsException exception)
         {
-            context.Report("netsolve: " + exception.Message);
+            context.Report(Messages.SolverProblem(exception.Message));
             return ExitCodes.InvalidInput;
         }
         catch (OperationCanceledException)
         {
-            context.Report("netsolve: stopped");
+            context.Report(Messages.Stopped);
             return ExitCodes.InvalidInput;
         }
 #pragma warning disable CA1031 // The one place a defect is caught: one line instead of a stack trace.
         catch (Exception exception)
 #pragma warning restore CA1031
         {
-            context.Report($"netsolve: internal error: {exception.Message}" + (verbose ? "\n" + exception : " (run again with --verbose for details)"));
+            context.Report(Messages.InternalError(exception, verbose));
             return ExitCodes.InternalError;
         }
     }
@@ -63,16 +62,28 @@ internal static class NetSolveApp
         var root = new RootCommand("NetSolve: queueing-network planning for hospital units. Finds where patient pathways saturate, "
             + "what-if and staffing answers, from Jackson-network formulas and simulation.");
         root.Options.Add(CommonOptions.Verbose);
-        root.Subcommands.Add(CheckCommand.Create(context));
-        root.Subcommands.Add(SolveCommand.Create(context));
+        root.Subcommands.Add(new CheckCommand().Create(context));
+        root.Subcommands.Add(new SolveCommand().Create(context));
         root.Subcommands.Add(FitCommand.Create(context));
-        root.Subcommands.Add(GrowthCommand.Create(context));
+        root.Subcommands.Add(new GrowthCommand().Create(context));
         root.Subcommands.Add(CompareCommand.Create(context));
-        root.Subcommands.Add(StaffCommand.Create(context));
-        root.Subcommands.Add(PathwayCommand.Create(context));
-        root.Subcommands.Add(SimulateCommand.Create(context));
-        root.Subcommands.Add(MapCommand.Create(context));
-        root.Subcommands.Add(ReportCommand.Create(context));
+        root.Subcommands.Add(new StaffCommand().Create(context));
+        root.Subcommands.Add(new PathwayCommand().Create(context));
+        root.Subcommands.Add(new SimulateCommand().Create(context));
+        root.Subcommands.Add(new MapCommand().Create(context));
+        root.Subcommands.Add(new ReportCommand().Create(context));
         return root;
+    }
+
+    /// <summary>Wrong usage: every problem, one line each, then where to read about usage; exit 2.</summary>
+    private static int Usage(IEnumerable<string> problems, CliContext context)
+    {
+        foreach (string problem in problems)
+        {
+            context.Report(Messages.Usage(problem));
+        }
+
+        context.Report(Messages.UsageHint);
+        return ExitCodes.Usage;
     }
 }

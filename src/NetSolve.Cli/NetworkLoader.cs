@@ -5,36 +5,51 @@ using NetSolve.Scenarios;
 
 namespace NetSolve.Cli;
 
-/// <summary>Reads a network file for a command, printing every diagnostic on stderr, one line each.</summary>
+/// <summary>
+/// Reads the network a command works on: a network file, or a scenario file (its base network with its changes),
+/// then the <c>--set</c> changes. Warnings go to stderr; errors are an <see cref="InputException"/>, one line each.
+/// </summary>
 internal static class NetworkLoader
 {
-    /// <summary>The network, or an <see cref="InputException"/> carrying the diagnostics when the file is invalid.</summary>
-    /// <param name="path">The network file.</param>
-    /// <param name="context">Where warnings go.</param>
+    /// <summary>What a FILE argument may be, as named when it is neither (a folder, say).</summary>
+    public const string FileKind = Messages.NetworkOrScenarioFile;
+
+    /// <summary>The network, or an <see cref="InputException"/> carrying every diagnostic when a file is invalid.</summary>
+    /// <param name="path">The network or scenario file.</param>
+    /// <param name="warnings">Where warnings go.</param>
     /// <param name="overrides">What-if texts from <c>--set</c>, applied in order after reading (see <see cref="OverrideParser"/>).</param>
     /// <param name="forSimulation">True for <c>simulate</c>: warnings that the formulas ignore a key do not apply.</param>
-    public static Network Load(string path, CliContext context, IReadOnlyList<string>? overrides = null, bool forSimulation = false)
+    public static Network Load(string path, WarningLog warnings, IReadOnlyList<string>? overrides = null, bool forSimulation = false)
     {
-        var result = NetworkReader.ReadFile(path);
-        var errors = result.Diagnostics.Where(d => d.IsError).ToList();
+        ArgumentNullException.ThrowIfNull(warnings);
+        if (InputFile.TryRead(path, FileKind, out var problem) is not string text)
+        {
+            throw new InputException(problem!.ToString());
+        }
+
+        var (network, diagnostics) = IsScenario(text, path) ? ReadScenario(text, path) : ReadNetwork(text, path);
+        var errors = diagnostics.Where(d => d.IsError).ToList();
         if (errors.Count > 0)
         {
             throw new InputException(string.Join("\n", errors.Select(d => d.ToString())));
         }
 
-        foreach (var warning in result.Diagnostics.Where(d => !forSimulation || d.Code != DiagnosticCodes.IgnoredByFormulas))
+        foreach (var warning in diagnostics.Where(d => !forSimulation || d.Code != DiagnosticCodes.IgnoredByFormulas))
         {
-            context.Report(warning.ToString());
+            warnings.Report(warning.ToString());
         }
 
         return overrides is null || overrides.Count == 0
-            ? result.Network!
-            : ApplyOverrides(result.Network!, path, overrides, context);
+            ? network!
+            : ApplyOverrides(network!, path, overrides, warnings);
     }
 
     /// <summary>Applies <c>--set</c> texts to <paramref name="network"/>; every bad text is reported, one line each.</summary>
-    public static Network ApplyOverrides(Network network, string path, IReadOnlyList<string> overrides, CliContext context)
+    public static Network ApplyOverrides(Network network, string path, IReadOnlyList<string> overrides, WarningLog warnings)
     {
+        ArgumentNullException.ThrowIfNull(network);
+        ArgumentNullException.ThrowIfNull(overrides);
+        ArgumentNullException.ThrowIfNull(warnings);
         var changes = new List<NetworkChange>();
         var problems = new List<Diagnostic>();
         foreach (string text in overrides)
@@ -57,14 +72,43 @@ internal static class NetworkLoader
             {
                 foreach (var warning in edit.Diagnostics)
                 {
-                    context.Report(warning.ToString());
+                    warnings.Report(warning.ToString());
                 }
 
                 // The name travels into every table, JSON document, map and report: say that these are what-if numbers.
-                return changed with { Name = $"{changed.Name} (what-if: {string.Join(", ", overrides)})" };
+                return changed with { Name = Messages.WhatIfName(changed.Name, overrides) };
             }
         }
 
         throw new InputException(string.Join("\n", problems.Select(d => d.ToString())));
+    }
+
+    /// <summary>True for a scenario file: a mapping with a <c>base</c> key (a network file never has one).</summary>
+    private static bool IsScenario(string text, string path)
+    {
+        try
+        {
+            return LocatedYamlReader.Read(text, path) is YamlMapping mapping && mapping.Entries.Any(entry => entry.Key.Value == "base");
+        }
+        catch (YamlReadException)
+        {
+            // Not YAML: the network reader says where, as for any network file.
+            return false;
+        }
+    }
+
+    private static (Network? Network, IReadOnlyList<Diagnostic> Diagnostics) ReadNetwork(string text, string path)
+    {
+        var result = NetworkReader.ReadText(text, path);
+        return (result.Network, result.Diagnostics);
+    }
+
+    private static (Network? Network, IReadOnlyList<Diagnostic> Diagnostics) ReadScenario(string text, string path)
+    {
+        var result = ScenarioReader.ReadText(text, path, basePath => NetworkReader.ReadFile(ScenarioReader.ResolveBase(path, basePath)));
+
+        // The name travels into every output, as a what-if's does: say which scenario the numbers are for.
+        var network = result.Scenario is Scenario scenario ? scenario.Network with { Name = Messages.ScenarioName(scenario.Network.Name, scenario.Name) } : null;
+        return (network, result.Diagnostics);
     }
 }

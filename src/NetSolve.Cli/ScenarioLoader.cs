@@ -3,10 +3,8 @@ using NetSolve.Scenarios;
 namespace NetSolve.Cli;
 
 /// <summary>Reads scenario (or network) files for a command, printing each warning line once.</summary>
-internal sealed class ScenarioLoader(CliContext context)
+internal sealed class ScenarioLoader(WarningLog warnings)
 {
-    private readonly HashSet<string> _reported = new(StringComparer.Ordinal);
-
     /// <summary>The scenario, or an <see cref="InputException"/> carrying the errors when it is invalid.</summary>
     public Scenario Load(string path)
     {
@@ -17,9 +15,9 @@ internal sealed class ScenarioLoader(CliContext context)
             throw new InputException(string.Join("\n", errors.Select(d => d.ToString())));
         }
 
-        foreach (var warning in result.Diagnostics.Select(d => d.ToString()).Where(_reported.Add))
+        foreach (var warning in result.Diagnostics)
         {
-            context.Report(warning);
+            warnings.Report(warning.ToString());
         }
 
         return result.Scenario!;

@@ -1,64 +1,96 @@
 using System.CommandLine;
-using System.Text.RegularExpressions;
+using System.CommandLine.Parsing;
+using NetSolve.Cli.Settings;
 using NetSolve.Model;
-using NetSolve.Parsing;
+using NetSolve.Simulation;
 
 namespace NetSolve.Cli;
 
 /// <summary>The simulation options <c>simulate</c> and <c>report --simulate</c> share, defined once so they read the same.</summary>
-internal static partial class SimulationCliOptions
+internal static class SimulationCliOptions
 {
+    /// <summary>Examples shown when a run length is not a duration.</summary>
+    private const string RunExamples = "28d, 12h, 90min";
+
+    private const string TooLong = "longer runs are better spent as more replications";
+
+    /// <summary>What <c>--warmup</c> accepts: 0 up to ten years.</summary>
+    public static readonly DurationRule Warmup = new(AllowZero: true, RunExamples, SettingLimits.MaxSimulatedDays, TooLong);
+
+    /// <summary>What <c>--duration</c> accepts: above 0 up to ten years.</summary>
+    public static readonly DurationRule Duration = new(AllowZero: false, RunExamples, SettingLimits.MaxSimulatedDays, TooLong);
+
+    /// <summary>What <c>--wait-over</c> accepts: any time, 0 included.</summary>
+    public static readonly DurationRule WaitOver = new(AllowZero: true, "30min, 4h, 1d");
+
     /// <summary><c>--seed</c>, default 1.</summary>
     public static Option<ulong> Seed() => new("--seed")
     {
         Description = "Seed of the run; the same seed gives the same numbers on any machine and thread count.",
         DefaultValueFactory = _ => 1UL,
+        CustomParser = result => SettingOptions.Read(result, text => (OptionValues.Seed("--seed", text, out ulong seed), seed)),
     };
 
-    /// <summary><c>--replications/-r</c>, at least 1.</summary>
+    /// <summary><c>--replications/-r</c>, from 1 to <see cref="SettingLimits.MaxReplications"/>.</summary>
     public static Option<int> Replications(int defaultValue)
     {
-        var option = new Option<int>("--replications", "-r")
-        {
-            Description = "Independent replications (at least 2 for confidence intervals).",
-            DefaultValueFactory = _ => defaultValue,
-        };
-        option.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int>() < 1)
-            {
-                result.AddError("--replications must be at least 1");
-            }
-        });
+        var option = SettingOptions.WholeNumber("--replications", 1, SettingLimits.MaxReplications, defaultValue, "Independent replications (at least 2 for confidence intervals).");
+        option.Aliases.Add("-r");
         return option;
     }
 
-    /// <summary>A duration option (<c>28d</c>, <c>12h</c>, <c>90min</c>); a bad value is a usage error naming the option.</summary>
-    public static Option<string> Duration(string name, string description, string defaultValue, bool allowZero)
-    {
-        var option = new Option<string>(name) { Description = description, DefaultValueFactory = _ => defaultValue };
-        option.Validators.Add(result =>
-        {
-            string text = result.GetValueOrDefault<string>() ?? string.Empty;
-            if (ParseDuration(text, TimeUnit.Hour, allowZero) is null)
-            {
-                result.AddError($"{name}: '{text}' is not a {(allowZero ? string.Empty : "positive ")}duration (write e.g. 28d, 12h, 90min)");
-            }
-        });
-        return option;
-    }
+    /// <summary>A run length (<c>28d</c>, <c>12h</c>, <c>90min</c>); a bad value is a usage error naming the option.</summary>
+    public static Option<string> RunLength(string name, string description, string defaultValue, DurationRule rule) =>
+        SettingOptions.Duration(name, rule, defaultValue, description);
 
-    /// <summary>Hours, or null when <paramref name="text"/> is not a duration; bare numbers are in <paramref name="timeUnit"/>.</summary>
-    public static double? ParseDuration(string text, TimeUnit timeUnit, bool allowZero)
+    /// <summary>
+    /// The options of a run, the run lengths read in the file's time unit; a length that breaks its rule only in
+    /// this file's time unit (a bare number) is a <see cref="UsageException"/> naming every such option.
+    /// </summary>
+    public static SimulationOptions Read(ParseResult parse, TimeUnit timeUnit, Option<ulong> seed, Option<int> replications,
+        (Option<string> Option, DurationRule Rule) warmup, (Option<string> Option, DurationRule Rule) duration, Option<string[]>? waitOver = null)
     {
-        if (ValueParser.Duration(text, timeUnit, out double hours) is null)
+        ArgumentNullException.ThrowIfNull(parse);
+        var problems = new List<string>();
+        double Hours(Option option, string text, DurationRule rule)
         {
+            if (OptionValues.Duration(option.Name, text, rule, timeUnit, out double hours) is string problem)
+            {
+                problems.Add(problem);
+            }
+
             return hours;
         }
 
-        return allowZero && ZeroDurationRegex().IsMatch(text) ? 0.0 : null;
+        var options = new SimulationOptions
+        {
+            Seed = parse.GetValue(seed),
+            Replications = parse.GetValue(replications),
+            WarmupHours = Hours(warmup.Option, parse.GetValue(warmup.Option)!, warmup.Rule),
+            DurationHours = Hours(duration.Option, parse.GetValue(duration.Option)!, duration.Rule),
+            WaitThresholdsHours = waitOver is null ? [] : [.. (parse.GetValue(waitOver) ?? []).Select(text => Hours(waitOver, text, WaitOver))],
+        };
+        return problems.Count == 0 ? options : throw new UsageException(problems);
     }
 
-    [GeneratedRegex("^0*(?:\\.0*)?(?: ?(?:s|min|h|d))?$", RegexOptions.CultureInvariant, matchTimeoutMilliseconds: 1000)]
-    private static partial Regex ZeroDurationRegex();
+    /// <summary><c>--wait-over T ...</c>: each a duration, 0 included.</summary>
+    public static Option<string[]> WaitOverOption() => new("--wait-over")
+    {
+        Description = "Report P(wait > t) per unit for each time t (e.g. --wait-over 1h 4h).",
+        AllowMultipleArgumentsPerToken = true,
+        CustomParser = ReadWaits,
+    };
+
+    private static string[] ReadWaits(ArgumentResult result)
+    {
+        foreach (var token in result.Tokens)
+        {
+            if (OptionValues.Duration("--wait-over", token.Value, WaitOver, null, out _) is string problem)
+            {
+                result.AddError(problem);
+            }
+        }
+
+        return [.. result.Tokens.Select(token => token.Value)];
+    }
 }

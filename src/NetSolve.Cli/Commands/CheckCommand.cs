@@ -1,25 +1,17 @@
-using System.CommandLine;
-using System.Globalization;
-
 namespace NetSolve.Cli.Commands;
 
-/// <summary><c>netsolve check FILE</c>: validates a network file and shows its warnings, solving nothing.</summary>
-internal static class CheckCommand
+/// <summary><c>netsolve check FILE</c>: validates a network (or scenario) file and shows its warnings, solving nothing.</summary>
+internal sealed class CheckCommand() : NetworkCommand(
+    "check", "Validate a network file: report every error and warning with file, line, column and unit.")
 {
-    public static Command Create(CliContext context)
+    protected override string? FormatDescription => null;
+
+    protected override bool TakesStrain => false;
+
+    protected override int Execute(NetworkRequest request)
     {
-        var input = new NetworkInput();
-        var command = new Command("check", "Validate a network file: report every error and warning with file, line, column and unit.")
-        {
-            input.File, input.Set,
-        };
-        command.SetAction(parse =>
-        {
-            var network = input.Load(parse, context);
-            context.Out.Write(string.Create(CultureInfo.InvariantCulture,
-                $"{parse.GetValue(input.File)}: valid: {network.Units.Length} units, {network.Arrivals.Length} arrival streams, {network.Routes.Length} routes\n"));
-            return ExitCodes.Success;
-        });
-        return command;
+        var network = request.Network;
+        request.Context.Out.Write(Messages.Valid(request.File, network.Units.Length, network.Arrivals.Length, network.Routes.Length) + "\n");
+        return ExitCodes.Success;
     }
 }

@@ -1,12 +1,17 @@
 using System.CommandLine;
 using NetSolve.Analysis;
-using NetSolve.Presentation;
+using NetSolve.Cli.Output;
+using NetSolve.Cli.Settings;
 using NetSolve.Presentation.Scenarios;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;
 
 /// <summary><c>netsolve compare BASE SCENARIO...</c>: scenarios side by side with a base network.</summary>
+/// <remarks>
+/// Not a <see cref="NetworkCommand"/>: here <c>--set</c> does not change the base but adds one more scenario, and
+/// every file, the base included, is already read as a network or scenario file.
+/// </remarks>
 internal static class CompareCommand
 {
     public static Command Create(CliContext context)
@@ -17,8 +22,7 @@ internal static class CompareCommand
             Description = "Scenario files (see docs/scenarios.md) or network files to compare with the base.",
             Arity = ArgumentArity.ZeroOrMore,
         };
-        var format = CommonOptions.Format();
-        format.Description = "Output: table (for people), json (one document) or csv (one row per scenario, unit and metric).";
+        var format = CommonOptions.Format("Output: table (for people), json (one document) or csv (one row per scenario, unit and metric).");
         var strain = CommonOptions.Strain();
         var set = WhatIfOption.Create();
         set.Description = "Adds one more scenario: the base with these what-if changes. " + WhatIfOption.Description;
@@ -27,21 +31,17 @@ internal static class CompareCommand
         {
             baseFile, scenarios, format, strain, set,
         };
+        baseFile.CheckAfterOptions(result => result.GetResult(scenarios) is not { Tokens.Count: > 0 } && !result.IsGiven(set) ? [Messages.CompareNeedsScenario] : []);
         command.SetAction(parse =>
         {
-            string[] paths = parse.GetValue(scenarios) ?? [];
             string[] sets = parse.GetValue(set) ?? [];
-            if (paths.Length == 0 && sets.Length == 0)
-            {
-                throw new InputException("netsolve: compare: give at least one SCENARIO file, or --set changes, to compare with the base");
-            }
-
             double threshold = parse.GetValue(strain);
-            var loader = new ScenarioLoader(context);
+            var warnings = new WarningLog(context);
+            var loader = new ScenarioLoader(warnings);
             string basePath = parse.GetValue(baseFile)!;
             var baseScenario = loader.Load(basePath);
             var compared = new List<(string Name, NetworkSolution Solution)>();
-            foreach (string path in paths)
+            foreach (string path in parse.GetValue(scenarios) ?? [])
             {
                 var scenario = loader.Load(path);
                 compared.Add((scenario.Name, NetworkSolver.Solve(scenario.Network, threshold)));
@@ -49,36 +49,17 @@ internal static class CompareCommand
 
             if (sets.Length > 0)
             {
-                var changed = NetworkLoader.ApplyOverrides(baseScenario.Network, basePath, sets, context);
-                compared.Add(("what-if: " + string.Join(", ", sets), NetworkSolver.Solve(changed, threshold)));
+                var changed = NetworkLoader.ApplyOverrides(baseScenario.Network, basePath, sets, warnings);
+                compared.Add((Messages.WhatIfScenario(sets), NetworkSolver.Solve(changed, threshold)));
             }
 
             var result = NetworkComparison.Compare(baseScenario.Name, NetworkSolver.Solve(baseScenario.Network, threshold), compared);
-            Write(result, parse.GetValue(format)!, context);
+            new ResultOutput(context.Out, CommonOptions.FormatOf(parse.GetValue(format)), withCaution: true).Write(
+                json => ComparisonOutput.WriteJson(result, json),
+                csv => ComparisonOutput.WriteCsv(result, csv),
+                table => ComparisonOutput.WriteTable(result, table));
             return ExitCodes.Success;
         });
         return command;
-    }
-
-    private static void Write(ComparisonResult result, string format, CliContext context)
-    {
-        switch (format)
-        {
-            case "json":
-                using (var buffer = new MemoryStream())
-                {
-                    ComparisonOutput.WriteJson(result, buffer);
-                    context.Out.Write(System.Text.Encoding.UTF8.GetString(buffer.ToArray()) + "\n");
-                }
-
-                break;
-            case "csv":
-                ComparisonOutput.WriteCsv(result, context.Out);
-                break;
-            default:
-                ComparisonOutput.WriteTable(result, context.Out);
-                context.Out.Write("\n" + Caution.Text + "\n");
-                break;
-        }
     }
 }

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text;
+using NetSolve.Cli.Settings;
 using NetSolve.Fitting;
 using NetSolve.Model;
 using NetSolve.Presentation;
@@ -15,11 +16,7 @@ internal static class FitCommand
     {
         var log = new Argument<string>("LOG") { Description = "Movement log (CSV: patient,unit,arrived,started,left; see docs/movement-log.md)." };
         var output = new Option<string?>("--output", "-o") { Description = "Write the network file here (default: print it)." };
-        var timeUnit = new Option<string>("--time-unit")
-        {
-            Description = "Time unit of the network file written: minute, hour or day.",
-            DefaultValueFactory = _ => "hour",
-        }.AcceptOnlyFromAmong("minute", "hour", "day");
+        var timeUnit = SettingOptions.Choice("--time-unit", "Time unit of the network file written: minute, hour or day.", "hour", ["minute", "hour", "day"]);
         var name = new Option<string?>("--name") { Description = "Network name (default: the log's file name)." };
         var command = new Command("fit", "Estimate a network from a log of patient movements: arrival rates, routing fractions, service times and servers.")
         {
@@ -37,15 +34,11 @@ internal static class FitCommand
             }
             catch (ArgumentException exception)
             {
-                throw new InputException($"{path}: {exception.Message.Split(" (Parameter", 2)[0]}", exception);
+                throw new InputException(Messages.FitProblem(path, exception.Message.Split(" (Parameter", 2)[0]), exception);
             }
 
-            string[] header =
-            [
-                string.Create(CultureInfo.InvariantCulture, $"Estimated by netsolve fit from {Path.GetFileName(path)}: {fitted.Patients} patients, {visits.Count} stays,"),
-                string.Create(CultureInfo.InvariantCulture, $"arrivals over {TimeConstants.FromHours(fitted.WindowHours, unit):0.##} {TimeConstants.Name(unit)}s. Servers are the most patients seen in service at once:"),
-                "check them against the roster before planning with this file.",
-            ];
+            string[] header = Messages.FittedHeader(Path.GetFileName(path), fitted.Patients, visits.Count,
+                TimeConstants.FromHours(fitted.WindowHours, unit), TimeConstants.Name(unit));
             if (parse.GetValue(output) is string target)
             {
                 AtomicFile.Write(target, stream =>
@@ -54,7 +47,7 @@ internal static class FitCommand
                     NetworkYamlWriter.Write(fitted.Network, writer, header);
                 });
                 WriteSummary(fitted, context.Out);
-                context.Out.Write($"\nnetwork file written to {target}\n");
+                context.Out.Write("\n" + Messages.NetworkWritten(target) + "\n");
             }
             else
             {

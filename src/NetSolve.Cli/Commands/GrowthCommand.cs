@@ -1,109 +1,91 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
 using System.Globalization;
 using NetSolve.Analysis;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
-using NetSolve.Presentation;
 using NetSolve.Presentation.Growth;
+using NetSolve.Cli.Settings;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;
 
 /// <summary><c>netsolve growth FILE</c>: where and when the network saturates as demand grows.</summary>
-internal static class GrowthCommand
+internal sealed class GrowthCommand() : NetworkCommand(
+    "growth", "Demand growth: the order in which units saturate as arrivals grow, the factor at which the first unit is "
+    + "strained and the first becomes unstable, and utilisation and mean wait per unit across growth factors.")
 {
-    /// <summary>Most rows a growth table may have.</summary>
-    public const int MaxSteps = 10_000;
+    private readonly Option<string> _stream = new("--stream") { Description = "Grow only the external arrivals at this unit; the other streams stay as they are.", HelpName = "UNIT" };
 
-    public static Command Create(CliContext context)
+    private readonly Option<double> _from = SettingOptions.Number(
+        "--from", value => value is >= 0.0 and <= SettingLimits.MaxGrowthFactor, text => FactorProblem("--from", text, "from 0 to"), 1.0,
+        "First growth factor (default 1: today's demand).");
+
+    private readonly Option<double?> _to = SettingOptions.OptionalNumber(
+        "--to", value => value is > 0.0 and <= SettingLimits.MaxGrowthFactor, text => FactorProblem("--to", text, "above 0 and at most"),
+        "Last growth factor (default: where the first unit to saturate reaches 98% utilisation; 2 when nothing saturates).");
+
+    private readonly Option<int> _steps = SettingOptions.WholeNumber(
+        "--steps", 1, SettingLimits.MaxSteps, GrowthAnalysis.DefaultSteps, "Rows in the table (default 20).");
+
+    protected override string FormatDescription =>
+        "Output: table (for people, with a text chart), json (one document) or csv (one row per factor and unit, ready to plot).";
+
+    protected override IEnumerable<Symbol> Symbols => [_stream, _from, _to, _steps];
+
+    protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
-        var input = new NetworkInput();
-        var format = CommonOptions.Format();
-        format.Description = "Output: table (for people, with a text chart), json (one document) or csv (one row per factor and unit, ready to plot).";
-        var strain = CommonOptions.Strain();
-        var stream = new Option<string>("--stream") { Description = "Grow only the external arrivals at this unit; the other streams stay as they are.", HelpName = "UNIT" };
-        var from = new Option<double>("--from") { Description = "First growth factor (default 1: today's demand).", DefaultValueFactory = _ => 1.0 };
-        var to = new Option<double?>("--to") { Description = "Last growth factor (default: where the first unit to saturate reaches 98% utilisation; 2 when nothing saturates)." };
-        var steps = new Option<int>("--steps") { Description = "Rows in the table (default 20).", DefaultValueFactory = _ => GrowthAnalysis.DefaultSteps };
-        from.Validators.Add(result => Check(result, result.GetValueOrDefault<double>() is >= 0.0 and < double.PositiveInfinity, "--from must be a factor of 0 or more"));
-        to.Validators.Add(result => Check(result, result.GetValueOrDefault<double?>() is > 0.0 and < double.PositiveInfinity, "--to must be a factor above 0"));
-        steps.Validators.Add(result => Check(result, result.GetValueOrDefault<int>() is >= 1 and <= MaxSteps,
-            string.Create(CultureInfo.InvariantCulture, $"--steps must be from 1 to {MaxSteps}")));
-        var command = new Command("growth", "Demand growth: the order in which units saturate as arrivals grow, the factor at which the first unit is "
-            + "strained and the first becomes unstable, and utilisation and mean wait per unit across growth factors.")
+        if (settings.TryGetValue(_from, out double first) && settings.TryGetValue(_to, out double? last) && last < first)
         {
-            input.File, format, strain, input.Set, stream, from, to, steps,
-        };
-        command.SetAction(parse =>
-        {
-            var network = input.Load(parse, context);
-            var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
-            string? unit = parse.GetValue(stream);
-            if (unit is not null)
-            {
-                CheckStream(network, unit);
-            }
-
-            var probe = Run(solution, unit, []);
-            double first = parse.GetValue(from);
-            double last = parse.GetValue(to) ?? GrowthAnalysis.DefaultLastFactor(probe.FirstUnstable);
-            if (last < first)
-            {
-                throw new InputException(string.Create(CultureInfo.InvariantCulture,
-                    $"netsolve: growth: the last factor ({last:0.###}) is below the first ({first:0.###}); give --to above --from"));
-            }
-
-            var growth = Run(solution, unit, GrowthAnalysis.Range(first, last, parse.GetValue(steps)));
-            Write(growth, parse.GetValue(format)!, context);
-            return ExitCodes.Success;
-        });
-        return command;
+            yield return Messages.GrowthLastBelowFirst(last.Value, first);
+        }
     }
+
+    protected override int Execute(NetworkRequest request)
+    {
+        var network = request.Network;
+        var solution = request.Solve();
+        string? unit = request.GetValue(_stream);
+        if (unit is not null)
+        {
+            CheckStream(network, unit);
+        }
+
+        var probe = Run(solution, unit, []);
+        double first = request.GetValue(_from);
+        double last = request.GetValue(_to) ?? GrowthAnalysis.DefaultLastFactor(probe.FirstUnstable);
+        if (last < first)
+        {
+            // Only the default end can be below --from here; both given are checked with the other usage errors.
+            throw new InputException(Messages.GrowthDefaultLastBelowFirst(last, first));
+        }
+
+        var growth = Run(solution, unit, GrowthAnalysis.Range(first, last, request.GetValue(_steps)));
+        request.Output.Write(
+            json => GrowthOutput.WriteJson(growth, json),
+            csv => GrowthOutput.WriteCsv(growth, csv),
+            table => GrowthOutput.WriteTable(growth, table));
+        return ExitCodes.Success;
+    }
+
+    private static string FactorProblem(string option, string text, string range) => Messages.NotNumber(
+        option, text, "a growth factor", string.Create(CultureInfo.InvariantCulture, $"{range} {SettingLimits.MaxGrowthFactor}"), "1 is today's demand");
 
     private static GrowthResult Run(NetworkSolution solution, string? stream, IReadOnlyList<double> factors) =>
         stream is null ? GrowthAnalysis.Run(solution, factors) : GrowthAnalysis.RunStream(solution, stream, factors);
 
     private static void CheckStream(Network network, string unit)
     {
-        if (!network.Units.Any(u => u.Id == unit))
+        var ids = network.Units.Select(u => u.Id).ToList();
+        if (!ids.Contains(unit, StringComparer.Ordinal))
         {
-            throw new InputException($"netsolve: --stream {unit}: unknown unit '{unit}'{NearestName.Hint(unit, network.Units.Select(u => u.Id))}");
+            throw new InputException(Messages.UnknownUnit("--stream", unit, unit, NearestName.Hint(unit, ids)));
         }
 
         if (!network.Arrivals.Any(arrival => arrival.UnitId == unit && arrival.PerHour > 0.0))
         {
             var streams = network.Arrivals.Where(arrival => arrival.PerHour > 0.0).Select(arrival => arrival.UnitId);
-            throw new InputException($"netsolve: --stream {unit}: unit '{unit}' has no arrivals from outside to grow (streams: {string.Join(", ", streams)})");
-        }
-    }
-
-    private static void Write(GrowthResult growth, string format, CliContext context)
-    {
-        switch (format)
-        {
-            case "json":
-                using (var buffer = new MemoryStream())
-                {
-                    GrowthOutput.WriteJson(growth, buffer);
-                    context.Out.Write(System.Text.Encoding.UTF8.GetString(buffer.ToArray()) + "\n");
-                }
-
-                break;
-            case "csv":
-                GrowthOutput.WriteCsv(growth, context.Out);
-                break;
-            default:
-                GrowthOutput.WriteTable(growth, context.Out);
-                context.Out.Write("\n" + Caution.Text + "\n");
-                break;
-        }
-    }
-
-    private static void Check(System.CommandLine.Parsing.OptionResult result, bool ok, string message)
-    {
-        if (!ok)
-        {
-            result.AddError(message);
+            throw new InputException(Messages.StreamWithoutArrivals(unit, streams));
         }
     }
 }

@@ -1,8 +1,7 @@
 using System.CommandLine;
 using System.CommandLine.Parsing;
-using System.Globalization;
 using System.Text;
-using NetSolve.Model;
+using NetSolve.Cli.Settings;
 using NetSolve.Rendering.Report;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -14,7 +13,8 @@ namespace NetSolve.Cli.Commands;
 /// Like <c>compare</c>: FILE and each SCENARIO may be a network file or a scenario file (docs/scenarios.md).
 /// <c>--simulate</c> also simulates FILE and adds the time-of-day and formula-against-simulation sections.
 /// </remarks>
-internal static class ReportCommand
+internal sealed class ReportCommand() : NetworkCommand(
+    "report", "Write the leadership report: finding, bottleneck map, unit table, waits as demand grows, scenarios, assumptions; with --simulate, queues by hour of day.")
 {
     /// <summary>Replications for a report: fewer than <c>simulate</c>'s 10 so a report stays quick; still 4 degrees of freedom.</summary>
     public const int DefaultReplications = 5;
@@ -25,99 +25,87 @@ internal static class ReportCommand
     /// <summary>Warm-up for a report: as <c>simulate</c>'s, since wards with stays of days need it whatever the run length.</summary>
     public const string DefaultWarmup = "28d";
 
+    /// <summary>A report's run length: at least a day, as the time-of-day section needs every hour measured.</summary>
+    private static readonly DurationRule ReportDuration = SimulationCliOptions.Duration with
+    {
+        MinDays = 1.0,
+        Shortest = "a day",
+        TooShort = "the time-of-day section needs every hour measured",
+    };
+
     private static readonly string[] Extensions = [".html", ".htm"];
 
-    public static Command Create(CliContext context)
+    private readonly Argument<string[]> _scenarios = new("SCENARIO")
     {
-        var file = CommonOptions.NetworkFile();
-        var scenarios = new Argument<string[]>("SCENARIO")
+        Description = "Scenario files (see docs/scenarios.md) or network files, each solved and compared with FILE.",
+        Arity = ArgumentArity.ZeroOrMore,
+    };
+
+    private readonly Option<string> _output = OutputFileOption.Create(
+        "Write the report here (.html): one file with everything inline, to open in any browser, e-mail or print.", Extensions);
+
+    private readonly Option<bool> _simulate = new("--simulate")
+    {
+        Description = "Also simulate FILE and add the mean queue by hour of day (chart and table) and the formula against the simulation per unit.",
+    };
+
+    private readonly Option<ulong> _seed = SimulationCliOptions.Seed();
+
+    private readonly Option<int> _replications = SimulationCliOptions.Replications(DefaultReplications);
+
+    private readonly Option<string> _warmup = SimulationCliOptions.RunLength(
+        "--warmup", "With --simulate: simulated time discarded at the start of each replication.", DefaultWarmup, SimulationCliOptions.Warmup);
+
+    private readonly Option<string> _duration = SimulationCliOptions.RunLength(
+        "--duration", "With --simulate: simulated time measured in each replication, at least a day.", DefaultDuration, ReportDuration);
+
+    protected override string? FormatDescription => null;
+
+    protected override IEnumerable<Symbol> Symbols => [_scenarios, _output, _simulate, _seed, _replications, _warmup, _duration];
+
+    protected override IEnumerable<string> CheckSettings(CommandResult settings)
+    {
+        if (settings.TryGetValue(_simulate, out bool simulate) && simulate)
         {
-            Description = "Scenario files (see docs/scenarios.md) or network files, each solved and compared with FILE.",
-            Arity = ArgumentArity.ZeroOrMore,
-        };
-        var output = MapCommand.OutputOption("Write the report here (.html): one file with everything inline, to open in any browser, e-mail or print.", Extensions);
-        var strain = CommonOptions.Strain();
-        var set = WhatIfOption.Create();
-        var simulate = new Option<bool>("--simulate")
+            yield break;
+        }
+
+        foreach (Option option in new Option[] { _seed, _replications, _warmup, _duration }.Where(settings.IsGiven))
         {
-            Description = "Also simulate FILE and add the mean queue by hour of day (chart and table) and the formula against the simulation per unit.",
-        };
-        var seed = SimulationCliOptions.Seed();
-        var replications = SimulationCliOptions.Replications(DefaultReplications);
-        var warmup = SimulationCliOptions.Duration("--warmup", "With --simulate: simulated time discarded at the start of each replication.", DefaultWarmup, allowZero: true);
-        var duration = SimulationCliOptions.Duration("--duration", "With --simulate: simulated time measured in each replication, at least a day.", DefaultDuration, allowZero: false);
-        var command = new Command("report", "Write the leadership report: finding, bottleneck map, unit table, waits as demand grows, scenarios, assumptions; with --simulate, queues by hour of day.")
+            yield return Messages.OnlyWith(option.Name, "--simulate");
+        }
+    }
+
+    protected override int Execute(NetworkRequest request)
+    {
+        var baseline = request.Solve();
+        var loader = new ScenarioLoader(request.Warnings);
+        var alternatives = (request.GetValue(_scenarios) ?? [])
+            .Select(loader.Load)
+            .Select(scenario => new ReportScenario(scenario.Name, NetworkSolver.Solve(scenario.Network, request.StrainThreshold)))
+            .ToList();
+        SimulationResult? simulation = null;
+        if (request.GetValue(_simulate))
         {
-            file, scenarios, output, strain, set, simulate, seed, replications, warmup, duration,
-        };
-        command.Validators.Add(result =>
-        {
-            if (result.GetValue(simulate))
+            var options = SimulationCliOptions.Read(
+                request.Parse, baseline.Network.TimeUnit, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
+            simulation = SimulationRun.Run(baseline.Network, options, request.Context);
+            if (simulation.ReplicationsFinished == 0)
             {
-                return;
+                request.Context.Report(Messages.StoppedBeforeAnyReplicationNoReport);
+                return ExitCodes.InvalidInput;
             }
 
-            foreach (Option option in new Option[] { seed, replications, warmup, duration })
+            if (!simulation.IsComplete)
             {
-                if (result.GetResult(option) is OptionResult given && !given.Implicit)
-                {
-                    result.AddError($"{option.Name} applies only with --simulate");
-                }
+                request.Context.Report(Messages.StoppedPartway(simulation.ReplicationsFinished, options.Replications, "the report uses those"));
             }
-        });
-        command.SetAction(parse =>
-        {
-            double threshold = parse.GetValue(strain);
-            var loader = new ScenarioLoader(context);
-            string path = parse.GetValue(file)!;
-            var network = loader.Load(path).Network;
-            if (parse.GetValue(set) is { Length: > 0 } changes)
-            {
-                network = NetworkLoader.ApplyOverrides(network, path, changes, context);
-            }
+        }
 
-            var baseline = NetworkSolver.Solve(network, threshold);
-            var alternatives = (parse.GetValue(scenarios) ?? [])
-                .Select(loader.Load)
-                .Select(scenario => new ReportScenario(scenario.Name, NetworkSolver.Solve(scenario.Network, threshold)))
-                .ToList();
-            SimulationResult? simulation = null;
-            if (parse.GetValue(simulate))
-            {
-                var timeUnit = baseline.Network.TimeUnit;
-                var options = new SimulationOptions
-                {
-                    Seed = parse.GetValue(seed),
-                    Replications = parse.GetValue(replications),
-                    WarmupHours = SimulationCliOptions.ParseDuration(parse.GetValue(warmup)!, timeUnit, allowZero: true)!.Value,
-                    DurationHours = SimulationCliOptions.ParseDuration(parse.GetValue(duration)!, timeUnit, allowZero: false)!.Value,
-                };
-                if (options.DurationHours < TimeConstants.HoursPerDay)
-                {
-                    context.Report($"netsolve: --duration '{parse.GetValue(duration)}' is shorter than a day; the time-of-day section needs every hour measured");
-                    return ExitCodes.Usage;
-                }
-
-                simulation = SimulationRun.Run(baseline.Network, options, context);
-                if (simulation.ReplicationsFinished == 0)
-                {
-                    context.Report("netsolve: stopped before any replication finished; no report written");
-                    return ExitCodes.InvalidInput;
-                }
-
-                if (!simulation.IsComplete)
-                {
-                    context.Report(string.Create(CultureInfo.InvariantCulture,
-                        $"netsolve: stopped: {simulation.ReplicationsFinished} of {options.Replications} replications finished; the report uses those"));
-                }
-            }
-
-            string html = HtmlReport.Write(baseline, alternatives, simulation);
-            string target = parse.GetValue(output)!;
-            AtomicFile.Write(target, stream => stream.Write(new UTF8Encoding(false).GetBytes(html)));
-            context.Out.Write($"report written to {target}\n");
-            return ExitCodes.Success;
-        });
-        return command;
+        string html = HtmlReport.Write(baseline, alternatives, simulation);
+        string target = request.GetValue(_output)!;
+        AtomicFile.Write(target, stream => stream.Write(new UTF8Encoding(false).GetBytes(html)));
+        request.Context.Out.Write(Messages.ReportWritten(target) + "\n");
+        return ExitCodes.Success;
     }
 }

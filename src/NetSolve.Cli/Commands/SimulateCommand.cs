@@ -1,6 +1,6 @@
+using NetSolve.Presentation.Simulation;
 using System.CommandLine;
-using System.Globalization;
-using NetSolve.Model;
+using NetSolve.Cli.Settings;
 using NetSolve.Simulation;
 using NetSolve.Solving;
 
@@ -10,78 +10,81 @@ namespace NetSolve.Cli.Commands;
 /// <c>netsolve simulate FILE</c>: discrete-event simulation of the network, with every extension key, confidence
 /// intervals and percentiles; <c>--compare</c> sets the formulas beside it.
 /// </summary>
-internal static class SimulateCommand
+internal sealed class SimulateCommand() : NetworkCommand(
+    "simulate", "Simulate the network: means with 95% confidence intervals, percentiles, waits over given times and queues by hour of day.")
 {
-    public static Command Create(CliContext context)
+    private readonly Option<ulong> _seed = SimulationCliOptions.Seed();
+
+    private readonly Option<int> _replications = SimulationCliOptions.Replications(SimulationOptions.DefaultReplications);
+
+    private readonly Option<string> _warmup = SimulationCliOptions.RunLength(
+        "--warmup", "Simulated time discarded at the start of each replication (e.g. 28d; a bare number is in the file's time unit).", "28d", SimulationCliOptions.Warmup);
+
+    private readonly Option<string> _duration = SimulationCliOptions.RunLength(
+        "--duration", "Simulated time measured in each replication after the warm-up (e.g. 364d).", "364d", SimulationCliOptions.Duration);
+
+    private readonly Option<string[]> _waitOver = SimulationCliOptions.WaitOverOption();
+
+    private readonly Option<bool> _compare = new("--compare") { Description = "Set the formula (Jackson network) results beside the simulation, with a verdict per metric." };
+
+    private readonly Option<int> _threads = SettingOptions.WholeNumber(
+        "--threads", 1, SettingLimits.MaxThreads, -1, "Most replications run at once (default: all cores); results do not depend on it.");
+
+    protected override string FormatDescription =>
+        "Output: table (for people), json (the contract's document) or csv (one row per unit; with --compare, one row per unit and metric).";
+
+    protected override bool ForSimulation => true;
+
+    protected override IEnumerable<Symbol> Symbols => [_seed, _replications, _warmup, _duration, _waitOver, _compare, _threads];
+
+    protected override int Execute(NetworkRequest request)
     {
-        var input = new NetworkInput();
-        var format = CommonOptions.Format();
-        format.Description = "Output: table (for people), json (the contract's document) or csv (one row per unit; with --compare, one row per unit and metric).";
-        var strain = CommonOptions.Strain();
-        var seed = SimulationCliOptions.Seed();
-        var replications = SimulationCliOptions.Replications(SimulationOptions.DefaultReplications);
-        var warmup = SimulationCliOptions.Duration("--warmup", "Simulated time discarded at the start of each replication (e.g. 28d; a bare number is in the file's time unit).", "28d", allowZero: true);
-        var duration = SimulationCliOptions.Duration("--duration", "Simulated time measured in each replication after the warm-up (e.g. 364d).", "364d", allowZero: false);
-        var waitOver = new Option<string[]>("--wait-over")
+        var network = request.Network;
+        var options = SimulationCliOptions.Read(
+            request.Parse, network.TimeUnit, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, SimulationCliOptions.Duration), _waitOver)
+            with { MaxDegreeOfParallelism = request.GetValue(_threads) };
+        var result = SimulationRun.Run(network, options, request.Context);
+        if (result.ReplicationsFinished == 0)
         {
-            Description = "Report P(wait > t) per unit for each time t (e.g. --wait-over 1h 4h).",
-            AllowMultipleArgumentsPerToken = true,
-        };
-        waitOver.Validators.Add(result =>
-        {
-            foreach (string text in result.GetValueOrDefault<string[]>() ?? [])
-            {
-                if (SimulationCliOptions.ParseDuration(text, TimeUnit.Hour, allowZero: true) is null)
-                {
-                    result.AddError($"--wait-over: '{text}' is not a duration (write e.g. 30min, 4h, 1d)");
-                }
-            }
-        });
-        var compare = new Option<bool>("--compare") { Description = "Set the formula (Jackson network) results beside the simulation, with a verdict per metric." };
-        var threads = new Option<int>("--threads") { Description = "Most replications run at once (default: all cores); results do not depend on it.", DefaultValueFactory = _ => -1 };
-        threads.Validators.Add(result =>
-        {
-            int value = result.GetValueOrDefault<int>();
-            if (value is 0 or < -1)
-            {
-                result.AddError("--threads must be at least 1");
-            }
-        });
+            request.Context.Report(Messages.StoppedBeforeAnyReplication);
+            return ExitCodes.InvalidInput;
+        }
 
-        var command = new Command("simulate", "Simulate the network: means with 95% confidence intervals, percentiles, waits over given times and queues by hour of day.")
+        if (!result.IsComplete)
         {
-            input.File, input.Set, format, strain, seed, replications, warmup, duration, waitOver, compare, threads,
-        };
-        command.SetAction(parse =>
+            request.Context.Report(Messages.StoppedPartway(result.ReplicationsFinished, options.Replications, "the results below use those"));
+        }
+
+        var formula = request.GetValue(_compare) ? request.Solve() : null;
+        double threshold = request.StrainThreshold;
+        request.Output.Write(
+            json => SimulationJsonWriter.Write(result, json, formula, threshold),
+            csv => WriteCsv(result, formula, csv),
+            table => WriteTable(result, formula, threshold, table));
+        return ExitCodes.Success;
+    }
+
+    private static void WriteCsv(SimulationResult result, NetworkSolution? formula, TextWriter writer)
+    {
+        // A CSV file holds one table, so the comparison takes the place of the per-unit table rather than following
+        // it; its rows repeat the simulated means and half-widths they are judged on.
+        if (formula is null)
         {
-            var network = input.Load(parse, context, forSimulation: true);
-            var timeUnit = network.TimeUnit;
-            var options = new SimulationOptions
-            {
-                Seed = parse.GetValue(seed),
-                Replications = parse.GetValue(replications),
-                WarmupHours = SimulationCliOptions.ParseDuration(parse.GetValue(warmup)!, timeUnit, allowZero: true)!.Value,
-                DurationHours = SimulationCliOptions.ParseDuration(parse.GetValue(duration)!, timeUnit, allowZero: false)!.Value,
-                WaitThresholdsHours = [.. (parse.GetValue(waitOver) ?? []).Select(text => SimulationCliOptions.ParseDuration(text, timeUnit, allowZero: true)!.Value)],
-                MaxDegreeOfParallelism = parse.GetValue(threads),
-            };
-            var result = SimulationRun.Run(network, options, context);
-            if (result.ReplicationsFinished == 0)
-            {
-                context.Report("netsolve: stopped before any replication finished; nothing to report");
-                return ExitCodes.InvalidInput;
-            }
+            SimulationCsvWriter.Write(result, writer);
+        }
+        else
+        {
+            ComparisonCsvWriter.Write(result, formula, writer);
+        }
+    }
 
-            if (!result.IsComplete)
-            {
-                context.Report(string.Create(CultureInfo.InvariantCulture,
-                    $"netsolve: stopped: {result.ReplicationsFinished} of {options.Replications} replications finished; the results below use those"));
-            }
-
-            var formula = parse.GetValue(compare) ? NetworkSolver.Solve(network, parse.GetValue(strain)) : null;
-            SimulationOutput.Write(result, formula, parse.GetValue(format)!, parse.GetValue(strain), context);
-            return ExitCodes.Success;
-        });
-        return command;
+    private static void WriteTable(SimulationResult result, NetworkSolution? formula, double threshold, TextWriter writer)
+    {
+        SimulationTableWriter.Write(result, writer, threshold);
+        if (formula is not null)
+        {
+            writer.Write("\n");
+            ComparisonTableWriter.Write(result, formula, writer);
+        }
     }
 }

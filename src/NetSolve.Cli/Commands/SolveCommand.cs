@@ -1,27 +1,18 @@
-using System.CommandLine;
-using NetSolve.Solving;
+using NetSolve.Presentation.Solution;
 
 namespace NetSolve.Cli.Commands;
 
 /// <summary><c>netsolve solve FILE</c>: solves the network as a Jackson network and reports every unit.</summary>
-internal static class SolveCommand
+internal sealed class SolveCommand() : NetworkCommand(
+    "solve", "Solve the network: load, utilisation, waits and headroom of every unit, bottleneck and network totals.")
 {
-    public static Command Create(CliContext context)
+    protected override int Execute(NetworkRequest request)
     {
-        var input = new NetworkInput();
-        var format = CommonOptions.Format();
-        var strain = CommonOptions.Strain();
-        var command = new Command("solve", "Solve the network: load, utilisation, waits and headroom of every unit, bottleneck and network totals.")
-        {
-            input.File, format, strain, input.Set,
-        };
-        command.SetAction(parse =>
-        {
-            var network = input.Load(parse, context);
-            var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
-            SolutionOutput.Write(solution, parse.GetValue(format)!, context);
-            return ExitCodes.Success;
-        });
-        return command;
+        var solution = request.Solve();
+        request.Output.Write(
+            json => SolutionJsonWriter.Write(solution, json),
+            csv => SolutionCsvWriter.Write(solution, csv),
+            table => SolutionTableWriter.Write(solution, table));
+        return ExitCodes.Success;
     }
 }

@@ -1,179 +1,174 @@
 using System.CommandLine;
-using System.Globalization;
+using System.CommandLine.Parsing;
 using NetSolve.Analysis;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
-using NetSolve.Presentation;
 using NetSolve.Presentation.Staffing;
+using NetSolve.Cli.Settings;
 using NetSolve.Parsing;
-using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;
 
 /// <summary><c>netsolve staff FILE</c>: the fewest added servers that meet targets, or where a budget of servers helps most.</summary>
-internal static class StaffCommand
+internal sealed class StaffCommand() : NetworkCommand(
+    "staff", "Staffing: the fewest added servers (optionally weighted by cost) so that every unit meets the targets, "
+    + "or with --budget N where N extra servers cut the mean time in network most.")
 {
-    public static Command Create(CliContext context)
+    /// <summary>Staffing targets: a zero target is a valid question with the answer "impossible", which the search explains per unit.</summary>
+    private static readonly DurationRule Target = new(AllowZero: true, "30min, 4h, 2d");
+
+    private readonly Option<double?> _maxUtil = SettingOptions.OptionalNumber(
+        "--max-util", value => value is >= 0.0 and <= 1.0, text => Messages.NotNumber("--max-util", text, "a utilisation", "from 0 to 1", "write e.g. 0.85"),
+        "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).",
+        "FRACTION");
+
+    private readonly Option<string> _maxWait = SettingOptions.Duration("--max-wait", Target, null, "Target: mean wait before service at most this (e.g. 30min, 4h).", "DURATION");
+
+    private readonly Option<string> _maxTime = SettingOptions.Duration("--max-time", Target, null, "Target: mean time in unit, wait plus service, at most this.", "DURATION");
+
+    private readonly Option<string> _waitOver = SettingOptions.Duration(
+        "--wait-over", Target, null, "Target, with --at-most: the wait whose chance of being exceeded is limited (e.g. 4h).", "DURATION");
+
+    private readonly Option<double?> _atMost = new("--at-most")
     {
-        var input = new NetworkInput();
-        var format = CommonOptions.Format();
-        format.Description = "Output: table (for people), json (one document) or csv (one row per unit).";
-        var strain = CommonOptions.Strain();
-        var maxUtil = new Option<double?>("--max-util") { Description = "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).", HelpName = "FRACTION" };
-        var maxWait = new Option<string>("--max-wait") { Description = "Target: mean wait before service at most this (e.g. 30min, 4h).", HelpName = "DURATION" };
-        var maxTime = new Option<string>("--max-time") { Description = "Target: mean time in unit, wait plus service, at most this.", HelpName = "DURATION" };
-        var waitOver = new Option<string>("--wait-over") { Description = "Target, with --at-most: the wait whose chance of being exceeded is limited (e.g. 4h).", HelpName = "DURATION" };
-        var atMost = new Option<string>("--at-most") { Description = "Target, with --wait-over: largest share of patients waiting longer (e.g. 5%).", HelpName = "PROBABILITY" };
-        var cost = new Option<string[]>("--cost")
-        {
-            Description = "Cost of one server at a unit, repeatable (default 1 each): the targets search reports the cost of what it adds.",
-            HelpName = "UNIT=COST",
-            Arity = ArgumentArity.ZeroOrMore,
-        };
-        var budget = new Option<int?>("--budget") { Description = "Instead of targets: place this many extra servers where they cut the mean time in network most.", HelpName = "N" };
-        maxUtil.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<double?>() is double u && !(u >= 0.0 && u <= 1.0))
-            {
-                result.AddError(string.Create(CultureInfo.InvariantCulture, $"--max-util must be from 0 to 1, not {u}"));
-            }
-        });
-        budget.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int?>() is int n && n < 0)
-            {
-                result.AddError("--budget must be 0 or more servers");
-            }
-        });
-        var command = new Command("staff", "Staffing: the fewest added servers (optionally weighted by cost) so that every unit meets the targets, "
-            + "or with --budget N where N extra servers cut the mean time in network most.")
-        {
-            input.File, format, strain, input.Set, maxUtil, maxWait, maxTime, waitOver, atMost, cost, budget,
-        };
-        command.SetAction(parse =>
-        {
-            var network = input.Load(parse, context);
-            var targets = Targets(network.TimeUnit, parse.GetValue(maxUtil), parse.GetValue(maxWait), parse.GetValue(maxTime), parse.GetValue(waitOver), parse.GetValue(atMost));
-            var costs = Costs(network, parse.GetValue(cost) ?? []);
-            var solution = NetworkSolver.Solve(network, parse.GetValue(strain));
-            string chosen = parse.GetValue(format)!;
-            if (parse.GetValue(budget) is int servers)
-            {
-                if (!targets.IsEmpty || costs.Count > 0)
-                {
-                    throw new InputException("netsolve: staff: --budget answers its own question; give it without targets or --cost");
-                }
+        Description = "Target, with --wait-over: largest share of patients waiting longer (e.g. 5%).",
+        HelpName = "PROBABILITY",
+        CustomParser = result => SettingOptions.Read<double?>(result, text =>
+            ValueParser.Probability(text, out double probability) is string problem ? (Messages.NotProbability("--at-most", problem), null) : (null, probability)),
+    };
 
-                var plan = BudgetAllocation.Allocate(solution, servers);
-                if (plan.Impossible is not null)
-                {
-                    throw new InputException("netsolve: staff: " + plan.Impossible);
-                }
+    private readonly Option<string[]> _cost = new("--cost")
+    {
+        Description = "Cost of one server at a unit, repeatable (default 1 each): the targets search reports the cost of what it adds.",
+        HelpName = "UNIT=COST",
+        Arity = ArgumentArity.ZeroOrMore,
+        CustomParser = ReadCosts,
+    };
 
-                Write(chosen, context, json => BudgetOutput.WriteJson(plan, json), text => BudgetOutput.WriteCsv(plan, text), text => BudgetOutput.WriteTable(plan, text));
-                return ExitCodes.Success;
+    private readonly Option<int?> _budget = SettingOptions.OptionalWholeNumber(
+        "--budget", 0, SettingLimits.MaxBudget, "Instead of targets: place this many extra servers where they cut the mean time in network most.", "N");
+
+    protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
+
+    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _cost, _budget];
+
+    protected override IEnumerable<string> CheckSettings(CommandResult settings)
+    {
+        bool tail = settings.IsGiven(_waitOver), atMost = settings.IsGiven(_atMost);
+        if (tail != atMost)
+        {
+            yield return Messages.StaffWaitTailPair;
+        }
+
+        bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost;
+        if (settings.IsGiven(_budget))
+        {
+            if (targets || settings.IsGiven(_cost))
+            {
+                yield return Messages.StaffBudgetAlone;
+            }
+        }
+        else if (!targets)
+        {
+            yield return Messages.StaffNeedsTarget;
+        }
+    }
+
+    protected override int Execute(NetworkRequest request)
+    {
+        var network = request.Network;
+        if (request.GetValue(_budget) is int servers)
+        {
+            var plan = BudgetAllocation.Allocate(request.Solve(), servers);
+            if (plan.Impossible is not null)
+            {
+                throw new InputException(Messages.BudgetImpossible(plan.Impossible));
             }
 
-            if (targets.IsEmpty)
-            {
-                throw new InputException("netsolve: staff: give a target (--max-util, --max-wait, --max-time, or --wait-over with --at-most) or --budget N");
-            }
-
-            var staffing = StaffingSearch.MeetTargets(solution, targets, costs);
-            if (!staffing.IsFeasible)
-            {
-                throw new InputException(string.Join("\n", staffing.Units.Where(unit => unit.Impossible is not null)
-                    .Select(unit => $"netsolve: staff: unit '{unit.UnitId}' cannot meet the targets: {unit.Impossible}")));
-            }
-
-            Write(chosen, context, json => StaffingOutput.WriteJson(staffing, json), text => StaffingOutput.WriteCsv(staffing, text), text => StaffingOutput.WriteTable(staffing, text));
+            request.Output.Write(json => BudgetOutput.WriteJson(plan, json), csv => BudgetOutput.WriteCsv(plan, csv), table => BudgetOutput.WriteTable(plan, table));
             return ExitCodes.Success;
-        });
-        return command;
-    }
-
-    private static StaffingTargets Targets(TimeUnit timeUnit, double? maxUtil, string? maxWait, string? maxTime, string? waitOver, string? atMost)
-    {
-        if ((waitOver is null) != (atMost is null))
-        {
-            throw new InputException("netsolve: staff: --wait-over and --at-most go together (e.g. --wait-over 4h --at-most 5%)");
         }
 
-        WaitTailTarget? tail = null;
-        if (waitOver is not null)
+        var targets = Targets(request, network.TimeUnit);
+        var costs = Costs(network, request.GetValue(_cost) ?? []);
+        var staffing = StaffingSearch.MeetTargets(request.Solve(), targets, costs);
+        if (!staffing.IsFeasible)
         {
-            double over = Duration("--wait-over", waitOver, timeUnit, allowZero: true);
-            if (ValueParser.Probability(atMost!, out double probability) is string error)
+            throw new InputException(string.Join("\n", staffing.Units.Where(unit => unit.Impossible is not null)
+                .Select(unit => Messages.TargetImpossible(unit.UnitId, unit.Impossible!))));
+        }
+
+        request.Output.Write(json => StaffingOutput.WriteJson(staffing, json), csv => StaffingOutput.WriteCsv(staffing, csv), table => StaffingOutput.WriteTable(staffing, table));
+        return ExitCodes.Success;
+    }
+
+    private StaffingTargets Targets(NetworkRequest request, TimeUnit timeUnit)
+    {
+        var problems = new List<string>();
+        double? Hours(Option<string> option)
+        {
+            if (request.GetValue(option) is not string text)
             {
-                throw new InputException($"netsolve: staff: --at-most: {error}");
+                return null;
             }
 
-            tail = new WaitTailTarget(over, probability);
+            if (OptionValues.Duration(option.Name, text, Target, timeUnit, out double hours) is string problem)
+            {
+                problems.Add(problem);
+            }
+
+            return hours;
         }
 
-        return new StaffingTargets(
-            maxUtil,
-            maxWait is null ? null : Duration("--max-wait", maxWait, timeUnit, allowZero: true),
-            maxTime is null ? null : Duration("--max-time", maxTime, timeUnit, allowZero: true),
-            tail);
+        double? maxWait = Hours(_maxWait), maxTime = Hours(_maxTime), over = Hours(_waitOver);
+        if (problems.Count > 0)
+        {
+            throw new UsageException(problems);
+        }
+
+        var tail = over is double t && request.GetValue(_atMost) is double probability ? new WaitTailTarget(t, probability) : null;
+        return new StaffingTargets(request.GetValue(_maxUtil), maxWait, maxTime, tail);
     }
 
-    private static double Duration(string option, string text, TimeUnit timeUnit, bool allowZero)
+    private static string[] ReadCosts(ArgumentResult result)
     {
-        // A zero target is a valid question with the answer "impossible", which the search explains per unit.
-        if (allowZero && ValueParser.Number(text.TrimEnd('s', 'm', 'i', 'n', 'h', 'd', ' '), out double number) is null && number == 0.0)
+        foreach (var token in result.Tokens)
         {
-            return 0.0;
+            if (ParseCost(token.Value) is null)
+            {
+                result.AddError(Messages.NotCost(token.Value, SettingLimits.MaxCost));
+            }
         }
 
-        return ValueParser.Duration(text, timeUnit, out double hours) is string error
-            ? throw new InputException($"netsolve: staff: {option}: {error}")
-            : hours;
+        return [.. result.Tokens.Select(token => token.Value)];
+    }
+
+    private static (string Unit, double Cost)? ParseCost(string text)
+    {
+        int equals = text.IndexOf('=', StringComparison.Ordinal);
+        return equals > 0 && OptionValues.Number(text[(equals + 1)..], value => value is > 0.0 and <= SettingLimits.MaxCost, out double cost)
+            ? (text[..equals], cost)
+            : null;
     }
 
     private static Dictionary<string, double> Costs(Network network, string[] texts)
     {
         var costs = new Dictionary<string, double>(StringComparer.Ordinal);
         var ids = network.Units.Select(unit => unit.Id).ToList();
+        var problems = new List<string>();
         foreach (string text in texts)
         {
-            int equals = text.IndexOf('=', StringComparison.Ordinal);
-            string id = equals > 0 ? text[..equals] : string.Empty;
-            if (equals <= 0 || ValueParser.Number(text[(equals + 1)..], out double value) is not null || !(value > 0.0))
+            var (id, cost) = ParseCost(text)!.Value;
+            if (ids.Contains(id, StringComparer.Ordinal))
             {
-                throw new InputException($"netsolve: --cost {text}: expected UNIT=COST with a cost above 0, e.g. --cost ward=2.5");
+                costs[id] = cost;
             }
-
-            if (!ids.Contains(id))
+            else
             {
-                throw new InputException($"netsolve: --cost {text}: unknown unit '{id}'{NearestName.Hint(id, ids)}");
+                problems.Add(Messages.UnknownUnit("--cost", text, id, NearestName.Hint(id, ids)));
             }
-
-            costs[id] = value;
         }
 
-        return costs;
-    }
-
-    private static void Write(string format, CliContext context, Action<Stream> json, Action<TextWriter> csv, Action<TextWriter> table)
-    {
-        switch (format)
-        {
-            case "json":
-                using (var buffer = new MemoryStream())
-                {
-                    json(buffer);
-                    context.Out.Write(System.Text.Encoding.UTF8.GetString(buffer.ToArray()) + "\n");
-                }
-
-                break;
-            case "csv":
-                csv(context.Out);
-                break;
-            default:
-                table(context.Out);
-                context.Out.Write("\n" + Caution.Text + "\n");
-                break;
-        }
+        return problems.Count == 0 ? costs : throw new InputException(string.Join("\n", problems));
     }
 }

@@ -146,11 +146,11 @@ public sealed class AnalysisCommandTests
     }
 
     [Fact]
-    public void Compare_without_scenarios_or_overrides_is_an_input_error()
+    public void Compare_without_scenarios_or_overrides_is_a_usage_error()
     {
         var (code, _, error) = Run("compare", Network("harbourside"));
-        Assert.Equal(1, code);
-        Assert.Equal("netsolve: compare: give at least one SCENARIO file, or --set changes, to compare with the base\n", error[error.IndexOf("netsolve:", StringComparison.Ordinal)..]);
+        Assert.Equal(2, code);
+        Assert.Equal("netsolve: compare: give at least one SCENARIO file, or --set changes, to compare with the base\nRun 'netsolve --help' for usage.\n", error);
     }
 
     [Fact]

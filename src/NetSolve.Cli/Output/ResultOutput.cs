@@ -1,0 +1,55 @@
+using System.Text;
+using NetSolve.Presentation;
+
+namespace NetSolve.Cli.Output;
+
+/// <summary>
+/// Writes a command's one result to stdout in the format asked for, whole or not at all: everything is rendered
+/// first, so a failure never leaves half a document. A table that carries advice ends with the planning caution.
+/// </summary>
+/// <param name="output">Stdout.</param>
+/// <param name="format">The format asked for.</param>
+/// <param name="withCaution">True when the table ends with <see cref="Caution.Text"/>; JSON and CSV never carry it.</param>
+internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool withCaution)
+{
+    /// <summary>The format asked for.</summary>
+    public OutputFormat Format => format;
+
+    /// <summary>Renders the result with the writer for <see cref="Format"/>, then writes it.</summary>
+    /// <param name="json">Writes the JSON document (UTF-8); a line break follows it.</param>
+    /// <param name="csv">Writes the CSV rows.</param>
+    /// <param name="table">Writes the table for people.</param>
+    public void Write(Action<Stream> json, Action<TextWriter> csv, Action<TextWriter> table)
+    {
+        ArgumentNullException.ThrowIfNull(json);
+        ArgumentNullException.ThrowIfNull(csv);
+        ArgumentNullException.ThrowIfNull(table);
+        output.Write(Render(json, csv, table));
+    }
+
+    private string Render(Action<Stream> json, Action<TextWriter> csv, Action<TextWriter> table)
+    {
+        if (format == OutputFormat.Json)
+        {
+            using var buffer = new MemoryStream();
+            json(buffer);
+            return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+        }
+
+        using var writer = new StringWriter(System.Globalization.CultureInfo.InvariantCulture) { NewLine = output.NewLine };
+        if (format == OutputFormat.Csv)
+        {
+            csv(writer);
+        }
+        else
+        {
+            table(writer);
+            if (withCaution)
+            {
+                writer.Write("\n" + Caution.Text + "\n");
+            }
+        }
+
+        return writer.ToString();
+    }
+}

@@ -1,0 +1,29 @@
+namespace NetSolve.Cli.Settings;
+
+/// <summary>
+/// The largest values the options take. Each is far beyond any planning question, and each keeps a typing slip
+/// (an extra zero, <c>1e308</c>) a usage error rather than a run that never ends or runs out of memory.
+/// </summary>
+internal static class SettingLimits
+{
+    /// <summary>Most rows in a growth table.</summary>
+    public const int MaxSteps = 10_000;
+
+    /// <summary>Most servers <c>staff --budget</c> places: as many as one unit may have (docs/network-file.md).</summary>
+    public const int MaxBudget = 1_000_000;
+
+    /// <summary>Most replications: the half-width shrinks with their square root, so 10,000 is already 30 times finer than 10.</summary>
+    public const int MaxReplications = 10_000;
+
+    /// <summary>Most replications run at once.</summary>
+    public const int MaxThreads = 1_024;
+
+    /// <summary>Largest growth factor: a thousand times today's arrivals.</summary>
+    public const double MaxGrowthFactor = 1_000.0;
+
+    /// <summary>Largest cost of one server in <c>staff --cost</c>.</summary>
+    public const double MaxCost = 1e9;
+
+    /// <summary>Longest warm-up or measured time of one replication: ten years; longer runs are better spent as more replications.</summary>
+    public const double MaxSimulatedDays = 3_650.0;
+}
