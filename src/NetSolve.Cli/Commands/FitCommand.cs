@@ -1,10 +1,10 @@
 using System.CommandLine;
-using System.Globalization;
 using System.Text;
 using NetSolve.Cli.Settings;
 using NetSolve.Fitting;
 using NetSolve.Model;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Fitting;
 using NetSolve.Parsing;
 
 namespace NetSolve.Cli.Commands;
@@ -75,18 +75,5 @@ internal static class FitCommand
         return [.. visits];
     }
 
-    private static void WriteSummary(FittedNetwork fitted, TextWriter output)
-    {
-        var unit = fitted.Network.TimeUnit;
-        string suffix = TimeConstants.Suffix(unit);
-        var table = new TextTable("unit", ">stays", $">entries/{suffix}", $">service ({suffix})", ">service cv", $">observed wait ({suffix})", ">peak in service");
-        foreach (var u in fitted.Units)
-        {
-            table.Add(u.Id, u.Stays.ToString(CultureInfo.InvariantCulture), Numbers.Compact(TimeConstants.RateFromPerHour(u.EntriesPerHour, unit)),
-                Numbers.Compact(TimeConstants.FromHours(u.MeanServiceHours, unit)), Numbers.Fixed(u.ServiceCv, 2),
-                Numbers.Compact(TimeConstants.FromHours(u.MeanWaitHours, unit)), u.PeakInService.ToString(CultureInfo.InvariantCulture));
-        }
-
-        table.Write(output);
-    }
+    private static void WriteSummary(FittedNetwork fitted, TextWriter output) => FittedUnitColumns.WriteTable(fitted, output);
 }

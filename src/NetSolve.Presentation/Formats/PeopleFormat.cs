@@ -12,7 +12,7 @@ namespace NetSolve.Presentation.Formats;
 /// Rules, in docs/map-and-report.md: a time under an hour is shown in minutes, under two days in hours, else in days;
 /// a value too small to plan with is shown as <c>&lt; 0.001 min</c> or <c>&lt; 0.0001</c>; values from 1,000 up are
 /// grouped by thousands; probabilities have three decimals, shares are percentages with one decimal, factors
-/// (headroom, growth) three decimals. Thread-safe.
+/// (headroom, growth) three decimals; a count that is a whole number (stays, a peak) is shown whole. Thread-safe.
 /// </remarks>
 public static class PeopleFormat
 {
@@ -62,6 +62,7 @@ public static class PeopleFormat
             MetricDimension.Fraction => Percent(value),
             MetricDimension.Factor => Factor(value),
             MetricDimension.Servers => value.ToString("#,0", Invariant),
+            MetricDimension.Count when value == Math.Floor(value) && Math.Abs(value) < LargestNumber => value.ToString("#,0", Invariant),
             _ => Number(value),
         };
     }
