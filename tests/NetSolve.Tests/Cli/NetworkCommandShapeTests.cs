@@ -1,4 +1,4 @@
-using NetSolve.Cli;
+using static NetSolve.Tests.Support.CliRun;
 using NetSolve.Presentation;
 
 namespace NetSolve.Tests.Cli;
@@ -55,11 +55,4 @@ public sealed class NetworkCommandShapeTests
         }
     }
 
-    private static (int Code, string Out, string Error) Run(params string[] args)
-    {
-        using var output = new StringWriter();
-        using var error = new StringWriter();
-        int code = NetSolveApp.Run(args, new CliContext(output, error));
-        return (code, output.ToString(), error.ToString());
-    }
 }

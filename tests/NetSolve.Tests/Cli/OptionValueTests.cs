@@ -1,5 +1,5 @@
+using static NetSolve.Tests.Support.CliRun;
 using System.Globalization;
-using NetSolve.Cli;
 
 namespace NetSolve.Tests.Cli;
 
@@ -195,11 +195,4 @@ public sealed class OptionValueTests
 
     private static string[] Lines(string text) => text.Split('\n', StringSplitOptions.RemoveEmptyEntries);
 
-    private static (int Code, string Out, string Error) Run(params string[] args)
-    {
-        using var output = new StringWriter();
-        using var error = new StringWriter();
-        int code = NetSolveApp.Run(args, new CliContext(output, error));
-        return (code, output.ToString(), error.ToString());
-    }
 }

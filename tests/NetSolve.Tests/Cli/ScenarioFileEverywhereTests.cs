@@ -1,5 +1,5 @@
+using static NetSolve.Tests.Support.CliRun;
 using System.Text.Json;
-using NetSolve.Cli;
 
 namespace NetSolve.Tests.Cli;
 
@@ -36,8 +36,8 @@ public sealed class ScenarioFileEverywhereTests
         var scenario = Run("solve", WinterBeds, "--format", "json");
         var changed = Run(["solve", Harbourside, "--format", "json", .. SameChanges]);
 
-        Assert.Equal(0, scenario.Code);
-        Assert.Equal(0, changed.Code);
+        Assert.Equal(0, scenario.ExitCode);
+        Assert.Equal(0, changed.ExitCode);
         using var fromScenario = JsonDocument.Parse(scenario.Out);
         using var fromSet = JsonDocument.Parse(changed.Out);
         Assert.Equal(Numbers(fromSet), Numbers(fromScenario));
@@ -117,11 +117,4 @@ public sealed class ScenarioFileEverywhereTests
     private static List<string> Numbers(JsonDocument document) =>
         [.. document.RootElement.GetProperty("units").EnumerateArray().Select(unit => unit.ToString()), document.RootElement.GetProperty("totals").ToString()];
 
-    private static (int Code, string Out, string Error) Run(params string[] args)
-    {
-        using var output = new StringWriter();
-        using var error = new StringWriter();
-        int code = NetSolveApp.Run(args, new CliContext(output, error));
-        return (code, output.ToString(), error.ToString());
-    }
 }
