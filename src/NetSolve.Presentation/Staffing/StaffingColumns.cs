@@ -94,16 +94,6 @@ public static class StaffingColumns
         _ => Cell.Of(null, MetricDimension.Plain),
     };
 
-    private static double? LongWait(StaffingRow row)
-    {
-        var result = row.After;
-        if (row.Targets.WaitTail is not WaitTailTarget tail || result is null || !result.IsStable)
-        {
-            return null;
-        }
-
-        return result.Unit.Servers.IsUnlimited || !(result.ArrivalsPerHour > 0.0)
-            ? 0.0
-            : ErlangFormulas.WaitLongerThan(result.Unit.Servers.Count, result.OfferedLoad, result.Unit.MeanServiceHours, tail.WaitHours);
-    }
+    private static double? LongWait(StaffingRow row) =>
+        row.Targets.WaitTail is WaitTailTarget tail && row.After is { } result ? tail.ShareWaitingLonger(result) : null;
 }
