@@ -38,6 +38,7 @@ public static class NetworkSolver
         }
 
         double inSystem = units.Sum(unit => unit.MeanInUnit ?? 0.0);
-        return new NetworkTotals(external, external, inSystem, inSystem / external);
+        // With no arrivals (growth from a factor of 0) no patient passes through, so there is no mean time to report.
+        return new NetworkTotals(external, external, inSystem, external > 0.0 ? inSystem / external : null);
     }
 }
