@@ -167,8 +167,10 @@ public static class GrowthAnalysis
                 continue;
             }
 
-            double saturation = (capacityPerHour - fixedFlows[i]) / grownFlows[i];
-            double strain = ((strainThreshold * capacityPerHour) - fixedFlows[i]) / grownFlows[i];
+            // Other streams alone may already strain or saturate the unit: then it does so from a factor of 0 (a
+            // negative factor would mean removing more than the stream brings).
+            double saturation = Math.Max(0.0, (capacityPerHour - fixedFlows[i]) / grownFlows[i]);
+            double strain = Math.Max(0.0, ((strainThreshold * capacityPerHour) - fixedFlows[i]) / grownFlows[i]);
             points.Add((new SaturationPoint(unit.Id, (fixedFlows[i] + grownFlows[i]) / capacityPerHour, strain, saturation), i));
         }
 

@@ -23,4 +23,20 @@ public sealed class GrowthFromZeroTests
         Assert.Equal(0.0, first.GetProperty("external_arrival_rate").GetDouble());
         Assert.All(first.GetProperty("units").EnumerateArray(), unit => Assert.Equal(0.0, unit.GetProperty("utilisation").GetDouble()));
     }
+
+    // Exact by hand (networks/fenwick-winter-surge.yaml): the medical ward is unstable from the other streams alone,
+    // so growing the assessment stream saturates it from a factor of 0, never from a negative one
+    // (SaturationPoint: "0 for a unit unstable at every factor").
+    [Fact]
+    public void A_unit_saturated_by_the_other_streams_saturates_from_a_factor_of_0_not_below()
+    {
+        var (code, output, _) = Run("growth", Network("fenwick-winter-surge"), "--stream", "assessment", "--format", "json");
+
+        Assert.Equal(0, code);
+        var points = JsonDocument.Parse(output).RootElement.GetProperty("saturation_order").EnumerateArray().ToList();
+        Assert.NotEmpty(points);
+        Assert.All(points, point => Assert.True(point.GetProperty("saturation_factor").GetDouble() >= 0.0));
+        Assert.All(points, point => Assert.True(point.GetProperty("strain_factor").GetDouble() >= 0.0));
+        Assert.Equal(0.0, points.Single(point => point.GetProperty("unit").GetString() == "medical_ward").GetProperty("saturation_factor").GetDouble());
+    }
 }
