@@ -33,6 +33,7 @@ public static class UnitMetrics
                 MeanTimeInUnitHours = unit.MeanServiceHours,
                 Headroom = null,
                 Status = UnitStatus.Ok,
+                Method = unlimited ? MethodNames.InfiniteServers : MethodNames.ErlangC,
             };
         }
 

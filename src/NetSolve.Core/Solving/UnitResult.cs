@@ -39,6 +39,24 @@ public sealed record UnitResult
     /// <summary>c / a: how far all external arrivals can grow before this unit saturates; null if unlimited or unreached.</summary>
     public required double? Headroom { get; init; }
 
+    /// <summary>The method the metrics come from (<see cref="MethodNames"/>); docs/methods.md says when each applies.</summary>
+    public string Method { get; init; } = MethodNames.ErlangC;
+
+    /// <summary>Squared coefficient of variation of the arrivals the unit sees (1 for Poisson).</summary>
+    public double ArrivalScv { get; init; } = 1.0;
+
+    /// <summary>Squared coefficient of variation of the service time the formulas used (1 for exponential).</summary>
+    public double ServiceScv { get; init; } = 1.0;
+
+    /// <summary>The chance an arriving patient finds the unit at its capacity; 0 for a unit without a capacity.</summary>
+    public double PFull { get; init; }
+
+    /// <summary>Patients turned away per hour because the unit is full (they leave the network).</summary>
+    public double TurnedAwayPerHour { get; init; }
+
+    /// <summary>Patients diverted per hour to another unit because this one is full.</summary>
+    public double DivertedPerHour { get; init; }
+
     /// <summary>Status under the contract's rules.</summary>
     public required UnitStatus Status { get; init; }
 

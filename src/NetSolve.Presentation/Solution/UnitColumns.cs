@@ -53,17 +53,40 @@ public static class UnitColumns
     /// <summary>The contract's status word.</summary>
     public static readonly Column<UnitResult> Status = new("status", "status", MetricDimension.Plain, result => StatusWords.Cell(result.Status));
 
+    /// <summary>The method the unit's metrics come from.</summary>
+    public static readonly Column<UnitResult> Method = Columns.Words<UnitResult>("method", "method", result => result.Method);
+
+    /// <summary>Squared coefficient of variation of the arrivals.</summary>
+    public static readonly Column<UnitResult> ArrivalScv = Columns.Number<UnitResult>("arrival_scv", "arrival scv", MetricDimension.Plain, result => result.ArrivalScv, Audience.Machines);
+
+    /// <summary>Squared coefficient of variation of the service time.</summary>
+    public static readonly Column<UnitResult> ServiceScv = Columns.Number<UnitResult>("service_scv", "service scv", MetricDimension.Plain, result => result.ServiceScv, Audience.Machines);
+
+    /// <summary>The chance an arriving patient finds the unit full.</summary>
+    public static readonly Column<UnitResult> PFull = Columns.Number<UnitResult>("p_full", "P(full)", MetricDimension.Probability, result => result.PFull);
+
+    /// <summary>Patients turned away because the unit is full.</summary>
+    public static readonly Column<UnitResult> TurnedAwayRate = Columns.Number<UnitResult>("turned_away_rate", "turned away", MetricDimension.Rate, result => result.TurnedAwayPerHour);
+
+    /// <summary>Patients diverted to another unit because this one is full.</summary>
+    public static readonly Column<UnitResult> DivertedRate = Columns.Number<UnitResult>("diverted_rate", "diverted", MetricDimension.Rate, result => result.DivertedPerHour);
+
     /// <summary>Every column, in the contract's order.</summary>
     public static readonly ImmutableArray<Column<UnitResult>> All =
     [
         Id, Label, Servers, ArrivalRate, Visits, OfferedLoad, Utilisation, WaitProbability, MeanQueue, MeanWait,
-        MeanInUnit, MeanTimeInUnit, Headroom, Status,
+        MeanInUnit, MeanTimeInUnit, Headroom, Status, Method, ArrivalScv, ServiceScv, PFull, TurnedAwayRate, DivertedRate,
     ];
+
+    /// <summary>The columns about full units: shown to people only when some unit has a capacity.</summary>
+    private static readonly ImmutableArray<Column<UnitResult>> CapacityColumns = [PFull, TurnedAwayRate, DivertedRate];
 
     /// <summary>The unit table of <paramref name="solution"/>.</summary>
     public static ResultTable Table(NetworkSolution solution)
     {
         ArgumentNullException.ThrowIfNull(solution);
-        return ResultTable.Build(All, solution.Units, solution.Network.TimeUnit);
+        bool anyCapacity = solution.Network.Units.Any(unit => unit.Capacity is not null);
+        var columns = anyCapacity ? All : All.Select(column => CapacityColumns.Contains(column) ? column with { Audience = Audience.Machines } : column);
+        return ResultTable.Build(columns, solution.Units, solution.Network.TimeUnit);
     }
 }
