@@ -15,6 +15,7 @@ public static class SolutionTableWriter
         output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)})\n\n");
         PeopleTableWriter.Write(UnitColumns.Table(solution), output);
         output.Write("\n" + Totals(solution) + "\n");
+        output.Write(Methods(solution) + "\n");
         output.Write(Finding(solution) + "\n");
     }
 
@@ -31,6 +32,19 @@ public static class SolutionTableWriter
         return solution.IsStable && totals is { MeanInSystem: double inSystem, MeanTimeInSystemHours: double hours }
             ? $"{arrivals}   patients in network {PeopleFormat.Number(inSystem)}   mean time in network {PeopleFormat.Time(hours)}"
             : arrivals + "   network totals: none, the network is unstable";
+    }
+
+    /// <summary>One line naming the method behind each unit's numbers: units listed by name, or counted when many.</summary>
+    public static string Methods(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        const int NamedAtMost = 3;
+        var parts = solution.Units.GroupBy(unit => unit.Method, StringComparer.Ordinal).Select(group =>
+        {
+            var ids = group.Select(unit => unit.Unit.Id).ToList();
+            return group.Key + ": " + (ids.Count <= NamedAtMost ? string.Join(", ", ids) : $"{ids.Count} units");
+        });
+        return "methods: " + string.Join("; ", parts);
     }
 
     /// <summary>One sentence: which units are unstable, or which saturates first and at what growth.</summary>

@@ -53,8 +53,8 @@ public static class UnitColumns
     /// <summary>The contract's status word.</summary>
     public static readonly Column<UnitResult> Status = new("status", "status", MetricDimension.Plain, result => StatusWords.Cell(result.Status));
 
-    /// <summary>The method the unit's metrics come from.</summary>
-    public static readonly Column<UnitResult> Method = Columns.Words<UnitResult>("method", "method", result => result.Method);
+    /// <summary>The method the unit's metrics come from; people read it in the line under the table (SolutionTableWriter.Methods).</summary>
+    public static readonly Column<UnitResult> Method = Columns.Words<UnitResult>("method", "method", result => result.Method, Audience.Machines);
 
     /// <summary>Squared coefficient of variation of the arrivals.</summary>
     public static readonly Column<UnitResult> ArrivalScv = Columns.Number<UnitResult>("arrival_scv", "arrival scv", MetricDimension.Plain, result => result.ArrivalScv, Audience.Machines);
