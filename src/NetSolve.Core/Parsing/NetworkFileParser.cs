@@ -9,7 +9,7 @@ namespace NetSolve.Parsing;
 /// <summary>Turns the located YAML of a network file into a <see cref="Network"/>, collecting every problem.</summary>
 internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics) : NodeParser(diagnostics)
 {
-    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups"];
+    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups", ArrivalCvKey];
     private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full"];
     private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
 
@@ -43,6 +43,11 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         var units = unitsNode is null ? [] : ParseUnits(unitsNode, timeUnit);
         var known = units.Select(unit => unit.Id).ToHashSet(StringComparer.Ordinal);
         var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
+        if (fields.TryGetValue(ArrivalCvKey, out var arrivalCvNode))
+        {
+            arrivals = ParseArrivalCv(arrivalCvNode, arrivals, arrivalsNode, known);
+        }
+
         var routes = fields.TryGetValue("routes", out var routesNode) ? ParseRoutes(routesNode, known) : [];
         CheckDiversions(known);
         var profile = fields.TryGetValue("arrival_profile", out var profileNode) ? ParseProfile(profileNode, null) : null;
