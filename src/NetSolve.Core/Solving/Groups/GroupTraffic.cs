@@ -47,7 +47,7 @@ public static class GroupTraffic
         groups.Add(Flow(DefaultGroupId, DefaultGroupLabel, null, network.ExternalArrivalsPerHour, defaultFlows, ownMean, ownScv));
         foreach (var group in network.Groups)
         {
-            CheckUnits(group, index);
+            CheckUnits(network, group, index);
             var routing = RoutingTable.Build(network with { Arrivals = group.Arrivals, Routes = group.Routes ?? network.Routes });
             var mean = (double[])ownMean.Clone();
             var scv = (double[])ownScv.Clone();
@@ -133,7 +133,7 @@ public static class GroupTraffic
         return new UnitTraffic(total, mean, variance / Squared(mean));
     }
 
-    private static void CheckUnits(PatientGroup group, IReadOnlyDictionary<string, int> index)
+    private static void CheckUnits(Network network, PatientGroup group, IReadOnlyDictionary<string, int> index)
     {
         var named = group.Arrivals.Select(arrival => arrival.UnitId)
             .Concat((group.Routes ?? []).SelectMany(route => new[] { route.From, route.To }))
@@ -142,7 +142,7 @@ public static class GroupTraffic
         {
             if (!index.ContainsKey(unitId))
             {
-                throw new ArgumentException($"Group '{group.Id}' names unit '{unitId}', which the network does not have.", "network");
+                throw new ArgumentException($"Group '{group.Id}' names unit '{unitId}', which the network does not have.", nameof(network));
             }
         }
     }
