@@ -47,6 +47,21 @@ public class GroupFlowTests
         Assert.Equal(54.9, traffic.Groups[1].MeanTimeInNetworkHours(waits)!.Value, Tolerance);
     }
 
+    // Exact by hand: Σ_g Λ_g T_g = Σ_i λ_i (W_i + E[S_i]) because E[S_i] weights each group's mean by its flow;
+    // here 97.6 + 54.9 = 4·1.1 + 4·(0.2 + 0.375) + 3.8·(3 + 672/19) = 4.4 + 2.3 + 145.8 = 152.5.
+    [Fact]
+    public void The_groups_together_hold_the_networks_total()
+    {
+        var traffic = GroupTraffic.Solve(TestNetworks.Parse(GroupTrafficTests.TwoGroups));
+        double?[] waits = [.. Waits.Select(wait => (double?)wait)];
+
+        double byGroup = traffic.Groups.Sum(group => group.MeanInNetwork(waits)!.Value);
+        double byUnit = traffic.Units.Select((unit, i) => unit.ArrivalsPerHour * (Waits[i] + unit.MeanServiceHours)).Sum();
+
+        Assert.Equal(152.5, byGroup, 1e-11);
+        Assert.Equal(152.5, byUnit, 1e-11);
+    }
+
     // Common practice: library misuse throws from the guard clause (house style): one wait per unit, finite, not negative.
     [Fact]
     public void Waits_of_the_wrong_length_or_not_finite_are_refused()

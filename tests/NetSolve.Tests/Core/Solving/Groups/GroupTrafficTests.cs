@@ -250,5 +250,35 @@ public class GroupTrafficTests
         }
     }
 
+    // Exact by hand: deterministic services of 0.5 h and 1.5 h in equal shares (1/h each) mix to E[S] = 1 h and
+    // Var[S] = ½·0.25 + ½·0.25 = 0.25 h², so cs² = 0.25 although each group alone has cs² = 0 (docs/methods.md).
+    [Fact]
+    public void Two_deterministic_services_with_different_means_mix_to_a_variable_one()
+    {
+        const string Yaml = """
+            units:
+              clinic:
+                servers: 3
+                service: 30min
+                service_distribution: deterministic
+            arrivals:
+              clinic: 1/h
+            groups:
+              long_visits:
+                arrivals:
+                  clinic: 1/h
+                services:
+                  clinic:
+                    service: 90min
+                    service_distribution: deterministic
+            """;
+
+        var unit = Assert.Single(GroupTraffic.Solve(TestNetworks.Parse(Yaml)).Units);
+
+        Assert.Equal(2.0, unit.ArrivalsPerHour, Tolerance);
+        Assert.Equal(1.0, unit.MeanServiceHours, Tolerance);
+        Assert.Equal(0.25, unit.ServiceScv, Tolerance);
+    }
+
     private static bool Close(double expected, double actual) => Math.Abs(expected - actual) <= Tolerance * Math.Max(1.0, Math.Abs(expected));
 }
