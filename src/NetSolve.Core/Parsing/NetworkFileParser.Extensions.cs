@@ -194,6 +194,8 @@ internal sealed partial class NetworkFileParser
         {
             KnownUnit(target, known, "when_full", unitId);
         }
+
+        DiversionLoops.Check(_diversions, Diagnostics);
     }
 
     private ArrivalProfile? ParseProfile(YamlNode node, string? groupId)
