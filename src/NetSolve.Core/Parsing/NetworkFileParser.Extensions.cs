@@ -262,28 +262,6 @@ internal sealed partial class NetworkFileParser
         return [.. values];
     }
 
-    private void WarnIgnoredUnitKeys(Dictionary<string, YamlNode> fields, string id, ParsedService? service)
-    {
-        if (service?.Distribution is { Kind: not ServiceKind.Exponential } distribution)
-        {
-            Warning(service.KeyLocation!.Value, id, DiagnosticCodes.IgnoredByFormulas,
-                $"service_distribution {DistributionNames[(int)distribution.Kind]} is ignored by the formulas, which assume exponential service; {SimulateHint}");
-        }
-        else if (service is not null && service.Cv != 1.0 && fields.TryGetValue("service_cv", out var cvNode))
-        {
-            Warning(cvNode.Location, id, DiagnosticCodes.IgnoredByFormulas, string.Create(CultureInfo.InvariantCulture,
-                $"service_cv {service.Cv:0.###} is ignored: the exponential (Jackson) model assumes service_cv 1; {SimulateHint}"));
-        }
-
-        foreach (string key in new[] { "capacity", "when_full" })
-        {
-            if (fields.TryGetValue(key, out var node))
-            {
-                Warning(node.Location, id, DiagnosticCodes.IgnoredByFormulas, $"{key} is ignored by the formulas, which assume room for every patient; {SimulateHint}");
-            }
-        }
-    }
-
     [GeneratedRegex("^divert to (?<unit>[A-Za-z][A-Za-z0-9_-]*)$", RegexOptions.CultureInvariant, matchTimeoutMilliseconds: 1000)]
     private static partial Regex DivertRegex();
 }

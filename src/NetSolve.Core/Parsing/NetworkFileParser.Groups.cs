@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-using System.Globalization;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
 
@@ -30,8 +29,6 @@ internal sealed partial class NetworkFileParser
             if (ParseGroup(id, key.Location, value, timeUnit, known) is PatientGroup group)
             {
                 groups.Add(group);
-                Warning(key.Location, null, DiagnosticCodes.IgnoredByFormulas, string.Create(CultureInfo.InvariantCulture,
-                    $"group '{id}' ({TimeConstants.RateFromPerHour(group.ExternalArrivalsPerHour, timeUnit):0.###} arrivals per {TimeConstants.Name(timeUnit)}) is ignored by the formulas, which solve the top-level arrivals only; {SimulateHint}"));
             }
         }
 

@@ -139,7 +139,6 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             Error(whenFullNode.Location, id, DiagnosticCodes.BadValue, "when_full needs 'capacity': a unit without a capacity is never full");
         }
 
-        WarnIgnoredUnitKeys(fields, id, service);
         return servers is Servers s && service is ParsedService parsed
             ? new Unit(id, label, s, parsed.MeanHours, parsed.Cv) { Service = parsed.Distribution, Capacity = capacity, WhenFull = whenFull }
             : null;

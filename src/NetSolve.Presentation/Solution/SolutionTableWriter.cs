@@ -28,7 +28,10 @@ public static class SolutionTableWriter
     {
         ArgumentNullException.ThrowIfNull(solution);
         var totals = solution.Totals;
-        string arrivals = "external arrivals " + PeopleFormat.Rate(totals.ExternalArrivalsPerHour, solution.Network.TimeUnit);
+        var timeUnit = solution.Network.TimeUnit;
+        string arrivals = "external arrivals " + PeopleFormat.Rate(totals.ExternalArrivalsPerHour, timeUnit)
+            + (totals.TurnedAwayPerHour > 0.0 ? "   turned away " + PeopleFormat.Rate(totals.TurnedAwayPerHour, timeUnit) : string.Empty)
+            + (totals.DivertedPerHour > 0.0 ? "   diverted " + PeopleFormat.Rate(totals.DivertedPerHour, timeUnit) : string.Empty);
         return solution.IsStable && totals is { MeanInSystem: double inSystem, MeanTimeInSystemHours: double hours }
             ? $"{arrivals}   patients in network {PeopleFormat.Number(inSystem)}   mean time in network {PeopleFormat.Time(hours)}"
             : arrivals + "   network totals: none, the network is unstable";

@@ -20,8 +20,14 @@ public static class TotalsColumns
     /// <summary>Mean time in the network (Little's law); absent when unstable.</summary>
     public static readonly Column<NetworkTotals> MeanTimeInSystem = Columns.Number<NetworkTotals>("mean_time_in_system", "mean time in network", MetricDimension.Time, totals => totals.MeanTimeInSystemHours);
 
+    /// <summary>Patients turned away by full units.</summary>
+    public static readonly Column<NetworkTotals> TurnedAwayRate = Columns.Number<NetworkTotals>("turned_away_rate", "turned away", MetricDimension.Rate, totals => totals.TurnedAwayPerHour);
+
+    /// <summary>Patients diverted from full units to others.</summary>
+    public static readonly Column<NetworkTotals> DivertedRate = Columns.Number<NetworkTotals>("diverted_rate", "diverted", MetricDimension.Rate, totals => totals.DivertedPerHour);
+
     /// <summary>Every total, in the contract's order.</summary>
-    public static readonly ImmutableArray<Column<NetworkTotals>> All = [ExternalArrivalRate, Throughput, MeanInSystem, MeanTimeInSystem];
+    public static readonly ImmutableArray<Column<NetworkTotals>> All = [ExternalArrivalRate, Throughput, MeanInSystem, MeanTimeInSystem, TurnedAwayRate, DivertedRate];
 
     /// <summary>The one-row totals table of <paramref name="solution"/>.</summary>
     public static ResultTable Table(NetworkSolution solution)

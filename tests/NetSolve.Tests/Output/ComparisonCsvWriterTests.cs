@@ -108,8 +108,8 @@ public sealed class ComparisonCsvWriterTests
 
     /// <summary>
     /// Two units, times reported in minutes. Triage is a stable M/M/2 (load 5/h × 0.25 h). The ward is offered 1.5
-    /// servers' worth of work on one server, so the formula calls it unstable, while its capacity of 3 turns patients
-    /// away and keeps the simulation finite.
+    /// servers' worth of work on one server; its capacity of 3 turns patients away and keeps the simulation finite, while
+    /// the formula is given the ward without that limit (<see cref="SimulateAndSolve"/>), so it calls it unstable.
     /// </summary>
     private static Network TwoUnits() => new(
         "Comparison CSV test",
@@ -122,7 +122,8 @@ public sealed class ComparisonCsvWriterTests
     {
         var network = TwoUnits();
         var options = new SimulationOptions { Seed = 11, Replications = replications, WarmupHours = 20, DurationHours = 2_000 };
-        return (Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken), NetworkSolver.Solve(network));
+        var unlimitedWaitingRoom = network with { Units = [.. network.Units.Select(unit => unit with { Capacity = null })] };
+        return (Simulator.Run(network, options, cancellation: TestContext.Current.CancellationToken), NetworkSolver.Solve(unlimitedWaitingRoom));
     }
 
     private static string Csv((SimulationResult Simulated, NetworkSolution Formula) run)

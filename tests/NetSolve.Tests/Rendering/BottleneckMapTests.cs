@@ -1,3 +1,4 @@
+using NetSolve.Tests.Support;
 using System.Xml;
 using NetSolve.Model;
 using NetSolve.Presentation;
@@ -153,9 +154,10 @@ public class BottleneckMapTests
     [InlineData(TimeUnit.Day)]
     public void The_mean_wait_is_written_in_the_unit_that_reads_best_whatever_the_file_time_unit(TimeUnit unit)
     {
-        // Source: contract example, emergency mean_wait 0.003167 h = 0.19002 min; under an hour, so in minutes.
+        // Source: contract example (the Jackson network: no service_cv), emergency mean_wait 0.003167 h = 0.19002 min;
+        // under an hour, so in minutes.
         const string expected = "wait 0.1900 min";
-        var network = RenderingFixtures.Example("harbourside") with { TimeUnit = unit };
+        var network = TestNetworks.JacksonExample("harbourside.yaml") with { TimeUnit = unit };
         var map = Draw(NetworkSolver.Solve(network));
 
         Assert.Contains(map.Unit("emergency").Texts, t => t.Text == expected);

@@ -1,3 +1,4 @@
+using NetSolve.Tests.Support;
 using System.Text.RegularExpressions;
 using System.Xml.Linq;
 using NetSolve.Rendering.Report;
@@ -80,10 +81,10 @@ public partial class HtmlReportTests
     [Fact]
     public void The_unit_table_shows_the_contract_numbers_as_the_solve_table_does()
     {
-        string html = Report("harbourside");
+        string html = HtmlReport.Write(NetworkSolver.Solve(TestNetworks.JacksonExample("harbourside.yaml")), []);
         var row = Regex.Match(html, "<tr data-unit=\"emergency\">.*?</tr>").Value;
 
-        // Source: contract example for emergency: 32 servers, arrival_rate 18.699187, utilisation 0.681741,
+        // Source: contract example (the Jackson network: no service_cv) for emergency: 32 servers, arrival_rate 18.699187, utilisation 0.681741,
         // p_wait 0.027645, mean_wait 0.003167 h = 0.19002 min, mean_time_in_unit 1.169834 h, headroom 1.466832.
         Assert.Equal(
             ["Emergency department", "\u25CB ok", "32", "18.70", "68.2%", "0.028", "0.1900 min", "1.170 h", "1.467"],

@@ -25,6 +25,20 @@ internal static class TestNetworks
         return result.Network!;
     }
 
+    /// <summary>
+    /// A bundled example with every service made exponential and every arrival stream Poisson: the Jackson network
+    /// whose numbers the shared contract's example output shows (it predates the two-moment method).
+    /// </summary>
+    public static Network JacksonExample(string fileName)
+    {
+        var network = Example(fileName);
+        return network with
+        {
+            Units = [.. network.Units.Select(unit => unit with { ServiceCv = 1.0, Service = null })],
+            Arrivals = [.. network.Arrivals.Select(arrival => arrival with { Cv = 1.0 })],
+        };
+    }
+
     public static Network Example(string fileName)
     {
         var result = NetworkReader.ReadFile(Path.Combine(TestFiles.NetworksFolder, fileName));

@@ -14,7 +14,7 @@ public partial class NetworkSolverTests
     [Fact]
     public void The_contract_example_gives_the_contract_numbers_for_emergency()
     {
-        var solution = NetworkSolver.Solve(TestNetworks.Example("harbourside.yaml"));
+        var solution = NetworkSolver.Solve(TestNetworks.JacksonExample("harbourside.yaml"));
         var emergency = solution.Units[0];
 
         Assert.Equal("emergency", emergency.Unit.Id);
@@ -37,7 +37,7 @@ public partial class NetworkSolverTests
     [Fact]
     public void The_contract_example_gives_the_contract_totals_and_the_ward_as_bottleneck()
     {
-        var solution = NetworkSolver.Solve(TestNetworks.Example("harbourside.yaml"));
+        var solution = NetworkSolver.Solve(TestNetworks.JacksonExample("harbourside.yaml"));
         var ward = solution.Units.Single(unit => unit.Unit.Id == "ward");
 
         Assert.True(solution.IsStable);
