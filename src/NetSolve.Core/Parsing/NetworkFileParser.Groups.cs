@@ -52,7 +52,7 @@ internal sealed partial class NetworkFileParser
             Error(location, null, DiagnosticCodes.MissingKey, $"groups.{id}: missing 'arrivals' (where this group's patients arrive from outside)");
         }
 
-        var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
+        var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known, id);
         ImmutableArray<Route>? routes = null;
         if (fields.TryGetValue("routes", out var routesNode))
         {

@@ -144,7 +144,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             : null;
     }
 
-    private ImmutableArray<Arrival> ParseArrivals(YamlNode node, TimeUnit timeUnit, HashSet<string> known)
+    private ImmutableArray<Arrival> ParseArrivals(YamlNode node, TimeUnit timeUnit, HashSet<string> known, string? groupId = null)
     {
         var arrivals = ImmutableArray.CreateBuilder<Arrival>();
         if (Mapping(node, null, "arrivals") is YamlMapping mapping)
@@ -165,7 +165,9 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
 
         if (!Diagnostics.Any(d => d.IsError) && !arrivals.Any(arrival => arrival.PerHour > 0.0))
         {
-            Error(node.Location, null, DiagnosticCodes.NoArrivals, "no positive arrival rate: at least one unit needs patients arriving from outside");
+            Error(node.Location, null, DiagnosticCodes.NoArrivals, groupId is null
+                ? "no positive arrival rate: at least one unit needs patients arriving from outside"
+                : $"groups.{groupId}: no positive arrival rate: a group needs patients arriving from outside at one unit at least");
         }
 
         return arrivals.ToImmutable();
