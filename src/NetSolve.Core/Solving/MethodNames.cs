@@ -1,11 +1,15 @@
 namespace NetSolve.Solving;
 
-/// <summary>The names of the methods a unit's metrics come from, as every output writes them (docs/methods.md).</summary>
+/// <summary>
+/// The names of the methods a unit's metrics come from, as every output writes them (docs/methods.md): these two,
+/// <see cref="GgcMethodNames"/> for waits with variable arrivals and service, and the capacity methods of
+/// <see cref="FiniteCapacityFormulas"/>.
+/// </summary>
 public static class MethodNames
 {
     /// <summary>Unlimited servers: nobody waits, exact for any service distribution.</summary>
     public const string InfiniteServers = "M/G/inf";
 
     /// <summary>Poisson arrivals and exponential service on c servers: exact (Jackson's product form).</summary>
-    public const string ErlangC = "Erlang C (M/M/c)";
+    public const string ErlangC = GgcMethodNames.ErlangC;
 }
