@@ -14,6 +14,12 @@ public sealed record NetworkSolution(
     NetworkTotals Totals,
     double StrainThreshold)
 {
+    /// <summary>
+    /// Per patient group: the default group (when it has arrivals) and the network's groups, in file order; empty when
+    /// the network has no groups, or when the solution was built from given flows (<see cref="NetworkSolver.FromFlows"/>).
+    /// </summary>
+    public ImmutableArray<GroupResult> Groups { get; init; } = [];
+
     /// <summary>True exactly when no unit is unstable.</summary>
     public bool IsStable => Units.All(unit => unit.IsStable);
 }

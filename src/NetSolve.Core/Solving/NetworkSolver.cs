@@ -16,14 +16,11 @@ public static class NetworkSolver
         ArgumentNullException.ThrowIfNull(network);
         var traffic = network.Groups.IsEmpty ? null : GroupTraffic.Solve(network);
         var inputs = SolverInputs.Of(network, traffic);
-        if (network.Units.Any(unit => unit.Capacity is not null))
-        {
-            double[] offered = [.. CapacityFlows.Solve(network).Units.Select(unit => unit.OfferedPerHour)];
-            return Build(network, offered, inputs, strainThreshold);
-        }
-
-        double[] flows = traffic is null ? TrafficEquations.Solve(RoutingTable.Build(network)) : [.. traffic.FlowsPerHour];
-        return Build(network, flows, inputs, strainThreshold);
+        double[] flows = network.Units.Any(unit => unit.Capacity is not null)
+            ? [.. CapacityFlows.Solve(network).Units.Select(unit => unit.OfferedPerHour)]
+            : traffic is null ? TrafficEquations.Solve(RoutingTable.Build(network)) : [.. traffic.FlowsPerHour];
+        var solution = Build(network, flows, inputs, strainThreshold);
+        return traffic is null ? solution : solution with { Groups = GroupResults.Build(traffic, solution.Units) };
     }
 
     /// <summary>

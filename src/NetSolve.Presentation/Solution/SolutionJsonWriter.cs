@@ -29,6 +29,11 @@ public static class SolutionJsonWriter
         var totals = TotalsColumns.Table(solution);
         json.WritePropertyName("totals");
         JsonTableWriter.WriteObject(totals, totals.Rows[0], json);
+        if (!solution.Groups.IsEmpty)
+        {
+            GroupColumns.WriteArray(solution, json);
+        }
+
         json.WriteEndObject();
         json.Flush();
     }

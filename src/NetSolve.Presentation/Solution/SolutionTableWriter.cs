@@ -4,16 +4,22 @@ using NetSolve.Solving;
 
 namespace NetSolve.Presentation.Solution;
 
-/// <summary>Writes a solution for people: a title, the unit table, the network totals and a one-line finding.</summary>
+/// <summary>Writes a solution for people: a title, the unit table, the patient groups' table when the network has groups, the network totals and a one-line finding.</summary>
 public static class SolutionTableWriter
 {
-    /// <summary>Writes the title line, the unit table, the totals and the finding.</summary>
+    /// <summary>Writes the title line, the unit table, the groups' table (with groups only), the totals and the finding.</summary>
     public static void Write(NetworkSolution solution, TextWriter output)
     {
         ArgumentNullException.ThrowIfNull(solution);
         ArgumentNullException.ThrowIfNull(output);
         output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)})\n\n");
         PeopleTableWriter.Write(UnitColumns.Table(solution), output);
+        if (!solution.Groups.IsEmpty)
+        {
+            output.Write("\nPatient groups\n");
+            PeopleTableWriter.Write(GroupColumns.Table(solution), output);
+        }
+
         output.Write("\n" + Totals(solution) + "\n");
         output.Write(Methods(solution) + "\n");
         output.Write(Finding(solution) + "\n");
