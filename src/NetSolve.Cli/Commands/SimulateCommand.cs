@@ -25,7 +25,7 @@ internal sealed class SimulateCommand() : NetworkCommand(
 
     private readonly Option<string[]> _waitOver = SimulationCliOptions.WaitOverOption();
 
-    private readonly Option<bool> _compare = new("--compare") { Description = "Set the formula (Jackson network) results beside the simulation, with a verdict per metric." };
+    private readonly Option<bool> _compare = new("--compare") { Description = "Set the formula results beside the simulation, with each unit's method, the relative error and a verdict per metric." };
 
     private readonly Option<int> _threads = SettingOptions.WholeNumber(
         "--threads", 1, SettingLimits.MaxThreads, -1, "Most replications run at once (default: all cores); results do not depend on it.");

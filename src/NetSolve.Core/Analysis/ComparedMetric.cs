@@ -3,7 +3,7 @@ using NetSolve.Simulation;
 
 namespace NetSolve.Analysis;
 
-/// <summary>One metric of one unit, formula against simulation, with the verdict.</summary>
+/// <summary>One metric of one unit, formula against simulation, with the verdict and the formula's relative error.</summary>
 /// <param name="Name">The contract's field name (<c>utilisation</c>, <c>mean_wait</c>, ...).</param>
 /// <param name="Formula">The formula's value, in hours for times; null when the formula has none (an unstable unit).</param>
 /// <param name="Simulated">The simulated estimate, in hours for times.</param>
@@ -17,4 +17,12 @@ public sealed record ComparedMetric(string Name, double? Formula, Estimate Simul
     public string Verdict => Formula is not double value ? "no formula"
         : Simulated.HalfWidth is null ? "no interval"
         : Simulated.Contains(value) ? "inside" : "outside";
+
+    /// <summary>
+    /// The formula's error relative to the simulated mean, (formula − simulated) / simulated, as a fraction (−0.12 is
+    /// 12% low); null when the formula has no value or the simulated mean is 0 (nothing to be relative to).
+    /// </summary>
+    public double? RelativeError => Formula is double value && Simulated.Mean != 0.0 && double.IsFinite(Simulated.Mean)
+        ? (value - Simulated.Mean) / Simulated.Mean
+        : null;
 }

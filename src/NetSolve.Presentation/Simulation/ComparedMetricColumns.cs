@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
+using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -34,14 +35,26 @@ public static class ComparedMetricColumns
     /// <summary>Whether the formula lies inside the simulation's 95% interval (<see cref="Analysis.ComparedMetric.Verdict"/>).</summary>
     public static readonly Column<ComparisonRow> Verdict = Columns.Words<ComparisonRow>("verdict", "verdict", row => row.Metric.Verdict);
 
+    /// <summary>The formula's error relative to the simulated mean, a fraction (<see cref="Analysis.ComparedMetric.RelativeError"/>).</summary>
+    public static readonly Column<ComparisonRow> RelativeError = Columns.Number<ComparisonRow>("relative_error", "error", MetricDimension.Plain, row => row.Metric.RelativeError, Audience.Machines);
+
+    /// <summary>The relative error as a signed percentage for people (<c>+36.0%</c>: the formula is 36% above the simulation).</summary>
+    public static readonly Column<ComparisonRow> RelativeErrorForPeople = Columns.Words<ComparisonRow>("relative_error", "error",
+        row => row.Metric.RelativeError is double error ? PeopleFormat.SignedPercent(error) : PeopleFormat.Missing, Audience.People);
+
+    /// <summary>The method of the unit's formula values (<see cref="UnitResult.Method"/>), on every CSV row.</summary>
+    public static readonly Column<ComparisonRow> Method = Columns.Words<ComparisonRow>("method", "method", row => row.Method, Audience.Machines);
+
     /// <summary>The network's time unit, on every CSV row.</summary>
     public static readonly Column<ComparisonRow> TimeUnitName = Columns.Words<ComparisonRow>("time_unit", "time unit", row => TimeConstants.Name(row.TimeUnit), Audience.Machines);
 
     /// <summary>The long table, one row per unit and metric: CSV reads the columns for programs, the table those for people.</summary>
-    public static readonly ImmutableArray<Column<ComparisonRow>> All = [Unit, Metric, Formula, Simulated, SimulatedHalfWidth, SimulatedForPeople, Verdict, TimeUnitName];
+    /// <remarks><c>relative_error</c> and <c>method</c> came after <c>time_unit</c>, so they end the CSV row: a compatible extension.</remarks>
+    public static readonly ImmutableArray<Column<ComparisonRow>> All =
+        [Unit, Metric, Formula, Simulated, SimulatedHalfWidth, SimulatedForPeople, RelativeErrorForPeople, Verdict, TimeUnitName, RelativeError, Method];
 
     /// <summary>The fields of one metric's object in a unit's JSON <c>compare</c> object, keyed by the metric's name.</summary>
-    public static readonly ImmutableArray<Column<ComparisonRow>> ForJson = [Formula, Simulated, SimulatedHalfWidth, Verdict];
+    public static readonly ImmutableArray<Column<ComparisonRow>> ForJson = [Formula, Simulated, SimulatedHalfWidth, Verdict, RelativeError];
 
     /// <summary>The long table of <paramref name="simulated"/> against <paramref name="formula"/>, one row per unit and metric.</summary>
     public static ResultTable Table(SimulationResult simulated, NetworkSolution formula)

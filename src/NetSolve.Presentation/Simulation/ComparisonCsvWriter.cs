@@ -15,9 +15,9 @@ public static class ComparisonCsvWriter
 {
     /// <summary>
     /// The header row. <c>simulated_ci</c> is the 95% half-width of <c>simulated</c>; times and rates are in
-    /// <c>time_unit</c>, the network's, on every row so each row stands on its own when filtered.
+    /// <c>time_unit</c>, the network's, on every row so each row stands on its own when filtered; <c>relative_error</c> (a fraction) and <c>method</c> came later and end the row.
     /// </summary>
-    public const string Header = "unit,metric,formula,simulated,simulated_ci,verdict,time_unit";
+    public const string Header = "unit,metric,formula,simulated,simulated_ci,verdict,time_unit,relative_error,method";
 
     /// <summary>Writes the header and, for each unit in file order, one row per compared metric.</summary>
     /// <param name="simulated">The simulation of a network.</param>

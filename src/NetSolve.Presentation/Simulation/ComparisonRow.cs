@@ -10,13 +10,15 @@ namespace NetSolve.Presentation.Simulation;
 /// <param name="UnitId">The unit's id.</param>
 /// <param name="Metric">The compared metric and its verdict.</param>
 /// <param name="TimeUnit">The network's time unit, which CSV rows name so each stands on its own when filtered.</param>
-public sealed record ComparisonRow(string UnitId, ComparedMetric Metric, TimeUnit TimeUnit)
+/// <param name="Method">The method the unit's formula values come from (<see cref="UnitResult.Method"/>).</param>
+public sealed record ComparisonRow(string UnitId, ComparedMetric Metric, TimeUnit TimeUnit, string Method)
 {
     /// <summary>The rows of one unit, in the contract's order of metrics.</summary>
     public static ImmutableArray<ComparisonRow> OfUnit(SimulatedUnit simulated, UnitResult formula, TimeUnit timeUnit)
     {
         ArgumentNullException.ThrowIfNull(simulated);
-        return [.. FormulaSimulationComparison.ForUnit(simulated, formula).Select(metric => new ComparisonRow(simulated.Unit.Id, metric, timeUnit))];
+        ArgumentNullException.ThrowIfNull(formula);
+        return [.. FormulaSimulationComparison.ForUnit(simulated, formula).Select(metric => new ComparisonRow(simulated.Unit.Id, metric, timeUnit, formula.Method))];
     }
 
     /// <summary>The rows of every unit in file order.</summary>

@@ -47,7 +47,7 @@ public sealed class SimulateCommandTests
         Assert.Equal(0, csv.ExitCode);
         Assert.Empty(csv.Error);
         var rows = CsvRows.Parse(csv.Out);
-        Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit"], rows[0]);
+        Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit", "relative_error", "method"], rows[0]);
 
         // Source: the larkspur file has five units; the comparison judges seven metrics of each.
         Assert.Equal(5 * 7, rows.Count - 1);

@@ -8,18 +8,18 @@ internal static partial class ComparisonTableRows
     /// <summary>The rows of the comparison section of <paramref name="text"/>, in printed order.</summary>
     /// <remarks>
     /// Columns are at least two spaces apart and no cell holds two spaces in a row ("0 ±0", "no formula" hold one),
-    /// so splitting on runs of two or more spaces recovers the cells.
+    /// so splitting on runs of two or more spaces recovers the cells; the error column (cells[4]) is skipped.
     /// </remarks>
     public static List<ComparisonTableRow> Parse(string text)
     {
         var lines = text.Split('\n');
-        int title = Array.FindIndex(lines, line => line.StartsWith("formula (Jackson network) against simulation", StringComparison.Ordinal));
+        int title = Array.FindIndex(lines, line => line.StartsWith("formulas against simulation", StringComparison.Ordinal));
         Assert.True(title >= 0, "no comparison table in:\n" + text);
         int rule = Array.FindIndex(lines, title, line => line.StartsWith("---", StringComparison.Ordinal));
         return lines.Skip(rule + 1)
             .TakeWhile(line => line.Length > 0)
             .Select(line => ColumnGap().Split(line.TrimEnd()))
-            .Select(cells => new ComparisonTableRow(cells[0], cells[1], cells[2], cells[3], cells[4]))
+            .Select(cells => new ComparisonTableRow(cells[0], cells[1], cells[2], cells[3], cells[5]))
             .ToList();
     }
 
