@@ -20,7 +20,7 @@ public sealed class CapacityFlowsSimulationTests
     // Source: the simulator of this project (fixed seed) against the formulas. The assessment unit is fed by Poisson
     // arrivals only, so its blocking is exact M/M/2/3 and must lie inside the simulated interval; the short-stay unit
     // takes its overflow and is checked within OverflowTolerance.
-    [Fact]
+    [Fact(Explicit = true)]
     public void Diverted_and_turned_away_rates_match_the_simulator()
     {
         var assessment = new Unit("assessment", "assessment", Servers.Of(2), 1.0) { Capacity = 3, WhenFull = WhenFull.DivertTo("shortstay") };
