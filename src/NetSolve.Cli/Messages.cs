@@ -120,7 +120,7 @@ internal static class Messages
     public static string PathwayProblem(string problem) => $"{Program}pathway: {problem}";
 
     /// <summary><c>staff</c> with no question.</summary>
-    public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, or --wait-over with --at-most) or --budget N";
+    public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, --wait-over with --at-most, or --max-turned-away) or --budget N";
 
     /// <summary><c>staff --budget</c> mixed with targets.</summary>
     public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --cost";

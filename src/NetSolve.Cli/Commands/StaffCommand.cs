@@ -37,6 +37,15 @@ internal sealed class StaffCommand() : NetworkCommand(
             ValueParser.Probability(text, out double probability) is string problem ? (Messages.NotProbability("--at-most", problem), null) : (null, probability)),
     };
 
+    private readonly Option<double?> _maxTurnedAway = new("--max-turned-away")
+    {
+        Description = "Target for units with a capacity: largest share of arriving patients who find the unit full (e.g. 5%); "
+            + "each added server brings its own bed, so waiting places are kept.",
+        HelpName = "PROBABILITY",
+        CustomParser = result => SettingOptions.Read<double?>(result, text =>
+            ValueParser.Probability(text, out double probability) is string problem ? (Messages.NotProbability("--max-turned-away", problem), null) : (null, probability)),
+    };
+
     private readonly Option<string[]> _cost = new("--cost")
     {
         Description = "Cost of one server at a unit, repeatable (default 1 each): the targets search reports the cost of what it adds.",
@@ -50,7 +59,7 @@ internal sealed class StaffCommand() : NetworkCommand(
 
     protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
 
-    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _cost, _budget];
+    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _cost, _budget];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -60,7 +69,7 @@ internal sealed class StaffCommand() : NetworkCommand(
             yield return Messages.StaffWaitTailPair;
         }
 
-        bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost;
+        bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost || settings.IsGiven(_maxTurnedAway);
         if (settings.IsGiven(_budget))
         {
             if (targets || settings.IsGiven(_cost))
@@ -127,7 +136,7 @@ internal sealed class StaffCommand() : NetworkCommand(
         }
 
         var tail = over is double t && request.GetValue(_atMost) is double probability ? new WaitTailTarget(t, probability) : null;
-        return new StaffingTargets(request.GetValue(_maxUtil), maxWait, maxTime, tail);
+        return new StaffingTargets(request.GetValue(_maxUtil), maxWait, maxTime, tail, request.GetValue(_maxTurnedAway));
     }
 
     private static string[] ReadCosts(ArgumentResult result)

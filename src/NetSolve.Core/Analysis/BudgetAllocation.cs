@@ -33,12 +33,14 @@ public static class BudgetAllocation
         ArgumentOutOfRangeException.ThrowIfNegative(extraServers);
         var network = solution.Network;
         var candidates = new List<(int Index, double Load, int Current)>();
+        var results = new List<UnitResult>();
         for (int i = 0; i < network.Units.Length; i++)
         {
             var result = solution.Units[i];
             if (!result.Unit.Servers.IsUnlimited && result.ArrivalsPerHour > 0.0)
             {
                 candidates.Add((i, result.OfferedLoad, result.Unit.Servers.Count));
+                results.Add(result);
             }
         }
 
@@ -62,14 +64,14 @@ public static class BudgetAllocation
         var queue = new PriorityQueue<int, (double NegativeGain, int Order)>();
         for (int k = 0; k < candidates.Count; k++)
         {
-            queue.Enqueue(k, (-Gain(candidates[k].Load, servers[k]), k));
+            queue.Enqueue(k, (-Gain(results[k], servers[k]), k));
         }
 
         for (int placed = needed; placed < extraServers && queue.Count > 0; placed++)
         {
             int k = queue.Dequeue();
             servers[k]++;
-            queue.Enqueue(k, (-Gain(candidates[k].Load, servers[k]), k));
+            queue.Enqueue(k, (-Gain(results[k], servers[k]), k));
         }
 
         var units = network.Units.ToBuilder();
@@ -92,8 +94,25 @@ public static class BudgetAllocation
 
     private static int StableMinimum(double load) => (int)Math.Floor(load) + 1;
 
-    private static double Gain(double load, int servers) =>
-        servers + 1 > Servers.MaxCount ? 0.0 : MeanQueue(servers, load) - MeanQueue(servers + 1, load);
+    /// <summary>
+    /// The fall in the mean number waiting from one more server, by the unit's own method: Lq = f·Lq(M/M/c) with the
+    /// variability factor f of <see cref="GgcFormulas"/> from the result's arrival and service SCVs (f = 1, Erlang C,
+    /// when both are 1). Above one server f does not depend on c, so Lq stays convex in c and marginal analysis stays
+    /// optimal; the one-server Kraemer–Langenbach-Belz correction (non-Poisson arrivals) makes the first step approximate.
+    /// </summary>
+    private static double Gain(UnitResult result, int servers) =>
+        servers + 1 > Servers.MaxCount ? 0.0 : MeanQueue(result, servers) - MeanQueue(result, servers + 1);
+
+    private static double MeanQueue(UnitResult result, int servers)
+    {
+        if (result.ArrivalScv == 1.0 && result.ServiceScv == 1.0)
+        {
+            return MeanQueue(servers, result.OfferedLoad);
+        }
+
+        double meanServiceHours = result.OfferedLoad / result.ArrivalsPerHour;
+        return GgcFormulas.Estimate(servers, result.ArrivalsPerHour, meanServiceHours, result.ArrivalScv, result.ServiceScv).MeanQueue ?? double.PositiveInfinity;
+    }
 
     private static ImmutableArray<UnitAllocation> Allocations(Network network, List<(int Index, double Load, int Current)> candidates, int[] servers, int[] forced) =>
     [

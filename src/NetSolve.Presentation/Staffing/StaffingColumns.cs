@@ -55,23 +55,33 @@ public static class StaffingColumns
     /// </summary>
     public static readonly Column<StaffingRow> LongWaitAfter = Columns.Number<StaffingRow>("p_wait_over_after", "P(long wait) after", MetricDimension.Fraction, LongWait);
 
+    /// <summary>
+    /// P(full) with the required servers: the share of arriving patients who find the unit full; absent for a unit
+    /// without a capacity. A share compared with the --max-turned-away target, so people read it as a percentage.
+    /// </summary>
+    public static readonly Column<StaffingRow> FullAfter = Columns.Number<StaffingRow>("p_full_after", "P(full) after", MetricDimension.Fraction,
+        row => row.After is { Unit.Capacity: not null } result ? result.PFull : null);
+
     /// <summary>Why no number of servers meets the targets; absent when they can be met. JSON only: people read it under the table.</summary>
     public static readonly Column<StaffingRow> Impossible = new("impossible", "impossible", MetricDimension.Plain, row => row.Unit.Impossible is string why ? Cell.Word(why) : Cell.Of(null, MetricDimension.Plain), Audience.Machines);
 
     /// <summary>The network's time unit. CSV only: each row says the unit of its times.</summary>
     public static readonly Column<StaffingRow> TimeUnit = Columns.Words<StaffingRow>("time_unit", "time unit", row => TimeConstants.Name(row.TimeUnit), Audience.Machines);
 
-    /// <summary>The columns every format shares (people's and programs' variants), in the contract's order.</summary>
+    /// <summary>The columns every format shares (people's and programs' variants), in the contract's order, without <see cref="FullAfter"/>.</summary>
     public static readonly ImmutableArray<Column<StaffingRow>> All =
     [
         Id, Servers, Required, Needed, Added, CostPerServer, Cost, UtilisationBefore, UtilisationAfter, MeanWaitBefore, MeanWaitAfter, LongWaitAfter,
     ];
 
-    /// <summary>The JSON <c>units</c> objects: <see cref="All"/> and <see cref="Impossible"/>.</summary>
-    public static readonly ImmutableArray<Column<StaffingRow>> Json = [.. All, Impossible];
+    /// <summary>The table for people of a network with a unit of limited capacity: <see cref="All"/> and <see cref="FullAfter"/>.</summary>
+    public static readonly ImmutableArray<Column<StaffingRow>> WithCapacity = [.. All, FullAfter];
 
-    /// <summary>The CSV columns: <see cref="All"/> and <see cref="TimeUnit"/>.</summary>
-    public static readonly ImmutableArray<Column<StaffingRow>> Csv = [.. All, TimeUnit];
+    /// <summary>The JSON <c>units</c> objects: <see cref="All"/>, <see cref="FullAfter"/> and <see cref="Impossible"/>.</summary>
+    public static readonly ImmutableArray<Column<StaffingRow>> Json = [.. All, FullAfter, Impossible];
+
+    /// <summary>The CSV columns: <see cref="All"/>, <see cref="FullAfter"/> and <see cref="TimeUnit"/>.</summary>
+    public static readonly ImmutableArray<Column<StaffingRow>> Csv = [.. All, FullAfter, TimeUnit];
 
     /// <summary>The rows of <paramref name="plan"/>, in file order.</summary>
     public static IEnumerable<StaffingRow> Rows(StaffingPlan plan)

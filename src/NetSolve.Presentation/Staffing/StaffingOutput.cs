@@ -14,7 +14,7 @@ namespace NetSolve.Presentation.Staffing;
 public static class StaffingOutput
 {
     /// <summary>The CSV header of a targets search.</summary>
-    public const string TargetsCsvHeader = "id,servers,required,added,cost_per_server,cost,utilisation_before,utilisation_after,mean_wait_before,mean_wait_after,p_wait_over_after,time_unit";
+    public const string TargetsCsvHeader = "id,servers,required,added,cost_per_server,cost,utilisation_before,utilisation_after,mean_wait_before,mean_wait_after,p_wait_over_after,p_full_after,time_unit";
 
     /// <summary>The targets in words for people: <c>stable, mean wait &lt;= 30.00 min</c>.</summary>
     public static string Describe(StaffingTargets targets, TimeUnit timeUnit)
@@ -42,6 +42,11 @@ public static class StaffingOutput
             parts.Add($"P(wait > {Show(StaffingTargetColumns.WaitOver)}) <= {Show(StaffingTargetColumns.WaitOverAtMost)}");
         }
 
+        if (targets.MaxTurnedAway is not null)
+        {
+            parts.Add($"P(full) <= {Show(StaffingTargetColumns.MaxTurnedAway)} where beds are limited");
+        }
+
         return string.Join(", ", parts);
     }
 
@@ -53,7 +58,8 @@ public static class StaffingOutput
         var timeUnit = plan.Before.Network.TimeUnit;
         string Show(Column<StaffingPlan> total) => PeopleFormat.Cell(total.Read(plan), timeUnit);
         output.Write($"{plan.Before.Network.Name}: fewest added servers so that every unit is {Describe(plan.Targets, timeUnit)}  (rates per {TimeConstants.Name(timeUnit)})\n\n");
-        PeopleTableWriter.Write(StaffingColumns.Table(plan, StaffingColumns.All), output);
+        bool limited = plan.Before.Network.Units.Any(unit => unit.Capacity is not null);
+        PeopleTableWriter.Write(StaffingColumns.Table(plan, limited ? StaffingColumns.WithCapacity : StaffingColumns.All), output);
         output.Write("\n");
         foreach (var unit in plan.Units.Where(unit => unit.Impossible is not null))
         {
@@ -64,7 +70,10 @@ public static class StaffingOutput
         {
             output.Write($"added: {Show(StaffingTotalsColumns.TotalAdded)} servers in all, cost {Show(StaffingTotalsColumns.TotalCost)}; "
                 + $"mean time in network {Show(StaffingTotalsColumns.MeanTimeInSystemBefore)} -> {Show(StaffingTotalsColumns.MeanTimeInSystemAfter)}\n");
-            output.Write("Each unit's number is the exact minimum: flows do not depend on servers and every measure falls as servers are added, so units are searched one by one.\n");
+            bool jackson = !limited && plan.Before.Units.All(unit => unit.ArrivalScv == 1.0 && unit.ServiceScv == 1.0);
+            output.Write(jackson
+                ? "Each unit's number is the exact minimum: flows do not depend on servers and every measure falls as servers are added, so units are searched one by one.\n"
+                : "Each unit is searched by its own method at its solved flow and arrival variability, then the network is re-solved with the servers found (units with a capacity keep their waiting places); the numbers after are the solver's own for those servers.\n");
         }
     }
 

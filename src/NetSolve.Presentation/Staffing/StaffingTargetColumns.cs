@@ -23,8 +23,11 @@ public static class StaffingTargetColumns
     /// <summary>The largest share of patients waiting longer than <see cref="WaitOver"/>: a share, read as a percentage.</summary>
     public static readonly Column<StaffingTargets> WaitOverAtMost = Columns.Number<StaffingTargets>("wait_over_at_most", "at most", MetricDimension.Fraction, targets => targets.WaitTail?.MaxProbability);
 
+    /// <summary>The largest share of arriving patients who find a unit with a capacity full: a share, read as a percentage.</summary>
+    public static readonly Column<StaffingTargets> MaxTurnedAway = Columns.Number<StaffingTargets>("max_turned_away", "turned away", MetricDimension.Fraction, targets => targets.MaxTurnedAway);
+
     /// <summary>Every target, in the contract's order.</summary>
-    public static readonly ImmutableArray<Column<StaffingTargets>> All = [MaxUtilisation, MaxMeanWait, MaxMeanTimeInUnit, WaitOver, WaitOverAtMost];
+    public static readonly ImmutableArray<Column<StaffingTargets>> All = [MaxUtilisation, MaxMeanWait, MaxMeanTimeInUnit, WaitOver, WaitOverAtMost, MaxTurnedAway];
 
     /// <summary>The one-row table of <paramref name="targets"/>.</summary>
     public static ResultTable Table(StaffingTargets targets, TimeUnit timeUnit)

@@ -63,6 +63,8 @@ public sealed class OptionValueTests
     [InlineData("--max-wait", "30mins")]
     [InlineData("--max-time", "-1h")]
     [InlineData("--at-most", "150%")]
+    [InlineData("--max-turned-away", "150%")]
+    [InlineData("--max-turned-away", "often")]
     [InlineData("--cost", "ward")]
     [InlineData("--cost", "ward=1e308")]
     public void Staff_refuses_an_absurd_value(string option, string value)
@@ -70,7 +72,7 @@ public sealed class OptionValueTests
         // Otherwise a complete question, so the bad value is the only problem.
         string[] rest = option switch
         {
-            "--budget" or "--max-util" => [],
+            "--budget" or "--max-util" or "--max-turned-away" => [],
             "--at-most" => ["--wait-over", "4h"],
             _ => ["--max-util", "0.9"],
         };

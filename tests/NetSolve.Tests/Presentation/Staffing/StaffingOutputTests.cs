@@ -86,7 +86,7 @@ public sealed class StaffingOutputTests
         using var json = Written.Json(output => StaffingOutput.WriteJson(plan, output));
 
         Assert.Equal(1.0 / 15.0, double.Parse(csv[1][9], CultureInfo.InvariantCulture), 1e-12);
-        Assert.Equal("hour", csv[1][11]);
+        Assert.Equal("hour", csv[1][12]);
         Assert.Equal(1.0 / 15.0, json.RootElement.GetProperty("units")[0].GetProperty("mean_wait_after").GetDouble(), 1e-12);
         Assert.Equal(0.5, json.RootElement.GetProperty("targets").GetProperty("max_mean_wait").GetDouble());
     }
