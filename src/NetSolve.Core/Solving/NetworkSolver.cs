@@ -16,11 +16,12 @@ public static class NetworkSolver
         ArgumentNullException.ThrowIfNull(network);
         var traffic = network.Groups.IsEmpty ? null : GroupTraffic.Solve(network);
         var inputs = SolverInputs.Of(network, traffic);
-        double[] flows = network.Units.Any(unit => unit.Capacity is not null)
-            ? [.. CapacityFlows.Solve(network).Units.Select(unit => unit.OfferedPerHour)]
+        var capacity = network.Units.Any(unit => unit.Capacity is not null) ? CapacityFlows.Solve(network) : null;
+        double[] flows = capacity is not null
+            ? [.. capacity.Units.Select(unit => unit.OfferedPerHour)]
             : traffic is null ? TrafficEquations.Solve(RoutingTable.Build(network)) : [.. traffic.FlowsPerHour];
         var solution = Build(network, flows, inputs, strainThreshold);
-        return traffic is null ? solution : solution with { Groups = GroupResults.Build(traffic, solution.Units) };
+        return traffic is null ? solution : solution with { Groups = GroupResults.Build(traffic, solution.Units, capacity?.OfferedByGroup) };
     }
 
     /// <summary>
