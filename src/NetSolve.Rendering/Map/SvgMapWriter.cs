@@ -176,7 +176,6 @@ public static class SvgMapWriter
             Svg + "g",
             new XAttribute("class", "stub " + kind),
             new XAttribute("data-rate", stub.RateText),
-            new XElement(Svg + "title", stub.RateText),
             new XElement(
                 Svg + "line",
                 Attr("x1", stub.Start.X),
