@@ -11,7 +11,17 @@ namespace NetSolve.Analysis;
 /// <remarks>
 /// The traffic equations λ = γ + Pᵀλ are linear in γ. Growing every stream by f gives λ(f) = f·λ, so unit i
 /// saturates at f = c_i/a_i, its headroom. Growing one stream s by f gives λ(f) = λ_rest + f·λ_s, with λ_rest solved
-/// for the other streams and λ_s = λ − λ_rest from the solution: one solve in all, however many factors. Thread-safe.
+/// for the other streams and λ_s = λ − λ_rest from the solution: one solve in all, however many factors.
+/// <para>
+/// Bed limits break the linearity: a unit with a capacity is never unstable, it turns away or diverts the patients who
+/// find it full, and those patients change the flows elsewhere. So when the network has capacities every step is
+/// solved afresh by <see cref="NetworkSolver.Solve"/>, fixed point of turn-away and diversion included, and units with
+/// a capacity are left out of the saturation order. For each of them <see cref="BedLimits"/> finds by bisection the
+/// factor at which P(full) passes 1% and 5%: P(full) rises monotonically with the offered rate, and the unit's offered
+/// rate is taken as linear in the factor, so the knock-on effects of diversion (patients diverted into the unit from
+/// elsewhere, and those its own refusals spare downstream) are held at today's values. The saturation factors of
+/// units without a capacity are likewise linear in today's flows. Thread-safe.
+/// </para>
 /// </remarks>
 public static class GrowthAnalysis
 {
@@ -32,6 +42,18 @@ public static class GrowthAnalysis
 
     /// <summary>The default table's last factor when no unit ever saturates: double today's demand.</summary>
     public const double NoSaturationLastFactor = 2.0;
+
+    /// <summary>The largest growth factor searched for a bed limit's 1% and 5% points; beyond it the point is reported as not reached.</summary>
+    public const double BedLimitSearchLimit = 1000.0;
+
+    /// <summary>The two shares of arrivals finding a unit full that <see cref="BedLimitPoint"/> reports.</summary>
+    public const double FullLow = 0.01;
+
+    /// <inheritdoc cref="FullLow"/>
+    public const double FullHigh = 0.05;
+
+    /// <summary>Bisection steps for a bed-limit factor: the bracket [0, 1000] halves to about 1e-15.</summary>
+    private const int BisectionSteps = 60;
 
     /// <summary>Grows every external arrival stream of <paramref name="solution"/>'s network.</summary>
     /// <param name="solution">The network solved at today's demand.</param>
@@ -118,6 +140,7 @@ public static class GrowthAnalysis
     {
         var network = solution.Network;
         var saturation = SaturationOrder(network, fixedFlows, grownFlows, solution.StrainThreshold);
+        bool hasCapacity = network.Units.Any(unit => unit.Capacity is not null);
         var chosen = factors?.ToImmutableArray() ?? DefaultFactors(saturation.IsEmpty ? null : saturation[0]);
         var steps = ImmutableArray.CreateBuilder<GrowthStep>(chosen.Length);
         var flows = new double[fixedFlows.Length];
@@ -134,10 +157,85 @@ public static class GrowthAnalysis
             }
 
             var grown = network with { Arrivals = [.. network.Arrivals.Select(arrival => Grow(arrival, stream, factor))] };
-            steps.Add(new GrowthStep(factor, NetworkSolver.FromFlows(grown, flows, solution.StrainThreshold)));
+            steps.Add(new GrowthStep(factor, hasCapacity
+                ? NetworkSolver.Solve(grown, solution.StrainThreshold)
+                : NetworkSolver.FromFlows(grown, flows, solution.StrainThreshold)));
         }
 
-        return new GrowthResult(network, stream, solution.StrainThreshold, saturation, steps.MoveToImmutable());
+        return new GrowthResult(network, stream, solution.StrainThreshold, saturation, steps.MoveToImmutable())
+        {
+            BedLimits = BedLimits(solution, fixedFlows),
+        };
+    }
+
+    /// <summary>For every unit with a capacity, the factors at which 1% and 5% of its arrivals find it full.</summary>
+    /// <param name="solution">Today's solution.</param>
+    /// <param name="fixedFlows">Per unit, the flow that does not grow (all zero when every stream grows).</param>
+    private static ImmutableArray<BedLimitPoint> BedLimits(NetworkSolution solution, double[] fixedFlows)
+    {
+        var points = ImmutableArray.CreateBuilder<BedLimitPoint>();
+        for (int i = 0; i < solution.Units.Length; i++)
+        {
+            var result = solution.Units[i];
+            if (result.Unit.Capacity is not int capacity)
+            {
+                continue;
+            }
+
+            // The solver reports the admitted rate; the offered rate adds those who found the unit full. The mean service
+            // (the groups' mixture when there are groups) is the admitted load over the admitted rate.
+            double admitted = result.ArrivalsPerHour;
+            double offered = admitted + result.TurnedAwayPerHour + result.DivertedPerHour;
+            double fixedOffered = Math.Min(fixedFlows[i], offered);
+            double grownOffered = offered - fixedOffered;
+            if (!(admitted > 0.0) || !(grownOffered > 0.0))
+            {
+                points.Add(new BedLimitPoint(result.Unit.Id, capacity, result.PFull, null, null));
+                continue;
+            }
+
+            int servers = result.Unit.Servers.IsUnlimited ? capacity : Math.Min(result.Unit.Servers.Count, capacity);
+            double meanServiceHours = result.OfferedLoad / admitted;
+            double Full(double factor) =>
+                FiniteCapacityFormulas.Solve(servers, capacity, fixedOffered + (factor * grownOffered), meanServiceHours).FullProbability;
+            points.Add(new BedLimitPoint(result.Unit.Id, capacity, result.PFull, FactorWhereFull(Full, FullLow), FactorWhereFull(Full, FullHigh)));
+        }
+
+        return points.ToImmutable();
+    }
+
+    /// <summary>
+    /// The smallest factor in [0, <see cref="BedLimitSearchLimit"/>] at which the increasing function
+    /// <paramref name="full"/> reaches <paramref name="share"/>, by bisection; null when it does not within the range.
+    /// </summary>
+    private static double? FactorWhereFull(Func<double, double> full, double share)
+    {
+        if (full(0.0) >= share)
+        {
+            return 0.0;
+        }
+
+        if (full(BedLimitSearchLimit) < share)
+        {
+            return null;
+        }
+
+        double low = 0.0;
+        double high = BedLimitSearchLimit;
+        for (int k = 0; k < BisectionSteps; k++)
+        {
+            double middle = 0.5 * (low + high);
+            if (full(middle) >= share)
+            {
+                high = middle;
+            }
+            else
+            {
+                low = middle;
+            }
+        }
+
+        return 0.5 * (low + high);
     }
 
     private static Arrival Grow(Arrival arrival, string? stream, double factor) =>
@@ -149,7 +247,8 @@ public static class GrowthAnalysis
         for (int i = 0; i < network.Units.Length; i++)
         {
             var unit = network.Units[i];
-            if (unit.Servers.IsUnlimited)
+            // A unit with a capacity never becomes unstable: it turns patients away instead (see BedLimits).
+            if (unit.Servers.IsUnlimited || unit.Capacity is not null)
             {
                 continue;
             }

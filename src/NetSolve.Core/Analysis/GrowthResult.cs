@@ -10,7 +10,8 @@ namespace NetSolve.Analysis;
 /// <param name="StrainThreshold">Utilisation at which a unit counts as strained.</param>
 /// <param name="Saturation">
 /// Units that saturate at some finite factor, in the order they do (smallest factor first, ties in file order).
-/// Units with unlimited servers, with no flow, or (for a stream) not fed by it never saturate and are not listed.
+/// Units with unlimited servers, with a capacity (they refuse patients instead, see <see cref="BedLimits"/>), with no
+/// flow, or (for a stream) not fed by it never saturate and are not listed.
 /// </param>
 /// <param name="Steps">One solution per requested factor, in the order requested.</param>
 public sealed record GrowthResult(
@@ -20,6 +21,9 @@ public sealed record GrowthResult(
     ImmutableArray<SaturationPoint> Saturation,
     ImmutableArray<GrowthStep> Steps)
 {
+    /// <summary>Every unit with a capacity, in file order, with the factors at which 1% and 5% of its arrivals find it full.</summary>
+    public ImmutableArray<BedLimitPoint> BedLimits { get; init; } = [];
+
     /// <summary>The unit that becomes unstable first and the factor at which it does; null when none ever does.</summary>
     public SaturationPoint? FirstUnstable => Saturation.IsEmpty ? null : Saturation[0];
 

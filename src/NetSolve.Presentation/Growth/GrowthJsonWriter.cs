@@ -35,6 +35,7 @@ public static class GrowthJsonWriter
         JsonTableWriter.WriteArray(SaturationColumns.Table(growth), "saturation_order", json);
         Threshold(json, "first_strained", growth.FirstStrained, SaturationColumns.StrainFactor, timeUnit);
         Threshold(json, "first_unstable", growth.FirstUnstable, SaturationColumns.SaturationFactor, timeUnit);
+        JsonTableWriter.WriteArray(BedLimitColumns.Table(growth), "bed_limits", json);
         json.WriteStartArray("steps");
         foreach (var step in growth.Steps)
         {

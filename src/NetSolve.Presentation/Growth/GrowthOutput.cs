@@ -20,7 +20,10 @@ public static class GrowthOutput
     /// <summary>The CSV header: one row per factor and unit. A test holds it equal to <see cref="GrowthRowColumns"/>' ids.</summary>
     public const string CsvHeader = "factor,unit,utilisation,mean_wait,mean_time_in_unit,status,time_unit";
 
-    /// <summary>Writes the saturation order, the thresholds, utilisation and wait by factor, and a text chart.</summary>
+    /// <summary>The columns the CSV appends when some unit has a capacity.</summary>
+    public const string CsvBedLimitColumns = "p_full,full_1pct_at,full_5pct_at";
+
+    /// <summary>Writes the saturation order, the thresholds, utilisation and wait by factor, and a text chart; the bed limits when some unit has a capacity.</summary>
     public static void WriteTable(GrowthResult growth, TextWriter output) => GrowthTableWriter.Write(growth, output);
 
     /// <summary>Writes one JSON document.</summary>
@@ -31,4 +34,7 @@ public static class GrowthOutput
 
     /// <summary>The two threshold sentences.</summary>
     public static string Findings(GrowthResult growth) => GrowthTableWriter.Findings(growth);
+
+    /// <summary>The bed-limit sentence: the unit with a capacity first to refuse 1% of its arrivals, and when 5%.</summary>
+    public static string BedLimitFinding(GrowthResult growth) => GrowthTableWriter.BedLimitFinding(growth);
 }

@@ -1,3 +1,4 @@
+using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Solving;
 
@@ -7,4 +8,5 @@ namespace NetSolve.Presentation.Growth;
 /// <param name="Factor">The multiple of today's demand.</param>
 /// <param name="Result">The unit's result at that factor.</param>
 /// <param name="TimeUnit">The network's time unit, written on every row so each row stands on its own when filtered.</param>
-public sealed record GrowthRow(double Factor, UnitResult Result, TimeUnit TimeUnit);
+/// <param name="BedLimit">The unit's bed limit as demand grows; null when it has no capacity.</param>
+public sealed record GrowthRow(double Factor, UnitResult Result, TimeUnit TimeUnit, BedLimitPoint? BedLimit = null);

@@ -25,6 +25,19 @@ public static class GrowthTableWriter
         output.Write($"Saturation order (factor = multiple of today's {(growth.Stream is null ? "demand" : What(growth))})\n");
         PeopleTableWriter.Write(SaturationColumns.Table(growth), output);
         output.Write("\n" + Findings(growth) + "\n");
+        if (!growth.BedLimits.IsEmpty)
+        {
+            output.Write("\nBed limits (a unit with a capacity is never unstable: it turns away or diverts; factor at which 1% and 5% of arrivals find it full, - = not by x1000)\n");
+            PeopleTableWriter.Write(BedLimitColumns.Table(growth), output);
+            output.Write("\n" + BedLimitFinding(growth) + "\n");
+            if (!growth.Steps.IsEmpty)
+            {
+                var index = growth.Network.BuildIndex();
+                output.Write("\nP(full) by growth factor  (share of arrivals turned away or diverted)\n");
+                PeopleTableWriter.Write(GrowthStepColumns.Grid(growth, growth.BedLimits.Take(MaxTableColumns).Select(point => index[point.UnitId]), UnitColumns.PFull), output);
+            }
+        }
+
         var columns = Columns(growth);
         if (columns.Count == 0 || growth.Steps.IsEmpty)
         {
@@ -51,11 +64,30 @@ public static class GrowthTableWriter
         ArgumentNullException.ThrowIfNull(growth);
         if (growth.FirstUnstable is not SaturationPoint unstable || growth.FirstStrained is not SaturationPoint strained)
         {
-            return $"No unit with finite servers carries the growing demand: growth of {What(growth)} never saturates any unit.";
+            return growth.BedLimits.IsEmpty || growth.Network.Units.Any(unit => unit.Capacity is null && !unit.Servers.IsUnlimited)
+                ? $"No unit with finite servers carries the growing demand: growth of {What(growth)} never saturates any unit."
+                : $"Every unit with finite servers has a bed limit: growth of {What(growth)} never makes any unit unstable.";
         }
 
         return $"First to cross the strain threshold: {strained.UnitId} at {Factor(strained.StrainFactor)}{Already(strained.StrainFactor, "strained")}.\n"
             + $"First to become unstable: {unstable.UnitId} at {Factor(unstable.SaturationFactor)}{Already(unstable.SaturationFactor, "unstable")}.";
+    }
+
+    /// <summary>The bed-limit sentence: the unit with a capacity that first turns away 1% of its arrivals, and when 5%.</summary>
+    public static string BedLimitFinding(GrowthResult growth)
+    {
+        ArgumentNullException.ThrowIfNull(growth);
+        var first = growth.BedLimits.Where(point => point.Full1PercentFactor is not null).OrderBy(point => point.Full1PercentFactor).FirstOrDefault();
+        if (first is null)
+        {
+            return $"No unit with a bed limit turns away or diverts 1% of its arrivals by x{PeopleFormat.Factor(GrowthAnalysis.BedLimitSearchLimit)}.";
+        }
+
+        string fivePercent = first.Full5PercentFactor is double five
+            ? $"5% at {Factor(five)}{Already(five, "there")}"
+            : $"5% not by x{PeopleFormat.Factor(GrowthAnalysis.BedLimitSearchLimit)}";
+        double one = first.Full1PercentFactor!.Value;
+        return $"First bed limit to refuse 1% of arrivals: {first.UnitId} at {Factor(one)}{Already(one, "there")}; {fivePercent}.";
     }
 
     private static string Already(double factor, string state) => factor <= 1.0

@@ -37,12 +37,19 @@ public static class DotMapWriter
                 dot.Append("  ").Append(Quote(id)).Append(" [shape=point, xlabel=\"leave\"];\n");
                 Edge(dot, node.UnitId, id, exit.RateText, exit.StrokeWidth, MapColours.BoundaryLine, dashed: false);
             }
+
+            if (node.TurnedAway is { } away)
+            {
+                string id = "turned-away:" + node.UnitId;
+                dot.Append("  ").Append(Quote(id)).Append(" [shape=point, xlabel=\"turned away\"];\n");
+                Edge(dot, node.UnitId, id, away.RateText, away.StrokeWidth, MapColours.BoundaryLine, dashed: true);
+            }
         }
 
         foreach (var edge in layout.Edges)
         {
-            bool feedback = edge.Kind == MapEdgeKind.Feedback;
-            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, feedback ? MapColours.FeedbackLine : MapColours.ForwardLine, feedback);
+            bool dashed = edge.Kind != MapEdgeKind.Forward;
+            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, dashed ? MapColours.FeedbackLine : MapColours.ForwardLine, dashed);
         }
 
         dot.Append("}\n");

@@ -23,4 +23,7 @@ public static class MapColours
 
     /// <summary>Dash pattern of feedback routes.</summary>
     public const string FeedbackDash = "9 5";
+
+    /// <summary>Dash pattern of diversion lines, shorter than a return route's so the two read apart.</summary>
+    public const string DiversionDash = "4 3";
 }

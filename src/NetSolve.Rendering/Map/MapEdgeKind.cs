@@ -8,4 +8,7 @@ public enum MapEdgeKind
 
     /// <summary>A route back against the main direction, or to the same unit: drawn dashed.</summary>
     Feedback,
+
+    /// <summary>Patients diverted from a full unit to its diversion target (<c>when_full: divert to</c>): drawn dashed.</summary>
+    Diversion,
 }

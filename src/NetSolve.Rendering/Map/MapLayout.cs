@@ -10,7 +10,7 @@ namespace NetSolve.Rendering.Map;
 /// <param name="Width">Width of the laid-out graph, margins included.</param>
 /// <param name="Height">Height of the laid-out graph, margins included.</param>
 /// <param name="Nodes">Unit boxes in file order.</param>
-/// <param name="Edges">Routes with a positive probability, in file order.</param>
+/// <param name="Edges">Routes with a positive probability, in file order, then diversions from full units in file order.</param>
 public sealed record MapLayout(
     string Title,
     TimeUnit TimeUnit,

@@ -16,7 +16,8 @@ namespace NetSolve.Rendering.Map;
 /// <summary>Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way.</summary>
 /// <remarks>
 /// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
-/// at the unit's box with their rate written in the box. Routes that run against the main direction after
+/// at the unit's box with their rate written in the box; so are patients turned away by a full unit. Patients
+/// diverted from a full unit are a <see cref="MapEdgeKind.Diversion"/> line to its target. Routes that run against the main direction after
 /// layering, and repeat visits, become <see cref="MapEdgeKind.Feedback"/>. Deterministic: the same solution gives the same layout.
 /// </remarks>
 public static class MapLayoutBuilder
@@ -64,7 +65,13 @@ public static class MapLayoutBuilder
             .Where(route => route.Probability > 0.0)
             .Select(route => (Route: route, PerHour: solution.Units[index[route.From]].ArrivalsPerHour * route.Probability))
             .ToList();
-        double maxPerHour = routes.Select(r => r.PerHour).Concat(arrivalPerHour).Concat(exitPerHour).DefaultIfEmpty(0.0).Max();
+        // Patients diverted from a full unit to its target: a dashed line of their own, laid out with the routes.
+        var diversions = solution.Units
+            .Where(result => result.DivertedPerHour > 0.0 && result.Unit.WhenFull.DivertToUnitId is not null)
+            .Select(result => (From: result.Unit.Id, To: result.Unit.WhenFull.DivertToUnitId!, result.DivertedPerHour, Text: UnitBoxText.Diverted(result, timeUnit)))
+            .ToList();
+        double maxPerHour = routes.Select(r => r.PerHour).Concat(arrivalPerHour).Concat(exitPerHour)
+            .Concat(diversions.Select(d => d.DivertedPerHour)).DefaultIfEmpty(0.0).Max();
 
         var graph = new GeometryGraph();
         var templates = new MapNode[network.Units.Length];
@@ -76,15 +83,16 @@ public static class MapLayoutBuilder
             graph.Nodes.Add(graphNodes[i]);
         }
 
-        var edges = new List<(MsaglEdge Edge, Route Route, double PerHour, double Stroke, string RateText)>(routes.Count);
-        foreach (var (route, perHour) in routes)
+        var edges = new List<(MsaglEdge Edge, string From, string To, bool IsDiversion, double PerHour, double Stroke, string RateText)>(routes.Count + diversions.Count);
+        var lines = routes.Select(r => (r.Route.From, r.Route.To, IsDiversion: false, r.PerHour, Text: PeopleFormat.Rate(r.PerHour, timeUnit)))
+            .Concat(diversions.Select(d => (d.From, d.To, IsDiversion: true, PerHour: d.DivertedPerHour, d.Text)));
+        foreach (var (from, to, isDiversion, perHour, rateText) in lines)
         {
             double stroke = StrokeWidth(perHour, maxPerHour);
-            string rateText = PeopleFormat.Rate(perHour, timeUnit);
-            var edge = new MsaglEdge(graphNodes[index[route.From]], graphNodes[index[route.To]]);
+            var edge = new MsaglEdge(graphNodes[index[from]], graphNodes[index[to]]);
             edge.EdgeGeometry.TargetArrowhead = new Arrowhead { Length = Math.Max(MinArrowLength, ArrowLengthPerStroke * stroke) };
             graph.Edges.Add(edge);
-            edges.Add((edge, route, perHour, stroke, rateText));
+            edges.Add((edge, from, to, isDiversion, perHour, stroke, rateText));
         }
 
         var settings = new SugiyamaLayoutSettings
@@ -129,17 +137,19 @@ public static class MapLayoutBuilder
             {
                 Arrival = Stub(arrivalPerHour[i], maxPerHour, timeUnit, node, direction, isArrival: true),
                 Exit = Stub(exitPerHour[i], maxPerHour, timeUnit, node, direction, isArrival: false),
+                TurnedAway = TurnedAwayStub(solution.Units[i], maxPerHour, timeUnit, node, direction),
             });
         }
 
         var labels = new RateLabelPlacer(placed);
         var mapEdges = ImmutableArray.CreateBuilder<MapEdge>(edges.Count);
-        foreach (var (edge, route, perHour, stroke, rateText) in edges)
+        foreach (var (edge, from, to, isDiversion, perHour, stroke, rateText) in edges)
         {
-            var kind = RunsBackwards(placed[index[route.From]], placed[index[route.To]], direction) ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
+            var kind = isDiversion ? MapEdgeKind.Diversion
+                : RunsBackwards(placed[index[from]], placed[index[to]], direction) ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
             mapEdges.Add(new MapEdge(
-                route.From,
-                route.To,
+                from,
+                to,
                 kind,
                 perHour,
                 rateText,
@@ -188,6 +198,27 @@ public static class MapLayoutBuilder
         }
 
         return new MapStub(perHour, PeopleFormat.Rate(perHour, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
+    }
+
+    /// <summary>
+    /// The turned-away arrow leaves a full unit sideways near its first corner (top-right, or top-left across the
+    /// main direction when it runs left to right), into the gap between boxes of one layer, clear of the exit arrow.
+    /// </summary>
+    private static MapStub? TurnedAwayStub(UnitResult result, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction)
+    {
+        double perHour = result.TurnedAwayPerHour;
+        if (!(perHour > 0.0))
+        {
+            return null;
+        }
+
+        var start = direction == MapDirection.TopToBottom
+            ? new MapPoint(node.Right, node.Top + StubInset)
+            : new MapPoint(node.Left + StubInset, node.Top);
+        var tip = direction == MapDirection.TopToBottom
+            ? new MapPoint(node.Right + StubLength, node.Top + StubInset)
+            : new MapPoint(node.Left + StubInset, node.Top - StubLength);
+        return new MapStub(perHour, UnitBoxText.TurnedAway(result, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
     }
 
     /// <summary>A route runs backwards when its target's centre is not further along the main direction than its source's.</summary>

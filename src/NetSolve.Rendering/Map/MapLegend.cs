@@ -13,7 +13,7 @@ internal static class MapLegend
     {
         double margin = MapTypography.Margin;
         double titleWidth = TextWidth.Of(layout.Title, SvgMapWriter.TitleFontSize, bold: true);
-        var items = Items(layout.TimeUnit);
+        var items = Items(layout.TimeUnit, layout.Edges.Any(edge => edge.Kind == MapEdgeKind.Diversion));
         double widestItem = items.Max(item => item.Width);
         minWidth = Math.Max(titleWidth, widestItem) + (2.0 * margin);
         double available = Math.Max(layout.Width, minWidth) - (2.0 * margin);
@@ -42,7 +42,7 @@ internal static class MapLegend
         return header;
     }
 
-    private static List<LegendItem> Items(TimeUnit timeUnit)
+    private static List<LegendItem> Items(TimeUnit timeUnit, bool hasDiversion)
     {
         var items = new List<LegendItem>();
         foreach (var status in HarbourLightsPalette.Order)
@@ -63,6 +63,11 @@ internal static class MapLegend
 
         items.Add(LineItem("route", MapColours.ForwardLine, string.Empty));
         items.Add(LineItem("return route", MapColours.FeedbackLine, MapColours.FeedbackDash));
+        if (hasDiversion)
+        {
+            items.Add(LineItem("diverted when full", MapColours.FeedbackLine, MapColours.DiversionDash));
+        }
+
         items.Add(LineItem("in from outside / out", MapColours.BoundaryLine, string.Empty));
         string unit = TimeConstants.Name(timeUnit);
         items.Add(TextItem("line width \u221D patients per " + unit));

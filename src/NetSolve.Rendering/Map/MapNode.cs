@@ -13,6 +13,7 @@ namespace NetSolve.Rendering.Map;
 /// <param name="Status">The unit's status.</param>
 /// <param name="Arrival">External arrivals into the unit, if any.</param>
 /// <param name="Exit">Patients leaving the network from the unit, if any.</param>
+/// <param name="TurnedAway">Patients turned away because the unit is full, if any.</param>
 public sealed record MapNode(
     string UnitId,
     double Left,
@@ -22,7 +23,8 @@ public sealed record MapNode(
     ImmutableArray<MapTextLine> Lines,
     UnitStatus Status,
     MapStub? Arrival,
-    MapStub? Exit)
+    MapStub? Exit,
+    MapStub? TurnedAway = null)
 {
     /// <summary>Right edge in map units.</summary>
     public double Right => Left + Width;

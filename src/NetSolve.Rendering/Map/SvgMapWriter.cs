@@ -64,14 +64,14 @@ public static class SvgMapWriter
     {
         int units = layout.Nodes.Length;
         return string.Create(CultureInfo.InvariantCulture,
-            $"{units} units; boxes filled by status ({HarbourLightsPalette.Name} palette) with a glyph and word; line width proportional to patients per {TimeConstants.Name(layout.TimeUnit)}; dashed lines return against the main flow.");
+            $"{units} units; boxes filled by status ({HarbourLightsPalette.Name} palette) with a glyph and word; line width proportional to patients per {TimeConstants.Name(layout.TimeUnit)}; dashed lines return against the main flow{(layout.Edges.Any(edge => edge.Kind == MapEdgeKind.Diversion) ? "; short dashes carry patients diverted from a full unit" : string.Empty)}.");
     }
 
     private static XElement Flow(MapEdge edge)
     {
         string stroke = edge.Kind switch
         {
-            MapEdgeKind.Feedback => MapColours.FeedbackLine,
+            MapEdgeKind.Feedback or MapEdgeKind.Diversion => MapColours.FeedbackLine,
             _ => MapColours.ForwardLine,
         };
         var path = new XElement(
@@ -81,9 +81,9 @@ public static class SvgMapWriter
             new XAttribute("stroke", stroke),
             Attr("stroke-width", edge.StrokeWidth),
             new XAttribute("stroke-linecap", "butt"));
-        if (edge.Kind == MapEdgeKind.Feedback)
+        if (edge.Kind != MapEdgeKind.Forward)
         {
-            path.Add(new XAttribute("stroke-dasharray", MapColours.FeedbackDash));
+            path.Add(new XAttribute("stroke-dasharray", edge.Kind == MapEdgeKind.Diversion ? MapColours.DiversionDash : MapColours.FeedbackDash));
         }
 
         return new XElement(
@@ -124,7 +124,7 @@ public static class SvgMapWriter
             new XAttribute("data-unit", node.UnitId),
             new XAttribute("data-status", StatusWords.Name(node.Status)),
             new XElement(Svg + "title", node.UnitId + ": " + string.Join("; ", node.Lines.Select(line => line.Text))));
-        foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit") })
+        foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit"), (node.TurnedAway, "turned-away") })
         {
             if (stub is not null)
             {
@@ -238,6 +238,7 @@ public static class SvgMapWriter
     {
         MapEdgeKind.Forward => "forward",
         MapEdgeKind.Feedback => "feedback",
+        MapEdgeKind.Diversion => "diversion",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown flow kind."),
     };
 

@@ -6,7 +6,7 @@ using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Map;
 
-/// <summary>The lines written in a unit's box: label, status glyph and word, servers and utilisation, mean wait, rates in and out.</summary>
+/// <summary>The lines written in a unit's box: label, status glyph and word, servers and utilisation, mean wait, rates in and out; P(full) and the turned-away rate for a unit with a capacity.</summary>
 /// <remarks>
 /// Every value is the registry's (<see cref="UnitColumns"/>) in <see cref="PeopleFormat"/>, so a box shows exactly
 /// what the solve table shows: <c>1,200 servers</c>, <c>84.9% busy</c>, <c>wait 4.177 min</c>. Two waits are words
@@ -40,8 +40,25 @@ internal static class UnitBoxText
             lines.Add(Detail("out " + PeopleFormat.Rate(exitPerHour, timeUnit), bold: false));
         }
 
+        if (result.Unit.Capacity is not null)
+        {
+            lines.Add(Detail("P(full) " + PeopleFormat.Percent(result.PFull), bold: false));
+            if (result.TurnedAwayPerHour > 0.0)
+            {
+                lines.Add(Detail(TurnedAway(result, timeUnit), bold: false));
+            }
+        }
+
         return lines.ToImmutable();
     }
+
+    /// <summary>The turned-away rate as the table shows it, with its unit: <c>turned away 0.02/h</c>.</summary>
+    public static string TurnedAway(UnitResult result, TimeUnit timeUnit) =>
+        "turned away " + ShownValue.Of(UnitColumns.TurnedAwayRate, result, timeUnit) + "/" + TimeConstants.Suffix(timeUnit);
+
+    /// <summary>The diverted rate as the table shows it, with its unit: <c>diverted 0.07/h</c>.</summary>
+    public static string Diverted(UnitResult result, TimeUnit timeUnit) =>
+        "diverted " + ShownValue.Of(UnitColumns.DivertedRate, result, timeUnit) + "/" + TimeConstants.Suffix(timeUnit);
 
     private static MapTextLine Detail(string text, bool bold) => new(text, MapTypography.DetailSize, bold);
 

@@ -23,7 +23,7 @@ namespace NetSolve.Rendering.Report;
 /// </remarks>
 public static class HtmlReport
 {
-    /// <summary>The model's assumptions, as the report lists them.</summary>
+    /// <summary>The assumptions of a Jackson network; the report lists those of its own network (<see cref="ReportAssumptions.For"/>).</summary>
     public static IReadOnlyList<string> Assumptions { get; } =
     [
         "Steady state: demand and capacity stay as given long enough for queues to settle; no daily or seasonal pattern.",
@@ -101,9 +101,9 @@ public static class HtmlReport
             SimulationComparisonTable.Append(html, baseline, simulation);
         }
 
-        html.Append("<section id=\"assumptions\">\n<h2>Assumptions and caution</h2>\n<p>The numbers come from a Jackson network: ")
-            .Append("each unit is an M/M/c queue (Erlang C) fed by the flows of the traffic equations, and totals follow Little's law. The model assumes:</p>\n<ul>\n");
-        foreach (string assumption in Assumptions)
+        html.Append("<section id=\"assumptions\">\n<h2>Assumptions and caution</h2>\n<p>")
+            .Append(HtmlEncode(ReportAssumptions.Introduction)).Append("</p>\n<ul>\n");
+        foreach (string assumption in ReportAssumptions.For(baseline))
         {
             html.Append("<li>").Append(HtmlEncode(assumption)).Append("</li>\n");
         }

@@ -8,7 +8,7 @@ namespace NetSolve.Tests.Rendering;
 
 public partial class HtmlReportTests
 {
-    private static readonly string[] AssumptionWords = ["Steady state", "Poisson arrivals", "Exponential service", "Independent routing", "First come, first served"];
+    private static readonly string[] AssumptionWords = ["Steady state", "Poisson arrivals", "exponential service", "Independent routing", "First come, first served"];
 
     private static readonly string[] NamespaceNames = ["http://www.w3.org/2000/svg", "http://www.w3.org/1999/xlink"];
 
