@@ -11,7 +11,7 @@ namespace NetSolve.Solving;
 /// <param name="ServiceScv">Squared coefficient of variation of that mixture.</param>
 /// <param name="ExternalPerHour">External arrivals per unit, per hour, over every group.</param>
 /// <param name="ExternalScv">Squared coefficient of variation of each unit's external arrivals (1: Poisson).</param>
-/// <param name="Routes">Routing fractions of all patients together, by unit position.</param>
+/// <param name="Routes">Routing fractions of all patients together, by unit position; empty for a Jackson network.</param>
 /// <param name="Traffic">The groups' traffic, when the network has patient groups; null otherwise.</param>
 internal sealed record SolverInputs(
     ImmutableArray<double> MeanServiceHours,
@@ -47,7 +47,8 @@ internal sealed record SolverInputs(
         {
             if (traffic is null)
             {
-                double cv = network.Units[i].EffectiveService.Cv;
+                // The unit's distribution when the file gives one, else its service_cv (what EffectiveService would make).
+                double cv = network.Units[i].Service?.Cv ?? network.Units[i].ServiceCv;
                 mean[i] = network.Units[i].MeanServiceHours;
                 scv[i] = cv * cv;
             }
@@ -64,7 +65,9 @@ internal sealed record SolverInputs(
             externalScv[i] = external[i] > 0.0 ? externalScvWeighted[i] / external[i] : 1.0;
         }
 
-        return new SolverInputs([.. mean], [.. scv], [.. external], [.. externalScv], AllRoutes(network, traffic, index), traffic);
+        // The routes serve only the two-moment system, which a Jackson network does not need.
+        bool jackson = scv.All(value => value == 1.0) && externalScv.All(value => value == 1.0);
+        return new SolverInputs([.. mean], [.. scv], [.. external], [.. externalScv], jackson ? [] : AllRoutes(network, traffic, index), traffic);
     }
 
     /// <summary>Routes of all patients: a group's route out of a unit weighs by the group's share of that unit's flow.</summary>

@@ -21,7 +21,18 @@ public sealed record ResultTable(ImmutableArray<ResultColumn> Columns, Immutable
         return new ResultTable(described, cells, timeUnit);
     }
 
+    // Read once per row by every writer: worked out once per table.
+    private readonly ImmutableArray<int> _forPeople = Shown(Columns, Audience.People);
+    private readonly ImmutableArray<int> _forMachines = Shown(Columns, Audience.Machines);
+
     /// <summary>The indexes of the columns shown to <paramref name="audience"/>, in order.</summary>
-    public ImmutableArray<int> ColumnsFor(Audience audience) =>
-        [.. Enumerable.Range(0, Columns.Length).Where(i => Columns[i].Audience == Audience.All || Columns[i].Audience == audience)];
+    public ImmutableArray<int> ColumnsFor(Audience audience) => audience switch
+    {
+        Audience.People => _forPeople,
+        Audience.Machines => _forMachines,
+        _ => [.. Enumerable.Range(0, Columns.Length)],
+    };
+
+    private static ImmutableArray<int> Shown(ImmutableArray<ResultColumn> columns, Audience audience) =>
+        [.. Enumerable.Range(0, columns.Length).Where(i => columns[i].Audience == Audience.All || columns[i].Audience == audience)];
 }
