@@ -67,10 +67,15 @@ public static class FiniteCapacityFormulas
 
     private static FiniteCapacityResult ErlangLoss(int servers, double arrivalsPerHour, double meanServiceHours, double offeredLoad)
     {
-        double blocking = ErlangFormulas.BlockingProbability(servers, offeredLoad);
-        double carried = offeredLoad * (1.0 - blocking);
+        // From the recurrence B(c) = a·B(c−1) / (c + a·B(c−1)): 1 − B(c) = c / (c + a·B(c−1)), which keeps its digits
+        // when B(c) is close to 1 (a hugely overloaded unit still carries about c erlangs), where 1 − B would round to 0.
+        double previous = servers == 1 ? 1.0 : ErlangFormulas.BlockingProbability(servers - 1, offeredLoad);
+        double denominator = servers + (offeredLoad * previous);
+        double blocking = offeredLoad * previous / denominator;
+        double notBlocked = servers / denominator;
+        double carried = offeredLoad * notBlocked;
         return new FiniteCapacityResult(
-            blocking, arrivalsPerHour * (1.0 - blocking), arrivalsPerHour * blocking, Math.Min(1.0, carried / servers),
+            blocking, arrivalsPerHour * notBlocked, arrivalsPerHour * blocking, Math.Min(1.0, carried / servers),
             0.0, 0.0, carried, 0.0, meanServiceHours, ErlangLossMethod);
     }
 
