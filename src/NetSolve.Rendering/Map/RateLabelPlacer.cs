@@ -22,29 +22,38 @@ internal sealed class RateLabelPlacer(IReadOnlyList<MapNode> boxes)
     {
         double halfWidth = (TextWidth.Of(rateText, MapTypography.RateSize) / 2.0) + 2.0 + Clearance;
         double halfHeight = (MapTypography.RateSize * MapTypography.LineSpacing / 2.0) + Clearance;
-        MapPoint first = default;
-        for (int k = 0; k < Positions.Length; k++)
+        MapPoint best = default;
+        double bestOverlap = double.PositiveInfinity;
+        foreach (double position in Positions)
         {
-            var centre = toMap(curve[curve.ParStart + ((curve.ParEnd - curve.ParStart) * Positions[k])]);
-            if (k == 0)
+            var centre = toMap(curve[curve.ParStart + ((curve.ParEnd - curve.ParStart) * position)]);
+            double overlap = Overlap(centre, halfWidth, halfHeight);
+            if (overlap < bestOverlap)
             {
-                first = centre;
+                (best, bestOverlap) = (centre, overlap);
             }
 
-            if (!boxes.Any(box => Overlaps(box, centre, halfWidth, halfHeight))
-                && !_labels.Any(label => Math.Abs(label.Centre.X - centre.X) < label.HalfWidth + halfWidth
-                    && Math.Abs(label.Centre.Y - centre.Y) < label.HalfHeight + halfHeight))
+            if (overlap == 0.0)
             {
-                _labels.Add((centre, halfWidth, halfHeight));
-                return centre;
+                break;
             }
         }
 
-        _labels.Add((first, halfWidth, halfHeight));
-        return first;
+        // Where no position is clear, the one that covers the least of the boxes and labels already placed.
+        _labels.Add((best, halfWidth, halfHeight));
+        return best;
     }
 
-    private static bool Overlaps(MapNode box, MapPoint centre, double halfWidth, double halfHeight) =>
-        centre.X + halfWidth > box.Left && centre.X - halfWidth < box.Right
-        && centre.Y + halfHeight > box.Top && centre.Y - halfHeight < box.Bottom;
+    /// <summary>The area a label at <paramref name="centre"/> would share with the unit boxes and the labels placed so far.</summary>
+    private double Overlap(MapPoint centre, double halfWidth, double halfHeight)
+    {
+        double area = boxes.Sum(box => Shared(centre.X - halfWidth, centre.X + halfWidth, box.Left, box.Right)
+            * Shared(centre.Y - halfHeight, centre.Y + halfHeight, box.Top, box.Bottom));
+        return area + _labels.Sum(label =>
+            Shared(centre.X - halfWidth, centre.X + halfWidth, label.Centre.X - label.HalfWidth, label.Centre.X + label.HalfWidth)
+            * Shared(centre.Y - halfHeight, centre.Y + halfHeight, label.Centre.Y - label.HalfHeight, label.Centre.Y + label.HalfHeight));
+    }
+
+    private static double Shared(double low, double high, double otherLow, double otherHigh) =>
+        Math.Max(0.0, Math.Min(high, otherHigh) - Math.Max(low, otherLow));
 }
