@@ -13,7 +13,7 @@ internal sealed class RateLabelPlacer(IReadOnlyList<MapNode> boxes)
     private readonly List<(MapPoint Centre, double HalfWidth, double HalfHeight)> _labels = [];
 
     /// <summary>Fractions of the line's parameter range tried in turn: the middle first, then outwards.</summary>
-    private static readonly double[] Positions = [0.5, 0.4, 0.6, 0.3, 0.7, 0.2, 0.8];
+    private static readonly double[] Positions = [0.5, 0.4, 0.6, 0.3, 0.7, 0.2, 0.8, 0.15, 0.85, 0.1, 0.9];
 
     /// <summary>Space kept between a label and a box.</summary>
     private const double Clearance = 2.0;
