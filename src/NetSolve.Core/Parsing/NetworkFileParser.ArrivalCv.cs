@@ -27,7 +27,7 @@ internal sealed partial class NetworkFileParser
         var cvs = new Dictionary<string, double>(StringComparer.Ordinal);
         foreach (var (key, value) in UniqueEntries(mapping, null))
         {
-            if (!KnownUnit(key, known, ArrivalCvKey) || Value(value, key.Value, ArrivalCvKey, NumberValue.Parse) is not double cv)
+            if (!KnownUnit(key, known, ArrivalCvKey) || Value(value, key.Value, ArrivalCvKey, CvValue.Parse) is not double cv)
             {
                 continue;
             }

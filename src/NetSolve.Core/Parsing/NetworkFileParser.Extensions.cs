@@ -64,7 +64,7 @@ internal sealed partial class NetworkFileParser
         }
 
         double defaultCv = kind == ServiceKind.Deterministic ? 0.0 : 1.0;
-        double? cv = cvNode is null ? defaultCv : Value(cvNode, id, "service_cv", NumberValue.Parse);
+        double? cv = cvNode is null ? defaultCv : Value(cvNode, id, "service_cv", CvValue.Parse);
         if (cv < 0.0)
         {
             Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");

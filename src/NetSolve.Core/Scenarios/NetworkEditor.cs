@@ -170,22 +170,22 @@ public static partial class NetworkEditor
             if (!DurationValue.IsUsableHours(hours))
             {
                 Error(scale.Location, unit.Id, ChangeCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-                    $"service: {unit.MeanServiceHours:0.######} h times {scale.Factor} is {(double.IsFinite(hours) ? "too short" : "too long")} for a duration"));
+                    $"service: {unit.MeanServiceHours:0.######} h times {scale.Factor} is {(hours > ValueRanges.LongestHours ? "too long" : "too short")} for a duration ({ValueRanges.DurationRange})"));
                 return;
             }
 
             _units[index] = unit with { MeanServiceHours = hours };
         }
 
-        /// <summary>Multiplies one external stream, refusing a product too large for a rate (as a file would).</summary>
+        /// <summary>Multiplies one external stream, refusing a product outside a rate's range (as a file would).</summary>
         private void ScaleArrivalAt(int index, ScaleArrivals scale)
         {
             var arrival = _arrivals[index];
             double perHour = arrival.PerHour * scale.Factor;
-            if (!double.IsFinite(perHour))
+            if (!ValueRanges.IsRate(perHour))
             {
                 Error(scale.Location, arrival.UnitId, ChangeCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
-                    $"arrival rate: {arrival.PerHour:0.######}/h times {scale.Factor} is too large for a rate"));
+                    $"arrival rate: {arrival.PerHour:0.######}/h times {scale.Factor} is {(perHour > ValueRanges.LargestRatePerHour ? "too large" : "too small")} for a rate ({ValueRanges.RateRange})"));
                 return;
             }
 

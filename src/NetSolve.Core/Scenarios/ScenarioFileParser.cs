@@ -145,7 +145,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             hours = Value(serviceNode, id, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit));
         }
 
-        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", NumberValue.Parse) : 1.0;
+        double? cv = fields.TryGetValue("service_cv", out var cvNode) ? Value(cvNode, id, "service_cv", CvValue.Parse) : 1.0;
         if (cv < 0.0)
         {
             Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");

@@ -17,7 +17,7 @@ public static class StatusRule
         double smallest = double.PositiveInfinity;
         foreach (var unit in units)
         {
-            if (unit.IsStable && unit.Headroom is double headroom && headroom < smallest)
+            if (unit.IsStable && unit.Headroom is double headroom && double.IsFinite(headroom) && headroom < smallest)
             {
                 smallest = headroom;
             }
@@ -39,7 +39,8 @@ public static class StatusRule
             return UnitStatus.Unstable;
         }
 
-        if (unit.Headroom is double headroom
+        // An infinite headroom (a load too small to divide by) is never the first to saturate.
+        if (unit.Headroom is double headroom && double.IsFinite(headroom)
             && headroom - smallestHeadroom <= Tolerances.HeadroomTie * Math.Max(headroom, smallestHeadroom))
         {
             return UnitStatus.Bottleneck;

@@ -65,11 +65,11 @@ public static class JsonTableWriter
         }
     }
 
-    /// <summary>Writes a number, or null when absent.</summary>
+    /// <summary>Writes a number, or null when absent or not finite (JSON has no infinity).</summary>
     public static void WriteNumber(Utf8JsonWriter json, string name, double? value)
     {
         ArgumentNullException.ThrowIfNull(json);
-        if (value is double number)
+        if (MachineFormat.Finite(value) is double number)
         {
             json.WriteNumber(name, number);
         }

@@ -10,9 +10,18 @@ namespace NetSolve.Presentation.Formats;
 /// </summary>
 public static class MachineFormat
 {
-    /// <summary>The number of <paramref name="cell"/> in <paramref name="timeUnit"/>; null when absent or text.</summary>
+    /// <summary>
+    /// The number of <paramref name="cell"/> in <paramref name="timeUnit"/>; null when absent, text, or not finite.
+    /// </summary>
+    /// <remarks>
+    /// The last guard before every machine writer: an infinity or NaN is a value that is truly undefined, which the
+    /// contract writes as JSON null and an empty CSV cell, never as <c>Infinity</c> (not JSON at all).
+    /// </remarks>
     public static double? Value(Cell cell, TimeUnit timeUnit) =>
-        cell.Number is double value ? Convert(value, cell.Dimension, timeUnit) : null;
+        cell.Number is double value ? Finite(Convert(value, cell.Dimension, timeUnit)) : null;
+
+    /// <summary><paramref name="value"/> when it is finite; null for NaN and the infinities.</summary>
+    public static double? Finite(double? value) => value is double number && double.IsFinite(number) ? number : null;
 
     /// <summary>Converts a value in Core's units (hours, per hour) to <paramref name="timeUnit"/>.</summary>
     public static double Convert(double value, MetricDimension dimension, TimeUnit timeUnit) => dimension switch
@@ -22,8 +31,8 @@ public static class MachineFormat
         _ => value,
     };
 
-    /// <summary>A number for CSV: round-trip precision; empty for null.</summary>
-    public static string Csv(double? value) => value?.ToString("R", CultureInfo.InvariantCulture) ?? string.Empty;
+    /// <summary>A number for CSV: round-trip precision; empty for null, NaN and the infinities.</summary>
+    public static string Csv(double? value) => Finite(value)?.ToString("R", CultureInfo.InvariantCulture) ?? string.Empty;
 
     /// <summary>One CSV cell: text quoted when needed, servers <c>unlimited</c> when absent, other absent values empty.</summary>
     public static string CsvCell(Cell cell, TimeUnit timeUnit)

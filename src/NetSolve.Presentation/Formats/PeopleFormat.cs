@@ -49,6 +49,12 @@ public static class PeopleFormat
             return cell.Dimension == MetricDimension.Servers ? Unlimited : Missing;
         }
 
+        // A value that is not finite is undefined to a reader, as an absent one is: never "Infinity%".
+        if (!double.IsFinite(value) || cell.HalfWidth is double spread && !double.IsFinite(spread))
+        {
+            return Missing;
+        }
+
         if (cell.HalfWidth is double halfWidth)
         {
             return WithHalfWidth(value, halfWidth, cell.Dimension, timeUnit);
@@ -70,6 +76,11 @@ public static class PeopleFormat
     /// <summary>About four significant digits, grouped from 1,000, never an exponent: <c>0.1867</c>, <c>158.8</c>, <c>1,200</c>.</summary>
     public static string Number(double value)
     {
+        if (double.IsNaN(value))
+        {
+            return Missing;
+        }
+
         double magnitude = Math.Abs(value);
         if (magnitude == 0.0)
         {
@@ -100,6 +111,11 @@ public static class PeopleFormat
     /// <summary>A time stored in hours, in minutes, hours or days, whichever reads best: <c>4.175 min</c>, <c>14.76 h</c>, <c>5.503 d</c>.</summary>
     public static string Time(double hours)
     {
+        if (!double.IsFinite(hours))
+        {
+            return Missing;
+        }
+
         if (hours == 0.0)
         {
             return "0";
@@ -115,7 +131,7 @@ public static class PeopleFormat
 
     /// <summary>A probability with three decimals: <c>0.253</c>; <c>&lt; 0.001</c> when above 0 but smaller.</summary>
     public static string Probability(double value) =>
-        value > 0.0 && value < 0.0005 ? "< 0.001" : value.ToString("0.000", Invariant);
+        double.IsNaN(value) ? Missing : value > 0.0 && value < 0.0005 ? "< 0.001" : value.ToString("0.000", Invariant);
 
     /// <summary>A share as a percentage with one decimal: <c>84.9%</c>; <c>&lt; 0.1%</c> when above 0 but smaller.</summary>
     public static string Percent(double fraction) => PercentNumber(fraction) + "%";
@@ -125,7 +141,7 @@ public static class PeopleFormat
 
     /// <summary>A relative change as a signed percentage: <c>+12.5%</c>, <c>-4.0%</c>.</summary>
     public static string SignedPercent(double relative) =>
-        Math.Abs(relative) >= LargestNumber / 100.0 ? (relative > 0.0 ? "+" : "-") + "> 1e13%"
+        double.IsNaN(relative) ? Missing : Math.Abs(relative) >= LargestNumber / 100.0 ? (relative > 0.0 ? "+" : "-") + "> 1e13%"
             : (relative * 100.0).ToString("+#,0.0;-#,0.0;0.0", Invariant) + "%";
 
     /// <summary>A signed number for changes: <c>+1.418</c>, <c>-0.2</c>; as <see cref="Number"/> with a plus sign.</summary>
@@ -190,7 +206,7 @@ public static class PeopleFormat
     }
 
     private static string PercentNumber(double fraction) =>
-        fraction > 0.0 && fraction < 0.0005 ? "< 0.1" : Number1(fraction * 100.0);
+        double.IsNaN(fraction) ? Missing : fraction > 0.0 && fraction < 0.0005 ? "< 0.1" : Number1(fraction * 100.0);
 
     private static string Number1(double value) =>
         Math.Abs(value) >= LargestNumber ? Number(value) : value.ToString("#,0.0", Invariant);

@@ -7,8 +7,8 @@ namespace NetSolve.Parsing.Values;
 /// number is in the file's time unit.
 /// </summary>
 /// <remarks>
-/// Thread-safe. A duration is positive and both it and its reciprocal (the service rate) are ordinary finite doubles
-/// (<see cref="IsUsableHours"/>): <c>1e-320h</c> would make the rate infinite and is refused as too short.
+/// Thread-safe. A duration is within <see cref="ValueRanges.DurationRange"/> (<see cref="IsUsableHours"/>):
+/// <c>1e-320h</c> would make the service rate infinite and is refused as too short, <c>1e300h</c> as too long.
 /// </remarks>
 public static class DurationValue
 {
@@ -31,16 +31,15 @@ public static class DurationValue
         }
 
         double hours = amount * NumberText.HoursPerSuffix(suffix, timeUnit);
-        if (!double.IsFinite(hours))
+        if (IsUsableHours(hours))
         {
-            return ValueResult<double>.Invalid($"'{text}' is too long for a duration");
+            return ValueResult<double>.Valid(hours);
         }
 
-        return IsUsableHours(hours)
-            ? ValueResult<double>.Valid(hours)
-            : ValueResult<double>.Invalid($"'{text}' is too short for a duration");
+        string which = hours > ValueRanges.LongestHours ? "too long" : "too short";
+        return ValueResult<double>.Invalid($"'{text}' is {which} for a duration ({ValueRanges.DurationRange})");
     }
 
-    /// <summary>True for a positive, finite, normal number of hours whose reciprocal is finite too.</summary>
-    public static bool IsUsableHours(double hours) => double.IsNormal(hours) && hours > 0.0 && double.IsFinite(1.0 / hours);
+    /// <summary>True for a number of hours within <see cref="ValueRanges.DurationRange"/> (so finite, normal, with a finite reciprocal).</summary>
+    public static bool IsUsableHours(double hours) => ValueRanges.IsDuration(hours);
 }

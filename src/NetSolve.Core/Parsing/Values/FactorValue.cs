@@ -1,7 +1,8 @@
 namespace NetSolve.Parsing.Values;
 
 /// <summary>
-/// A factor that multiplies a value (<c>1.2</c> is 20% more, <c>0.8</c> is 20% less): a finite number. Times take a
+/// A factor that multiplies a value (<c>1.2</c> is 20% more, <c>0.8</c> is 20% less): within
+/// <see cref="ValueRanges.FactorRange"/>. Times take a
 /// <see cref="Positive"/> factor; arrivals a <see cref="NotNegative"/> one, since 0 stops a stream.
 /// </summary>
 /// <remarks>
@@ -24,13 +25,19 @@ public static class FactorValue
             return ValueResult<double>.Invalid($"'{text}' is not a factor (write a number, e.g. 1.2 for 20% more)");
         }
 
-        if (!double.IsFinite(factor))
+        if (!(allowZero ? factor >= 0.0 : factor > 0.0))
         {
-            return ValueResult<double>.Invalid($"'{text}' is too large for a factor");
+            return ValueResult<double>.Invalid($"the factor must be {(allowZero ? "0 or more" : "more than 0")}, not '{text}'");
         }
 
-        return (allowZero ? factor >= 0.0 : factor > 0.0)
+        if (allowZero && factor == 0.0)
+        {
+            return ValueResult<double>.Valid(0.0);
+        }
+
+        return factor is >= ValueRanges.SmallestFactor and <= ValueRanges.LargestFactor
             ? ValueResult<double>.Valid(factor)
-            : ValueResult<double>.Invalid($"the factor must be {(allowZero ? "0 or more" : "more than 0")}, not '{text}'");
+            : ValueResult<double>.Invalid(
+                $"'{text}' is too {(factor > ValueRanges.LargestFactor ? "large" : "small")} for a factor ({(allowZero ? "0, or " : string.Empty)}{ValueRanges.FactorRange})");
     }
 }

@@ -4,7 +4,8 @@ namespace NetSolve.Parsing.Values;
 
 /// <summary>
 /// An arrival rate (<c>11.5</c>, <c>11.5/h</c>, <c>11.5 /h</c>, <c>280/d</c>, <c>0.2/min</c>, <c>3/s</c>), read into
-/// events per hour; a bare number is per the file's time unit. Finite and not negative; 0 is allowed (no arrivals).
+/// events per hour; a bare number is per the file's time unit. 0 (no arrivals), or within
+/// <see cref="ValueRanges.RateRange"/>.
 /// </summary>
 /// <remarks>Thread-safe.</remarks>
 public static class RateValue
@@ -23,13 +24,17 @@ public static class RateValue
         }
 
         double perHour = amount / NumberText.HoursPerSuffix(suffix, timeUnit);
-        if (!double.IsFinite(perHour))
+        if (perHour < 0.0)
         {
-            return ValueResult<double>.Invalid($"'{text}' is too large for a rate");
+            return ValueResult<double>.Invalid($"'{text}' is negative; an arrival rate is 0 or more");
         }
 
-        return perHour >= 0.0
-            ? ValueResult<double>.Valid(perHour)
-            : ValueResult<double>.Invalid($"'{text}' is negative; an arrival rate is 0 or more");
+        if (ValueRanges.IsRate(perHour))
+        {
+            return ValueResult<double>.Valid(perHour == 0.0 ? 0.0 : perHour);
+        }
+
+        string which = perHour > ValueRanges.LargestRatePerHour ? "too large" : "too small";
+        return ValueResult<double>.Invalid($"'{text}' is {which} for a rate ({ValueRanges.RateRange})");
     }
 }

@@ -1,0 +1,20 @@
+namespace NetSolve.Parsing.Values;
+
+/// <summary>A coefficient of variation (<c>service_cv</c>, <c>arrival_cv</c>): a number within <see cref="ValueRanges.CvRange"/>.</summary>
+/// <remarks>Thread-safe. 0 is evenly spaced, 1 the exponential; far above 100 no formula or sampler stays meaningful.</remarks>
+public static class CvValue
+{
+    /// <summary>Reads <paramref name="text"/> as a coefficient of variation.</summary>
+    public static ValueResult<double> Parse(string text)
+    {
+        var number = NumberValue.Parse(text);
+        if (!number.IsValid)
+        {
+            return number;
+        }
+
+        return number.Value is >= 0.0 and <= ValueRanges.LargestCv
+            ? number
+            : ValueResult<double>.Invalid($"'{text}' is not a coefficient of variation ({ValueRanges.CvRange}; 1 is exponential, 0 evenly spaced)");
+    }
+}
