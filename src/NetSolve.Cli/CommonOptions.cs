@@ -38,10 +38,10 @@ internal static class CommonOptions
     };
 
     /// <summary><c>--strain</c>: utilisation at which a unit is flagged strained, read in invariant culture.</summary>
-    public static Option<double> Strain() => SettingOptions.Number(
+    public static Option<double> Strain() => SettingOptions.Fraction(
         "--strain",
-        value => value is > 0.0 and <= 1.0,
-        text => Messages.NotNumber("--strain", text, "a number", "above 0 and at most 1", "write e.g. 0.85"),
+        value => value > 0.0,
+        text => Messages.NotNumber("--strain", text, "a utilisation", "above 0 and at most 1", "write e.g. 0.85 or 85%"),
         Defaults.StrainThreshold,
-        "Utilisation at or above which a unit is flagged strained (default 0.85, the common planning rule of thumb).");
+        "Utilisation at or above which a unit is flagged strained, above 0 and at most 1 or 100% (default 0.85, the common planning rule of thumb).");
 }

@@ -36,12 +36,19 @@ internal static class Messages
 
     /// <summary>A defect in NetSolve: one line, the stack only with <c>--verbose</c>.</summary>
     public static string InternalError(Exception exception, bool verbose) =>
-        $"{Program}internal error: {exception.Message}" + (verbose ? "\n" + exception : " (run again with --verbose for details)");
+        $"{Program}internal error: {OneLine(exception.Message)}" + (verbose ? "\n" + exception : " (run again with --verbose for details)");
+
+    /// <summary>The first line of <paramref name="text"/>, so a defect's message stays one line without --verbose.</summary>
+    private static string OneLine(string text) => text.Split('\n', 2)[0].TrimEnd('\r');
 
     /// <summary>A problem the solver found in a network that passed validation (for example traffic that cannot be solved).</summary>
     public static string SolverProblem(string message) => Program + message;
 
     // Option values: one message per kind of value, each naming the option.
+
+    /// <summary>A simulation whose estimated work is above the bound, refused unless asked for.</summary>
+    public static string SimulationTooLong(double events, double bound) =>
+        Invariant($"--duration: the run would simulate about {events:0.#e+0} events, more than the bound of {bound:0.#e+0} (fewer --replications or a shorter --duration or --warmup; --allow-long to run it anyway)");
 
     /// <summary>A whole number out of its range (or not a whole number at all).</summary>
     public static string NotWholeNumber(string option, string text, decimal min, decimal max) =>

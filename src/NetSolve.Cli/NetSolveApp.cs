@@ -11,16 +11,16 @@ internal static class NetSolveApp
     /// <summary>Runs the command line; never throws.</summary>
     public static int Run(string[] args, CliContext context)
     {
-        var root = BuildRoot(context);
-        var parse = root.Parse(args);
-        if (parse.Errors.Count > 0)
-        {
-            return Usage(parse.Errors.Select(error => error.Message), context);
-        }
-
         bool verbose = args.Contains("--verbose");
         try
         {
+            var root = BuildRoot(context);
+            var parse = root.Parse(args);
+            if (parse.Errors.Count > 0)
+            {
+                return Usage(parse.Errors.Select(error => error.Message), context);
+            }
+
             return parse.Invoke(new InvocationConfiguration
             {
                 Output = context.Out,

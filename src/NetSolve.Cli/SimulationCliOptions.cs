@@ -3,6 +3,7 @@ using System.CommandLine.Parsing;
 using NetSolve.Cli.Settings;
 using NetSolve.Model;
 using NetSolve.Simulation;
+using NetSolve.Solving;
 
 namespace NetSolve.Cli;
 
@@ -71,6 +72,34 @@ internal static class SimulationCliOptions
             WaitThresholdsHours = waitOver is null ? [] : [.. (parse.GetValue(waitOver) ?? []).Select(text => Hours(waitOver, text, WaitOver))],
         };
         return problems.Count == 0 ? options : throw new UsageException(problems);
+    }
+
+    /// <summary><c>--allow-long</c>: run even when the estimated work is above <see cref="SettingLimits.MaxSimulatedEvents"/>.</summary>
+    public static Option<bool> AllowLong() => new("--allow-long")
+    {
+        Description = "Run even when the estimated work is above 10 billion events (visits x run length x replications), which is refused by default as a likely slip.",
+    };
+
+    /// <summary>
+    /// The events a run will simulate, roughly: two per visit (arrival and departure) at the solved arrival rates,
+    /// over warm-up and duration, in every replication.
+    /// </summary>
+    public static double EstimatedEvents(NetworkSolution solution, SimulationOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        ArgumentNullException.ThrowIfNull(options);
+        double visitsPerHour = solution.Units.Sum(unit => double.IsFinite(unit.ArrivalsPerHour) ? unit.ArrivalsPerHour : 0.0);
+        return 2.0 * visitsPerHour * (options.WarmupHours + options.DurationHours) * options.Replications;
+    }
+
+    /// <summary>Refuses a run above <see cref="SettingLimits.MaxSimulatedEvents"/> unless <paramref name="allowLong"/>: a usage error naming the bound.</summary>
+    public static void CheckWork(NetworkSolution solution, SimulationOptions options, bool allowLong)
+    {
+        double events = EstimatedEvents(solution, options);
+        if (!allowLong && events > SettingLimits.MaxSimulatedEvents)
+        {
+            throw new UsageException(Messages.SimulationTooLong(events, SettingLimits.MaxSimulatedEvents));
+        }
     }
 
     /// <summary><c>--wait-over T ...</c>: each a duration, 0 included.</summary>

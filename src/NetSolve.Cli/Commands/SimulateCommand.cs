@@ -27,6 +27,8 @@ internal sealed class SimulateCommand() : NetworkCommand(
 
     private readonly Option<bool> _compare = new("--compare") { Description = "Set the formula results beside the simulation, with each unit's method, the relative error and a verdict per metric." };
 
+    private readonly Option<bool> _allowLong = SimulationCliOptions.AllowLong();
+
     private readonly Option<int> _threads = SettingOptions.WholeNumber(
         "--threads", 1, SettingLimits.MaxThreads, -1, "Most replications run at once (default: all cores); results do not depend on it.");
 
@@ -35,7 +37,7 @@ internal sealed class SimulateCommand() : NetworkCommand(
 
     protected override bool ForSimulation => true;
 
-    protected override IEnumerable<Symbol> Symbols => [_seed, _replications, _warmup, _duration, _waitOver, _compare, _threads];
+    protected override IEnumerable<Symbol> Symbols => [_seed, _replications, _warmup, _duration, _waitOver, _compare, _threads, _allowLong];
 
     protected override int Execute(NetworkRequest request)
     {
@@ -43,6 +45,7 @@ internal sealed class SimulateCommand() : NetworkCommand(
         var options = SimulationCliOptions.Read(
             request.Parse, network.TimeUnit, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, SimulationCliOptions.Duration), _waitOver)
             with { MaxDegreeOfParallelism = request.GetValue(_threads) };
+        SimulationCliOptions.CheckWork(request.Solve(), options, request.GetValue(_allowLong));
         var result = SimulationRun.Run(network, options, request.Context);
         if (result.ReplicationsFinished == 0)
         {

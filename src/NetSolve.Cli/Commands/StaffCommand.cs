@@ -17,9 +17,9 @@ internal sealed class StaffCommand() : NetworkCommand(
     /// <summary>Staffing targets: a zero target is a valid question with the answer "impossible", which the search explains per unit.</summary>
     private static readonly DurationRule Target = new(AllowZero: true, "30min, 4h, 2d");
 
-    private readonly Option<double?> _maxUtil = SettingOptions.OptionalNumber(
-        "--max-util", value => value is >= 0.0 and <= 1.0, text => Messages.NotNumber("--max-util", text, "a utilisation", "from 0 to 1", "write e.g. 0.85"),
-        "Target: utilisation at most this, from 0 to 1 (e.g. 0.85).",
+    private readonly Option<double?> _maxUtil = SettingOptions.OptionalFraction(
+        "--max-util", _ => true, text => Messages.NotNumber("--max-util", text, "a utilisation", "from 0 to 1", "write e.g. 0.85 or 85%"),
+        "Target: utilisation at most this, from 0 to 1 or 0% to 100% (e.g. 0.85 or 85%).",
         "FRACTION");
 
     private readonly Option<string> _maxWait = SettingOptions.Duration("--max-wait", Target, null, "Target: mean wait before service at most this (e.g. 30min, 4h).", "DURATION");

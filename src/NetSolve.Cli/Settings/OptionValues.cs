@@ -33,6 +33,12 @@ internal static partial class OptionValues
     public static bool Number(string text, Func<double, bool> accept, out double value) =>
         ValueParser.Number(text, out value) is null && accept(value);
 
+    /// <summary>
+    /// A fraction as the files write a probability (<c>0.85</c>, <c>85%</c>, <c>85 %</c>) for which <paramref name="accept"/> holds.
+    /// </summary>
+    public static bool Fraction(string text, Func<double, bool> accept, out double value) =>
+        ValueParser.Probability(text, out value) is null && accept(value);
+
     /// <summary>One of <paramref name="choices"/>, exactly as written there.</summary>
     public static string? Choice(string option, string text, IReadOnlyCollection<string> choices) =>
         choices.Contains(text, StringComparer.Ordinal) ? null : Messages.NotOneOf(option, text, choices);

@@ -26,4 +26,11 @@ internal static class SettingLimits
 
     /// <summary>Longest warm-up or measured time of one replication: ten years; longer runs are better spent as more replications.</summary>
     public const double MaxSimulatedDays = 3_650.0;
+
+    /// <summary>
+    /// Most simulated events (about two per visit: arrival and departure, times the run length and the replications)
+    /// before <c>simulate</c> asks for <c>--allow-long</c>: at about 10 million events a second per core
+    /// (docs/performance.md) this is a quarter of an hour or more of work, where a planning run takes seconds.
+    /// </summary>
+    public const double MaxSimulatedEvents = 1e10;
 }

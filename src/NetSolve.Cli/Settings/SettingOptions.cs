@@ -41,6 +41,22 @@ internal static class SettingOptions
         CustomParser = result => Read<double?>(result, text => (OptionValues.Number(text, accept, out double value) ? null : problem(text), value)),
     };
 
+    /// <summary>A fraction (<c>0.85</c> or <c>85%</c>, as a file's probability) that <paramref name="accept"/> takes; otherwise <paramref name="problem"/> of the text.</summary>
+    public static Option<double> Fraction(string name, Func<double, bool> accept, Func<string, string> problem, double defaultValue, string description) => new(name)
+    {
+        Description = description,
+        DefaultValueFactory = _ => defaultValue,
+        CustomParser = result => Read(result, text => (OptionValues.Fraction(text, accept, out double value) ? null : problem(text), value)),
+    };
+
+    /// <summary>As <see cref="Fraction"/>, null when not given.</summary>
+    public static Option<double?> OptionalFraction(string name, Func<double, bool> accept, Func<string, string> problem, string description, string? helpName = null) => new(name)
+    {
+        Description = description,
+        HelpName = helpName,
+        CustomParser = result => Read<double?>(result, text => (OptionValues.Fraction(text, accept, out double value) ? null : problem(text), value)),
+    };
+
     /// <summary>A duration as written (a bare number is in the file's time unit, so it becomes hours only once the file is read).</summary>
     public static Option<string> Duration(string name, DurationRule rule, string? defaultValue, string description, string? helpName = null)
     {

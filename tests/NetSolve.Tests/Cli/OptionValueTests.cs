@@ -16,13 +16,13 @@ public sealed class OptionValueTests
     [Fact]
     public void Every_bad_option_of_staff_is_one_line_naming_it_and_the_command_exits_2()
     {
-        var (code, output, error) = Run("staff", Harbourside, "--max-wait", "abc", "--max-util", "85%", "--budget", "-1");
+        var (code, output, error) = Run("staff", Harbourside, "--max-wait", "abc", "--max-util", "185%", "--budget", "-1");
 
         Assert.Equal(2, code);
         Assert.Empty(output);
         Assert.Equal(
             [
-                "netsolve: --max-util: '85%' is not a utilisation from 0 to 1 (write e.g. 0.85)",
+                "netsolve: --max-util: '185%' is not a utilisation from 0 to 1 (write e.g. 0.85 or 85%)",
                 "netsolve: --max-wait: 'abc' is not a duration (write e.g. 30min, 4h, 2d; a bare number is in the file's time unit)",
                 "netsolve: --budget: '-1' is not a whole number from 0 to 1000000",
                 "netsolve: staff: --budget answers its own question; give it without targets or --cost",
