@@ -77,6 +77,9 @@ internal static class Messages
     /// <summary>A probability in a form not understood, or outside 0 to 1 (the message of the shared value parser).</summary>
     public static string NotProbability(string option, string problem) => $"{option}: {problem}";
 
+    /// <summary>A value the files' own parser refuses as outside its range; its problem already says the range.</summary>
+    public static string OutOfRange(string option, string problem) => $"{option}: {problem}";
+
     /// <summary>An output file name whose extension the command does not write.</summary>
     public static string WrongExtension(string option, string? text, IEnumerable<string> extensions) =>
         $"{option} '{text}': the file name must end in {string.Join(", ", extensions)}";

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.RegularExpressions;
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Parsing.Values;
 
 namespace NetSolve.Cli.Settings;
 
@@ -52,7 +53,7 @@ internal static partial class OptionValues
         ArgumentNullException.ThrowIfNull(rule);
         if (!TryDuration(text, fileUnit ?? TimeUnit.Minute, rule.AllowZero, out hours))
         {
-            return Messages.NotDuration(option, text, rule.AllowZero, rule.Examples);
+            return OutOfRange(option, text, rule, fileUnit ?? TimeUnit.Minute) ?? Messages.NotDuration(option, text, rule.AllowZero, rule.Examples);
         }
 
         // Minutes give the fewest hours for a bare number and days the most, so these bounds hold in any file.
@@ -69,6 +70,23 @@ internal static partial class OptionValues
         }
 
         return null;
+    }
+
+    /// <summary>
+    /// The problem of a well-formed duration outside the files' range (<see cref="ValueRanges.DurationRange"/>): the
+    /// option's own limit when it has one and the text is too long, else the parser's message, which says the range.
+    /// Null when the text is not a duration at all.
+    /// </summary>
+    private static string? OutOfRange(string option, string text, DurationRule rule, TimeUnit timeUnit)
+    {
+        if (ValueParser.Duration(text, timeUnit, out _) is not string problem || !problem.Contains(ValueRanges.DurationRange, StringComparison.Ordinal))
+        {
+            return null;
+        }
+
+        return problem.Contains("too long", StringComparison.Ordinal) && double.IsFinite(rule.MaxDays)
+            ? Messages.DurationTooLong(option, text, rule.MaxDays, rule.TooLong)
+            : Messages.OutOfRange(option, problem);
     }
 
     private static bool TryDuration(string text, TimeUnit timeUnit, bool allowZero, out double hours)

@@ -38,7 +38,7 @@ internal static class HardeningRun
         Assert.DoesNotContain("\u221E", text, StringComparison.Ordinal);
     }
 
-    /// <summary>Writes the Millbrook clinic with <paramref name="from"/> replaced by <paramref name="to"/> into a fresh temporary file.</summary>
+    /// <summary>Writes the Millbrook clinic with each change's text replaced into a fresh temporary file.</summary>
     public static string MillbrookWith(params (string From, string To)[] changes)
     {
         string text = File.ReadAllText(TestFiles.Network("millbrook-clinic"));

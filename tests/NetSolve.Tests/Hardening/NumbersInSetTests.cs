@@ -27,9 +27,10 @@ public sealed class NumbersInSetTests
     [Fact]
     public void Factors_that_together_push_a_rate_beyond_its_range_are_refused_at_the_second()
     {
-        string[] lines = Refused(1, "solve", Millbrook, "--set", "arrivals*=1e9", "--set", "arrivals*=1e9");
+        string[] lines = Refused(1, "solve", Millbrook, "--set", "arrivals*=1e5", "--set", "arrivals*=1e5");
 
         Assert.Single(lines);
+        Assert.StartsWith("--set arrivals*=1e5: unit 'reception': arrival rate: 900000/h times 100000 is too large", lines[0], StringComparison.Ordinal);
         Assert.Contains("is too large for a rate (0, or from 1e-9/h to 1e9/h)", lines[0], StringComparison.Ordinal);
     }
 

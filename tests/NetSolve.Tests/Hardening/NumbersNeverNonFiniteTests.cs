@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Json;
 using FsCheck;
 using FsCheck.Fluent;
+using FsCheck.Xunit;
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Metrics;

@@ -74,7 +74,7 @@ public sealed class OptionsTests
     [InlineData("--threads", "99999999999", "from 1 to 1024")]
     [InlineData("--duration", "1e300d", "longer than 3650 days")]
     [InlineData("--warmup", "1e300d", "longer than 3650 days")]
-    [InlineData("--duration", "1e-320d", "is not a duration")]
+    [InlineData("--duration", "1e-320d", "is too short for a duration (from 1e-6 s to 100 years)")]
     public void A_bad_simulation_value_is_one_usage_line_naming_the_option_and_its_bound(string option, string value, string bound)
     {
         string[] lines = Refused(2, "simulate", Millbrook, option, value);
