@@ -31,13 +31,13 @@ public sealed class SameMistakeSameMessageTests
         { "service", ".inf", "service: '.inf' is not a duration (write e.g. 45min, 2.5h, 3d, 30s, or a number in hours)" },
         { "service", "0", "service: '0' is not a positive duration" },
         { "service", "-2h", "service: '-2h' is not a positive duration" },
-        { "service", "1e-320h", "service: '1e-320h' is too short for a duration" },
-        { "service", "1e400h", "service: '1e400h' is too long for a duration" },
+        { "service", "1e-320h", "service: '1e-320h' is too short for a duration (from 1e-6 s to 100 years)" },
+        { "service", "1e400h", "service: '1e400h' is too long for a duration (from 1e-6 s to 100 years)" },
         { "arrivals", "abc", "arrival rate: 'abc' is not a rate (write e.g. 11.5/h, 280/d, 0.2/min, or a number per hour)" },
         { "arrivals", "11.5/hour", "arrival rate: '11.5/hour' is not a rate (write e.g. 11.5/h, 280/d, 0.2/min, or a number per hour)" },
         { "arrivals", ".inf", "arrival rate: '.inf' is not a rate (write e.g. 11.5/h, 280/d, 0.2/min, or a number per hour)" },
         { "arrivals", "-3", "arrival rate: '-3' is negative; an arrival rate is 0 or more" },
-        { "arrivals", "1e400/h", "arrival rate: '1e400/h' is too large for a rate" },
+        { "arrivals", "1e400/h", "arrival rate: '1e400/h' is too large for a rate (0, or from 1e-9/h to 1e9/h)" },
         { "route", "120%", "route to 'discharge_lounge': '120%' is not between 0 and 1" },
         { "route", "-3", "route to 'discharge_lounge': '-3' is not between 0 and 1" },
         { "route", "abc", "route to 'discharge_lounge': 'abc' is not a probability (write e.g. 0.35 or 35%)" },
@@ -51,7 +51,7 @@ public sealed class SameMistakeSameMessageTests
         { "service", "0", "service: the factor must be more than 0, not '0'" },
         { "service", "-3", "service: the factor must be more than 0, not '-3'" },
         { "service", ".inf", "service: '.inf' is not a factor (write a number, e.g. 1.2 for 20% more)" },
-        { "service", "1e400", "service: '1e400' is too large for a factor" },
+        { "service", "1e400", "service: '1e400' is too large for a factor (from 1e-9 to 1e9)" },
         { "arrivals", "NaN", "arrivals: 'NaN' is not a factor (write a number, e.g. 1.2 for 20% more)" },
         { "arrivals", "-3", "arrivals: the factor must be 0 or more, not '-3'" },
     };
@@ -73,11 +73,10 @@ public sealed class SameMistakeSameMessageTests
         Assert.Equal(expected, FromSet(field, value, "*="));
     }
 
-    // Source: exact by hand. The ward's 3 d is 72 h: 72 × 1e307 overflows a double, 72 × 1e-320 is below the
-    // smallest normal double.
+    // Source: exact by hand. The ward's 3 d is 72 h: 72 × 1e9 h is far beyond 100 years (876,600 h). A factor below
+    // 1e-9 (such as 1e-320) is refused before it is applied, so no factor can make a time too short here.
     [Theory]
-    [InlineData("1e307", "service: 72 h times 1E+307 is too long for a duration")]
-    [InlineData("1e-320", "service: 72 h times 1E-320 is too short for a duration")]
+    [InlineData("1e9", "service: 72 h times 1000000000 is too long for a duration (from 1e-6 s to 100 years)")]
     public void A_factor_that_takes_a_time_out_of_range_gets_the_same_message_in_a_scenario_file_and_set(string factor, string expected)
     {
         Assert.Equal(expected, FromScenarioFile("service", "x" + factor));
@@ -87,12 +86,12 @@ public sealed class SameMistakeSameMessageTests
     [Fact]
     public void A_factor_that_takes_a_rate_out_of_range_gets_the_same_message_in_a_scenario_file_and_set()
     {
-        // Source: exact by hand. Emergency arrivals of 11.5/h times 1e308 overflow a double.
-        const string Expected = "arrival rate: 11.5/h times 1E+308 is too large for a rate";
-        var scenario = ScenarioReader.ReadText("base: harbourside.yaml\nscale_arrivals: 1e308\n", "scenario.yaml", _ => NetworkReader.ReadFile(HarboursidePath));
+        // Source: exact by hand. Emergency arrivals of 11.5/h times 1e9 are 1.15e10/h, above the largest rate (1e9/h).
+        const string Expected = "arrival rate: 11.5/h times 1000000000 is too large for a rate (0, or from 1e-9/h to 1e9/h)";
+        var scenario = ScenarioReader.ReadText("base: harbourside.yaml\nscale_arrivals: 1e9\n", "scenario.yaml", _ => NetworkReader.ReadFile(HarboursidePath));
 
         Assert.Equal(Expected, OnlyError(scenario.Diagnostics));
-        Assert.Equal(Expected, FromSetApplied("arrivals*=1e308"));
+        Assert.Equal(Expected, FromSetApplied("arrivals*=1e9"));
     }
 
     [Fact]

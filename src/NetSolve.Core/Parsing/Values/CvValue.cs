@@ -1,7 +1,10 @@
 namespace NetSolve.Parsing.Values;
 
 /// <summary>A coefficient of variation (<c>service_cv</c>, <c>arrival_cv</c>): a number within <see cref="ValueRanges.CvRange"/>.</summary>
-/// <remarks>Thread-safe. 0 is evenly spaced, 1 the exponential; far above 100 no formula or sampler stays meaningful.</remarks>
+/// <remarks>
+/// Thread-safe. 0 is evenly spaced, 1 the exponential; far above 100 no formula or sampler stays meaningful. Only the
+/// upper bound is checked here: each caller refuses a negative value in words that fit its field.
+/// </remarks>
 public static class CvValue
 {
     /// <summary>Reads <paramref name="text"/> as a coefficient of variation.</summary>
@@ -13,7 +16,8 @@ public static class CvValue
             return number;
         }
 
-        return number.Value is >= 0.0 and <= ValueRanges.LargestCv
+        // A negative value is left to the caller, whose message says what 0 and 1 mean for that field.
+        return number.Value <= ValueRanges.LargestCv
             ? number
             : ValueResult<double>.Invalid($"'{text}' is not a coefficient of variation ({ValueRanges.CvRange}; 1 is exponential, 0 evenly spaced)");
     }

@@ -33,12 +33,16 @@ public class ValueKindsTests
         Assert.Equal("servers", FieldLabels.For(FieldLabels.Servers, null));
     }
 
-    // Source: exact by hand. 1e-320 h is a subnormal double, and 1 / 1e-300 = 1e300 is finite.
+    // Exact by hand: 1e-320 h is a subnormal double; the range is 1e-6 s (2.8e-10 h) to 100 years (36,525 d), so
+    // 1e-300 h and 1e300 d are refused although their reciprocals are finite, and 1e-9 h (3.6e-6 s) and 36,500 d pass.
     [Theory]
     [InlineData("1e-320h", false)]
     [InlineData("1e-310min", false)]
-    [InlineData("1e-300h", true)]
-    [InlineData("1e300d", true)]
+    [InlineData("1e-300h", false)]
+    [InlineData("1e300d", false)]
+    [InlineData("36600d", false)]
+    [InlineData("1e-9h", true)]
+    [InlineData("36500d", true)]
     public void A_duration_is_refused_when_its_service_rate_would_not_be_a_finite_number(string text, bool valid)
     {
         var result = DurationValue.Parse(text, TimeUnit.Hour);
