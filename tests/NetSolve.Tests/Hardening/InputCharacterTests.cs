@@ -107,9 +107,9 @@ public sealed class InputCharacterTests
     }
 
     [Theory]
-    [InlineData("ward\u202E", 12, "unit: the bidirectional formatting character U+202E")]
-    [InlineData("wa\u0000rd", 10, "unit: a NUL character (U+0000)")]
-    [InlineData("wa\trd", 10, "unit: a tab is not allowed in a name")]
+    [InlineData("ward\u202E", 8, "unit: the bidirectional formatting character U+202E")]
+    [InlineData("wa\u0000rd", 6, "unit: a NUL character (U+0000)")]
+    [InlineData("wa\trd", 6, "unit: a tab is not allowed in a name")]
     public void A_movement_log_unit_name_gets_the_same_character_rules(string unit, int column, string expected)
     {
         string log = $"patient,unit,arrived,left\nP1,{unit},2026-03-02T08:00,2026-03-02T09:00\n";
@@ -119,7 +119,7 @@ public sealed class InputCharacterTests
         Assert.Empty(visits);
         var problem = Assert.Single(diagnostics);
         Assert.Equal(DiagnosticCodes.BadText, problem.Code);
-        // Exact by hand: "P1," is three characters, so the unit cell starts at column 4.
+        // Exact by hand: "P1," is three characters, so the unit cell starts at column 4 and its third character is column 6.
         Assert.Equal((2, column), (problem.Location.Line, problem.Location.Column));
         Assert.StartsWith(expected, problem.Message, StringComparison.Ordinal);
     }
