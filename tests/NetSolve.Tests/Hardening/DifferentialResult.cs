@@ -12,6 +12,9 @@ internal sealed class DifferentialResult
     /// <summary>Mutated texts the full reader (fast reader, checks and fallback) rejected with a located error.</summary>
     public int FullReaderRejected { get; set; }
 
+    /// <summary>Mutated texts holding a character YAML 1.2 does not allow that YamlDotNet nevertheless read.</summary>
+    public int NonPrintableYamlDotNetAccepted { get; set; }
+
     /// <summary>Each text where the readers part, described.</summary>
     public List<string> Disagreements { get; } = [];
 }

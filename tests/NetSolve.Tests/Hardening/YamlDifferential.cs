@@ -58,9 +58,19 @@ internal static class YamlDifferential
             }
         }
 
+        bool printable = IsPrintable(text);
+        if (!printable && !referenceRejects)
+        {
+            result.NonPrintableYamlDotNetAccepted++;
+        }
+
         try
         {
             LocatedYamlReader.Read(text, "f");
+            if (!printable)
+            {
+                result.Disagreements.Add("a character YAML 1.2 does not allow is read: " + Show(text));
+            }
         }
         catch (YamlReadException exception) when (exception.Location.Line >= 1 && exception.Location.Column >= 1 && exception.Message.Length > 0)
         {
@@ -70,6 +80,31 @@ internal static class YamlDifferential
         {
             result.Disagreements.Add("unexpected " + exception.GetType().Name + ": " + Show(text));
         }
+    }
+
+    /// <summary>
+    /// YAML 1.2's c-printable, written out here from the specification (YAML 1.2.2, section 5.1), independently
+    /// of the product's own check; a byte order mark is allowed only at the start.
+    /// </summary>
+    private static bool IsPrintable(string text)
+    {
+        for (int i = 0; i < text.Length; i++)
+        {
+            int c = text[i];
+            if (char.IsHighSurrogate(text[i]) && i + 1 < text.Length && char.IsLowSurrogate(text[i + 1]))
+            {
+                i++;
+                continue;
+            }
+
+            bool allowed = c is 0x09 or 0x0A or 0x0D or (>= 0x20 and <= 0x7E) or 0x85 or (>= 0xA0 and <= 0xD7FF) or (>= 0xE000 and <= 0xFFFD);
+            if (!allowed || (c == 0xFEFF && i > 0))
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 
     private static string? Outcome(Func<YamlNode?> read, out bool rejects)
