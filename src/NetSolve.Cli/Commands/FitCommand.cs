@@ -61,7 +61,7 @@ internal static class FitCommand
 
     private static List<UnitVisit> ReadLog(string path)
     {
-        if (InputFile.TryRead(path, "a movement log", out var problem) is not string text)
+        if (InputFile.TryRead(path, "a movement log", InputFile.MaxMovementLogBytes, out var problem) is not string text)
         {
             throw new InputException(problem!.ToString());
         }

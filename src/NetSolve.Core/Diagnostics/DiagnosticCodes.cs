@@ -27,6 +27,9 @@ public static class DiagnosticCodes
     /// <summary>A value that does not parse or is out of range.</summary>
     public const string BadValue = "NS0108";
 
+    /// <summary>The text is not valid UTF-8, or holds a control or bidirectional formatting character.</summary>
+    public const string BadText = "NS0109";
+
     /// <summary>A reference to a unit that is not defined.</summary>
     public const string UnknownUnit = "NS0201";
 

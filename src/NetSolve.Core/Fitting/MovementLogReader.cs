@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using NetSolve.Diagnostics;
+using NetSolve.Parsing;
 
 namespace NetSolve.Fitting;
 
@@ -114,6 +115,18 @@ public static class MovementLogReader
             return null;
         }
 
+        if (RefusedCharacter(cells[map[0]]) is int inPatient)
+        {
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.BadText, At(0) with { Column = At(0).Column + inPatient }, null, "patient: " + Describe(cells[map[0]], inPatient)));
+            return null;
+        }
+
+        if (RefusedCharacter(cells[map[1]]) is int inUnit)
+        {
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.BadText, At(1) with { Column = At(1).Column + inUnit }, null, "unit: " + Describe(cells[map[1]], inUnit)));
+            return null;
+        }
+
         var arrived = Time(Cell(2), At(2), unit, diagnostics);
         DateTime? started = map[3] >= 0 && Cell(3).Length > 0 ? Time(Cell(3), At(3), unit, diagnostics) : null;
         var left = Time(Cell(4), At(4), unit, diagnostics);
@@ -130,6 +143,21 @@ public static class MovementLogReader
 
         return (line, patient, unit, a, started, l);
     }
+
+    /// <summary>
+    /// Where <paramref name="cell"/> holds a character that network files refuse (see <see cref="InputCharacters"/>) or a
+    /// tab: a unit name becomes a unit id in the fitted network, so it must pass the same rules.
+    /// </summary>
+    private static int? RefusedCharacter(string cell)
+    {
+        int index = InputCharacters.FindRefused(cell);
+        int tab = cell.IndexOf('\t', StringComparison.Ordinal);
+        int first = index < 0 ? tab : tab < 0 ? index : Math.Min(index, tab);
+        return first < 0 ? null : first;
+    }
+
+    private static string Describe(string cell, int index) =>
+        cell[index] == '\t' ? "a tab is not allowed in a name" : InputCharacters.Describe(cell, index);
 
     private static DateTime? Time(string text, SourceLocation location, string unit, List<Diagnostic> diagnostics)
     {

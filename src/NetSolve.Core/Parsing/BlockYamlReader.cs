@@ -16,6 +16,8 @@ namespace NetSolve.Parsing;
 /// </remarks>
 internal static class BlockYamlReader
 {
+    private const int MaxImplicitKeyLength = 1024;
+
     /// <summary>True when the text is in the accepted subset; <paramref name="root"/> is null for a file of comments only.</summary>
     public static bool TryRead(string text, string fileName, out YamlNode? root)
     {
@@ -150,7 +152,8 @@ internal static class BlockYamlReader
             keyEnd++;
         }
 
-        if (keyEnd == indent || span[indent] == '-' || keyEnd >= span.Length || span[keyEnd] != ':')
+        // YAML 1.2.2 section 7.4 limits an implicit key to 1024 characters; YamlDotNet refuses longer ones.
+        if (keyEnd == indent || span[indent] == '-' || keyEnd >= span.Length || span[keyEnd] != ':' || keyEnd - indent > MaxImplicitKeyLength)
         {
             return false;
         }

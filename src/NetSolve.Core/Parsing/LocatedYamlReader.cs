@@ -18,12 +18,54 @@ public static class LocatedYamlReader
     public static YamlNode? Read(string text, string fileName)
     {
         ArgumentNullException.ThrowIfNull(text);
-        if (BlockYamlReader.TryRead(text, fileName, out var fast))
+        int refused = InputCharacters.FindRefused(text);
+        if (refused >= 0)
         {
-            return fast;
+            throw new YamlReadException(Position(text, refused, fileName), InputCharacters.Describe(text, refused));
         }
 
-        return ReadWithYamlDotNet(text, fileName);
+        var root = BlockYamlReader.TryRead(text, fileName, out var fast) ? fast : ReadWithYamlDotNet(text, fileName);
+        RefuseTabs(root);
+        return root;
+    }
+
+    /// <summary>
+    /// A tab inside a key or value is refused: YAML allows it there, but in a label or id it is invisible, and a
+    /// pasted cell from a spreadsheet brings one in by mistake. Tabs between tokens and in comments are fine.
+    /// </summary>
+    private static void RefuseTabs(YamlNode? node)
+    {
+        switch (node)
+        {
+            case YamlScalar scalar when scalar.Value.Contains('\t', StringComparison.Ordinal):
+                int tab = scalar.Value.IndexOf('\t', StringComparison.Ordinal);
+                bool sameLine = !scalar.Value.AsSpan(0, tab).ContainsAny('\n', '\r');
+                var at = sameLine ? scalar.Location with { Column = scalar.Location.Column + tab + (scalar.IsPlain ? 0 : 1) } : scalar.Location;
+                throw new YamlReadException(at, "a tab inside a key or value is not allowed; use spaces");
+            case YamlMapping mapping:
+                foreach (var (key, value) in mapping.Entries)
+                {
+                    RefuseTabs(key);
+                    RefuseTabs(value);
+                }
+
+                break;
+            case YamlSequence sequence:
+                foreach (var item in sequence.Items)
+                {
+                    RefuseTabs(item);
+                }
+
+                break;
+        }
+    }
+
+    /// <summary>The line and column (from 1, in UTF-16 code units as YamlDotNet counts) of <paramref name="index"/>.</summary>
+    private static SourceLocation Position(string text, int index, string fileName)
+    {
+        var before = text.AsSpan(0, index);
+        int lineStart = before.LastIndexOf('\n') + 1;
+        return new SourceLocation(fileName, 1 + before.Count('\n'), 1 + index - lineStart);
     }
 
     /// <summary>Reads through YamlDotNet only; the reference that the fast block reader must agree with.</summary>
