@@ -19,7 +19,7 @@ public static class FormulaSimulationComparison
         ArgumentNullException.ThrowIfNull(formula);
         return formula.Method switch
         {
-            GgcMethodNames.AllenCunneen or GgcMethodNames.KraemerLangenbachBelz => true,
+            GgcMethodNames.AllenCunneen or GgcMethodNames.KraemerLangenbachBelz or GgcMethodNames.Cosmetatos or GgcMethodNames.LightHeavyTraffic => true,
             FiniteCapacityFormulas.MarkovianMethod => formula.ArrivalScv != 1.0 || formula.ServiceScv != 1.0,
             _ => false,
         };

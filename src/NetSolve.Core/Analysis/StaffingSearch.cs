@@ -186,16 +186,15 @@ public static class StaffingSearch
         }
 
         // One server with non-Poisson arrivals takes the Kraemer–Langenbach-Belz correction, which depends on the load:
-        // asked of GgcFormulas itself. Otherwise the variability factor is (ca² + cs²)/2 for every c (Allen–Cunneen,
-        // and Pollaczek–Khinchine at c = 1), exactly 1.0 when both SCVs are 1, so the checks below are then Erlang C to
-        // the last bit.
+        // asked of GgcFormulas itself. Otherwise the variability factor comes from GgcFormulas.VariabilityFactor for
+        // each c (it depends on c and the load for several servers), exactly 1.0 when both SCVs are 1, so the checks
+        // below are then Erlang C to the last bit.
         bool correctedOneServer = arrivalScv != 1.0;
         if (first == 1 && correctedOneServer && MeetsOneServer(arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv, maxUtilisation, waitLimit, targets.WaitTail))
         {
             return 1;
         }
 
-        double factor = (arrivalScv + serviceScv) / 2.0;
         double blocking = 1.0;
         for (int k = 1; k <= first; k++)
         {
@@ -209,7 +208,8 @@ public static class StaffingSearch
                 blocking = load * blocking / (c + (load * blocking));
             }
 
-            if ((c > 1 || !correctedOneServer) && Meets((int)c, load, blocking, factor, arrivalsPerHour, meanServiceHours, maxUtilisation, waitLimit, targets.WaitTail))
+            if ((c > 1 || !correctedOneServer)
+                && Meets((int)c, load, blocking, GgcFormulas.VariabilityFactor((int)c, load / c, arrivalScv, serviceScv), arrivalsPerHour, meanServiceHours, maxUtilisation, waitLimit, targets.WaitTail))
             {
                 return (int)c;
             }

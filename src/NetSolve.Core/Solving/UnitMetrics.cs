@@ -57,7 +57,7 @@ public static class UnitMetrics
         }
 
         int servers = unit.Servers.Count;
-        var estimate = GgcFormulas.Estimate(servers, arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv);
+        var estimate = GgcFormulas.Estimate(servers, arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv, unit.EffectiveService);
         return new UnitResult
         {
             Unit = unit,

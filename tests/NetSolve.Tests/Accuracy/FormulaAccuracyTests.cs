@@ -22,19 +22,20 @@ public sealed class FormulaAccuracyTests
     private const double GoalError = 0.15;
 
     /// <summary>
-    /// ...for at least 90% of the units that count (<see cref="AccuracyRow.Counts"/>): NOT MET. Measured 105 of 124
-    /// (84.7%, seed 2026); the misses are mostly Allen-Cunneen at 4-5 servers with a service cv of 1.5-2 at light or
-    /// moderate load (too high by 25-70%) and a diversion target fed by bursty overflow. The assertion holds what is
-    /// true today so that a regression fails; raise it to 0.90 when the gap is closed (docs/methods.md).
+    /// ...for at least 90% of the units that count (<see cref="AccuracyRow.Counts"/>): met. Measured 118 of 124 (95.2%,
+    /// seed 2026) with Cosmetatos' ratio for regular service and the light-heavy traffic interpolation for variable
+    /// service on several servers; the misses are light-load units (ρ 0.3-0.45) and a diversion target fed by bursty
+    /// overflow (docs/methods.md).
     /// </summary>
-    private const double MeasuredShare = 0.84;
+    private const double MeasuredShare = 0.90;
 
     /// <summary>
-    /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 13
-    /// of 113 units not closer (the same Allen-Cunneen cases, plus M/M/c/K, which ignores the service cv). Held at
-    /// today's count so a regression fails.
+    /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 4
+    /// of 113 units not closer: the M/M/c/K unit (which ignores the service cv, equal to the exponential formula), the
+    /// diversion target (overflow taken as Poisson), and two units where the exponential formula happens to be within
+    /// 2%. Held at today's count so a regression fails.
     /// </summary>
-    private const int MeasuredNotBetter = 13;
+    private const int MeasuredNotBetter = 4;
 
     /// <summary>Generated networks in the study, seeds 1 to this.</summary>
     private const int GeneratedNetworks = 20;
@@ -45,7 +46,8 @@ public sealed class FormulaAccuracyTests
 
     // Source: the project's simulator (seed 2026, 10 replications of 50,000 h after 2,000 h) against NetworkSolver;
     // the goal is issue 11's: two-moment waits within 15% of simulation for at least 90% of units, and closer than the
-    // exponential formula wherever an arrival or service cv differs from 1. Neither is met yet: see MeasuredShare.
+    // exponential formula wherever an arrival or service cv differs from 1. The first is met, the second not quite:
+    // see MeasuredNotBetter.
     [Fact(Explicit = true)]
     public void Two_moment_waits_meet_the_accuracy_goal_against_the_simulator()
     {

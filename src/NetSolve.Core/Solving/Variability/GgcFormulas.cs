@@ -1,3 +1,5 @@
+using NetSolve.Model;
+
 namespace NetSolve.Solving;
 
 /// <summary>
@@ -16,8 +18,10 @@ namespace NetSolve.Solving;
 /// ca² &gt; 1 (W. Kraemer and M. Langenbach-Belz, 8th International Teletraffic Congress, 1976; the ca² &lt; 1 branch as
 /// restated by W. Whitt, Bell System Technical Journal 62(9), 1983, pp. 2779–2815). Chosen over Kingman's
 /// (ca² + cs²)/2 because it is much closer to the exact GI/M/1 waits at light and moderate load (docs/methods.md).</item>
-/// <item>c &gt; 1 otherwise: Allen–Cunneen (G/G/c), factor (ca² + cs²)/2 (A. O. Allen, Probability, Statistics, and
+/// <item>c &gt; 1, cs² = 1: Allen–Cunneen (G/G/c), factor (ca² + 1)/2 (A. O. Allen, Probability, Statistics, and
 /// Queueing Theory, 2nd ed., Academic Press, 1990).</item>
+/// <item>c &gt; 1, cs² ≠ 1: an M/G/c ratio times (ca² + cs²)/(1 + cs²): Cosmetatos' interpolation for cs² &lt; 1, a
+/// light/heavy-traffic interpolation that follows the service distribution for cs² &gt; 1 (<see cref="MultiServerFactor"/>).</item>
 /// </list>
 /// <para>The chance of waiting is Erlang C for every method (exact for M/M/c and M/G/1, an approximation otherwise).
 /// Cost O(c) for the Erlang recurrence; stable for c up to 100,000 and ρ up to 1 − 1e−15. Pure, thread-safe.</para>
@@ -34,7 +38,9 @@ public static class GgcFormulas
     /// <param name="arrivalScv">ca², the squared coefficient of variation of the times between arrivals: 1 for Poisson arrivals, 0 for a fixed schedule; 0 to <see cref="MaximumScv"/>.</param>
     /// <param name="serviceScv">cs², the squared coefficient of variation of the service time: 1 for exponential, 0 for fixed; 0 to <see cref="MaximumScv"/>.</param>
     /// <returns>The estimate; see <see cref="GgcWaitEstimate"/> for its values with no arrivals and when unstable.</returns>
-    public static GgcWaitEstimate Estimate(int servers, double arrivalsPerHour, double meanServiceHours, double arrivalScv, double serviceScv)
+    /// <param name="serviceShape">The service distribution, for the light-traffic term of several servers with cs² &gt; 1 (<see cref="MultiServerFactor"/>); null: a gamma with cs².</param>
+    public static GgcWaitEstimate Estimate(int servers, double arrivalsPerHour, double meanServiceHours, double arrivalScv, double serviceScv,
+        ServiceDistribution? serviceShape = null)
     {
         CheckArguments(servers, arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv);
         string method = MethodFor(servers, arrivalScv, serviceScv);
@@ -57,7 +63,7 @@ public static class GgcFormulas
             };
         }
 
-        double factor = Factor(servers, utilisation, arrivalScv, serviceScv);
+        double factor = Factor(servers, utilisation, arrivalScv, serviceScv, serviceShape);
         if (arrivalsPerHour == 0.0 || factor == 0.0)
         {
             return new GgcWaitEstimate
@@ -110,7 +116,9 @@ public static class GgcFormulas
     /// <param name="arrivalScv">ca², 0 to <see cref="MaximumScv"/>.</param>
     /// <param name="serviceScv">cs², 0 to <see cref="MaximumScv"/>.</param>
     /// <param name="waitHours">t in hours, not negative (may be +∞, giving 0 for a stable unit).</param>
-    public static double WaitLongerThan(int servers, double arrivalsPerHour, double meanServiceHours, double arrivalScv, double serviceScv, double waitHours)
+    /// <param name="serviceShape">As for <see cref="Estimate"/>.</param>
+    public static double WaitLongerThan(int servers, double arrivalsPerHour, double meanServiceHours, double arrivalScv, double serviceScv, double waitHours,
+        ServiceDistribution? serviceShape = null)
     {
         CheckArguments(servers, arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv);
         if (!(waitHours >= 0.0))
@@ -125,7 +133,7 @@ public static class GgcFormulas
             return 1.0;
         }
 
-        double factor = Factor(servers, utilisation, arrivalScv, serviceScv);
+        double factor = Factor(servers, utilisation, arrivalScv, serviceScv, serviceShape);
         if (arrivalsPerHour == 0.0 || factor == 0.0)
         {
             return 0.0;
@@ -156,16 +164,43 @@ public static class GgcFormulas
 
         if (servers > 1)
         {
-            return GgcMethodNames.AllenCunneen;
+            if (exponentialService)
+            {
+                return GgcMethodNames.AllenCunneen;
+            }
+
+            return serviceScv < 1.0 ? GgcMethodNames.Cosmetatos : GgcMethodNames.LightHeavyTraffic;
         }
 
         return poissonArrivals ? GgcMethodNames.PollaczekKhinchine : GgcMethodNames.KraemerLangenbachBelz;
     }
 
-    private static double Factor(int servers, double utilisation, double arrivalScv, double serviceScv)
+    /// <summary>
+    /// The factor f that <see cref="Estimate"/> multiplies the M/M/c mean wait by, for searches that step through
+    /// server counts with their own Erlang recurrence: exactly 1.0 when both SCVs are 1.
+    /// </summary>
+    /// <param name="servers">c, at least 1.</param>
+    /// <param name="utilisation">ρ, from 0 to below 1.</param>
+    /// <param name="arrivalScv">ca², 0 to <see cref="MaximumScv"/>.</param>
+    /// <param name="serviceScv">cs², 0 to <see cref="MaximumScv"/>.</param>
+    /// <param name="serviceShape">As for <see cref="Estimate"/>.</param>
+    public static double VariabilityFactor(int servers, double utilisation, double arrivalScv, double serviceScv, ServiceDistribution? serviceShape = null)
     {
+        ArgumentOutOfRangeException.ThrowIfLessThan(servers, 1);
+        CheckScv(arrivalScv, nameof(arrivalScv));
+        CheckScv(serviceScv, nameof(serviceScv));
+        return Factor(servers, utilisation, arrivalScv, serviceScv, serviceShape);
+    }
+
+    private static double Factor(int servers, double utilisation, double arrivalScv, double serviceScv, ServiceDistribution? serviceShape)
+    {
+        if (servers > 1)
+        {
+            return MultiServerFactor.For(servers, utilisation, arrivalScv, serviceScv, serviceShape);
+        }
+
         double twoMoment = (arrivalScv + serviceScv) / 2.0;
-        if (servers > 1 || arrivalScv == 1.0 || twoMoment == 0.0)
+        if (arrivalScv == 1.0 || twoMoment == 0.0)
         {
             return twoMoment;
         }

@@ -25,8 +25,8 @@ public sealed record GgcWaitEstimate
 
     /// <summary>
     /// The multiplier applied to the M/M/c mean wait: exactly 1 when both squared coefficients of variation are 1;
-    /// (ca² + cs²)/2 for Allen–Cunneen and Pollaczek–Khinchine, that times the correction g for Kraemer–Langenbach-Belz.
-    /// Null when unstable.
+    /// (ca² + cs²)/2 for Allen–Cunneen and Pollaczek–Khinchine, that times the correction g for Kraemer–Langenbach-Belz,
+    /// and the ratio of <see cref="MultiServerFactor"/> for several servers with cs² ≠ 1. Null when unstable.
     /// </summary>
     public required double? VariabilityFactor { get; init; }
 

@@ -135,9 +135,10 @@ public partial class NetSolveAppTests
         Assert.Contains($"{path}:5:3: warning: unit 'archive': no patient reaches this unit", error, StringComparison.Ordinal);
     }
 
-    // Exact by hand (Allen–Cunneen, docs/methods.md): M/M/2 with λ = 3/h and 30 min service has a = 1.5,
+    // Exact by hand (Cosmetatos' ratio, docs/methods.md): M/M/2 with λ = 3/h and 30 min service has a = 1.5,
     // B(2, 1.5) = 1.125/3.625, C = B/(1 − 0.75(1 − B)) = 9/14 and Wq = C/(2·2 − 3) = 9/14 h; with service_cv 0.5
-    // and Poisson arrivals the wait is scaled by (1 + 0.25)/2, so Wq = 45/112 h. No warning: the formulas use it.
+    // and Poisson arrivals the wait is scaled by R = 0.25 + 0.75·R_D, R_D = ½(1 + 0.25(√14 − 2)/24) at ρ = 0.75.
+    // No warning: the formulas use it.
     [Fact]
     public void A_service_cv_other_than_one_is_used_by_the_formulas_without_a_warning()
     {
@@ -150,9 +151,10 @@ public partial class NetSolveAppTests
             Assert.Equal(0, exitCode);
             Assert.Equal(string.Empty, error);
             var clinic = JsonDocument.Parse(output).RootElement.GetProperty("units")[0];
-            Assert.Equal(45.0 / 112.0, clinic.GetProperty("mean_wait").GetDouble(), 1e-12);
+            double ratio = 0.25 + (0.75 * 0.5 * (1.0 + (0.25 * (Math.Sqrt(14.0) - 2.0) / 24.0)));
+            Assert.Equal(9.0 / 14.0 * ratio, clinic.GetProperty("mean_wait").GetDouble(), 1e-12);
             Assert.Equal(0.25, clinic.GetProperty("service_scv").GetDouble(), 1e-12);
-            Assert.Equal("Allen-Cunneen (G/G/c)", clinic.GetProperty("method").GetString());
+            Assert.Equal("Cosmetatos (G/G/c)", clinic.GetProperty("method").GetString());
         }
         finally
         {

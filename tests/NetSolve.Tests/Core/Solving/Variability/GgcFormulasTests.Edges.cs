@@ -40,7 +40,8 @@ public partial class GgcFormulasTests
         Assert.Equal(0.5, GgcFormulas.WaitLongerThan(1, 0.5, 1.0, 1.0, 0.0, 0.0), Exact);
         Assert.Equal(0.5 * Math.Exp(-1.0), GgcFormulas.WaitLongerThan(1, 0.5, 1.0, 1.0, 0.0, 1.0), Exact);
 
-        // Allen–Cunneen, c = 4: the tail is C e^(−rt); r from two points, and C / r must be the mean wait.
+        // Several servers (c = 4, cs² = 1.8: light-heavy traffic interpolation): the tail is C e^(−rt); r from two
+        // points, and C / r must be the mean wait.
         GgcWaitEstimate estimate = GgcFormulas.Estimate(4, 3.0, 1.0, 0.4, 1.8);
         double atZero = GgcFormulas.WaitLongerThan(4, 3.0, 1.0, 0.4, 1.8, 0.0);
         double atOne = GgcFormulas.WaitLongerThan(4, 3.0, 1.0, 0.4, 1.8, 1.0);

@@ -79,15 +79,16 @@ public partial class GgcFormulasTests
         Assert.Equal(1.5, estimate.MeanTimeInUnitHours!.Value, Exact);
     }
 
-    // Exact by hand from Allen–Cunneen: M/D/2 at a = 1 (λ = 1/h, E[S] = 1 h): C(2, 1) = 1/3, Wq(M/M/2) = C E[S]/(c − a) = 1/3 h,
-    // ca² = 1, cs² = 0 gives the factor (1 + 0)/2 = 1/2 and Wq = 1/6 h.
+    // Exact by hand from Cosmetatos' M/D/c ratio: M/D/2 at a = 1 (λ = 1/h, E[S] = 1 h, ρ = 0.5): C(2, 1) = 1/3,
+    // Wq(M/M/2) = C E[S]/(c − a) = 1/3 h; R_D = ½(1 + 0.5 · 1 · (√14 − 2)/(16 · 0.5 · 2)) and Wq = R_D/3 h.
     [Fact]
-    public void Two_fixed_one_hour_servers_at_one_erlang_wait_a_sixth_of_an_hour_by_Allen_Cunneen()
+    public void Two_fixed_one_hour_servers_at_one_erlang_wait_by_Cosmetatos_ratio()
     {
         GgcWaitEstimate estimate = GgcFormulas.Estimate(2, 1.0, 1.0, 1.0, 0.0);
 
-        Assert.Equal(GgcMethodNames.AllenCunneen, estimate.Method);
-        Assert.Equal(1.0 / 6.0, estimate.MeanWaitHours!.Value, Exact);
+        double ratio = 0.5 * (1.0 + (0.5 * (Math.Sqrt(14.0) - 2.0) / 16.0));
+        Assert.Equal(GgcMethodNames.Cosmetatos, estimate.Method);
+        Assert.Equal(ratio / 3.0, estimate.MeanWaitHours!.Value, Exact);
         Assert.Equal(1.0 / 3.0, estimate.WaitProbability, Exact);
     }
 
@@ -130,7 +131,9 @@ public partial class GgcFormulasTests
     [InlineData(1, 1.0, 0.36, GgcMethodNames.PollaczekKhinchine)]
     [InlineData(1, 0.5, 1.0, GgcMethodNames.KraemerLangenbachBelz)]
     [InlineData(1, 2.0, 0.0, GgcMethodNames.KraemerLangenbachBelz)]
-    [InlineData(2, 1.0, 0.36, GgcMethodNames.AllenCunneen)]
+    [InlineData(2, 1.0, 0.36, GgcMethodNames.Cosmetatos)]
+    [InlineData(3, 0.5, 0.0, GgcMethodNames.Cosmetatos)]
+    [InlineData(2, 1.0, 4.0, GgcMethodNames.LightHeavyTraffic)]
     [InlineData(2, 0.5, 1.0, GgcMethodNames.AllenCunneen)]
     public void The_method_is_named_for_the_servers_and_variability(int servers, double arrivalScv, double serviceScv, string method)
     {
