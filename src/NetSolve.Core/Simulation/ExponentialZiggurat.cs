@@ -31,7 +31,7 @@ internal static class ExponentialZiggurat
     internal static readonly double[] RightEdges = BuildRightEdges();
 
     // f(x_i) per layer, with f(x_0) = 1 (x_0 = 0): the wedge test of layer i reads the heights of i and i − 1.
-    private static readonly double[] Heights = [.. RightEdges.Select(x => Math.Exp(-x))];
+    private static readonly double[] Heights = [.. RightEdges.Select(x => PortableMath.Exp(-x))];
 
     private static readonly Layer[] Layers = BuildLayers(RightEdges);
 
@@ -65,11 +65,11 @@ internal static class ExponentialZiggurat
 
             if (i == 0)
             {
-                return TailStart - Math.Log(random.NextOpenDouble());
+                return TailStart - PortableMath.Log(random.NextOpenDouble());
             }
 
             double x = position * layer.Scale;
-            if (Heights[i] + (random.NextDouble() * (Heights[i - 1] - Heights[i])) < Math.Exp(-x))
+            if (Heights[i] + (random.NextDouble() * (Heights[i - 1] - Heights[i])) < PortableMath.Exp(-x))
             {
                 return x;
             }
@@ -85,7 +85,7 @@ internal static class ExponentialZiggurat
         x[LayerCount - 1] = TailStart;
         for (int i = LayerCount - 1; i > 1; i--)
         {
-            x[i - 1] = -Math.Log((LayerArea / x[i]) + Math.Exp(-x[i]));
+            x[i - 1] = -PortableMath.Log((LayerArea / x[i]) + PortableMath.Exp(-x[i]));
         }
 
         return x;
@@ -94,7 +94,7 @@ internal static class ExponentialZiggurat
     private static Layer[] BuildLayers(double[] x)
     {
         // Layer 0 is drawn as a rectangle of width q = v / f(r): the part left of r is the base, the rest the tail.
-        double baseWidth = LayerArea / Math.Exp(-TailStart);
+        double baseWidth = LayerArea / PortableMath.Exp(-TailStart);
         var layers = new Layer[LayerCount];
         layers[0] = new Layer(InsideBelowFraction(TailStart / baseWidth), baseWidth * UnitScale);
         for (int i = 1; i < LayerCount; i++)

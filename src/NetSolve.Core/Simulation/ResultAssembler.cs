@@ -8,11 +8,16 @@ internal sealed class ResultAssembler
 {
     private readonly MetricLayout _layout;
     private readonly IReadOnlyList<double[]> _rows;
+    private readonly IReadOnlyList<ReplicationTallies> _tallies;
 
-    public ResultAssembler(MetricLayout layout, IReadOnlyList<double[]> rows)
+    /// <param name="layout">Where each metric sits in a row.</param>
+    /// <param name="rows">The finished replications' rows, in replication order.</param>
+    /// <param name="tallies">The same replications' counts, in the same order, for the pooled estimates.</param>
+    public ResultAssembler(MetricLayout layout, IReadOnlyList<double[]> rows, IReadOnlyList<ReplicationTallies> tallies)
     {
         _layout = layout;
         _rows = rows;
+        _tallies = tallies;
     }
 
     public SimulationResult Assemble(Network network, SimulationOptions options, long events)
@@ -45,7 +50,7 @@ internal sealed class ResultAssembler
                 Group = network.Groups[g],
                 ThroughputPerHour = Required(_layout.Group(g, MetricLayout.GroupThroughputPerHour), 0.0),
                 MeanTimeInSystemHours = At(_layout.Group(g, MetricLayout.GroupMeanTimeInSystemHours)),
-                TimeInSystemPercentiles = Percentiles(_layout.Group(g, MetricLayout.GroupPercentiles)),
+                TimeInSystemPercentiles = Percentiles(_layout.Group(g, MetricLayout.GroupPercentiles), tally => tally.GroupTimes[g + 1]),
             });
         }
 
@@ -64,7 +69,7 @@ internal sealed class ResultAssembler
                 TurnedAwayPerHour = Required(_layout.Total(MetricLayout.TotalTurnedAwayPerHour), 0.0),
                 MeanInSystem = Required(_layout.Total(MetricLayout.TotalMeanInSystem), 0.0),
                 MeanTimeInSystemHours = At(_layout.Total(MetricLayout.TotalMeanTimeInSystemHours)),
-                TimeInSystemPercentiles = Percentiles(_layout.Total(MetricLayout.TotalPercentiles)),
+                TimeInSystemPercentiles = Percentiles(_layout.Total(MetricLayout.TotalPercentiles), tally => ReplicationTallies.Pool(tally.GroupTimes)),
             },
             Groups = groups.MoveToImmutable(),
         };
@@ -75,7 +80,7 @@ internal sealed class ResultAssembler
         var waitOver = ImmutableArray.CreateBuilder<WaitOverEstimate>(_layout.WaitThresholds);
         for (int t = 0; t < _layout.WaitThresholds; t++)
         {
-            waitOver.Add(new WaitOverEstimate(options.WaitThresholdsHours[t], Required(_layout.Unit(u, _layout.WaitOverOffset + t), 0.0)));
+            waitOver.Add(WaitOver(u, t, options.WaitThresholdsHours[t]));
         }
 
         var byHour = ImmutableArray.CreateBuilder<Estimate?>(24);
@@ -97,21 +102,52 @@ internal sealed class ResultAssembler
             FullProbability = Required(_layout.Unit(u, MetricLayout.FullProbability), 0.0),
             TurnedAwayPerHour = Required(_layout.Unit(u, MetricLayout.TurnedAwayPerHour), 0.0),
             DivertedPerHour = Required(_layout.Unit(u, MetricLayout.DivertedPerHour), 0.0),
-            TimeInUnitPercentiles = Percentiles(_layout.Unit(u, MetricLayout.UnitPercentiles)),
+            TimeInUnitPercentiles = Percentiles(_layout.Unit(u, MetricLayout.UnitPercentiles), tally => tally.UnitTimes[u]),
             WaitOver = waitOver.MoveToImmutable(),
             MeanQueueByHour = byHour.MoveToImmutable(),
         };
     }
 
-    private ImmutableArray<PercentileEstimate> Percentiles(int first)
+    /// <summary>
+    /// The percentiles whose per-replication values start at slot <paramref name="first"/>, each the pooled
+    /// histogram's (<paramref name="histogramOf"/> picks a replication's) with a sectioning interval.
+    /// </summary>
+    private ImmutableArray<PercentileEstimate> Percentiles(int first, Func<ReplicationTallies, DurationHistogram> histogramOf)
     {
+        var pooled = ReplicationTallies.Pool(_tallies.Select(histogramOf));
         var builder = ImmutableArray.CreateBuilder<PercentileEstimate>(MetricLayout.Percentiles.Length);
         for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
         {
-            builder.Add(new PercentileEstimate(MetricLayout.Percentiles[p] * 100.0, At(first + p)));
+            int slot = first + p;
+            var estimate = Estimate.Sectioned(pooled.Quantile(MetricLayout.Percentiles[p]), _rows.Select(row => row[slot]));
+            builder.Add(new PercentileEstimate(MetricLayout.Percentiles[p] * 100.0, estimate));
         }
 
         return builder.MoveToImmutable();
+    }
+
+    /// <summary>
+    /// P(wait &gt; t) at unit <paramref name="u"/> for threshold <paramref name="t"/>: the pooled share with a
+    /// sectioning interval, or, when no replication saw such a wait, 0 with the rule-of-three upper bound.
+    /// </summary>
+    private WaitOverEstimate WaitOver(int u, int t, double thresholdHours)
+    {
+        long starts = _tallies.Sum(tally => tally.Starts[u]);
+        long over = _tallies.Sum(tally => tally.WaitOver[(u * _layout.WaitThresholds) + t]);
+        int slot = _layout.Unit(u, _layout.WaitOverOffset + t);
+        if (starts == 0)
+        {
+            return new WaitOverEstimate(thresholdHours, new Estimate(0.0, null, 0));
+        }
+
+        if (over == 0)
+        {
+            double bound = WaitOverEstimate.RuleOfThree / starts;
+            return new WaitOverEstimate(thresholdHours, new Estimate(0.0, _rows.Count > 1 ? bound : null, _rows.Count), bound);
+        }
+
+        var estimate = Estimate.Sectioned((double)over / starts, _rows.Select(row => row[slot]));
+        return new WaitOverEstimate(thresholdHours, estimate ?? new Estimate(0.0, null, 0));
     }
 
     private Estimate? At(int slot) => Estimate.From(_rows.Select(row => row[slot]));

@@ -37,8 +37,8 @@ internal readonly struct ServiceSampler
                 return new ServiceSampler(ServiceKind.Empirical, mean, 0.0, [.. service.SamplesHours]);
             case ServiceKind.Lognormal when cv > 0.0:
                 // ln X ~ N(m, s²) with s² = ln(1 + cv²) and m = ln(mean) − s²/2 keeps the mean and cv.
-                double logVariance = Math.Log(1.0 + (cv * cv));
-                return new ServiceSampler(ServiceKind.Lognormal, Math.Log(mean) - (logVariance / 2.0), Math.Sqrt(logVariance), null);
+                double logVariance = PortableMath.Log(1.0 + (cv * cv));
+                return new ServiceSampler(ServiceKind.Lognormal, PortableMath.Log(mean) - (logVariance / 2.0), Math.Sqrt(logVariance), null);
             case ServiceKind.Gamma when cv > 0.0:
                 // Shape k = 1/cv² and scale θ = mean·cv² give mean kθ and cv 1/√k.
                 return new ServiceSampler(ServiceKind.Gamma, 1.0 / (cv * cv), mean * cv * cv, null);
@@ -52,7 +52,7 @@ internal readonly struct ServiceSampler
     {
         ServiceKind.Exponential => _a * random.NextExponential(),
         ServiceKind.Deterministic => _a,
-        ServiceKind.Lognormal => Math.Exp(_a + (_b * random.NextNormal())),
+        ServiceKind.Lognormal => PortableMath.Exp(_a + (_b * random.NextNormal())),
         ServiceKind.Gamma => _b * StandardGamma(_a, ref random),
         _ => _samples![random.NextInt(_samples.Length)],
     };
@@ -66,7 +66,7 @@ internal readonly struct ServiceSampler
         double boost = 1.0;
         if (shape < 1.0)
         {
-            boost = Math.Pow(random.NextOpenDouble(), 1.0 / shape);
+            boost = PortableMath.Pow(random.NextOpenDouble(), 1.0 / shape);
             shape += 1.0;
         }
 
@@ -84,7 +84,7 @@ internal readonly struct ServiceSampler
             v = v * v * v;
             double u = random.NextOpenDouble();
             double x2 = x * x;
-            if (u < 1.0 - (0.0331 * x2 * x2) || Math.Log(u) < (0.5 * x2) + (d * (1.0 - v + Math.Log(v))))
+            if (u < 1.0 - (0.0331 * x2 * x2) || PortableMath.Log(u) < (0.5 * x2) + (d * (1.0 - v + PortableMath.Log(v))))
             {
                 return boost * d * v;
             }

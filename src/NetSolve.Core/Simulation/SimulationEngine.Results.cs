@@ -32,8 +32,7 @@ internal sealed partial class SimulationEngine
             row[_layout.Unit(u, MetricLayout.DivertedPerHour)] = state.Diverted / window;
             for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
             {
-                row[_layout.Unit(u, MetricLayout.UnitPercentiles + p)] = TimeHistogram.Quantile(
-                    _unitHistogram, u * TimeHistogram.Bins, _network.MeanServiceHours[u], MetricLayout.Percentiles[p]);
+                row[_layout.Unit(u, MetricLayout.UnitPercentiles + p)] = _unitHistograms[u].Quantile(MetricLayout.Percentiles[p]);
             }
 
             for (int t = 0; t < thresholds; t++)
@@ -53,18 +52,10 @@ internal sealed partial class SimulationEngine
         row[_layout.Total(MetricLayout.TotalMeanInSystem)] = inSystem;
         row[_layout.Total(MetricLayout.TotalMeanTimeInSystemHours)] = exits > 0 ? _groupTimeSum.Sum() / exits : double.NaN;
         row[_layout.Total(MetricLayout.TotalTurnedAwayPerHour)] = _networkTurnedAway / window;
-        var all = new int[TimeHistogram.Bins];
-        for (int g = 0; g < _groupExits.Length; g++)
-        {
-            for (int b = 0; b < TimeHistogram.Bins; b++)
-            {
-                all[b] += _groupHistogram[(g * TimeHistogram.Bins) + b];
-            }
-        }
-
+        var all = ReplicationTallies.Pool(_groupHistograms);
         for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
         {
-            row[_layout.Total(MetricLayout.TotalPercentiles + p)] = TimeHistogram.Quantile(all, 0, _network.NetworkTimeScale, MetricLayout.Percentiles[p]);
+            row[_layout.Total(MetricLayout.TotalPercentiles + p)] = all.Quantile(MetricLayout.Percentiles[p]);
         }
 
         for (int named = 0; named < _layout.NamedGroups; named++)
@@ -74,12 +65,37 @@ internal sealed partial class SimulationEngine
             row[_layout.Group(named, MetricLayout.GroupMeanTimeInSystemHours)] = _groupExits[g] > 0 ? _groupTimeSum[g] / _groupExits[g] : double.NaN;
             for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
             {
-                row[_layout.Group(named, MetricLayout.GroupPercentiles + p)] = TimeHistogram.Quantile(
-                    _groupHistogram, g * TimeHistogram.Bins, _network.NetworkTimeScale, MetricLayout.Percentiles[p]);
+                row[_layout.Group(named, MetricLayout.GroupPercentiles + p)] = _groupHistograms[g].Quantile(MetricLayout.Percentiles[p]);
             }
         }
 
         return row;
+    }
+
+    /// <summary>
+    /// The replication's counts behind its percentiles and tail probabilities, for pooling across replications. Call
+    /// once the replication has finished; the engine is not used afterwards.
+    /// </summary>
+    public ReplicationTallies Tallies()
+    {
+        var starts = new long[_units.Length];
+        for (int u = 0; u < _units.Length; u++)
+        {
+            starts[u] = _units[u].Starts;
+        }
+
+        return new ReplicationTallies(_unitHistograms, _groupHistograms, starts, _waitOver);
+    }
+
+    private static DurationHistogram[] NewHistograms(int count)
+    {
+        var histograms = new DurationHistogram[count];
+        for (int i = 0; i < count; i++)
+        {
+            histograms[i] = new DurationHistogram();
+        }
+
+        return histograms;
     }
 
     /// <summary>How many hours of [from, to] fall in each hour of the day (hour 0 is 00:00-01:00).</summary>

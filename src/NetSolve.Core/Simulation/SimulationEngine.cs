@@ -27,14 +27,13 @@ internal sealed partial class SimulationEngine
     private readonly int[][] _queues;
     private readonly double[] _queueAreaByHour;
     private readonly long[] _waitOver;
-    private readonly int[] _unitHistogram;
+    private readonly DurationHistogram[] _unitHistograms;
     private readonly GroupPlan[] _groups;
     private readonly ServiceSampler[] _samplers;
-    private readonly double _inverseNetworkScale;
 
     private readonly long[] _groupExits;
     private readonly double[] _groupTimeSum;
-    private readonly int[] _groupHistogram;
+    private readonly DurationHistogram[] _groupHistograms;
     private bool _handledStillQueued;
     private long _entered;
     private long _networkTurnedAway;
@@ -58,18 +57,16 @@ internal sealed partial class SimulationEngine
             _units[i].Servers = network.Servers[i];
             _units[i].Capacity = network.Capacity[i];
             _units[i].DivertTo = network.DivertTo[i];
-            _units[i].InverseScale = 1.0 / network.MeanServiceHours[i];
         }
 
         _queueAreaByHour = new double[n * 24];
         _waitOver = new long[n * waitThresholdsHours.Length];
-        _unitHistogram = new int[n * TimeHistogram.Bins];
+        _unitHistograms = NewHistograms(n);
         _groups = network.Groups;
         _samplers = network.Samplers;
-        _inverseNetworkScale = 1.0 / network.NetworkTimeScale;
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
-        _groupHistogram = new int[groups * TimeHistogram.Bins];
+        _groupHistograms = NewHistograms(groups);
     }
 
     /// <summary>
@@ -203,7 +200,7 @@ internal sealed partial class SimulationEngine
             double sojourn = now - record.UnitArrival;
             state.Completions++;
             state.SojournSum += sojourn;
-            _unitHistogram[(unit * TimeHistogram.Bins) + TimeHistogram.BinOf(sojourn * state.InverseScale)]++;
+            _unitHistograms[unit].Record(sojourn);
         }
 
         if (state.Queued > 0)
@@ -333,7 +330,7 @@ internal sealed partial class SimulationEngine
             double time = now - record.NetworkEntry;
             _groupExits[group]++;
             _groupTimeSum[group] += time;
-            _groupHistogram[(group * TimeHistogram.Bins) + TimeHistogram.BinOf(time * _inverseNetworkScale)]++;
+            _groupHistograms[group].Record(time);
         }
 
         ReleasePatient(patient);

@@ -33,6 +33,7 @@ public static class Simulator
         var layout = new MetricLayout(network.Units.Length, thresholds.Length, network.Groups.Length);
         var rows = new double[options.Replications][];
         var events = new long[options.Replications];
+        var tallies = new ReplicationTallies[options.Replications];
         var tracker = new ProgressTracker(progress, options.Replications);
         var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
 
@@ -49,12 +50,14 @@ public static class Simulator
             {
                 rows[replication] = engine.ResultRow();
                 events[replication] = engine.EventCount;
+                tallies[replication] = engine.Tallies();
                 tracker.Update(replication, 1.0);
             }
         });
 
         var finished = rows.Where(row => row is not null).ToList();
         long totalEvents = events.Sum();
-        return new ResultAssembler(layout, finished).Assemble(network, options, totalEvents);
+        var finishedTallies = tallies.Where(tally => tally is not null).ToList();
+        return new ResultAssembler(layout, finished, finishedTallies).Assemble(network, options, totalEvents);
     }
 }

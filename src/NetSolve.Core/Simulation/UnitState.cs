@@ -18,7 +18,6 @@ internal struct UnitState
     public int Capacity;
     public int DivertTo;
     public double BusyArea;
-    public double InverseScale;
     public double SojournSum;
     public long Completions;
     public long Accepted;

@@ -76,7 +76,7 @@ internal struct Xoshiro256StarStar
             double s = (x * x) + (y * y);
             if (s > 0.0 && s < 1.0)
             {
-                return x * Math.Sqrt(-2.0 * Math.Log(s) / s);
+                return x * Math.Sqrt(-2.0 * PortableMath.Log(s) / s);
             }
         }
     }

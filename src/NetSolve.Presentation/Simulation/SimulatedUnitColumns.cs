@@ -108,6 +108,16 @@ public static class SimulatedUnitColumns
         new("p_wait_over_" + MachineFormat.Csv(MachineFormat.Convert(thresholdHours, MetricDimension.Time, timeUnit)), PeopleFormat.Time(thresholdHours),
             MetricDimension.Probability, row => row.Simulated.WaitOver[index].Probability);
 
+    /// <summary>P(wait &gt; t) for people: ± its half-width, or <c>&lt; bound</c> when such a wait was never seen.</summary>
+    public static Column<SimulatedUnitRow> WaitOverForPeople(int index, double thresholdHours, TimeUnit timeUnit) =>
+        new(WaitOver(index, thresholdHours, timeUnit).Id, PeopleFormat.Time(thresholdHours), MetricDimension.Probability,
+            row => WaitOverColumns.ForPeople(row.Simulated.WaitOver[index]), Audience.People);
+
+    /// <summary>The rule-of-three upper bound of P(wait &gt; t) for the <paramref name="index"/>-th threshold (<c>p_wait_over_4_upper_bound</c>); empty when such a wait was seen.</summary>
+    public static Column<SimulatedUnitRow> WaitOverUpperBound(int index, double thresholdHours, TimeUnit timeUnit) =>
+        new(WaitOver(index, thresholdHours, timeUnit).Id + "_" + WaitOverColumns.UpperBound.Id, PeopleFormat.Time(thresholdHours), MetricDimension.Probability,
+            row => Cell.Of(row.Simulated.WaitOver[index].UpperBound, MetricDimension.Probability), Audience.Machines);
+
     /// <summary>The mean queue in hour of day <paramref name="hour"/> (<c>mean_queue_h00</c> for 00:00-01:00).</summary>
     public static EstimateMetric<SimulatedUnitRow> QueueAtHour(int hour) =>
         new("mean_queue_h" + hour.ToString("00", CultureInfo.InvariantCulture), hour.ToString("00", CultureInfo.InvariantCulture), MetricDimension.Count, row => row.Simulated.MeanQueueByHour[hour]);
@@ -122,7 +132,7 @@ public static class SimulatedUnitColumns
         [
             .. ForCsv,
             .. percents.Select((percent, i) => TimeInUnitPercentile(i, percent).Mean),
-            .. thresholds.Select((threshold, i) => WaitOver(i, threshold, result.Network.TimeUnit).Mean),
+            .. thresholds.SelectMany((threshold, i) => new[] { WaitOver(i, threshold, result.Network.TimeUnit).Mean, WaitOverUpperBound(i, threshold, result.Network.TimeUnit) }),
             .. Enumerable.Range(0, TimeOfDayQueues.HoursOfDay).Select(hour => QueueAtHour(hour).Mean),
         ];
     }

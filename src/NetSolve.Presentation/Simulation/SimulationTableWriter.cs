@@ -58,7 +58,7 @@ public static class SimulationTableWriter
 
         var timeUnit = result.Network.TimeUnit;
         output.Write("\nprobability of waiting longer than\n");
-        var columns = thresholds.Select((threshold, i) => SimulatedUnitColumns.WaitOver(i, threshold, timeUnit).ForPeople).Prepend(SimulatedUnitColumns.Id);
+        var columns = thresholds.Select((threshold, i) => SimulatedUnitColumns.WaitOverForPeople(i, threshold, timeUnit)).Prepend(SimulatedUnitColumns.Id);
         PeopleTableWriter.Write(ResultTable.Build(columns, rows, timeUnit), output);
     }
 
