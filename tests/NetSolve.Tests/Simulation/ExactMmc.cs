@@ -9,7 +9,7 @@ namespace NetSolve.Tests.Simulation;
 /// (M/M/c): Erlang C, C = P(wait &gt; 0); the mean wait C / (cμ − λ); given a wait, it is exponential with rate cμ − λ.
 /// Exact by hand from these: the time in unit is the wait plus an independent exponential service of rate μ, so
 /// P(T &gt; t) = (1 − C)·e^(−μt) + C·(θ·e^(−μt) − μ·e^(−θt)) / (θ − μ) with θ = cμ − λ (θ ≠ μ), the convolution of
-/// the two exponentials; for c = 1 it is e^(−(μ − λ)t).
+/// the two exponentials ((1 + μt)·e^(−μt) given a wait when θ = μ); for c = 1 it is e^(−(μ − λ)t).
 /// </remarks>
 internal sealed record ExactMmc(int Servers, double ArrivalsPerHour, double ServiceRatePerHour, double WaitProbability)
 {
@@ -45,6 +45,12 @@ internal sealed record ExactMmc(int Servers, double ArrivalsPerHour, double Serv
         }
 
         double c = WaitProbability;
+        if (theta == mu)
+        {
+            // The two rates equal: the sum of two exponentials is Erlang-2, P(> t) = (1 + μt)·e^(−μt).
+            return ((1.0 - c) * Math.Exp(-mu * hours)) + (c * (1.0 + (mu * hours)) * Math.Exp(-mu * hours));
+        }
+
         return ((1.0 - c) * Math.Exp(-mu * hours)) + (c * ((theta * Math.Exp(-mu * hours)) - (mu * Math.Exp(-theta * hours))) / (theta - mu));
     }
 

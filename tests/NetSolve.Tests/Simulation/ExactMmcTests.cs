@@ -20,6 +20,9 @@ public sealed class ExactMmcTests
         // Exact by hand: Erlang C for c = 2, a = 1 is (1/2 · 2) / (1 + 1 + 1) = 1/3; the mean wait (1/3) / (2 − 1) h.
         Assert.Equal(1.0 / 3.0, exact.WaitProbability, 1e-12);
         Assert.Equal(1.0 / 3.0, exact.MeanWaitHours, 1e-12);
-        Assert.Equal(1.0, exact.TimeInUnitOver(0.0), 1e-12);
+
+        // Exact by hand: θ = cμ − λ = 1 = μ, so given a wait the time in unit is Erlang-2: at t = 1 h,
+        // P(T > 1) = (2/3)·e^(−1) + (1/3)·2·e^(−1) = (4/3)·e^(−1).
+        Assert.Equal(4.0 / 3.0 * Math.Exp(-1.0), exact.TimeInUnitOver(1.0), 1e-12);
     }
 }
