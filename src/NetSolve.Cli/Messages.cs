@@ -1,4 +1,5 @@
 using System.Globalization;
+using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Cli;
 
@@ -147,6 +148,14 @@ internal static class Messages
 
     /// <summary><c>staff</c>: one unit cannot meet the targets.</summary>
     public static string TargetImpossible(string unit, string why) => $"{Program}staff: unit '{unit}' cannot meet the targets: {why}";
+
+    /// <summary><c>simulate</c>: a unit's relaxation time is long against the warm-up or the run, so its simulated means may be biased.</summary>
+    public static string SlowUnit(string unit, double relaxationHours, double warmupHours, double durationHours) =>
+        $"{Program}warning: unit '{unit}' relaxes in about {RelaxationText(relaxationHours)}, long against a warm-up of {PeopleFormat.Time(warmupHours)} "
+        + $"and a run of {PeopleFormat.Time(durationHours)} (aim for 5 and 10 times it): its simulated means may be biased; "
+        + "try a longer --warmup and --duration, or more replications";
+
+    private static string RelaxationText(double hours) => double.IsFinite(hours) ? PeopleFormat.Time(hours) : "never (it is unstable)";
 
     /// <summary><c>simulate</c> or <c>report --simulate</c> stopped with some replications finished.</summary>
     public static string StoppedPartway(int finished, int replications, string consequence) =>

@@ -1,5 +1,7 @@
 using System.CommandLine;
 using System.CommandLine.Parsing;
+using NetSolve.Analysis;
+using NetSolve.Cli.Commands;
 using NetSolve.Cli.Settings;
 using NetSolve.Model;
 using NetSolve.Simulation;
@@ -41,7 +43,7 @@ internal static class SimulationCliOptions
     }
 
     /// <summary>A run length (<c>28d</c>, <c>12h</c>, <c>90min</c>); a bad value is a usage error naming the option.</summary>
-    public static Option<string> RunLength(string name, string description, string defaultValue, DurationRule rule) =>
+    public static Option<string> RunLength(string name, string description, string? defaultValue, DurationRule rule) =>
         SettingOptions.Duration(name, rule, defaultValue, description);
 
     /// <summary>
@@ -49,7 +51,12 @@ internal static class SimulationCliOptions
     /// this file's time unit (a bare number) is a <see cref="UsageException"/> naming every such option.
     /// </summary>
     public static SimulationOptions Read(ParseResult parse, TimeUnit timeUnit, Option<ulong> seed, Option<int> replications,
-        (Option<string> Option, DurationRule Rule) warmup, (Option<string> Option, DurationRule Rule) duration, Option<string[]>? waitOver = null)
+        (Option<string> Option, DurationRule Rule) warmup, (Option<string> Option, DurationRule Rule) duration, Option<string[]>? waitOver = null) =>
+        ReadGiven(parse, timeUnit, seed, replications, warmup, duration, waitOver);
+
+    /// <summary>As <see cref="Read"/>; a run length passed as null keeps the default of <see cref="SimulationOptions"/>, for the planner to replace.</summary>
+    private static SimulationOptions ReadGiven(ParseResult parse, TimeUnit timeUnit, Option<ulong> seed, Option<int> replications,
+        (Option<string> Option, DurationRule Rule)? warmup, (Option<string> Option, DurationRule Rule)? duration, Option<string[]>? waitOver)
     {
         ArgumentNullException.ThrowIfNull(parse);
         var problems = new List<string>();
@@ -67,8 +74,8 @@ internal static class SimulationCliOptions
         {
             Seed = parse.GetValue(seed),
             Replications = parse.GetValue(replications),
-            WarmupHours = Hours(warmup.Option, parse.GetValue(warmup.Option)!, warmup.Rule),
-            DurationHours = Hours(duration.Option, parse.GetValue(duration.Option)!, duration.Rule),
+            WarmupHours = warmup is { } w ? Hours(w.Option, parse.GetValue(w.Option)!, w.Rule) : SimulationOptions.DefaultWarmupHours,
+            DurationHours = duration is { } d ? Hours(d.Option, parse.GetValue(d.Option)!, d.Rule) : SimulationOptions.DefaultDurationHours,
             WaitThresholdsHours = waitOver is null ? [] : [.. (parse.GetValue(waitOver) ?? []).Select(text => Hours(waitOver, text, WaitOver))],
         };
         return problems.Count == 0 ? options : throw new UsageException(problems);
@@ -100,6 +107,62 @@ internal static class SimulationCliOptions
         {
             throw new UsageException(Messages.SimulationTooLong(events, SettingLimits.MaxSimulatedEvents));
         }
+    }
+
+    /// <summary><c>--precision</c>: a relative precision, <c>5%</c> or <c>0.05</c>, above 0 and below 100%; null when not given.</summary>
+    public static Option<double?> Precision() => new("--precision")
+    {
+        Description = "Add replications until every unit's mean wait and mean number in unit has a 95% half-width within this share of its mean (e.g. 5%); up to --max-replications.",
+        HelpName = "share",
+        CustomParser = result => SettingOptions.Read<double?>(result, text => ReadPrecision(text) is double value
+            ? (null, value)
+            : (Messages.NotNumber("--precision", text, "a share", "above 0% and below 100%", "write e.g. 5% or 0.05"), null)),
+    };
+
+    /// <summary><c>--max-replications</c>: the bound on effort when a precision is asked.</summary>
+    public static Option<int> MaxReplications() => SettingOptions.WholeNumber(
+        "--max-replications", 2, SettingLimits.MaxReplications, SimulationOptions.DefaultMaxReplications,
+        "With --precision: most replications to run before stopping and saying the precision was not reached.");
+
+    private static double? ReadPrecision(string text)
+    {
+        bool percent = text.EndsWith('%');
+        string number = percent ? text[..^1] : text;
+        if (!OptionValues.Number(number, value => value > 0.0, out double value))
+        {
+            return null;
+        }
+
+        double share = percent ? value / 100.0 : value;
+        return share is > 0.0 and < 1.0 ? share : null;
+    }
+
+    /// <summary>
+    /// As <see cref="Read"/>, but a warm-up or run length not given is chosen from the slowest unit's relaxation time
+    /// (<see cref="RunLengthPlanner"/>), and each unit whose relaxation time is long against the run is warned about
+    /// on stderr, one line each.
+    /// </summary>
+    public static SimulationOptions ReadPlanned(NetworkRequest request, Option<ulong> seed, Option<int> replications,
+        (Option<string> Option, DurationRule Rule) warmup, (Option<string> Option, DurationRule Rule) duration, Option<string[]>? waitOver = null)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var parse = request.Parse;
+        bool warmupGiven = parse.GetResult(warmup.Option) is { Implicit: false };
+        bool durationGiven = parse.GetResult(duration.Option) is { Implicit: false };
+        var read = ReadGiven(parse, request.Network.TimeUnit, seed, replications, warmupGiven ? warmup : null, durationGiven ? duration : null, waitOver);
+        var plan = RunLengthPlanner.Plan(request.Solve(), warmupGiven ? read.WarmupHours : null, durationGiven ? read.DurationHours : null);
+        foreach (var slow in plan.SlowUnits)
+        {
+            request.Warnings.Report(Messages.SlowUnit(slow.Unit.Id, slow.Hours, plan.WarmupHours, plan.DurationHours));
+        }
+
+        return read with
+        {
+            WarmupHours = plan.WarmupHours,
+            DurationHours = plan.DurationHours,
+            IsWarmupFromModel = plan.IsWarmupFromModel,
+            IsDurationFromModel = plan.IsDurationFromModel,
+        };
     }
 
     /// <summary><c>--wait-over T ...</c>: each a duration, 0 included.</summary>

@@ -18,10 +18,14 @@ internal sealed class SimulateCommand() : NetworkCommand(
     private readonly Option<int> _replications = SimulationCliOptions.Replications(SimulationOptions.DefaultReplications);
 
     private readonly Option<string> _warmup = SimulationCliOptions.RunLength(
-        "--warmup", "Simulated time discarded at the start of each replication (e.g. 28d; a bare number is in the file's time unit).", "28d", SimulationCliOptions.Warmup);
+        "--warmup", "Simulated time discarded at the start of each replication (e.g. 28d; a bare number is in the file's time unit); default: 5 relaxation times of the slowest unit, in whole weeks, at least 1 week.", null, SimulationCliOptions.Warmup);
 
     private readonly Option<string> _duration = SimulationCliOptions.RunLength(
-        "--duration", "Simulated time measured in each replication after the warm-up (e.g. 364d).", "364d", SimulationCliOptions.Duration);
+        "--duration", "Simulated time measured in each replication after the warm-up (e.g. 364d); default: 20 relaxation times of the slowest unit, in whole weeks, from 364d to 3640d.", null, SimulationCliOptions.Duration);
+
+    private readonly Option<double?> _precision = SimulationCliOptions.Precision();
+
+    private readonly Option<int> _maxReplications = SimulationCliOptions.MaxReplications();
 
     private readonly Option<string[]> _waitOver = SimulationCliOptions.WaitOverOption();
 
@@ -37,15 +41,22 @@ internal sealed class SimulateCommand() : NetworkCommand(
 
     protected override bool ForSimulation => true;
 
-    protected override IEnumerable<Symbol> Symbols => [_seed, _replications, _warmup, _duration, _waitOver, _compare, _threads, _allowLong];
+    protected override IEnumerable<Symbol> Symbols => [_seed, _replications, _warmup, _duration, _precision, _maxReplications, _waitOver, _compare, _threads, _allowLong];
 
     protected override int Execute(NetworkRequest request)
     {
         var network = request.Network;
-        var options = SimulationCliOptions.Read(
-            request.Parse, network.TimeUnit, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, SimulationCliOptions.Duration), _waitOver)
-            with { MaxDegreeOfParallelism = request.GetValue(_threads) };
-        SimulationCliOptions.CheckWork(request.Solve(), options, request.GetValue(_allowLong));
+        var options = SimulationCliOptions.ReadPlanned(
+            request, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, SimulationCliOptions.Duration), _waitOver)
+            with { MaxDegreeOfParallelism = request.GetValue(_threads), Precision = request.GetValue(_precision) };
+        if (options.Precision is not null)
+        {
+            options = options with { MaxReplications = Math.Max(request.GetValue(_maxReplications), options.Replications) };
+        }
+
+        // With --precision the run may grow to --max-replications: the work estimate counts that bound.
+        SimulationCliOptions.CheckWork(request.Solve(), options with { Replications = options.Precision is null ? options.Replications : options.MaxReplications }, request.GetValue(_allowLong));
+
         var result = SimulationRun.Run(network, options, request.Context);
         if (result.ReplicationsFinished == 0)
         {

@@ -6,14 +6,29 @@ internal sealed class ProgressTracker
     private const double TicksPerReplication = 1_000_000.0;
 
     private readonly IProgress<double>? _progress;
-    private readonly long[] _ticks;
-    private readonly double _totalTicks;
+    private long[] _ticks;
+    private double _totalTicks;
     private long _done;
 
     public ProgressTracker(IProgress<double>? progress, int replications)
     {
         _progress = progress;
         _ticks = new long[replications];
+        _totalTicks = replications * TicksPerReplication;
+    }
+
+    /// <summary>
+    /// Counts <paramref name="replications"/> in all from now on, when a precision adds replications: the bar steps
+    /// back once to show the work still to do. Call between steps, never while replications run.
+    /// </summary>
+    public void Extend(int replications)
+    {
+        if (replications <= _ticks.Length)
+        {
+            return;
+        }
+
+        Array.Resize(ref _ticks, replications);
         _totalTicks = replications * TicksPerReplication;
     }
 

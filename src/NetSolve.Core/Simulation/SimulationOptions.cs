@@ -32,6 +32,25 @@ public sealed record SimulationOptions
     /// <summary>Waits t, in hours, for which P(wait &gt; t) is reported per unit.</summary>
     public ImmutableArray<double> WaitThresholdsHours { get; init; } = [];
 
+    /// <summary>
+    /// The relative precision asked of the key means, a fraction in (0, 1) (0.05 for 5%); null for none. With it, replications
+    /// are added after the first <see cref="Replications"/> until the 95% half-width of every unit's mean wait and mean
+    /// number in unit is at most this share of the mean (see <see cref="PrecisionCheck"/>), or <see cref="MaxReplications"/> is reached.
+    /// </summary>
+    public double? Precision { get; init; }
+
+    /// <summary>Default upper bound on replications when a precision is asked: the effort a run may take before it stops and says the precision was not reached.</summary>
+    public const int DefaultMaxReplications = 200;
+
+    /// <summary>Most replications a run asked for a <see cref="Precision"/> may make; at least <see cref="Replications"/>.</summary>
+    public int MaxReplications { get; init; } = DefaultMaxReplications;
+
+    /// <summary>True when <see cref="WarmupHours"/> was chosen from the model (the slowest unit's relaxation time) rather than given.</summary>
+    public bool IsWarmupFromModel { get; init; }
+
+    /// <summary>True when <see cref="DurationHours"/> was chosen from the model rather than given.</summary>
+    public bool IsDurationFromModel { get; init; }
+
     /// <summary>Most replications run at once; −1 for all cores. Does not change the results.</summary>
     public int MaxDegreeOfParallelism { get; init; } = -1;
 
@@ -60,6 +79,16 @@ public sealed record SimulationOptions
             {
                 throw new ArgumentException(Message("wait threshold", wait, "finite and not negative"), nameof(WaitThresholdsHours));
             }
+        }
+
+        if (Precision is double precision && !(precision > 0.0 && precision < 1.0))
+        {
+            throw new ArgumentException(Message("precision", precision, "above 0 and below 1"), nameof(Precision));
+        }
+
+        if (Precision is not null && MaxReplications < Replications)
+        {
+            throw new ArgumentException(Message("most replications", MaxReplications, "at least the replications"), nameof(MaxReplications));
         }
 
         if (MaxDegreeOfParallelism == 0 || MaxDegreeOfParallelism < -1)

@@ -10,7 +10,7 @@ public sealed record SimulationResult
     /// <summary>The network simulated.</summary>
     public required Network Network { get; init; }
 
-    /// <summary>The options used.</summary>
+    /// <summary>The options used; <see cref="SimulationOptions.Replications"/> is the count run, which a precision may have raised.</summary>
     public required SimulationOptions Options { get; init; }
 
     /// <summary>Replications that ran to the end (fewer than requested when the run was cancelled).</summary>
@@ -27,6 +27,18 @@ public sealed record SimulationResult
 
     /// <summary>Network totals; null when no replication finished.</summary>
     public required SimulatedTotals? Totals { get; init; }
+
+    /// <summary>
+    /// Whether every unit's mean wait and mean number in unit reached <see cref="SimulationOptions.Precision"/>; null
+    /// when no precision was asked.
+    /// </summary>
+    public bool? PrecisionReached { get; init; }
+
+    /// <summary>
+    /// The largest 95% half-width relative to its mean among the units' mean waits and means in unit when a precision
+    /// was asked (+∞ while some key mean has no interval); null otherwise.
+    /// </summary>
+    public double? WorstRelativeHalfWidth { get; init; }
 
     /// <summary>Per-group results for <see cref="Network.Groups"/>, in order.</summary>
     public required ImmutableArray<SimulatedGroup> Groups { get; init; }

@@ -9,7 +9,8 @@ namespace NetSolve.Simulation;
 /// <remarks>
 /// Models what the formulas cannot: any service distribution, arrival profiles by hour and weekday (Poisson arrivals
 /// thinned from the peak rate), finite capacity with turning away or diversion, and patient groups. Units serve first
-/// come, first served. Results depend only on the network and the options, never on the thread count or timing,
+/// come, first served. With <see cref="SimulationOptions.Precision"/>, replications are added until every unit's
+/// mean wait and mean number in unit reach it or the effort bound is met (<see cref="PrecisionCheck"/>). Results depend only on the network and the options, never on the thread count or timing,
 /// except that a cancelled run reports the replications that happened to finish. Thread-safe (no shared state).
 /// </remarks>
 public static class Simulator
@@ -31,13 +32,15 @@ public static class Simulator
         var thresholds = options.WaitThresholdsHours.IsDefault ? [] : options.WaitThresholdsHours.ToArray();
         var compiled = CompiledNetwork.Compile(network);
         var layout = new MetricLayout(network.Units.Length, thresholds.Length, network.Groups.Length);
-        var rows = new double[options.Replications][];
-        var events = new long[options.Replications];
-        var tallies = new ReplicationTallies[options.Replications];
+        int most = options.Precision is null ? options.Replications : options.MaxReplications;
+        var rows = new double[most][];
+        var events = new long[most];
+        var tallies = new ReplicationTallies[most];
         var tracker = new ProgressTracker(progress, options.Replications);
         var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
+        var meanServiceHours = network.Units.Select(unit => unit.EffectiveService.MeanHours).ToArray();
 
-        Parallel.For(0, options.Replications, parallel, (replication, state) =>
+        void RunReplications(int from, int to) => Parallel.For(from, to, parallel, (replication, state) =>
         {
             if (cancellation.IsCancellationRequested)
             {
@@ -55,9 +58,36 @@ public static class Simulator
             }
         });
 
-        var finished = rows.Where(row => row is not null).ToList();
+        // The sequential procedure (PrecisionCheck): each step's size depends only on the rows so far, never on
+        // timing, so the same seed stops at the same count on any machine and thread count.
+        int started = options.Replications;
+        RunReplications(0, started);
+        double? worst = null;
+        bool? reached = null;
+        if (options.Precision is double precision)
+        {
+            double target = PrecisionCheck.AdjustedTarget(precision);
+            while (true)
+            {
+                var finishedSoFar = rows.Take(started).Where(row => row is not null).ToList();
+                worst = PrecisionCheck.WorstRelativeHalfWidth(layout, finishedSoFar, meanServiceHours);
+                reached = worst <= target;
+                if (reached.Value || started >= most || cancellation.IsCancellationRequested)
+                {
+                    break;
+                }
+
+                int next = PrecisionCheck.NextCount(started, worst.Value, target, most);
+                tracker.Extend(next);
+                RunReplications(started, next);
+                started = next;
+            }
+        }
+
+        var finished = rows.Take(started).Where(row => row is not null).ToList();
         long totalEvents = events.Sum();
-        var finishedTallies = tallies.Where(tally => tally is not null).ToList();
-        return new ResultAssembler(layout, finished, finishedTallies).Assemble(network, options, totalEvents);
+        var finishedTallies = tallies.Take(started).Where(tally => tally is not null).ToList();
+        var result = new ResultAssembler(layout, finished, finishedTallies).Assemble(network, options with { Replications = started }, totalEvents);
+        return result with { WorstRelativeHalfWidth = worst, PrecisionReached = reached };
     }
 }

@@ -39,8 +39,8 @@ public static class ComparedMetricColumns
     public static readonly Column<ComparisonRow> RelativeError = Columns.Number<ComparisonRow>("relative_error", "error", MetricDimension.Plain, row => row.Metric.RelativeError, Audience.Machines);
 
     /// <summary>The relative error as a signed percentage for people (<c>+36.0%</c>: the formula is 36% above the simulation).</summary>
-    public static readonly Column<ComparisonRow> RelativeErrorForPeople = Columns.Words<ComparisonRow>("relative_error", "error",
-        row => row.Metric.RelativeError is double error ? PeopleFormat.SignedPercent(error) : PeopleFormat.Missing, Audience.People);
+    /// <remarks>With an interval, ± the half-width the simulation's interval allows (<c>+12.0% ± 3.1%</c>).</remarks>
+    public static readonly Column<ComparisonRow> RelativeErrorForPeople = Columns.Words<ComparisonRow>("relative_error", "error", RelativeErrorText, Audience.People);
 
     /// <summary>The method of the unit's formula values (<see cref="UnitResult.Method"/>), on every CSV row.</summary>
     public static readonly Column<ComparisonRow> Method = Columns.Words<ComparisonRow>("method", "method", row => row.Method, Audience.Machines);
@@ -48,13 +48,42 @@ public static class ComparedMetricColumns
     /// <summary>The network's time unit, on every CSV row.</summary>
     public static readonly Column<ComparisonRow> TimeUnitName = Columns.Words<ComparisonRow>("time_unit", "time unit", row => TimeConstants.Name(row.TimeUnit), Audience.Machines);
 
+    /// <summary>Whether the formula is exact for the unit as simulated (<see cref="Analysis.ComparedMetric.IsFormulaExact"/>), on every CSV row.</summary>
+    public static readonly Column<ComparisonRow> FormulaExact = Columns.Words<ComparisonRow>("formula_exact", "exact", row => row.Metric.IsFormulaExact ? "true" : "false", Audience.Machines);
+
+    /// <summary>The half-width of the relative error the simulation's interval allows (<see cref="Analysis.ComparedMetric.RelativeErrorHalfWidth"/>).</summary>
+    public static readonly Column<ComparisonRow> RelativeErrorHalfWidth = Columns.Number<ComparisonRow>("relative_error" + EstimateCell.HalfWidthSuffix, "error", MetricDimension.Plain, row => row.Metric.RelativeErrorHalfWidth, Audience.Machines);
+
+    /// <summary>Which side an <c>outside</c> verdict points to, <c>run</c> or <c>formula</c> (<see cref="Analysis.ComparedMetric.Suspect"/>); empty otherwise.</summary>
+    public static readonly Column<ComparisonRow> Suspect = new("suspect", "suspect", MetricDimension.Plain, SuspectCell, Audience.Machines);
+
+    /// <summary>As <see cref="Suspect"/>, beside the verdict for people.</summary>
+    public static readonly Column<ComparisonRow> SuspectForPeople = new("suspect", "points to", MetricDimension.Plain, SuspectCell, Audience.People);
+
     /// <summary>The long table, one row per unit and metric: CSV reads the columns for programs, the table those for people.</summary>
-    /// <remarks><c>relative_error</c> and <c>method</c> came after <c>time_unit</c>, so they end the CSV row: a compatible extension.</remarks>
+    /// <remarks>
+    /// <c>relative_error</c> and <c>method</c> came after <c>time_unit</c>, and <c>formula_exact</c>, <c>suspect</c> and
+    /// <c>relative_error_ci</c> after them, so they end the CSV row: compatible extensions.
+    /// </remarks>
     public static readonly ImmutableArray<Column<ComparisonRow>> All =
-        [Unit, Metric, Formula, Simulated, SimulatedHalfWidth, SimulatedForPeople, RelativeErrorForPeople, Verdict, TimeUnitName, RelativeError, Method];
+        [Unit, Metric, Formula, Simulated, SimulatedHalfWidth, SimulatedForPeople, RelativeErrorForPeople, Verdict, SuspectForPeople, TimeUnitName, RelativeError, Method, FormulaExact, Suspect, RelativeErrorHalfWidth];
 
     /// <summary>The fields of one metric's object in a unit's JSON <c>compare</c> object, keyed by the metric's name.</summary>
-    public static readonly ImmutableArray<Column<ComparisonRow>> ForJson = [Formula, Simulated, SimulatedHalfWidth, Verdict, RelativeError];
+    public static readonly ImmutableArray<Column<ComparisonRow>> ForJson = [Formula, Simulated, SimulatedHalfWidth, Verdict, RelativeError, RelativeErrorHalfWidth, Suspect];
+
+    private static Cell SuspectCell(ComparisonRow row) => row.Metric.Suspect is string side ? Cell.Word(side) : Cell.Of(null, MetricDimension.Plain);
+
+    private static string RelativeErrorText(ComparisonRow row)
+    {
+        if (row.Metric.RelativeError is not double error)
+        {
+            return PeopleFormat.Missing;
+        }
+
+        return row.Metric.RelativeErrorHalfWidth is double half
+            ? PeopleFormat.SignedPercent(error) + " \u00B1 " + PeopleFormat.Percent(half)
+            : PeopleFormat.SignedPercent(error);
+    }
 
     /// <summary>The long table of <paramref name="simulated"/> against <paramref name="formula"/>, one row per unit and metric.</summary>
     public static ResultTable Table(SimulationResult simulated, NetworkSolution formula)

@@ -15,9 +15,10 @@ public static class ComparisonCsvWriter
 {
     /// <summary>
     /// The header row. <c>simulated_ci</c> is the 95% half-width of <c>simulated</c>; times and rates are in
-    /// <c>time_unit</c>, the network's, on every row so each row stands on its own when filtered; <c>relative_error</c> (a fraction) and <c>method</c> came later and end the row.
+    /// <c>time_unit</c>, the network's, on every row so each row stands on its own when filtered; <c>relative_error</c> (a fraction) and <c>method</c> came later, then
+    /// <c>formula_exact</c>, <c>suspect</c> (<c>run</c> or <c>formula</c> for a value outside) and <c>relative_error_ci</c>, and end the row.
     /// </summary>
-    public const string Header = "unit,metric,formula,simulated,simulated_ci,verdict,time_unit,relative_error,method";
+    public const string Header = "unit,metric,formula,simulated,simulated_ci,verdict,time_unit,relative_error,method,formula_exact,suspect,relative_error_ci";
 
     /// <summary>Writes the header and, for each unit in file order, one row per compared metric.</summary>
     /// <param name="simulated">The simulation of a network.</param>

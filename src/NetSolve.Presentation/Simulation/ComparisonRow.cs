@@ -13,12 +13,14 @@ namespace NetSolve.Presentation.Simulation;
 /// <param name="Method">The method the unit's formula values come from (<see cref="UnitResult.Method"/>).</param>
 public sealed record ComparisonRow(string UnitId, ComparedMetric Metric, TimeUnit TimeUnit, string Method)
 {
-    /// <summary>The rows of one unit, in the contract's order of metrics.</summary>
-    public static ImmutableArray<ComparisonRow> OfUnit(SimulatedUnit simulated, UnitResult formula, TimeUnit timeUnit)
+    /// <summary>The rows of one unit of <paramref name="network"/>, in the contract's order of metrics.</summary>
+    public static ImmutableArray<ComparisonRow> OfUnit(SimulatedUnit simulated, UnitResult formula, Network network)
     {
         ArgumentNullException.ThrowIfNull(simulated);
         ArgumentNullException.ThrowIfNull(formula);
-        return [.. FormulaSimulationComparison.ForUnit(simulated, formula).Select(metric => new ComparisonRow(simulated.Unit.Id, metric, timeUnit, formula.Method))];
+        ArgumentNullException.ThrowIfNull(network);
+        bool exact = FormulaSimulationComparison.IsExact(network, formula);
+        return [.. FormulaSimulationComparison.ForUnit(simulated, formula, exact).Select(metric => new ComparisonRow(simulated.Unit.Id, metric, network.TimeUnit, formula.Method))];
     }
 
     /// <summary>The rows of every unit in file order.</summary>
@@ -32,6 +34,6 @@ public sealed record ComparisonRow(string UnitId, ComparedMetric Metric, TimeUni
             throw new ArgumentException("The formula solution must be of the simulated network: one result per unit.", nameof(formula));
         }
 
-        return [.. simulated.Units.SelectMany((unit, i) => OfUnit(unit, formula.Units[i], simulated.Network.TimeUnit))];
+        return [.. simulated.Units.SelectMany((unit, i) => OfUnit(unit, formula.Units[i], simulated.Network))];
     }
 }

@@ -29,28 +29,43 @@ public static class ComparisonTableWriter
 
         output.Write("\n");
         PeopleTableWriter.Write(ResultTable.Build(ComparedMetricColumns.All, rows, simulated.Network.TimeUnit), output);
-        output.Write("\n" + Summary(rows.Select(row => row.Metric.Verdict).ToList(), formula.Units.Any(FormulaSimulationComparison.IsApproximate)) + "\n");
+        output.Write("\n" + Summary(rows.Select(row => row.Metric).ToList(), simulated.PrecisionReached) + "\n");
     }
 
-    /// <summary>One sentence on the verdicts: how many formula values lie outside, or why none could be judged.</summary>
-    /// <param name="verdicts">Every row's verdict.</param>
-    /// <param name="approximate">Whether some unit's method is an approximation rather than exact for the unit as modelled.</param>
-    private static string Summary(IReadOnlyCollection<string> verdicts, bool approximate)
+    /// <summary>
+    /// One sentence on the verdicts: how many formula values lie outside and which side each points to (the run where
+    /// the formula is exact, the formula where it is an approximation), or why none could be judged.
+    /// </summary>
+    /// <param name="metrics">Every row's compared metric.</param>
+    /// <param name="precisionReached">Whether the run reached its requested precision; null when none was asked.</param>
+    internal static string Summary(IReadOnlyCollection<ComparedMetric> metrics, bool? precisionReached)
     {
-        int outside = verdicts.Count(verdict => verdict == "outside");
-        if (outside > 0)
+        int onRun = metrics.Count(metric => metric.Suspect == "run");
+        int onFormula = metrics.Count(metric => metric.Suspect == "formula");
+        if (onRun + onFormula > 0)
         {
-            string count = string.Create(CultureInfo.InvariantCulture, $"{outside} formula value(s) outside the simulation's 95% interval: ");
-            string reason = approximate
-                ? "some units use an approximate method (see the error column for how far off it is), and what the formulas "
-                    + "do not model (an hour-of-day profile, bursts of diverted patients) may matter here; "
-                : "the formulas are exact for these units as modelled, so what they do not model "
-                    + "(an hour-of-day profile) may matter here, or the run is short; ";
-            return count + reason + "about 1 in 20 values falls outside by chance alone";
+            var parts = new List<string>();
+            if (onRun > 0)
+            {
+                string precision = precisionReached == false ? "its precision was not reached, " : string.Empty;
+                parts.Add(string.Create(CultureInfo.InvariantCulture, $"{onRun} outside where the formula is exact: doubt the run (")
+                    + precision + "it may be short against the unit's relaxation time or its warm-up too short; "
+                    + "try a longer --duration and --warmup, or --precision), or chance");
+            }
+
+            if (onFormula > 0)
+            {
+                parts.Add(string.Create(CultureInfo.InvariantCulture, $"{onFormula} outside where the method is an approximation: ")
+                    + "the error column gives how far off it is, \u00B1 what the simulation's interval allows; what the formulas "
+                    + "do not model (an hour-of-day profile, groups, bursts of diverted patients) may matter too");
+            }
+
+            return string.Create(CultureInfo.InvariantCulture, $"{onRun + onFormula} formula value(s) outside the simulation's 95% interval; ")
+                + string.Join("; ", parts) + "; about 1 in 20 values falls outside by chance alone";
         }
 
         // One replication gives no interval, so there is nothing to be inside of.
-        return verdicts.Any(verdict => verdict == "inside")
+        return metrics.Any(metric => metric.Verdict == "inside")
             ? "every formula value lies inside the simulation's 95% interval"
             : "no formula value could be judged: one replication gives no interval (use --replications 2 or more)";
     }

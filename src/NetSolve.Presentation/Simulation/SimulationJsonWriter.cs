@@ -40,7 +40,7 @@ public static class SimulationJsonWriter
             WriteUnitDetails(json, rows[i].Simulated, timeUnit);
             if (formula is not null)
             {
-                WriteComparison(json, ComparisonRow.OfUnit(rows[i].Simulated, formula.Units[i], timeUnit), timeUnit);
+                WriteComparison(json, ComparisonRow.OfUnit(rows[i].Simulated, formula.Units[i], result.Network), timeUnit);
             }
 
             json.WriteEndObject();
@@ -64,9 +64,35 @@ public static class SimulationJsonWriter
         json.WriteBoolean("complete", result.IsComplete);
         JsonTableWriter.WriteCell(json, "warmup", Cell.Of(options.WarmupHours, MetricDimension.Time), timeUnit);
         JsonTableWriter.WriteCell(json, "duration", Cell.Of(options.DurationHours, MetricDimension.Time), timeUnit);
+        json.WriteString("warmup_from", options.IsWarmupFromModel ? "relaxation_time" : "given");
+        json.WriteString("duration_from", options.IsDurationFromModel ? "relaxation_time" : "given");
+        WriteNumberOrNull(json, "precision", options.Precision);
+        if (result.PrecisionReached is bool reached)
+        {
+            json.WriteBoolean("precision_reached", reached);
+        }
+        else
+        {
+            json.WriteNull("precision_reached");
+        }
+
+        WriteNumberOrNull(json, "worst_relative_ci", result.WorstRelativeHalfWidth is double worst && double.IsFinite(worst) ? worst : null);
+        WriteNumberOrNull(json, "max_replications", options.Precision is null ? null : options.MaxReplications);
         json.WriteNumber("events", result.Events);
         json.WriteNumber("confidence_level", Estimate.ConfidenceLevel);
         json.WriteEndObject();
+    }
+
+    private static void WriteNumberOrNull(Utf8JsonWriter json, string name, double? value)
+    {
+        if (value is double number)
+        {
+            json.WriteNumber(name, number);
+        }
+        else
+        {
+            json.WriteNull(name);
+        }
     }
 
     /// <summary>The nested fields of a unit: percentiles, P(wait &gt; t) and the mean queue by hour of day.</summary>

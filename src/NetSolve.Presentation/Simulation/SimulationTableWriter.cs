@@ -34,8 +34,27 @@ public static class SimulationTableWriter
         ArgumentNullException.ThrowIfNull(result);
         var options = result.Options;
         return FormattableString.Invariant(
-            $"simulated: {result.ReplicationsFinished} of {options.Replications} replications of {PeopleFormat.Time(options.DurationHours)} each after a warm-up of {PeopleFormat.Time(options.WarmupHours)}, seed {options.Seed}; ")
-            + SolutionTableWriter.Title(result.Network.TimeUnit, strainThreshold) + "; \u00B1 is the 95% half-width";
+            $"simulated: {result.ReplicationsFinished} of {options.Replications} replications of {PeopleFormat.Time(options.DurationHours)}{Chosen(options.IsDurationFromModel)} each after a warm-up of {PeopleFormat.Time(options.WarmupHours)}{Chosen(options.IsWarmupFromModel)}, seed {options.Seed}; ")
+            + Precision(result) + SolutionTableWriter.Title(result.Network.TimeUnit, strainThreshold) + "; \u00B1 is the 95% half-width";
+    }
+
+    /// <summary>Says that a run length was chosen from the slowest unit's relaxation time rather than given.</summary>
+    private static string Chosen(bool fromModel) => fromModel ? " (from relaxation time)" : string.Empty;
+
+    /// <summary>The requested precision and whether it was reached, with the worst relative half-width; empty when none was asked.</summary>
+    public static string Precision(SimulationResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        if (result.Options.Precision is not double precision)
+        {
+            return string.Empty;
+        }
+
+        string worst = result.WorstRelativeHalfWidth is double relative && double.IsFinite(relative)
+            ? " (worst " + PeopleFormat.Percent(relative) + ")"
+            : string.Empty;
+        string outcome = result.PrecisionReached == true ? "reached" : "NOT reached";
+        return "precision " + PeopleFormat.Percent(precision) + " " + outcome + worst + "; ";
     }
 
     private static void WritePercentiles(SimulationResult result, TextWriter output)

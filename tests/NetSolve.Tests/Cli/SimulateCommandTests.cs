@@ -14,7 +14,7 @@ public sealed class SimulateCommandTests
         var (code, output, error) = Run("simulate", Example, "--format", "json", "--replications", "3", "--warmup", "7d", "--duration", "28d", "--wait-over", "4h", "--compare");
 
         Assert.Equal(0, code);
-        Assert.Empty(error);
+        AssertOnlySlowUnitWarnings(error);
         using var document = JsonDocument.Parse(output);
         var root = document.RootElement;
         Assert.Equal("hour", root.GetProperty("time_unit").GetString());
@@ -45,9 +45,9 @@ public sealed class SimulateCommandTests
         var table = Run(common);
 
         Assert.Equal(0, csv.ExitCode);
-        Assert.Empty(csv.Error);
+        AssertOnlySlowUnitWarnings(csv.Error);
         var rows = CsvRows.Parse(csv.Out);
-        Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit", "relative_error", "method"], rows[0]);
+        Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit", "relative_error", "method", "formula_exact", "suspect", "relative_error_ci"], rows[0]);
 
         // Source: the larkspur file has five units; the comparison judges seven metrics of each.
         Assert.Equal(5 * 7, rows.Count - 1);
@@ -152,9 +152,113 @@ public sealed class SimulateCommandTests
         Assert.Equal(24, unit.GetProperty("mean_queue_by_hour").GetArrayLength());
         Assert.Equal(24, unit.GetProperty("mean_queue_by_hour_ci").GetArrayLength());
         string[] header = csv.Out.Split('\n')[0].Split(',');
-        Assert.Equal(Enumerable.Range(0, 24).Select(h => FormattableString.Invariant($"mean_queue_h{h:00}")), header[^24..], StringComparer.Ordinal);
+        // The hours come last but for the three columns of how the run was made, which came later.
+        Assert.Equal(Enumerable.Range(0, 24).Select(h => FormattableString.Invariant($"mean_queue_h{h:00}")), header[^27..^3], StringComparer.Ordinal);
         string[] firstRow = csv.Out.Split('\n')[1].Split(',');
         Assert.Equal(header.Length, firstRow.Length);
-        Assert.Equal(unit.GetProperty("mean_queue_by_hour")[23].GetDouble(), double.Parse(firstRow[^1], System.Globalization.CultureInfo.InvariantCulture));
+        Assert.Equal(unit.GetProperty("mean_queue_by_hour")[23].GetDouble(), double.Parse(firstRow[^4], System.Globalization.CultureInfo.InvariantCulture));
+    }
+
+    /// <summary>A short run of the larkspur file is short against its ward's relaxation time, which is worth a warning, and nothing else is.</summary>
+    private static void AssertOnlySlowUnitWarnings(string error) =>
+        Assert.All(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), line => Assert.StartsWith("netsolve: warning: unit '", line, StringComparison.Ordinal));
+
+    /// <summary>One server at utilisation 0.9 with one-day service: Erlang C is exact for it, and it relaxes in about 380 days.</summary>
+    private const string SlowSingleServer = "name: Slow single server  # invented\nunits:\n  ward:\n    servers: 1\n    service: 1d\narrivals:\n  ward: 0.9/d\n";
+
+    [Fact]
+    public void Compare_on_a_deliberately_short_run_of_an_exact_unit_blames_the_run_not_the_formula()
+    {
+        string path = Path.Combine(Path.GetTempPath(), $"netsolve-simulate-{Guid.NewGuid():N}.yaml");
+        File.WriteAllText(path, SlowSingleServer);
+        try
+        {
+            string[] common = ["simulate", path, "--replications", "10", "--warmup", "0", "--duration", "28d", "--compare"];
+            var table = Run(common);
+            var csv = Run([.. common, "--format", "csv"]);
+
+            Assert.Equal(0, table.ExitCode);
+            Assert.Contains("outside where the formula is exact: doubt the run", table.Out, StringComparison.Ordinal);
+            Assert.DoesNotContain("outside where the method is an approximation", table.Out, StringComparison.Ordinal);
+
+            // Exact by hand: Erlang C gives a mean wait of ρ/(μ − λ) = 9 days; four weeks from empty cannot reach it.
+            var rows = CsvRows.Parse(csv.Out);
+            var meanWait = rows.Single(row => row[1] == "mean_wait");
+            Assert.Equal(("outside", "true", "run"), (meanWait[5], meanWait[9], meanWait[10]));
+            Assert.Contains("netsolve: warning: unit 'ward' relaxes in about 379.7 d", table.Error, StringComparison.Ordinal);
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Fact]
+    public void Without_run_lengths_the_warm_up_and_run_come_from_the_relaxation_time_and_every_output_says_so()
+    {
+        string path = Path.Combine(Path.GetTempPath(), $"netsolve-simulate-{Guid.NewGuid():N}.yaml");
+        File.WriteAllText(path, SlowSingleServer);
+        try
+        {
+            var json = Run("simulate", path, "--replications", "2", "--format", "json");
+            var table = Run("simulate", path, "--replications", "2");
+            var csv = Run("simulate", path, "--replications", "2", "--format", "csv");
+
+            Assert.Equal(0, json.ExitCode);
+            using var document = JsonDocument.Parse(json.Out);
+            var run = document.RootElement.GetProperty("simulation");
+
+            // Exact by hand: 5 relaxation times of 9,113.7 h in whole weeks is 45,696 h; 20 exceed the bound of 3,640 d.
+            Assert.Equal(45_696.0, run.GetProperty("warmup").GetDouble());
+            Assert.Equal(87_360.0, run.GetProperty("duration").GetDouble());
+            Assert.Equal("relaxation_time", run.GetProperty("warmup_from").GetString());
+            Assert.Equal(JsonValueKind.Null, run.GetProperty("precision_reached").ValueKind);
+            Assert.Contains("of 3,640 d (from relaxation time) each after a warm-up of 1,904 d (from relaxation time)", table.Out, StringComparison.Ordinal);
+            var rows = CsvRows.Parse(csv.Out);
+            Assert.Equal(["warmup", "duration", "precision_reached"], rows[0][^3..]);
+            Assert.Equal(["45696", "87360", ""], rows[1][^3..]);
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Fact]
+    public void Precision_stops_when_reached_and_says_so_and_says_when_the_bound_on_effort_came_first()
+    {
+        string path = Path.Combine(Path.GetTempPath(), $"netsolve-simulate-{Guid.NewGuid():N}.yaml");
+        File.WriteAllText(path, "name: Quick clinic  # invented\nunits:\n  clinic:\n    servers: 1\n    service: 1h\narrivals:\n  clinic: 0.5/h\n");
+        try
+        {
+            string[] common = ["simulate", path, "--warmup", "1d", "--duration", "28d", "--format", "json"];
+            var reached = Run([.. common, "--precision", "5%"]);
+            var bounded = Run([.. common, "--precision", "0.01", "--max-replications", "12"]);
+
+            using var first = JsonDocument.Parse(reached.Out);
+            using var second = JsonDocument.Parse(bounded.Out);
+            Assert.True(first.RootElement.GetProperty("simulation").GetProperty("precision_reached").GetBoolean());
+            Assert.Equal(0.05, first.RootElement.GetProperty("simulation").GetProperty("precision").GetDouble());
+            Assert.False(second.RootElement.GetProperty("simulation").GetProperty("precision_reached").GetBoolean());
+            Assert.Equal(12, second.RootElement.GetProperty("simulation").GetProperty("replications_finished").GetInt32());
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Theory]
+    [InlineData("0%")]
+    [InlineData("100%")]
+    [InlineData("soon")]
+    [InlineData("1.5")]
+    public void A_precision_that_is_not_a_share_between_0_and_100_percent_is_a_usage_error(string text)
+    {
+        var (code, output, error) = Run("simulate", Example, "--precision", text);
+
+        Assert.Equal(2, code);
+        Assert.Empty(output);
+        Assert.StartsWith($"netsolve: --precision: '{text}' is not a share above 0% and below 100%", error, StringComparison.Ordinal);
     }
 }

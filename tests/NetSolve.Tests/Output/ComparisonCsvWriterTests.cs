@@ -23,7 +23,7 @@ public sealed class ComparisonCsvWriterTests
     {
         string csv = Csv(SimulateAndSolve(replications: 3));
 
-        Assert.Equal("unit,metric,formula,simulated,simulated_ci,verdict,time_unit,relative_error,method", csv.Split('\n')[0]);
+        Assert.Equal("unit,metric,formula,simulated,simulated_ci,verdict,time_unit,relative_error,method,formula_exact,suspect,relative_error_ci", csv.Split('\n')[0]);
     }
 
     [Fact]
@@ -41,7 +41,7 @@ public sealed class ComparisonCsvWriterTests
 
         var expected = new[] { "triage", AwkwardId }.SelectMany(unit => MetricsInTableOrder.Select(metric => (unit, metric)));
         Assert.Equal(expected, rows.Skip(1).Select(row => (row[0], row[1])));
-        Assert.All(rows, row => Assert.Equal(9, row.Length));
+        Assert.All(rows, row => Assert.Equal(12, row.Length));
     }
 
     // One replication gives "no interval"; the ward's formula is unstable ("no formula"); five replications let the

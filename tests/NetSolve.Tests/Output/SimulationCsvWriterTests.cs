@@ -15,12 +15,14 @@ public sealed class SimulationCsvWriterTests
         var rows = CsvRows.Parse(output.ToString());
 
         // Source: docs/simulation.md, "CSV": id, label, servers, each metric from arrival_rate to diverted_rate with its
-        // _ci, the percentiles time_in_unit_p50 to _p99, p_wait_over_T and p_wait_over_T_upper_bound per --wait-over time (here 1 hour), the hours.
+        // _ci, the percentiles time_in_unit_p50 to _p99, p_wait_over_T and p_wait_over_T_upper_bound per --wait-over
+        // time (here 1 hour), the hours, then how the run was made.
         string[] expected =
         [
             .. SimulatedUnitColumns.ForCsv.Select(column => column.Id),
             "time_in_unit_p50", "time_in_unit_p90", "time_in_unit_p95", "time_in_unit_p99", "p_wait_over_1", "p_wait_over_1_upper_bound",
             .. Enumerable.Range(0, 24).Select(hour => FormattableString.Invariant($"mean_queue_h{hour:00}")),
+            "warmup", "duration", "precision_reached",
         ];
         Assert.Equal(expected, rows[0]);
         Assert.Equal(["id", "label", "servers", "arrival_rate", "arrival_rate_ci"], rows[0][..5]);

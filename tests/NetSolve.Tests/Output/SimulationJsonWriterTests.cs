@@ -62,7 +62,7 @@ public sealed class SimulationJsonWriterTests
         Assert.Equal(["p50", "p50_ci", "p90", "p90_ci", "p95", "p95_ci", "p99", "p99_ci"], Names(unit.GetProperty("time_in_unit_percentiles")));
         Assert.Equal(["wait", "probability", "probability_ci", "upper_bound"], Names(unit.GetProperty("p_wait_over")[0]));
         Assert.Equal(Ids(WaitOverColumns.ForJson), Names(unit.GetProperty("p_wait_over")[0]), StringComparer.Ordinal);
-        Assert.Equal(["formula", "simulated", "simulated_ci", "verdict", "relative_error"], Names(unit.GetProperty("compare").GetProperty("mean_wait")));
+        Assert.Equal(["formula", "simulated", "simulated_ci", "verdict", "relative_error", "relative_error_ci", "suspect"], Names(unit.GetProperty("compare").GetProperty("mean_wait")));
         Assert.Equal(Ids(ComparedMetricColumns.ForJson), Names(unit.GetProperty("compare").GetProperty("mean_wait")), StringComparer.Ordinal);
     }
 
