@@ -25,7 +25,7 @@ public static class MapTypography
     public const double MaxLabelWidth = 96.0;
 
     /// <summary>A unit label takes at most this many lines; the rest is cut with an ellipsis (full text in the tooltip).</summary>
-    public const int MaxLabelLines = 3;
+    public const int MaxLabelLines = 4;
 
     /// <summary>A single word wider than <see cref="MaxLabelWidth"/> keeps its own line up to this width, then is cut with an ellipsis.</summary>
     public const double MaxLabelWordWidth = 2.0 * MaxLabelWidth;
