@@ -1,5 +1,6 @@
 using System.Text;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Cli.Output;
 
@@ -48,6 +49,9 @@ internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool 
             {
                 writer.Write("\n" + Caution.Text + "\n");
             }
+
+            // A label or name with an escape or other control character must not drive the terminal.
+            return SafeText.ForTerminal(writer.ToString());
         }
 
         return writer.ToString();

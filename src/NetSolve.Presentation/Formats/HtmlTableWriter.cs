@@ -64,5 +64,5 @@ public static class HtmlTableWriter
     private static string Attribute(string? name, string? value) =>
         name is null || value is null ? string.Empty : " " + name + "=\"" + Encode(value) + "\"";
 
-    private static string Encode(string text) => WebUtility.HtmlEncode(text);
+    private static string Encode(string text) => WebUtility.HtmlEncode(SafeText.ForDisplay(text));
 }

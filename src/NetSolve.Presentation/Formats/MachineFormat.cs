@@ -50,10 +50,25 @@ public static class MachineFormat
         return Csv(Value(cell, timeUnit));
     }
 
-    /// <summary>Quotes a text cell when it holds a comma, quote or line break (RFC 4180).</summary>
+    /// <summary>
+    /// One text cell for CSV: quoted when it holds a comma, semicolon, quote or line break (RFC 4180), and made inert
+    /// when a spreadsheet would read it as a formula.
+    /// </summary>
+    /// <remarks>
+    /// Planners open our CSV in spreadsheets, and a label or scenario name such as <c>=HYPERLINK(...)</c> would run
+    /// there as a formula. As the OWASP Foundation's "CSV Injection" guidance describes, a text cell that starts with
+    /// <c>=</c>, <c>+</c>, <c>-</c>, <c>@</c>, a tab or a carriage return gets a single quote before it and is quoted;
+    /// a semicolon (the separator some spreadsheets expect) is quoted too so it cannot start a new cell. Numbers never
+    /// pass through here: a negative number we write is written as a number (<see cref="Csv"/>).
+    /// </remarks>
     public static string CsvText(string value)
     {
         ArgumentNullException.ThrowIfNull(value);
-        return value.AsSpan().IndexOfAny(",\"\n\r") >= 0 ? "\"" + value.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : value;
+        bool formula = value.Length > 0 && FormulaStarts.Contains(value[0], StringComparison.Ordinal);
+        string text = formula ? "'" + value : value;
+        return formula || text.AsSpan().IndexOfAny(",;\"\n\r") >= 0 ? "\"" + text.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : text;
     }
+
+    /// <summary>The first characters that make a spreadsheet read a cell as a formula (OWASP, "CSV Injection").</summary>
+    private const string FormulaStarts = "=+-@\t\r";
 }

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using NetSolve.Model;
+using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Rendering.Map;
 
@@ -18,7 +19,7 @@ public static class DotMapWriter
         var dot = new StringBuilder();
         dot.Append("digraph ").Append(Quote(layout.Title)).Append(" {\n");
         dot.Append("  graph [rankdir=").Append(layout.Direction == MapDirection.TopToBottom ? "TB" : "LR")
-            .Append(", fontname=\"DejaVu Sans\", labelloc=t, label=").Append(Quote(layout.Title + " (rates per " + TimeConstants.Name(layout.TimeUnit) + ")")).Append("];\n");
+            .Append(", fontname=\"DejaVu Sans\", labelloc=t, label=").Append(Quote(MapLegend.ShownTitle(layout) + " (rates per " + TimeConstants.Name(layout.TimeUnit) + ")")).Append("];\n");
         dot.Append("  node [shape=box, fontname=\"DejaVu Sans\", fontsize=11];\n");
         dot.Append("  edge [fontname=\"DejaVu Sans\", fontsize=10];\n");
         foreach (var node in layout.Nodes)
@@ -76,13 +77,16 @@ public static class DotMapWriter
         string label = string.Join("\n", node.Lines.Select(line => line.Text));
         string border = style.BorderDash.Length == 0 ? "solid" : style.BorderDash.StartsWith('2') ? "dotted" : "dashed";
         return string.Create(CultureInfo.InvariantCulture,
-            $"style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Coordinates.Format(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}");
+            $"style=\"filled,{border}\", fillcolor={Quote(style.Fill)}, fontcolor={Quote(style.Text)}, color={Quote(style.Border)}, penwidth={Coordinates.Format(style.BorderWidth)}, peripheries={(style.DoubleBorder ? 2 : 1)}, label={Quote(label)}{(node.FullLabel is null ? string.Empty : ", tooltip=" + Quote(SvgMapWriter.Tooltip(node)))}");
     }
 
-    /// <summary>A DOT quoted string: backslash and double quote escaped, line breaks as <c>\n</c>.</summary>
-    internal static string Quote(string text) =>
-        "\"" + text.Replace("\\", "\\\\", StringComparison.Ordinal)
+    /// <summary>A DOT quoted string: backslash and double quote escaped, line breaks as <c>\n</c>, no other control character.</summary>
+    internal static string Quote(string text)
+    {
+        // Each line cleaned on its own, so the line breaks we put between a box's lines survive and nothing else does.
+        string safe = string.Join('\n', text.Replace("\r", string.Empty, StringComparison.Ordinal).Split('\n').Select(SafeText.ForDisplay));
+        return "\"" + safe.Replace("\\", "\\\\", StringComparison.Ordinal)
             .Replace("\"", "\\\"", StringComparison.Ordinal)
-            .Replace("\r", string.Empty, StringComparison.Ordinal)
             .Replace("\n", "\\n", StringComparison.Ordinal) + "\"";
+    }
 }

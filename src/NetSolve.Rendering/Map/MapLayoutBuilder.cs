@@ -148,8 +148,8 @@ public static class MapLayoutBuilder
             var kind = isDiversion ? MapEdgeKind.Diversion
                 : RunsBackwards(placed[index[from]], placed[index[to]], direction) ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
             mapEdges.Add(new MapEdge(
-                from,
-                to,
+                SafeText.ForDisplay(from),
+                SafeText.ForDisplay(to),
                 kind,
                 perHour,
                 rateText,
@@ -162,7 +162,7 @@ public static class MapLayoutBuilder
         }
 
         return new MapLayout(
-            network.Name,
+            SafeText.ForDisplay(network.Name),
             timeUnit,
             direction,
             bounds.Width + (2.0 * MapTypography.Margin),
@@ -237,6 +237,7 @@ public static class MapLayoutBuilder
         var lines = UnitBoxText.For(result, timeUnit, arrivalPerHour, exitPerHour);
         double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
         double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
-        return new MapNode(result.Unit.Id, 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null);
+        string? fullLabel = UnitBoxText.IsShortened(result.Unit.Label) ? SafeText.ForDisplay(result.Unit.Label) : null;
+        return new MapNode(SafeText.ForDisplay(result.Unit.Id), 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null, null, fullLabel);
     }
 }

@@ -12,7 +12,8 @@ internal static class MapLegend
     public static XElement Lay(MapLayout layout, out double headerHeight, out double minWidth)
     {
         double margin = MapTypography.Margin;
-        double titleWidth = TextWidth.Of(layout.Title, SvgMapWriter.TitleFontSize, bold: true);
+        string title = ShownTitle(layout);
+        double titleWidth = TextWidth.Of(title, SvgMapWriter.TitleFontSize, bold: true);
         var items = Items(layout.TimeUnit, layout.Edges.Any(edge => edge.Kind == MapEdgeKind.Diversion));
         double widestItem = items.Max(item => item.Width);
         minWidth = Math.Max(titleWidth, widestItem) + (2.0 * margin);
@@ -20,7 +21,7 @@ internal static class MapLegend
 
         var header = new XElement(Svg + "g", new XAttribute("class", "legend"));
         double y = margin + SvgMapWriter.TitleFontSize;
-        header.Add(SvgMapWriter.Text(margin, y, SvgMapWriter.TitleFontSize, layout.Title, bold: true));
+        header.Add(SvgMapWriter.Text(margin, y, SvgMapWriter.TitleFontSize, title, bold: true));
         y += SvgMapWriter.TitleFontSize * 0.6;
 
         double rowHeight = SvgMapWriter.SwatchHeight + 8.0;
@@ -41,6 +42,16 @@ internal static class MapLegend
         headerHeight = rowTop + rowHeight + 4.0;
         return header;
     }
+
+    /// <summary>
+    /// The title as drawn: cut with an ellipsis beyond the graph's width or <see cref="MapTypography.MaxTitleWidth"/>,
+    /// whichever is wider, so a very long network name cannot widen the map (the SVG's title element keeps it whole).
+    /// </summary>
+    internal static string ShownTitle(MapLayout layout) => Ellipsis.Fit(
+        layout.Title,
+        Math.Max(layout.Width - (2.0 * MapTypography.Margin), MapTypography.MaxTitleWidth),
+        SvgMapWriter.TitleFontSize,
+        bold: true);
 
     private static List<LegendItem> Items(TimeUnit timeUnit, bool hasDiversion)
     {

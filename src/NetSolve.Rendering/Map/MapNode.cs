@@ -14,6 +14,7 @@ namespace NetSolve.Rendering.Map;
 /// <param name="Arrival">External arrivals into the unit, if any.</param>
 /// <param name="Exit">Patients leaving the network from the unit, if any.</param>
 /// <param name="TurnedAway">Patients turned away because the unit is full, if any.</param>
+/// <param name="FullLabel">The whole label when the box shows it shortened (for the tooltip); null when shown whole.</param>
 public sealed record MapNode(
     string UnitId,
     double Left,
@@ -24,7 +25,8 @@ public sealed record MapNode(
     UnitStatus Status,
     MapStub? Arrival,
     MapStub? Exit,
-    MapStub? TurnedAway = null)
+    MapStub? TurnedAway = null,
+    string? FullLabel = null)
 {
     /// <summary>Right edge in map units.</summary>
     public double Right => Left + Width;

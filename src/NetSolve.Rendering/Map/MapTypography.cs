@@ -24,6 +24,15 @@ public static class MapTypography
     /// <summary>Labels longer than this are wrapped onto further lines.</summary>
     public const double MaxLabelWidth = 96.0;
 
+    /// <summary>A unit label takes at most this many lines; the rest is cut with an ellipsis (full text in the tooltip).</summary>
+    public const int MaxLabelLines = 4;
+
+    /// <summary>A single word wider than <see cref="MaxLabelWidth"/> keeps its own line up to this width, then is cut with an ellipsis.</summary>
+    public const double MaxLabelWordWidth = 2.0 * MaxLabelWidth;
+
+    /// <summary>The map's title is cut with an ellipsis beyond this width or the graph's, whichever is wider.</summary>
+    public const double MaxTitleWidth = 960.0;
+
     /// <summary>Boxes are at least this wide, so short labels still leave room for the metrics.</summary>
     public const double MinUnitWidth = 90.0;
 

@@ -123,7 +123,7 @@ public static class SvgMapWriter
             new XAttribute("class", "unit status-" + StatusWords.Name(node.Status)),
             new XAttribute("data-unit", node.UnitId),
             new XAttribute("data-status", StatusWords.Name(node.Status)),
-            new XElement(Svg + "title", node.UnitId + ": " + string.Join("; ", node.Lines.Select(line => line.Text))));
+            new XElement(Svg + "title", Tooltip(node)));
         foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit"), (node.TurnedAway, "turned-away") })
         {
             if (stub is not null)
@@ -163,6 +163,17 @@ public static class SvgMapWriter
 
         return group;
     }
+
+    /// <summary>The box's tooltip: its id and every line of text, the label whole even where the box shows it shortened.</summary>
+    internal static string Tooltip(MapNode node)
+    {
+        var lines = node.FullLabel is null
+            ? node.Lines.Select(line => line.Text)
+            : node.Lines.Where(line => !IsLabelLine(line)).Select(line => line.Text).Prepend(node.FullLabel);
+        return node.UnitId + ": " + string.Join("; ", lines);
+    }
+
+    private static bool IsLabelLine(MapTextLine line) => line.IsBold && line.FontSize.Equals(MapTypography.LabelSize);
 
     private static XElement Stub(MapStub stub, string kind)
     {

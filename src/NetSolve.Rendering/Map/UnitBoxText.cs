@@ -17,7 +17,7 @@ internal static class UnitBoxText
     public static ImmutableArray<MapTextLine> For(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
     {
         var lines = ImmutableArray.CreateBuilder<MapTextLine>();
-        foreach (string part in Wrap(result.Unit.Label, MapTypography.LabelSize))
+        foreach (string part in Wrap(SafeText.ForDisplay(result.Unit.Label), MapTypography.LabelSize))
         {
             lines.Add(new MapTextLine(part, MapTypography.LabelSize, IsBold: true));
         }
@@ -82,17 +82,31 @@ internal static class UnitBoxText
         return "wait " + ShownValue.Of(UnitColumns.MeanWait, result, timeUnit);
     }
 
-    /// <summary>Greedy word wrap at <see cref="MapTypography.MaxLabelWidth"/>; a single long word keeps its own line.</summary>
+    /// <summary>True when the box shows <paramref name="label"/> shortened, so the full text goes in its tooltip.</summary>
+    public static bool IsShortened(string label) => Wrap(SafeText.ForDisplay(label), MapTypography.LabelSize).Any(line => line.EndsWith(Ellipsis.Mark, StringComparison.Ordinal));
+
+    /// <summary>
+    /// Greedy word wrap at <see cref="MapTypography.MaxLabelWidth"/>, at most <see cref="MapTypography.MaxLabelLines"/>
+    /// lines; a single long word keeps its own line up to <see cref="MapTypography.MaxLabelWordWidth"/>. What does not
+    /// fit is cut with an ellipsis, so a box stays a box whatever the label's length.
+    /// </summary>
     public static IEnumerable<string> Wrap(string text, double fontSize)
     {
+        var lines = new List<string>();
         string current = string.Empty;
         foreach (string word in text.Split(' ', StringSplitOptions.RemoveEmptyEntries))
         {
             string candidate = current.Length == 0 ? word : current + " " + word;
             if (current.Length > 0 && TextWidth.Of(candidate, fontSize, bold: true) > MapTypography.MaxLabelWidth)
             {
-                yield return current;
+                lines.Add(current);
                 current = word;
+                if (lines.Count == MapTypography.MaxLabelLines)
+                {
+                    lines[^1] = Ellipsis.Fit(lines[^1] + " " + current + Ellipsis.Mark, MapTypography.MaxLabelWidth, fontSize, bold: true);
+                    current = string.Empty;
+                    break;
+                }
             }
             else
             {
@@ -102,7 +116,9 @@ internal static class UnitBoxText
 
         if (current.Length > 0)
         {
-            yield return current;
+            lines.Add(current);
         }
+
+        return lines.Select(line => Ellipsis.Fit(line, MapTypography.MaxLabelWordWidth, fontSize, bold: true));
     }
 }

@@ -7,7 +7,7 @@ using NetSolve.Presentation.Formats;
 using NetSolve.Rendering.Map;
 using NetSolve.Simulation;
 using NetSolve.Solving;
-using static System.Net.WebUtility;
+using static NetSolve.Rendering.Report.ReportText;
 
 namespace NetSolve.Rendering.Report;
 
@@ -63,10 +63,10 @@ public static class HtmlReport
         html.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
             .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
-            .Append("<title>Capacity report: ").Append(HtmlEncode(network.Name)).Append("</title>\n")
+            .Append("<title>Capacity report: ").Append(Short(network.Name, MaxHeadingLength)).Append("</title>\n")
             .Append("<style>\n").Append(ReportStyles.Css).Append("</style>\n</head>\n<body>\n");
 
-        html.Append("<header>\n<h1>").Append(HtmlEncode(network.Name)).Append("</h1>\n")
+        html.Append("<header>\n<h1").Append(Heading(network.Name, MaxHeadingLength)).Append("</h1>\n")
             .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Rates per ").Append(unit)
             .Append("; each time is written with its unit (min, h or d).</p>\n</header>\n");
         html.Append("<p class=\"finding\" id=\"finding\"><strong>Finding:</strong> ").Append(HtmlEncode(Finding.Summarise(baseline))).Append("</p>\n");

@@ -4,7 +4,7 @@ using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Solution;
 using NetSolve.Rendering.Map;
 using NetSolve.Solving;
-using static System.Net.WebUtility;
+using static NetSolve.Rendering.Report.ReportText;
 
 namespace NetSolve.Rendering.Report;
 
@@ -37,7 +37,7 @@ internal static class ScenarioTable
         html.Append("<table id=\"scenario-units\">\n<thead><tr><th>Unit</th>");
         foreach (var scenario in all)
         {
-            html.Append("<th>").Append(HtmlEncode(scenario.Name)).Append("</th>");
+            html.Append("<th").Append(Heading(scenario.Name, MaxColumnHeadingLength)).Append("</th>");
         }
 
         html.Append("</tr></thead>\n<tbody>\n");

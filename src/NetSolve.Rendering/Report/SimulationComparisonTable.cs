@@ -4,7 +4,7 @@ using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Solution;
 using NetSolve.Simulation;
 using NetSolve.Solving;
-using static System.Net.WebUtility;
+using static NetSolve.Rendering.Report.ReportText;
 
 namespace NetSolve.Rendering.Report;
 

@@ -42,7 +42,7 @@ public static class TimeOfDayChart
             double[] hours = measured.Select(hour => hour + HourMiddle).ToArray();
             double[] queues = measured.Select(hour => shown[i].MeanQueueByHour[hour]!.Value.Mean).ToArray();
             var series = plot.Add.Scatter(hours, queues);
-            series.LegendText = shown[i].Unit.Label;
+            series.LegendText = ReportText.Legend(shown[i].Unit.Label);
             ChartSeriesStyles.Apply(series, i);
         }
 

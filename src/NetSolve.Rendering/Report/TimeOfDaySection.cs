@@ -3,7 +3,7 @@ using System.Text;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
-using static System.Net.WebUtility;
+using static NetSolve.Rendering.Report.ReportText;
 
 namespace NetSolve.Rendering.Report;
 
@@ -38,7 +38,7 @@ internal static class TimeOfDaySection
         html.Append("<table id=\"time-of-day-table\">\n<thead><tr><th>Hour</th>");
         foreach (var unit in shown)
         {
-            html.Append("<th data-unit=\"").Append(HtmlEncode(unit.Unit.Id)).Append("\">").Append(HtmlEncode(unit.Unit.Label)).Append("</th>");
+            html.Append("<th data-unit=\"").Append(HtmlEncode(unit.Unit.Id)).Append('"').Append(Heading(unit.Unit.Label, MaxColumnHeadingLength)).Append("</th>");
         }
 
         html.Append("</tr></thead>\n<tbody>\n");

@@ -45,7 +45,7 @@ public static partial class WaitChart
         {
             double[] waits = shown[i].WaitHours.Select(hours => TimeConstants.FromHours(hours, timeUnit)).ToArray();
             var series = plot.Add.Scatter(factors, waits);
-            series.LegendText = shown[i].Label;
+            series.LegendText = ReportText.Legend(shown[i].Label);
             ChartSeriesStyles.Apply(series, i);
         }
 
