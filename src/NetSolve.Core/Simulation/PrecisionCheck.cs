@@ -43,7 +43,9 @@ internal static class PrecisionCheck
     /// </summary>
     public static int NextCount(int present, double worstRelative, double target, int most)
     {
-        double needed = double.IsFinite(worstRelative) ? present * Math.Pow(worstRelative / target, 2.0) : 2.0 * present;
+        // A plain square (no platform pow), so the stopping count is the same on every machine.
+        double ratio = worstRelative / target;
+        double needed = double.IsFinite(worstRelative) ? present * ratio * ratio : 2.0 * present;
         int next = (int)Math.Ceiling(Math.Min(needed, 2.0 * present));
         return Math.Clamp(next, present + 1, most);
     }
