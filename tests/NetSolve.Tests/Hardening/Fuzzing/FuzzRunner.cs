@@ -40,7 +40,9 @@ internal static class FuzzRunner
                     var result = run.Result;
                     exitCode = result.ExitCode;
                     findings.AddRange(CliInvariant.Check(result, arguments, given));
-                    string? output = input.OutputFile is null ? null : Path.Combine(folder.FullName, input.OutputFile);
+                    // Help wins over everything else on the line and writes no file.
+                    bool help = arguments.Any(argument => argument is "--help" or "-h" or "-?");
+                    string? output = input.OutputFile is null || help ? null : Path.Combine(folder.FullName, input.OutputFile);
                     var strays = Directory.EnumerateFiles(folder.FullName, "*", SearchOption.AllDirectories)
                         .Where(path => !written.Contains(path) && !string.Equals(path, output, StringComparison.Ordinal));
                     findings.AddRange(CliInvariant.CheckOutput(exitCode, output, input.OldOutput, strays, string.Join('\n', arguments) + "\n" + given,
