@@ -30,7 +30,8 @@ internal static class CorpusCase
     /// <summary>Asserts the contract on <paramref name="result"/>: no finding, and on refusal the expected number of lines.</summary>
     public static void AssertKeepsContract(CliResult result, string[] arguments, int? problems = 1)
     {
-        string given = string.Join('\n', arguments.Where(System.IO.File.Exists).Select(System.IO.File.ReadAllText));
+        // Only small regular files are read back: a device such as /dev/zero reports no length and never ends.
+        string given = string.Join('\n', arguments.Where(path => System.IO.File.Exists(path) && new FileInfo(path).Length is > 0 and < 1_000_000).Select(System.IO.File.ReadAllText));
         var findings = CliInvariant.Check(result, arguments, given);
         Assert.True(findings.Count == 0, string.Join('\n', findings.Select(finding => finding.Kind + ": " + finding.Detail)) + "\nstderr: " + CliInvariant.Shorten(result.Error));
         if (result.ExitCode != 0 && problems is int count)
