@@ -1,0 +1,52 @@
+namespace NetSolve.Tests.Hardening.Fuzzing;
+
+/// <summary>
+/// A valid, quick command line for each command, as a starting point the fuzzer changes: simulations are kept to two
+/// short replications so that a long run means the fuzzed value asked for it.
+/// </summary>
+internal static class CommandShapes
+{
+    /// <summary>The commands that read one network file.</summary>
+    public static readonly string[] NetworkCommands = ["solve", "solve", "solve", "check", "growth", "staff", "pathway", "simulate", "map", "report"];
+
+    /// <summary>The options of a quick run of <paramref name="command"/>  on a network with these unit ids, in order.</summary>
+    public static List<(string Option, string? Value)> Options(string command, IReadOnlyList<string> units, Random random) => command switch
+    {
+        "solve" or "compare" => [("--format", Pick(["table", "json", "csv"], random))],
+        "growth" => [("--steps", "4"), ("--format", Pick(["table", "json", "csv"], random))],
+        "staff" => [("--max-util", "0.85"), ("--format", Pick(["table", "json", "csv"], random))],
+        "pathway" => [("--from", units[0]), ("--format", Pick(["table", "json", "csv"], random))],
+        "simulate" => [("--replications", "2"), ("--warmup", "1d"), ("--duration", "2d"), ("--threads", "1"), ("--format", Pick(["table", "json", "csv"], random))],
+        "map" => [("--output", FuzzInput.Folder + "/out" + Pick([".svg", ".dot", ".svg", ".png"], random))],
+        "report" => [("--output", FuzzInput.Folder + "/out.html")],
+        "fit" => random.Next(2) == 0 ? [("--output", FuzzInput.Folder + "/fitted.yaml")] : [],
+        _ => [],
+    };
+
+    /// <summary>The command line: the command, its files, then each option and its value.</summary>
+    public static List<string> Line(string command, IEnumerable<string> files, IEnumerable<(string Option, string? Value)> options)
+    {
+        var line = new List<string> { command };
+        line.AddRange(files);
+        foreach (var (option, value) in options)
+        {
+            line.Add(option);
+            if (value is not null)
+            {
+                line.Add(value);
+            }
+        }
+
+        return line;
+    }
+
+    /// <summary>The file a command line asks to be written, relative to the run's folder, if any.</summary>
+    public static string? OutputFile(IReadOnlyList<string> line)
+    {
+        int at = line.ToList().FindLastIndex(argument => argument is "--output" or "-o");
+        string prefix = FuzzInput.Folder + "/";
+        return at >= 0 && at + 1 < line.Count && line[at + 1].StartsWith(prefix, StringComparison.Ordinal) ? line[at + 1][prefix.Length..] : null;
+    }
+
+    private static string Pick(string[] values, Random random) => values[random.Next(values.Length)];
+}
