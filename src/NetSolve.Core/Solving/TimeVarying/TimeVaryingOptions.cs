@@ -26,4 +26,10 @@ public sealed record TimeVaryingOptions
 
     /// <summary>Most sweeps round loops of routes; each removes the share of flow that returns round a loop.</summary>
     public int MaxLoopSweeps { get; init; } = 10_000;
+
+    /// <summary>
+    /// Use the exact chain for every unit of at most <see cref="ExactChainOptions.MaxServers"/> servers, not only where
+    /// MOL has no answer. Slower; the reference when checking MOL.
+    /// </summary>
+    public bool ExactForSmallUnits { get; init; }
 }
