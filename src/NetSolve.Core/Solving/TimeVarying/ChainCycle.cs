@@ -12,6 +12,9 @@ internal sealed class ChainCycle
     // Largest Λh in one sub-step: keeps the Poisson sum to about 20 terms.
     private const double MaxUniformizedStep = 1.0;
 
+    private const double SimpsonEnd = 1.0 / 6.0;
+    private const double SimpsonMiddle = 4.0 / 6.0;
+
     private readonly double[] _arrivals;
     private readonly ServerRoster _roster;
     private double[] _next = [];
@@ -84,26 +87,37 @@ internal sealed class ChainCycle
             _power = new double[p.Length];
         }
 
-        double stepHours = 1.0 / StepsPerHour;
+        double halfStepHours = 0.5 / StepsPerHour;
         double lastState = p[^1];
         for (int step = 0; step < _arrivals.Length; step++)
         {
+            // Simpson's rule over the step (start, middle, end) keeps the hourly means accurate to the fourth order.
             double arrivals = _arrivals[step];
             int servers = ServersAt(step);
-            stats?.Record(step, this, p, 0.5);
-            double uniform = arrivals + (servers * ServicePerHour);
-            int subSteps = Math.Max(1, (int)Math.Ceiling(uniform * stepHours / MaxUniformizedStep));
-            double subHours = stepHours / subSteps;
-            for (int s = 0; s < subSteps && uniform > 0.0; s++)
-            {
-                Advance(p, arrivals, servers, uniform, uniform * subHours);
-            }
-
-            stats?.Record(step, this, p, 0.5);
+            stats?.Record(step, this, p, SimpsonEnd);
+            AdvanceFor(p, arrivals, servers, halfStepHours);
+            stats?.Record(step, this, p, SimpsonMiddle);
+            AdvanceFor(p, arrivals, servers, halfStepHours);
+            stats?.Record(step, this, p, SimpsonEnd);
             lastState = Math.Max(lastState, p[^1]);
         }
 
         return lastState;
+    }
+
+    private void AdvanceFor(double[] p, double arrivals, int servers, double hours)
+    {
+        double uniform = arrivals + (servers * ServicePerHour);
+        if (uniform <= 0.0)
+        {
+            return;
+        }
+
+        int subSteps = Math.Max(1, (int)Math.Ceiling(uniform * hours / MaxUniformizedStep));
+        for (int s = 0; s < subSteps; s++)
+        {
+            Advance(p, arrivals, servers, uniform, uniform * hours / subSteps);
+        }
     }
 
     private void Advance(double[] p, double arrivals, int servers, double uniform, double expected)

@@ -1,5 +1,3 @@
-using MathNet.Numerics;
-
 namespace NetSolve.Solving;
 
 /// <summary>
@@ -9,7 +7,7 @@ namespace NetSolve.Solving;
 /// <remarks>
 /// Each step is integrated exactly for that input (an exponential integrator, stable for any step length):
 /// x(n+1) = e^(−z)·x(n) + h·φ₁(z)·u_start + h·g(z)·(u_end − u_start), z = r·h, φ₁(z) = (1 − e^(−z))/z and
-/// g(z) = (z − 1 + e^(−z))/z², summed by its series for small z. The solution is linear in x(0), so one pass from
+/// g(z) = (z − 1 + e^(−z))/z², both summed by their series for small z. The solution is linear in x(0), so one pass from
 /// x(0) = 0 gives x(T) = R and the periodic start is x(0) = R / (1 − e^(−rT)) exactly; a second pass fills the cycle.
 /// Thread-safe (pure functions on caller-owned arrays).
 /// </remarks>
@@ -30,12 +28,13 @@ internal static class PeriodicStage
         int steps = inputStart.Length;
         double z = ratePerHour * stepHours;
         double decay = Math.Exp(-z);
-        double constantGain = stepHours * (z < SeriesLimit ? -SpecialFunctions.Expm1(-z) / z : (1.0 - decay) / z);
+        double constantGain = stepHours * RelaxedShare(z);
         double slopeGain = stepHours * SlopeFactor(z, decay);
 
         nodes[0] = 0.0;
         Run(inputStart, inputEnd, decay, constantGain, slopeGain, nodes);
-        double cycleDecay = -SpecialFunctions.Expm1(-ratePerHour * stepHours * steps);
+        double cycleZ = ratePerHour * stepHours * steps;
+        double cycleDecay = cycleZ * RelaxedShare(cycleZ);
         nodes[0] = nodes[steps] / cycleDecay;
         Run(inputStart, inputEnd, decay, constantGain, slopeGain, nodes);
         nodes[steps] = nodes[0];
@@ -49,6 +48,25 @@ internal static class PeriodicStage
             x = (decay * x) + (constantGain * inputStart[n]) + (slopeGain * (inputEnd[n] - inputStart[n]));
             nodes[n + 1] = x;
         }
+    }
+
+    /// <summary>φ₁(z) = (1 − e^(−z))/z, by its series Σ_k (−z)^k/(k + 1)! for small z, where 1 − e^(−z) would lose digits.</summary>
+    private static double RelaxedShare(double z)
+    {
+        if (z >= SeriesLimit)
+        {
+            return (1.0 - Math.Exp(-z)) / z;
+        }
+
+        double sum = 0.0;
+        double term = 1.0;
+        for (int k = 0; k < SeriesTerms; k++)
+        {
+            sum += term;
+            term *= -z / (k + 2.0);
+        }
+
+        return sum;
     }
 
     private static double SlopeFactor(double z, double decay)
