@@ -6,8 +6,8 @@ public class PeriodicBirthDeathChainTests
 {
     private const int StepsPerHour = 60;
 
-    // Small steps (Λh ≤ 0.05) so Simpson's rule on the hourly means errs by under 1e-9.
-    private static readonly ExactChainOptions Tight = new() { Tolerance = 1e-13, MaxJumpsPerStep = 0.05 };
+    // Small steps (Λh ≤ 0.02) so Simpson's rule on the hourly means errs by under 1e-11.
+    private static readonly ExactChainOptions Tight = new() { Tolerance = 1e-13, MaxJumpsPerStep = 0.02 };
 
     // Exact by hand: one server and room for one patient is a two-state chain, P1' = λ(t)(1 − P1) − μ·P1. With λ
     // constant on each half day, P1 relaxes towards q = λ/(λ + μ) at rate r = λ + μ: P(t) = q + (P(s) − q)e^(−r(t − s)).
@@ -16,12 +16,13 @@ public class PeriodicBirthDeathChainTests
     [Fact]
     public void One_server_with_room_for_one_matches_the_hand_solved_two_state_chain()
     {
+        const int fineSteps = 480;
         const double dayArrivals = 3.0;
         const double nightArrivals = 0.5;
         const double servicePerHour = 2.0;
-        var arrivals = Enumerable.Range(0, 24 * StepsPerHour).Select(k => k < 12 * StepsPerHour ? dayArrivals : nightArrivals).ToArray();
+        var arrivals = Enumerable.Range(0, 24 * fineSteps).Select(k => k < 12 * fineSteps ? dayArrivals : nightArrivals).ToArray();
 
-        var waits = PeriodicBirthDeathChain.Solve(arrivals, StepsPerHour, ServerRoster.Constant(1), 1.0 / servicePerHour, Tight, capacity: 1);
+        var waits = PeriodicBirthDeathChain.Solve(arrivals, fineSteps, ServerRoster.Constant(1), 1.0 / servicePerHour, Tight, capacity: 1);
 
         double q1 = dayArrivals / (dayArrivals + servicePerHour);
         double r1 = dayArrivals + servicePerHour;
