@@ -1,4 +1,5 @@
 using System.Globalization;
+using NetSolve.Diagnostics;
 using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Cli;
@@ -10,7 +11,9 @@ namespace NetSolve.Cli;
 /// </summary>
 /// <remarks>
 /// Usage problems name their option first (<c>--steps: '0' is not a whole number from 1 to 10000</c>) and get the
-/// <see cref="Program"/> prefix when printed; every number is written in invariant culture.
+/// <see cref="Program"/> prefix when printed; every number is written in invariant culture. Every value quoted from
+/// the command line or a file (option values, ids, paths, the readers' own problems) passes through <see cref="Q"/>,
+/// so NUL, ESC, a line feed or a right-to-left override is shown as <c>\uXXXX</c>, never acted on by the terminal.
 /// </remarks>
 internal static class Messages
 {
@@ -33,17 +36,17 @@ internal static class Messages
     public const string NetworkOrScenarioFile = "a network or scenario file";
 
     /// <summary>A usage problem as printed: the program's prefix and the problem.</summary>
-    public static string Usage(string problem) => Program + problem;
+    public static string Usage(string problem) => Program + Q(problem);
 
     /// <summary>A defect in NetSolve: one line, the stack only with <c>--verbose</c>.</summary>
     public static string InternalError(Exception exception, bool verbose) =>
-        $"{Program}internal error: {OneLine(exception.Message)}" + (verbose ? "\n" + exception : " (run again with --verbose for details)");
+        $"{Program}internal error: {Q(OneLine(exception.Message))}" + (verbose ? "\n" + TerminalText.Lines(exception.ToString()) : " (run again with --verbose for details)");
 
     /// <summary>The first line of <paramref name="text"/>, so a defect's message stays one line without --verbose.</summary>
     private static string OneLine(string text) => text.Split('\n', 2)[0].TrimEnd('\r');
 
     /// <summary>A problem the solver found in a network that passed validation (for example traffic that cannot be solved).</summary>
-    public static string SolverProblem(string message) => Program + message;
+    public static string SolverProblem(string message) => Program + Q(message);
 
     // Option values: one message per kind of value, each naming the option.
 
@@ -53,50 +56,50 @@ internal static class Messages
 
     /// <summary>A whole number out of its range (or not a whole number at all).</summary>
     public static string NotWholeNumber(string option, string text, decimal min, decimal max) =>
-        Invariant($"{option}: '{text}' is not a whole number from {min} to {max}");
+        Invariant($"{option}: '{Q(text)}' is not a whole number from {min} to {max}");
 
     /// <summary>A number out of its range (or not a number at all); <paramref name="range"/> says which, as in "above 0 and at most 1".</summary>
     public static string NotNumber(string option, string text, string what, string range, string example) =>
-        $"{option}: '{text}' is not {what} {range} ({example})";
+        $"{option}: '{Q(text)}' is not {what} {range} ({example})";
 
     /// <summary>One of a fixed set of words.</summary>
     public static string NotOneOf(string option, string text, IEnumerable<string> choices) =>
-        $"{option}: '{text}' is not one of {string.Join(", ", choices)}";
+        $"{option}: '{Q(text)}' is not one of {string.Join(", ", choices)}";
 
     /// <summary>A duration in a form not understood.</summary>
     public static string NotDuration(string option, string text, bool allowZero, string examples) =>
-        $"{option}: '{text}' is not a {(allowZero ? string.Empty : "positive ")}duration (write e.g. {examples}; a bare number is in the file's time unit)";
+        $"{option}: '{Q(text)}' is not a {(allowZero ? string.Empty : "positive ")}duration (write e.g. {examples}; a bare number is in the file's time unit)";
 
     /// <summary>A duration longer than the command takes.</summary>
     public static string DurationTooLong(string option, string text, double maxDays, string why) =>
-        Invariant($"{option}: '{text}' is longer than {maxDays} days; {why}");
+        Invariant($"{option}: '{Q(text)}' is longer than {maxDays} days; {why}");
 
     /// <summary>A duration shorter than the command needs.</summary>
     public static string DurationTooShort(string option, string text, string shortest, string why) =>
-        $"{option}: '{text}' is shorter than {shortest}; {why}";
+        $"{option}: '{Q(text)}' is shorter than {shortest}; {why}";
 
     /// <summary>A probability in a form not understood, or outside 0 to 1 (the message of the shared value parser).</summary>
-    public static string NotProbability(string option, string problem) => $"{option}: {problem}";
+    public static string NotProbability(string option, string problem) => $"{option}: {Q(problem)}";
 
     /// <summary>A value the files' own parser refuses as outside its range; its problem already says the range.</summary>
-    public static string OutOfRange(string option, string problem) => $"{option}: {problem}";
+    public static string OutOfRange(string option, string problem) => $"{option}: {Q(problem)}";
 
     /// <summary>An output file name whose extension the command does not write.</summary>
     public static string WrongExtension(string option, string? text, IEnumerable<string> extensions) =>
-        $"{option} '{text}': the file name must end in {string.Join(", ", extensions)}";
+        $"{option} '{Q(text ?? string.Empty)}': the file name must end in {string.Join(", ", extensions)}";
 
     /// <summary>An option that only means something with another.</summary>
     public static string OnlyWith(string option, string needed) => $"{option} applies only with {needed}";
 
     /// <summary>A unit named in an option that the network does not have.</summary>
     public static string UnknownUnit(string option, string text, string id, string hint) =>
-        $"{Program}{option} {text}: unknown unit '{id}'{hint}";
+        $"{Program}{option} {Q(text)}: unknown unit '{Q(id)}'{Q(hint)}";
 
     // Commands.
 
     /// <summary><c>check</c>: the file is valid.</summary>
     public static string Valid(string path, int units, int arrivals, int routes) =>
-        Invariant($"{path}: valid: {units} units, {arrivals} arrival streams, {routes} routes");
+        Invariant($"{Q(path)}: valid: {units} units, {arrivals} arrival streams, {routes} routes");
 
     /// <summary>The name of a network changed by <c>--set</c>: results say they are what-if numbers.</summary>
     public static string WhatIfName(string network, IEnumerable<string> changes) => $"{network} (what-if: {string.Join(", ", changes)})";
@@ -119,7 +122,7 @@ internal static class Messages
 
     /// <summary><c>growth --stream</c> at a unit without arrivals from outside.</summary>
     public static string StreamWithoutArrivals(string unit, IEnumerable<string> streams) =>
-        $"{Program}--stream {unit}: unit '{unit}' has no arrivals from outside to grow (streams: {string.Join(", ", streams)})";
+        $"{Program}--stream {Q(unit)}: unit '{Q(unit)}' has no arrivals from outside to grow (streams: {Q(string.Join(", ", streams))})";
 
     /// <summary><c>pathway</c> with neither start nor path.</summary>
     public const string PathwayNeedsStart = "pathway: give --from UNIT, --path A,B,C, or both";
@@ -128,7 +131,7 @@ internal static class Messages
     public const string PathwayToNeedsFrom = "pathway: --to needs --from (the chance of visiting is from a start unit)";
 
     /// <summary><c>pathway</c>: a question the analysis cannot answer for this network.</summary>
-    public static string PathwayProblem(string problem) => $"{Program}pathway: {problem}";
+    public static string PathwayProblem(string problem) => $"{Program}pathway: {Q(problem)}";
 
     /// <summary><c>staff</c> with no question.</summary>
     public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, --wait-over with --at-most, or --max-turned-away) or --budget N";
@@ -141,17 +144,17 @@ internal static class Messages
 
     /// <summary><c>staff --cost</c> not in the form UNIT=COST.</summary>
     public static string NotCost(string text, double max) =>
-        Invariant($"--cost: '{text}' is not UNIT=COST with a cost above 0 and at most {max:0} (write e.g. --cost ward=2.5)");
+        Invariant($"--cost: '{Q(text)}' is not UNIT=COST with a cost above 0 and at most {max:0} (write e.g. --cost ward=2.5)");
 
     /// <summary><c>staff --budget</c>: the servers cannot be placed.</summary>
-    public static string BudgetImpossible(string why) => $"{Program}staff: {why}";
+    public static string BudgetImpossible(string why) => $"{Program}staff: {Q(why)}";
 
     /// <summary><c>staff</c>: one unit cannot meet the targets.</summary>
-    public static string TargetImpossible(string unit, string why) => $"{Program}staff: unit '{unit}' cannot meet the targets: {why}";
+    public static string TargetImpossible(string unit, string why) => $"{Program}staff: unit '{Q(unit)}' cannot meet the targets: {Q(why)}";
 
     /// <summary><c>simulate</c>: a unit's relaxation time is long against the warm-up or the run, so its simulated means may be biased.</summary>
     public static string SlowUnit(string unit, double relaxationHours, double warmupHours, double durationHours) =>
-        $"{Program}warning: unit '{unit}' relaxes in about {RelaxationText(relaxationHours)}, long against a warm-up of {PeopleFormat.Time(warmupHours)} "
+        $"{Program}warning: unit '{Q(unit)}' relaxes in about {RelaxationText(relaxationHours)}, long against a warm-up of {PeopleFormat.Time(warmupHours)} "
         + $"and a run of {PeopleFormat.Time(durationHours)} (aim for 5 and 10 times it): its simulated means may be biased; "
         + "try a longer --warmup and --duration, or more replications";
 
@@ -162,21 +165,21 @@ internal static class Messages
         Invariant($"{Program}stopped: {finished} of {replications} replications finished; {consequence}");
 
     /// <summary><c>map</c> written.</summary>
-    public static string MapWritten(int units, string target) => Invariant($"map of {units} units written to {target}");
+    public static string MapWritten(int units, string target) => Invariant($"map of {units} units written to {Q(target)}");
 
     /// <summary><c>report</c> written.</summary>
-    public static string ReportWritten(string target) => $"report written to {target}";
+    public static string ReportWritten(string target) => $"report written to {Q(target)}";
 
     /// <summary><c>fit -o</c> written.</summary>
-    public static string NetworkWritten(string target) => $"network file written to {target}";
+    public static string NetworkWritten(string target) => $"network file written to {Q(target)}";
 
     /// <summary><c>fit</c>: the movement log cannot be fitted.</summary>
-    public static string FitProblem(string path, string problem) => $"{path}: {problem}";
+    public static string FitProblem(string path, string problem) => $"{Q(path)}: {Q(problem)}";
 
     /// <summary><c>fit</c>: the comment heading the network file written, one line each.</summary>
     public static string[] FittedHeader(string log, int patients, int stays, double window, string timeUnitName) =>
     [
-        Invariant($"Estimated by netsolve fit from {log}: {patients} patients, {stays} stays,"),
+        Invariant($"Estimated by netsolve fit from {Q(log)}: {patients} patients, {stays} stays,"),
         Invariant($"arrivals over {window:0.##} {timeUnitName}s. Servers are the most patients seen in service at once:"),
         "check them against the roster before planning with this file.",
     ];
@@ -184,10 +187,20 @@ internal static class Messages
     // Files written.
 
     /// <summary>The folder of an output file does not exist.</summary>
-    public static string NoFolder(string path, string folder) => $"{path}: cannot write: the folder {folder} does not exist";
+    public static string NoFolder(string path, string folder) => $"{Q(path)}: cannot write: the folder {Q(folder)} does not exist";
 
     /// <summary>An output file cannot be written.</summary>
-    public static string CannotWrite(string path, string reason) => $"{path}: cannot write: {reason}";
+    public static string CannotWrite(string path, string reason) => $"{Q(path)}: cannot write: {Q(reason)}";
+
+    /// <summary>An output path that cannot name a file: a NUL or another character the system refuses in a path.</summary>
+    public static string NotPath(string option, string text) =>
+        $"{option}: '{Q(text)}' is not a usable file name (it holds a character such as NUL that no file name may hold)";
+
+    /// <summary>A name given on the command line with a character that names may not hold; <paramref name="why"/> says which.</summary>
+    public static string NotName(string option, string text, string why) => $"{option}: '{Q(text)}' cannot be a name: {why}";
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+
+    /// <summary>A value quoted from the input, escaped for the terminal (<see cref="TerminalText.Quote"/>).</summary>
+    private static string Q(string text) => TerminalText.Quote(text);
 }

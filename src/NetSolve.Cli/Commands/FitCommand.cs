@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
 using System.Text;
 using NetSolve.Cli.Settings;
 using NetSolve.Fitting;
@@ -15,9 +16,10 @@ internal static class FitCommand
     public static Command Create(CliContext context)
     {
         var log = new Argument<string>("LOG") { Description = "Movement log (CSV: patient,unit,arrived,started,left; see docs/movement-log.md)." };
-        var output = new Option<string?>("--output", "-o") { Description = "Write the network file here (default: print it)." };
+        var output = OutputFileOption.Optional("Write the network file here (default: print it).");
         var timeUnit = SettingOptions.Choice("--time-unit", "Time unit of the network file written: minute, hour or day.", "hour", ["minute", "hour", "day"]);
         var name = new Option<string?>("--name") { Description = "Network name (default: the log's file name)." };
+        name.Validators.Add(result => RefuseUnsafeName(result, result.GetValueOrDefault<string?>()));
         var command = new Command("fit", "Estimate a network from a log of patient movements: arrival rates, routing fractions, service times and servers.")
         {
             log, output, timeUnit, name,
@@ -73,6 +75,26 @@ internal static class FitCommand
         }
 
         return [.. visits];
+    }
+
+    /// <summary>
+    /// A name with a character network files refuse (a control, a line break, a direction override) is a usage error:
+    /// the name is written into the network file and shown on the terminal, and the file would not read back.
+    /// </summary>
+    private static void RefuseUnsafeName(OptionResult result, string? text)
+    {
+        if (text is null)
+        {
+            return;
+        }
+
+        int index = text.AsSpan().IndexOfAny('\t', '\n', '\r');
+        index = index >= 0 ? index : InputCharacters.FindRefused(text);
+        if (index >= 0)
+        {
+            string why = text[index] is '\t' or '\n' or '\r' ? "a tab or line break is not allowed in a name" : InputCharacters.Describe(text, index);
+            result.AddError(Messages.NotName("--name", text, why));
+        }
     }
 
     private static void WriteSummary(FittedNetwork fitted, TextWriter output) => FittedUnitColumns.WriteTable(fitted, output);

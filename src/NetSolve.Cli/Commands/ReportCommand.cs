@@ -59,9 +59,11 @@ internal sealed class ReportCommand() : NetworkCommand(
     private readonly Option<string> _duration = SimulationCliOptions.RunLength(
         "--duration", "With --simulate: simulated time measured in each replication, at least a day.", DefaultDuration, ReportDuration);
 
+    private readonly Option<bool> _allowLong = SimulationCliOptions.AllowLong();
+
     protected override string? FormatDescription => null;
 
-    protected override IEnumerable<Symbol> Symbols => [_scenarios, _output, _simulate, _seed, _replications, _warmup, _duration];
+    protected override IEnumerable<Symbol> Symbols => [_scenarios, _output, _simulate, _seed, _replications, _warmup, _duration, _allowLong];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -70,7 +72,7 @@ internal sealed class ReportCommand() : NetworkCommand(
             yield break;
         }
 
-        foreach (Option option in new Option[] { _seed, _replications, _warmup, _duration }.Where(settings.IsGiven))
+        foreach (Option option in new Option[] { _seed, _replications, _warmup, _duration, _allowLong }.Where(settings.IsGiven))
         {
             yield return Messages.OnlyWith(option.Name, "--simulate");
         }
@@ -89,6 +91,7 @@ internal sealed class ReportCommand() : NetworkCommand(
         {
             var options = SimulationCliOptions.Read(
                 request.Parse, baseline.Network.TimeUnit, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
+            SimulationCliOptions.CheckWork(baseline, options, request.GetValue(_allowLong));
             simulation = SimulationRun.Run(baseline.Network, options, request.Context);
             if (simulation.ReplicationsFinished == 0)
             {

@@ -1,8 +1,9 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
 
 namespace NetSolve.Cli.Settings;
 
-/// <summary>The required <c>--output/-o</c> of commands that write a file; its extension names the format.</summary>
+/// <summary>The <c>--output/-o</c> of commands that write a file: required with its extension naming the format, or optional.</summary>
 internal static class OutputFileOption
 {
     /// <summary>A required <c>--output/-o</c> whose extension must be one of <paramref name="extensions"/> (a usage error otherwise).</summary>
@@ -16,6 +17,11 @@ internal static class OutputFileOption
         option.Validators.Add(result =>
         {
             string? value = result.GetValueOrDefault<string>();
+            if (!IsUsablePath(result, value))
+            {
+                return;
+            }
+
             string extension = Path.GetExtension(value ?? string.Empty).ToLowerInvariant();
             if (!extensions.Contains(extension, StringComparer.Ordinal))
             {
@@ -23,5 +29,28 @@ internal static class OutputFileOption
             }
         });
         return option;
+    }
+
+    /// <summary>An optional <c>--output/-o</c> of any extension (<c>fit</c> writes a network file under any name).</summary>
+    public static Option<string?> Optional(string description)
+    {
+        var option = new Option<string?>("--output", "-o") { Description = description };
+        option.Validators.Add(result => IsUsablePath(result, result.GetValueOrDefault<string?>()));
+        return option;
+    }
+
+    /// <summary>
+    /// False, with a usage error naming the option, when <paramref name="value"/> holds a character no path may hold
+    /// (NUL on every system): the file system would otherwise refuse it with an exception after the work was done.
+    /// </summary>
+    private static bool IsUsablePath(OptionResult result, string? value)
+    {
+        if (value is null || value.IndexOfAny(Path.GetInvalidPathChars()) < 0)
+        {
+            return true;
+        }
+
+        result.AddError(Messages.NotPath("--output", value));
+        return false;
     }
 }

@@ -21,12 +21,13 @@ public sealed record Diagnostic(DiagnosticSeverity Severity, string Code, Source
 
     /// <summary>
     /// The contract's one-line form: <c>FILE:LINE:COL: unit 'ID': message</c>; warnings put <c>warning: </c>
-    /// after the location.
+    /// after the location. Values quoted from the input (a label with ESC, a right-to-left override, a line feed)
+    /// are escaped (<see cref="TerminalText.Quote"/>), so the line stays one line and the terminal shows them as text.
     /// </summary>
     public override string ToString()
     {
         string severity = IsError ? string.Empty : "warning: ";
         string subject = Subject is null ? string.Empty : Subject + ": ";
-        return $"{Location}: {severity}{subject}{Message}";
+        return TerminalText.Quote($"{Location}: {severity}{subject}{Message}");
     }
 }

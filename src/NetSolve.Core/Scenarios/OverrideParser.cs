@@ -1,5 +1,6 @@
 using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Parsing;
 using NetSolve.Parsing.Values;
 
 namespace NetSolve.Scenarios;
@@ -39,6 +40,16 @@ public static class OverrideParser
         ArgumentNullException.ThrowIfNull(text);
         change = null;
         var location = LocationOf(text);
+
+        // A line break or control character would split or disguise the change where it is echoed (the network's
+        // name, an error line): refused as in files.
+        int refused = text.AsSpan().IndexOfAny('\t', '\n', '\r');
+        refused = refused >= 0 ? refused : InputCharacters.FindRefused(text);
+        if (refused >= 0)
+        {
+            return Fail(location, text[refused] is '\t' or '\n' or '\r' ? "a tab or line break is not allowed in a change" : InputCharacters.Describe(text, refused));
+        }
+
         int equals = text.IndexOf('=', StringComparison.Ordinal);
         if (equals <= 0)
         {

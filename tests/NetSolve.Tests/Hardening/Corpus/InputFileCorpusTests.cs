@@ -23,15 +23,15 @@ public sealed class InputFileCorpusTests
     [InlineData("map.svg")]
     [InlineData("map.dot")]
     public void Control_characters_in_labels_do_not_break_the_map(string output) =>
-        CorpusCase.RunWriting(path => ["map", CorpusCase.File("label-control-characters.yaml"), "--output", path], output, problems: null);
+        CorpusCase.RunWriting(path => ["map", CorpusCase.File("label-control-characters.yaml"), "--output", path], output);
 
     [Fact]
     public void Control_characters_in_labels_do_not_break_the_report() =>
-        CorpusCase.RunWriting(path => ["report", CorpusCase.File("label-control-characters.yaml"), "--output", path], "report.html", problems: null);
+        CorpusCase.RunWriting(path => ["report", CorpusCase.File("label-control-characters.yaml"), "--output", path], "report.html");
 
     [Fact]
     public void Control_characters_in_labels_do_not_reach_the_terminal() =>
-        CorpusCase.Run(["solve", CorpusCase.File("label-control-characters.yaml")], problems: null);
+        CorpusCase.Run(["solve", CorpusCase.File("label-control-characters.yaml")]);
 
     [Fact]
     public void A_ten_thousand_character_label_keeps_the_map_a_readable_width() =>

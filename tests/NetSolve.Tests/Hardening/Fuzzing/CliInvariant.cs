@@ -1,5 +1,6 @@
 using System.Text;
 using System.Text.RegularExpressions;
+using NetSolve.Diagnostics;
 using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Hardening.Fuzzing;
@@ -11,6 +12,12 @@ namespace NetSolve.Tests.Hardening.Fuzzing;
 /// </summary>
 internal static partial class CliInvariant
 {
+    /// <summary>Follows the usage errors (as the program writes it).</summary>
+    public const string UsageHint = "Run 'netsolve --help' for usage.";
+
+    /// <summary>Starts every line the program writes about itself.</summary>
+    private const string ProgramPrefix = "netsolve: ";
+
     /// <summary>Every way <paramref name="result"/> breaks the contract (empty when it holds).</summary>
     /// <param name="result">What the run gave.</param>
     /// <param name="arguments">The command line, to tell a label the planner wrote from a value the program made.</param>
@@ -24,6 +31,7 @@ internal static partial class CliInvariant
         }
 
         CheckErrorShape(result, findings);
+        CheckLocated(result, arguments, findings);
         string given = string.Join('\n', arguments) + "\n" + inputText;
         CheckFinite("stdout", result.Out, given, findings);
         CheckText("stdout", result.Out, given, findings);
@@ -105,6 +113,58 @@ internal static partial class CliInvariant
         }
     }
 
+    /// <summary>
+    /// On exit 1 or 2, every stderr line must say where its problem is: a file with line and column
+    /// (<c>FILE:LINE:COL: ...</c>), a whole file (<c>FILE: ...</c>, a path), an option (<c>netsolve: --steps: ...</c>, <c>--set EXPR: ...</c>),
+    /// a command's own question (<c>netsolve: staff: ...</c>) or a token of the command line it quotes; warnings and the
+    /// usage hint may stand beside them.
+    /// </summary>
+    private static void CheckLocated(CliResult result, IReadOnlyList<string> arguments, List<FuzzFinding> findings)
+    {
+        if (result.ExitCode is not (1 or 2) || result.Error.Length == 0)
+        {
+            return;
+        }
+
+        foreach (string line in result.Error.TrimEnd('\n').Split('\n'))
+        {
+            if (!IsLocated(line, arguments))
+            {
+                findings.Add(new FuzzFinding(FuzzFailureKind.ErrorShape, "stderr line says neither file, line and column nor option: " + Shorten(line)));
+                return;
+            }
+        }
+    }
+
+    /// <summary>True when <paramref name="line"/> is one located problem, a warning or the usage hint (see <see cref="CheckLocated"/>).</summary>
+    public static bool IsLocated(string line, IReadOnlyList<string> arguments)
+    {
+        if (string.Equals(line, UsageHint, StringComparison.Ordinal) || FileLineColumn().IsMatch(line) || OptionFirst().IsMatch(line))
+        {
+            return true;
+        }
+
+        string[] shown = [.. arguments.Where(argument => argument.Length > 0).Select(TerminalText.Quote)];
+        int colon = line.IndexOf(": ", StringComparison.Ordinal);
+        string head = colon < 0 ? line : line[..colon];
+        if (colon > 0 && (head.Contains('/', StringComparison.Ordinal) || shown.Contains(head, StringComparer.Ordinal)))
+        {
+            return true;
+        }
+
+        if (!line.StartsWith(ProgramPrefix, StringComparison.Ordinal))
+        {
+            return false;
+        }
+
+        string rest = line[ProgramPrefix.Length..];
+        string command = arguments.Count > 0 ? arguments[0] : string.Empty;
+        return rest.StartsWith('-')
+            || rest.StartsWith("warning: ", StringComparison.Ordinal)
+            || (command.Length > 0 && (rest.StartsWith(command + ": ", StringComparison.Ordinal) || rest.StartsWith(command + " ", StringComparison.Ordinal)))
+            || shown.Any(token => rest.Contains("'" + token + "'", StringComparison.Ordinal));
+    }
+
     private static void CheckFinite(string where, string text, string given, List<FuzzFinding> findings)
     {
         foreach (Match match in NotFinite().Matches(text))
@@ -164,6 +224,12 @@ internal static partial class CliInvariant
         var clean = new string([.. text.Select(c => char.IsControl(c) ? '?' : c)]).Trim();
         return clean.Length > 160 ? clean[..160] + "..." : clean;
     }
+
+    [GeneratedRegex(@"^.+?:[0-9]+:[0-9]+: ", RegexOptions.CultureInvariant)]
+    private static partial Regex FileLineColumn();
+
+    [GeneratedRegex(@"^--[a-z]", RegexOptions.CultureInvariant)]
+    private static partial Regex OptionFirst();
 
     [GeneratedRegex(@"(?<![A-Za-z])(NaN|-?Infinity|∞)(?![A-Za-z])", RegexOptions.CultureInvariant | RegexOptions.ExplicitCapture)]
     private static partial Regex NotFinite();

@@ -20,6 +20,8 @@ public sealed class CliInvariantTests
     [InlineData(134, "", "Unhandled exception. System.InvalidOperationException: x\n   at Main()\n", "Crash")]
     [InlineData(1, "", "bad\n   at NetSolve.Parsing.Read()\n", "ErrorShape")]
     [InlineData(1, "", "", "ErrorShape")]
+    [InlineData(1, "", "something went wrong\n", "ErrorShape")]
+    [InlineData(2, "", "netsolve: the value is bad\n", "ErrorShape")]
     [InlineData(0, "util Infinity%\n", "", "NotFinite")]
     [InlineData(0, "{\"wait\": NaN}\n", "", "NotFinite")]
     [InlineData(0, "label \u001B[2J\n", "", "UnsafeText")]
@@ -31,7 +33,19 @@ public sealed class CliInvariantTests
         Assert.Contains(Enum.Parse<FuzzFailureKind>(kind), findings.Select(finding => finding.Kind));
     }
 
-    [Fact]
+    [Theory]
+    [InlineData("network.yaml:3:5: unit 'lab': bad")]
+    [InlineData("/tmp/x/base.yaml: no such file")]
+    [InlineData("network.yaml: is a directory, not a network file")]
+    [InlineData("netsolve: --steps: '0' is not a whole number from 1 to 10000")]
+    [InlineData("netsolve: solve: give a target")]
+    [InlineData("netsolve: warning: unit 'lab' relaxes slowly")]
+    [InlineData("--set servers.x=1: unknown unit 'x'")]
+    [InlineData("Run 'netsolve --help' for usage.")]
+    public void A_line_that_says_its_file_option_or_command_is_located(string line) =>
+        Assert.True(CliInvariant.IsLocated(line, Solve));
+
+        [Fact]
     public void A_label_the_planner_wrote_as_Infinity_is_not_a_number_the_program_made()
     {
         var result = new CliResult(0, "Infinity ward  12 servers\n", string.Empty);

@@ -40,12 +40,14 @@ internal static class FuzzRunner
                     var result = run.Result;
                     exitCode = result.ExitCode;
                     findings.AddRange(CliInvariant.Check(result, arguments, given));
-                    // Help wins over everything else on the line and writes no file.
+                    // Help may win over everything else on the line and write no file; an old output put there
+                    // first is still the output (untouched or complete), never a stray.
                     bool help = arguments.Any(argument => argument is "--help" or "-h" or "-?");
-                    string? output = input.OutputFile is null || help ? null : Path.Combine(folder.FullName, input.OutputFile);
+                    string? output = input.OutputFile is null ? null : Path.Combine(folder.FullName, input.OutputFile);
                     var strays = Directory.EnumerateFiles(folder.FullName, "*", SearchOption.AllDirectories)
                         .Where(path => !written.Contains(path) && !string.Equals(path, output, StringComparison.Ordinal));
-                    findings.AddRange(CliInvariant.CheckOutput(exitCode, output, input.OldOutput, strays, string.Join('\n', arguments) + "\n" + given,
+                    string? expected = help && !File.Exists(output) ? null : output;
+                    findings.AddRange(CliInvariant.CheckOutput(exitCode, expected, input.OldOutput, strays, string.Join('\n', arguments) + "\n" + given,
                         isText: string.Equals(arguments[0], "fit", StringComparison.Ordinal)));
                 }
                 else

@@ -43,6 +43,9 @@ internal static class OptionTable
         ["--simulate"] = OptionKind.Flag,
         ["--name"] = OptionKind.Text,
         ["--verbose"] = OptionKind.Flag,
+        ["--precision"] = OptionKind.Fraction,
+        ["--max-replications"] = OptionKind.WholeNumber,
+        ["--allow-long"] = OptionKind.Flag,
     };
 
     /// <summary>Each command's options (help left out), as the command tree declares them.</summary>
