@@ -84,7 +84,7 @@ internal static class SimulationCliOptions
     /// <summary><c>--allow-long</c>: run even when the estimated work is above <see cref="SettingLimits.MaxSimulatedEvents"/>.</summary>
     public static Option<bool> AllowLong() => new("--allow-long")
     {
-        Description = "Run even when the estimated work is above 10 billion events (visits x run length x replications), which is refused by default as a likely slip.",
+        Description = "Run even when the estimated work is above 1 billion events (visits x run length x replications), which is refused by default as a likely slip.",
     };
 
     /// <summary>

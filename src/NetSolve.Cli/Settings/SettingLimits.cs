@@ -29,8 +29,11 @@ internal static class SettingLimits
 
     /// <summary>
     /// Most simulated events (about two per visit: arrival and departure, times the run length and the replications)
-    /// before <c>simulate</c> asks for <c>--allow-long</c>: at about 10 million events a second per core
-    /// (docs/performance.md) this is a quarter of an hour or more of work, where a planning run takes seconds.
+    /// before <c>simulate</c> and <c>report --simulate</c> ask for <c>--allow-long</c>: at about 10 million events a
+    /// second per core (docs/performance.md) this is a minute and a half of one core, where a planning run takes
+    /// seconds: the default run of the busiest bundled network (fenwick-winter-surge, 10 replications of the planned
+    /// length) is about 3e7 events, and a <c>--precision</c> run up to its default 200 replications about 6e8. Lowered from 1e10 (a quarter of an hour) after runs of 10,000
+    /// replications on a loaded machine took minutes with no word of warning.
     /// </summary>
-    public const double MaxSimulatedEvents = 1e10;
+    public const double MaxSimulatedEvents = 1e9;
 }

@@ -95,7 +95,7 @@ public sealed class OptionsTests
     [Fact]
     public void A_simulation_whose_estimated_work_is_above_the_bound_is_refused_unless_allowed()
     {
-        // 2 events x 54.6 visits/h x (3650 + 3650) d x 24 h x 10,000 replications is about 1.9e11 events, above 1e10.
+        // 2 events x 54.6 visits/h x (3650 + 3650) d x 24 h x 10,000 replications is about 1.9e11 events, above 1e9.
         string[] lines = Refused(2, "simulate", TestFiles.Network("kestrel-general"), "-r", "10000", "--duration", "3650d", "--warmup", "3650d");
 
         Assert.Single(lines);
