@@ -100,7 +100,7 @@ public sealed class OptionsTests
 
         Assert.Single(lines);
         Assert.StartsWith("netsolve: --duration: the run would simulate about ", lines[0], StringComparison.Ordinal);
-        Assert.Contains("more than the bound of 1e+10", lines[0], StringComparison.Ordinal);
+        Assert.Contains("more than the bound of 1e+9", lines[0], StringComparison.Ordinal);
         Assert.Contains("--allow-long", lines[0], StringComparison.Ordinal);
     }
 
