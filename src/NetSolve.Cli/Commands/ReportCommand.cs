@@ -93,6 +93,11 @@ internal sealed class ReportCommand() : NetworkCommand(
             {
                 request.Context.Report(Messages.StoppedPartway(simulation.ReplicationsFinished, options.Replications, "the report uses those"));
             }
+
+            if (simulation.IsWarmupShortByMser)
+            {
+                request.Warnings.Report(Messages.WarmupShortByMser(simulation.MserTruncationHours!.Value, options.WarmupHours));
+            }
         }
 
         string html = HtmlReport.Write(baseline, alternatives, simulation);
