@@ -158,6 +158,11 @@ internal static class Messages
         + $"and a run of {PeopleFormat.Time(durationHours)} (aim for 5 and 10 times it): its simulated means may be biased; "
         + "try a longer --warmup and --duration, or more replications";
 
+    /// <summary><c>simulate</c>: MSER-5 on the number in the network says the start-up transient outlasted the warm-up.</summary>
+    public static string WarmupShortByMser(double cutHours, double warmupHours) =>
+        $"{Program}warning: the number of patients in the network settled only after about {PeopleFormat.Time(cutHours)} (MSER-5), "
+        + $"beyond the warm-up of {PeopleFormat.Time(warmupHours)}: the results may carry the empty start; try a --warmup of at least that";
+
     private static string RelaxationText(double hours) => double.IsFinite(hours) ? PeopleFormat.Time(hours) : "never (it is unstable)";
 
     /// <summary><c>simulate</c> or <c>report --simulate</c> stopped with some replications finished.</summary>

@@ -156,8 +156,15 @@ internal static class SimulationCliOptions
             request.Warnings.Report(Messages.SlowUnit(slow.Unit.Id, slow.Hours, plan.WarmupHours, plan.DurationHours));
         }
 
+        // More replications where the run length met its bound before the slowest unit's relaxation times: in the
+        // same proportion to the command's own default (simulate's 10, report's 5), unless given.
+        bool replicationsGiven = parse.GetResult(replications) is { Implicit: false };
+        int planned = replicationsGiven || plan.Replications <= SimulationOptions.DefaultReplications
+            ? read.Replications
+            : (int)Math.Ceiling((double)read.Replications * plan.Replications / SimulationOptions.DefaultReplications);
         return read with
         {
+            Replications = planned,
             WarmupHours = plan.WarmupHours,
             DurationHours = plan.DurationHours,
             IsWarmupFromModel = plan.IsWarmupFromModel,

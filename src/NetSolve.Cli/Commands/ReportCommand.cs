@@ -19,12 +19,6 @@ internal sealed class ReportCommand() : NetworkCommand(
     /// <summary>Replications for a report: fewer than <c>simulate</c>'s 10 so a report stays quick; still 4 degrees of freedom.</summary>
     public const int DefaultReplications = 5;
 
-    /// <summary>Measured time per replication for a report: 13 whole weeks (a quarter), so every hour and weekday counts equally.</summary>
-    public const string DefaultDuration = "91d";
-
-    /// <summary>Warm-up for a report: as <c>simulate</c>'s, since wards with stays of days need it whatever the run length.</summary>
-    public const string DefaultWarmup = "28d";
-
     /// <summary>A report's run length: at least a day, as the time-of-day section needs every hour measured.</summary>
     private static readonly DurationRule ReportDuration = SimulationCliOptions.Duration with
     {
@@ -54,10 +48,10 @@ internal sealed class ReportCommand() : NetworkCommand(
     private readonly Option<int> _replications = SimulationCliOptions.Replications(DefaultReplications);
 
     private readonly Option<string> _warmup = SimulationCliOptions.RunLength(
-        "--warmup", "With --simulate: simulated time discarded at the start of each replication.", DefaultWarmup, SimulationCliOptions.Warmup);
+        "--warmup", "With --simulate: simulated time discarded at the start of each replication; default: as simulate, from the slowest unit's relaxation time.", null, SimulationCliOptions.Warmup);
 
     private readonly Option<string> _duration = SimulationCliOptions.RunLength(
-        "--duration", "With --simulate: simulated time measured in each replication, at least a day.", DefaultDuration, ReportDuration);
+        "--duration", "With --simulate: simulated time measured in each replication, at least a day; default: as simulate, from the slowest unit's relaxation time.", null, ReportDuration);
 
     private readonly Option<bool> _allowLong = SimulationCliOptions.AllowLong();
 
@@ -89,8 +83,7 @@ internal sealed class ReportCommand() : NetworkCommand(
         SimulationResult? simulation = null;
         if (request.GetValue(_simulate))
         {
-            var options = SimulationCliOptions.Read(
-                request.Parse, baseline.Network.TimeUnit, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
+            var options = SimulationCliOptions.ReadPlanned(request, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
             SimulationCliOptions.CheckWork(baseline, options, request.GetValue(_allowLong));
             simulation = SimulationRun.Run(baseline.Network, options, request.Context);
             if (simulation.ReplicationsFinished == 0)
@@ -102,6 +95,11 @@ internal sealed class ReportCommand() : NetworkCommand(
             if (!simulation.IsComplete)
             {
                 request.Context.Report(Messages.StoppedPartway(simulation.ReplicationsFinished, options.Replications, "the report uses those"));
+            }
+
+            if (simulation.IsWarmupShortByMser)
+            {
+                request.Warnings.Report(Messages.WarmupShortByMser(simulation.MserTruncationHours!.Value, options.WarmupHours));
             }
         }
 

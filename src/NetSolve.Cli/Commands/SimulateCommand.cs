@@ -69,6 +69,11 @@ internal sealed class SimulateCommand() : NetworkCommand(
             request.Context.Report(Messages.StoppedPartway(result.ReplicationsFinished, options.Replications, "the results below use those"));
         }
 
+        if (result.IsWarmupShortByMser)
+        {
+            request.Warnings.Report(Messages.WarmupShortByMser(result.MserTruncationHours!.Value, options.WarmupHours));
+        }
+
         var formula = request.GetValue(_compare) ? request.Solve() : null;
         double threshold = request.StrainThreshold;
         request.Output.Write(

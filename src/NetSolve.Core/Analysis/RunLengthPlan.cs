@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using NetSolve.Simulation;
 
 namespace NetSolve.Analysis;
 
@@ -12,9 +13,14 @@ namespace NetSolve.Analysis;
 /// <see cref="RunLengthPlanner.RelaxationsWarned"/> of them, or the warm-up is shorter than
 /// <see cref="RunLengthPlanner.WarmupRelaxations"/>), slowest first: their simulated means may be biased.
 /// </param>
+/// <param name="Replications">
+/// The replications the run needs: the default, or more when the run length chosen here reached its bound before
+/// the slowest unit's <see cref="RunLengthPlanner.DurationRelaxations"/> relaxation times, to make up the rest.
+/// </param>
 public sealed record RunLengthPlan(
     double WarmupHours,
     double DurationHours,
     bool IsWarmupFromModel,
     bool IsDurationFromModel,
-    ImmutableArray<UnitRelaxation> SlowUnits);
+    ImmutableArray<UnitRelaxation> SlowUnits,
+    int Replications = SimulationOptions.DefaultReplications);

@@ -119,6 +119,53 @@ internal sealed class DurationHistogram
         return last;
     }
 
+    /// <summary>
+    /// The share of the counted durations at most <paramref name="duration"/>, interpolated linearly inside its bucket
+    /// as <see cref="Quantile"/> is (so the two are inverse to each other within a bucket); NaN when nothing was counted.
+    /// </summary>
+    public double ShareAtMost(double duration)
+    {
+        if (Count == 0)
+        {
+            return double.NaN;
+        }
+
+        if (!(duration > 0.0))
+        {
+            return duration == 0.0 ? (double)Zeros / Count : 0.0;
+        }
+
+        double below = Zeros;
+        for (int i = 0; i < _octaves.Length; i++)
+        {
+            if (_octaves[i] is not long[] counts)
+            {
+                continue;
+            }
+
+            long octaveKey = (long)(_firstOctave + i) << SubBucketBits;
+            for (int b = 0; b < BucketsPerOctave; b++)
+            {
+                long count = counts[b];
+                if (count == 0)
+                {
+                    continue;
+                }
+
+                double low = LowerEdge(octaveKey + b);
+                double high = LowerEdge(octaveKey + b + 1);
+                if (duration < high)
+                {
+                    return duration <= low ? below / Count : (below + (count * (duration - low) / (high - low))) / Count;
+                }
+
+                below += count;
+            }
+        }
+
+        return 1.0;
+    }
+
     private static double LowerEdge(long key) => BitConverter.Int64BitsToDouble(key << MantissaShift);
 
     private void RecordRarely(double duration)

@@ -109,17 +109,18 @@ internal sealed class ResultAssembler
     }
 
     /// <summary>
-    /// The percentiles whose per-replication values start at slot <paramref name="first"/>, each the pooled
-    /// histogram's (<paramref name="histogramOf"/> picks a replication's) with a sectioning interval.
+    /// The percentiles of the pooled histogram (<paramref name="histogramOf"/> picks a replication's), each with its
+    /// interval inverted from the replications' shares below it (<see cref="QuantileInterval"/>). The replications'
+    /// own percentiles stay in the rows at <paramref name="first"/> on; the interval no longer reads them.
     /// </summary>
     private ImmutableArray<PercentileEstimate> Percentiles(int first, Func<ReplicationTallies, DurationHistogram> histogramOf)
     {
-        var pooled = ReplicationTallies.Pool(_tallies.Select(histogramOf));
+        var each = _tallies.Select(histogramOf).ToList();
+        var pooled = ReplicationTallies.Pool(each);
         var builder = ImmutableArray.CreateBuilder<PercentileEstimate>(MetricLayout.Percentiles.Length);
         for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
         {
-            int slot = first + p;
-            var estimate = Estimate.Sectioned(pooled.Quantile(MetricLayout.Percentiles[p]), _rows.Select(row => row[slot]));
+            var estimate = QuantileInterval.Of(MetricLayout.Percentiles[p], pooled, each);
             builder.Add(new PercentileEstimate(MetricLayout.Percentiles[p] * 100.0, estimate));
         }
 

@@ -84,6 +84,11 @@ internal sealed partial class SimulationEngine
             // The event stays in the queue while it is handled: the first event it schedules takes its place in one
             // pass (see Schedule), and it is removed on its own only if it schedules none.
             var next = _events.Earliest;
+            if (next.Time >= _nextSample)
+            {
+                SampleSeries(next.Time);
+            }
+
             _handledStillQueued = true;
             handled++;
             if (next.IsArrival)
@@ -145,6 +150,7 @@ internal sealed partial class SimulationEngine
         }
 
         EventCount = events;
+        SampleSeries(_end);
         CloseOpenSpans();
         return true;
     }

@@ -40,6 +40,16 @@ public sealed record SimulationResult
     /// </summary>
     public double? WorstRelativeHalfWidth { get; init; }
 
+    /// <summary>
+    /// Where MSER-5 on the number in the network, averaged over replications, says the start-up transient ends, in
+    /// hours from the start (<see cref="WarmupCheck"/>); null when it cannot say. Above the warm-up, the warm-up was
+    /// too short for the measured part to start near steady state.
+    /// </summary>
+    public double? MserTruncationHours { get; init; }
+
+    /// <summary>True when MSER-5 cuts beyond the warm-up used: the measured part may carry the empty start.</summary>
+    public bool IsWarmupShortByMser => MserTruncationHours is double cut && cut > Options.WarmupHours;
+
     /// <summary>Per-group results for <see cref="Network.Groups"/>, in order.</summary>
     public required ImmutableArray<SimulatedGroup> Groups { get; init; }
 }

@@ -36,6 +36,7 @@ public static class Simulator
         var rows = new double[most][];
         var events = new long[most];
         var tallies = new ReplicationTallies[most];
+        var series = new IReadOnlyList<double>[most];
         var tracker = new ProgressTracker(progress, options.Replications);
         var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
         var meanServiceHours = network.Units.Select(unit => unit.EffectiveService.MeanHours).ToArray();
@@ -54,6 +55,7 @@ public static class Simulator
                 rows[replication] = engine.ResultRow();
                 events[replication] = engine.EventCount;
                 tallies[replication] = engine.Tallies();
+                series[replication] = engine.InNetworkSeries;
                 tracker.Update(replication, 1.0);
             }
         });
@@ -88,6 +90,8 @@ public static class Simulator
         long totalEvents = events.Sum();
         var finishedTallies = tallies.Take(started).Where(tally => tally is not null).ToList();
         var result = new ResultAssembler(layout, finished, finishedTallies).Assemble(network, options with { Replications = started }, totalEvents);
-        return result with { WorstRelativeHalfWidth = worst, PrecisionReached = reached };
+        var finishedSeries = series.Take(started).Where(one => one is not null).ToList();
+        double? cut = WarmupCheck.TruncationHours(finishedSeries, options.WarmupHours + options.DurationHours);
+        return result with { WorstRelativeHalfWidth = worst, PrecisionReached = reached, MserTruncationHours = cut };
     }
 }

@@ -106,4 +106,38 @@ public sealed class DurationHistogramTests
         var histogram = new DurationHistogram();
         Assert.Throws<ArgumentOutOfRangeException>(() => histogram.Record(duration));
     }
+
+    [Theory]
+    [InlineData(0.05)]
+    [InlineData(0.50)]
+    [InlineData(0.95)]
+    [InlineData(0.99)]
+    public void The_share_at_most_a_quantile_gives_back_its_fraction(double fraction)
+    {
+        var random = new Xoshiro256StarStar(5, 0);
+        var histogram = new DurationHistogram();
+        for (int i = 0; i < 10_000; i++)
+        {
+            histogram.Record(random.NextExponential());
+        }
+
+        // Exact by hand: both interpolate linearly inside the same bucket, so one inverts the other up to rounding.
+        Assert.Equal(fraction, histogram.ShareAtMost(histogram.Quantile(fraction)), 1e-9);
+    }
+
+    [Fact]
+    public void The_share_at_most_counts_zeros_and_is_one_beyond_the_largest_time()
+    {
+        var histogram = new DurationHistogram();
+        histogram.Record(0.0);
+        histogram.Record(2.0);
+        histogram.Record(4.0);
+        histogram.Record(8.0);
+
+        // Exact by hand: one of four is 0; 2 is the lower edge of its bucket, so the share at most 2 counts the zero only.
+        Assert.Equal(0.25, histogram.ShareAtMost(0.0));
+        Assert.Equal(0.25, histogram.ShareAtMost(2.0));
+        Assert.Equal(1.0, histogram.ShareAtMost(100.0));
+        Assert.True(double.IsNaN(new DurationHistogram().ShareAtMost(1.0)));
+    }
 }

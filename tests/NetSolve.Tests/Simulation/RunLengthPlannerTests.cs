@@ -1,4 +1,5 @@
 using NetSolve.Analysis;
+using NetSolve.Simulation;
 using NetSolve.Solving;
 
 namespace NetSolve.Tests.Simulation;
@@ -52,5 +53,37 @@ public sealed class RunLengthPlannerTests
         Assert.Equal(13.5, plan.WarmupHours);
         Assert.Equal(100.25, plan.DurationHours);
         Assert.False(plan.IsWarmupFromModel || plan.IsDurationFromModel);
+    }
+
+    [Fact]
+    public void A_slow_ward_whose_run_meets_the_bound_gets_replications_growing_as_the_square_of_the_relaxation_times_missing()
+    {
+        var solution = NetworkSolver.Solve(TestNetworks.Single(TestNetworks.Unit("ward", 1, 24.0), 0.9 / 24.0));
+
+        var plan = RunLengthPlanner.Plan(solution);
+
+        // Exact by hand: 20 relaxation times are 182,274 h against a run bounded at 87,360 h, a shortfall of 2.0865,
+        // so 10 replications become ⌈10 × 2.0865²⌉ = ⌈43.53⌉ = 44.
+        Assert.Equal(44, plan.Replications);
+    }
+
+    [Fact]
+    public void A_network_of_fast_units_and_a_given_run_length_keep_the_default_replications()
+    {
+        var slow = NetworkSolver.Solve(TestNetworks.Single(TestNetworks.Unit("ward", 1, 24.0), 0.9 / 24.0));
+
+        Assert.Equal(SimulationOptions.DefaultReplications, RunLengthPlanner.Plan(NetworkSolver.Solve(TestNetworks.SmallJackson())).Replications);
+        Assert.Equal(SimulationOptions.DefaultReplications, RunLengthPlanner.Plan(slow, null, 100.0).Replications);
+    }
+
+    [Fact]
+    public void An_unstable_unit_adds_no_replications()
+    {
+        var solution = NetworkSolver.Solve(TestNetworks.Single(TestNetworks.Unit("ward", 1, 24.0), 1.1 / 24.0));
+
+        var plan = RunLengthPlanner.Plan(solution);
+
+        Assert.Equal(RunLengthPlanner.MostHours, plan.DurationHours);
+        Assert.Equal(SimulationOptions.DefaultReplications, plan.Replications);
     }
 }

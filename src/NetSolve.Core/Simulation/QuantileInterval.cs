@@ -1,0 +1,62 @@
+using MathNet.Numerics.Distributions;
+
+namespace NetSolve.Simulation;
+
+/// <summary>
+/// The 95% interval of a percentile of time, found by inverting an interval for the distribution function at the
+/// pooled percentile: each replication's share of times at most the pooled percentile q̂ is a ratio of counts, whose
+/// mean over replications has an honest Student t interval [p − h, p + h]; the pooled histogram's percentiles at
+/// p − h and p + h bound q. The half-width is the larger of the two sides, so the interval is symmetric and never
+/// narrower than the inverted one.
+/// </summary>
+/// <remarks>
+/// Why not the spread of each replication's own percentile (sectioning, Asmussen and Glynn, Stochastic Simulation,
+/// Springer, 2007, chapter III, section 5a)? A far percentile is a strongly concave function of the share of times
+/// beyond it (for an exponential tail, q = −ln(share)/θ), and on a run that sees only a few long busy periods the
+/// share varies across replications by tens of percent: the replications' percentiles then vary less than the pooled
+/// one does (Jensen's inequality), and the sectioning interval was measured to cover the 99th percentile of an M/M/1
+/// unit with 1-day service in 78% of seeds. The share itself is a mean of indicators, an average like the mean wait,
+/// whose interval covers; the percentile's interval inherits that (the distribution-free interval of a quantile
+/// from one for its distribution function, Serfling, Approximation Theorems of Mathematical Statistics, Wiley, 1980,
+/// section 2.6; for correlated output from the replications as independent batches, Law, Simulation Modeling and
+/// Analysis, 5th ed., 2015, chapter 9).
+/// </remarks>
+internal static class QuantileInterval
+{
+    /// <summary>
+    /// The <paramref name="fraction"/> percentile of <paramref name="pooled"/> with its half-width from
+    /// <paramref name="replications"/> (the histograms pooled); null when nothing was observed.
+    /// </summary>
+    public static Estimate? Of(double fraction, DurationHistogram pooled, IReadOnlyList<DurationHistogram> replications)
+    {
+        double point = pooled.Quantile(fraction);
+        if (!double.IsFinite(point))
+        {
+            return null;
+        }
+
+        double centre = pooled.ShareAtMost(point);
+        int n = 0;
+        double sumSquares = 0.0;
+        foreach (var replication in replications)
+        {
+            double share = replication.ShareAtMost(point);
+            if (double.IsFinite(share))
+            {
+                n++;
+                sumSquares += (share - centre) * (share - centre);
+            }
+        }
+
+        if (n < 2)
+        {
+            return new Estimate(point, null, n);
+        }
+
+        double t = StudentT.InvCDF(0.0, 1.0, n - 1, 0.5 + (Estimate.ConfidenceLevel / 2.0));
+        double shareHalf = t * Math.Sqrt(sumSquares / (n - 1) / n);
+        double low = pooled.Quantile(Math.Max(0.0, centre - shareHalf));
+        double high = pooled.Quantile(Math.Min(1.0, centre + shareHalf));
+        return new Estimate(point, Math.Max(point - low, high - point), n);
+    }
+}
