@@ -51,7 +51,8 @@ public static class NetworkSolver
             // A full unit is solved at its offered rate with the service of the patients who come (the groups' mixture).
             units[i] = unit.Capacity is int limit
                 ? UnitMetrics.ComputeFinite(unit, flowsPerHour[i], external, mean,
-                    FiniteCapacityFormulas.Solve(LimitedServers(unit, limit), limit, flowsPerHour[i], mean), arrivalScv[i], serviceScv)
+                    FiniteCapacityFormulas.Solve(LimitedServers(unit, limit), limit, flowsPerHour[i], mean, serviceScv, unit.EffectiveService),
+                    arrivalScv[i], serviceScv)
                 : UnitMetrics.Compute(unit, flowsPerHour[i], external, mean, arrivalScv[i], serviceScv);
         }
 
