@@ -111,7 +111,7 @@ public static class BudgetAllocation
         }
 
         double meanServiceHours = result.OfferedLoad / result.ArrivalsPerHour;
-        return GgcFormulas.Estimate(servers, result.ArrivalsPerHour, meanServiceHours, result.ArrivalScv, result.ServiceScv).MeanQueue ?? double.PositiveInfinity;
+        return GgcFormulas.Estimate(servers, result.ArrivalsPerHour, meanServiceHours, result.ArrivalScv, result.ServiceScv, result.Unit.EffectiveService).MeanQueue ?? double.PositiveInfinity;
     }
 
     private static ImmutableArray<UnitAllocation> Allocations(Network network, List<(int Index, double Load, int Current)> candidates, int[] servers, int[] forced) =>

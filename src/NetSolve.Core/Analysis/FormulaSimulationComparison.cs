@@ -10,7 +10,7 @@ public static class FormulaSimulationComparison
 {
     /// <summary>
     /// Whether the unit's formula values are an approximation for the unit as modelled, rather than exact: the
-    /// two-moment G/G/c and G/G/1 waits always; M/M/c/K when the arrivals or the service are not those of Poisson
+    /// two-moment G/G/c and G/G/1 waits and M/G/c/K always; M/M/c/K when the arrivals or the service are not those of Poisson
     /// arrivals and exponential service. Erlang C (M/M/c), Pollaczek-Khinchine (M/G/1), Erlang B and unlimited servers
     /// are exact for their unit alone (docs/methods.md); whether the network's flows are exact is not judged here.
     /// </summary>
@@ -19,7 +19,8 @@ public static class FormulaSimulationComparison
         ArgumentNullException.ThrowIfNull(formula);
         return formula.Method switch
         {
-            GgcMethodNames.AllenCunneen or GgcMethodNames.KraemerLangenbachBelz or GgcMethodNames.Cosmetatos or GgcMethodNames.LightHeavyTraffic => true,
+            GgcMethodNames.AllenCunneen or GgcMethodNames.KraemerLangenbachBelz or GgcMethodNames.Cosmetatos or GgcMethodNames.LightHeavyTraffic
+                or FiniteCapacityFormulas.TwoMomentMethod => true,
             FiniteCapacityFormulas.MarkovianMethod => formula.ArrivalScv != 1.0 || formula.ServiceScv != 1.0,
             _ => false,
         };

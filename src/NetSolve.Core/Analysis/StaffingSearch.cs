@@ -120,10 +120,11 @@ public static class StaffingSearch
         if (unit.Capacity is int capacity && !unit.Servers.IsUnlimited)
         {
             double offered = result.ArrivalsPerHour + result.TurnedAwayPerHour + result.DivertedPerHour;
-            return MinimumServersWithCapacity(offered, meanServiceHours, atLeast ?? unit.Servers.Count, capacity - unit.Servers.Count, targets, out impossible, timeUnit);
+            return MinimumServersWithCapacity(offered, meanServiceHours, atLeast ?? unit.Servers.Count, capacity - unit.Servers.Count, targets, out impossible, timeUnit,
+                result.ServiceScv, unit.EffectiveService);
         }
 
-        return MinimumServers(result.ArrivalsPerHour, meanServiceHours, atLeast, result.ArrivalScv, result.ServiceScv, targets, out impossible, timeUnit);
+        return MinimumServers(result.ArrivalsPerHour, meanServiceHours, atLeast, result.ArrivalScv, result.ServiceScv, targets, out impossible, timeUnit, unit.EffectiveService);
     }
 
     /// <summary>
@@ -154,8 +155,9 @@ public static class StaffingSearch
     /// <param name="targets">The targets.</param>
     /// <param name="impossible">Why no number of servers will do, or null.</param>
     /// <param name="timeUnit">The time unit the reason states times in.</param>
+    /// <param name="serviceShape">The unit's service distribution, for the light-traffic term when cs² &gt; 1 (as the solver uses it); null: a gamma.</param>
     public static int? MinimumServers(double arrivalsPerHour, double meanServiceHours, int? atLeast, double arrivalScv, double serviceScv,
-        StaffingTargets targets, out string? impossible, TimeUnit timeUnit = TimeUnit.Hour)
+        StaffingTargets targets, out string? impossible, TimeUnit timeUnit = TimeUnit.Hour, ServiceDistribution? serviceShape = null)
     {
         ArgumentNullException.ThrowIfNull(targets);
         bool neverWaits = arrivalScv == 0.0 && serviceScv == 0.0;
@@ -209,7 +211,7 @@ public static class StaffingSearch
             }
 
             if ((c > 1 || !correctedOneServer)
-                && Meets((int)c, load, blocking, GgcFormulas.VariabilityFactor((int)c, load / c, arrivalScv, serviceScv), arrivalsPerHour, meanServiceHours, maxUtilisation, waitLimit, targets.WaitTail))
+                && Meets((int)c, load, blocking, GgcFormulas.VariabilityFactor((int)c, load / c, arrivalScv, serviceScv, serviceShape), arrivalsPerHour, meanServiceHours, maxUtilisation, waitLimit, targets.WaitTail))
             {
                 return (int)c;
             }
@@ -233,8 +235,10 @@ public static class StaffingSearch
     /// <param name="targets">The targets.</param>
     /// <param name="impossible">Why no number of servers will do, or null.</param>
     /// <param name="timeUnit">The time unit the reason states times in.</param>
+    /// <param name="serviceScv">cs² of the service (1: exponential, M/M/c/K); the loss formula (no waiting places) ignores it.</param>
+    /// <param name="serviceShape">The unit's service distribution, as for <see cref="FiniteCapacityFormulas"/>; null: a gamma.</param>
     public static int? MinimumServersWithCapacity(double offeredPerHour, double meanServiceHours, int atLeast, int waitingPlaces,
-        StaffingTargets targets, out string? impossible, TimeUnit timeUnit = TimeUnit.Hour)
+        StaffingTargets targets, out string? impossible, TimeUnit timeUnit = TimeUnit.Hour, double serviceScv = 1.0, ServiceDistribution? serviceShape = null)
     {
         ArgumentNullException.ThrowIfNull(targets);
         ArgumentOutOfRangeException.ThrowIfLessThan(atLeast, 1);
@@ -253,7 +257,7 @@ public static class StaffingSearch
         double waitLimit = Math.Min(targets.MaxMeanWaitHours ?? double.PositiveInfinity, (targets.MaxMeanTimeInUnitHours ?? double.PositiveInfinity) - meanServiceHours);
         for (long c = atLeast; c + waitingPlaces <= Servers.MaxCount; c++)
         {
-            var unit = FiniteCapacityFormulas.Solve((int)c, (int)c + waitingPlaces, offeredPerHour, meanServiceHours);
+            var unit = FiniteCapacityFormulas.Solve((int)c, (int)c + waitingPlaces, offeredPerHour, meanServiceHours, serviceScv, serviceShape);
             if ((targets.MaxUtilisation is not double utilisation || Within(unit.Utilisation, utilisation))
                 && (targets.MaxTurnedAway is not double full || Within(unit.FullProbability, full))
                 && Within(unit.MeanWaitHours, waitLimit)

@@ -20,7 +20,7 @@ public static class NetworkSolver
         double[] flows = capacity is not null
             ? [.. capacity.Units.Select(unit => unit.OfferedPerHour)]
             : traffic is null ? TrafficEquations.Solve(RoutingTable.Build(network)) : [.. traffic.FlowsPerHour];
-        var solution = Build(network, flows, inputs, strainThreshold);
+        var solution = Build(network, flows, inputs, strainThreshold, capacity);
         return traffic is null ? solution : solution with { Groups = GroupResults.Build(traffic, solution.Units, capacity?.OfferedByGroup) };
     }
 
@@ -37,7 +37,8 @@ public static class NetworkSolver
         return Build(network, flowsPerHour, SolverInputs.Of(network, traffic), strainThreshold);
     }
 
-    private static NetworkSolution Build(Network network, IReadOnlyList<double> flowsPerHour, SolverInputs inputs, double strainThreshold)
+    private static NetworkSolution Build(Network network, IReadOnlyList<double> flowsPerHour, SolverInputs inputs, double strainThreshold,
+        CapacityFlowSolution? capacityFlows = null)
     {
         int n = network.Units.Length;
         double external = network.AllExternalArrivalsPerHour;
@@ -46,12 +47,15 @@ public static class NetworkSolver
         for (int i = 0; i < n; i++)
         {
             var unit = network.Units[i];
-            double mean = inputs.MeanServiceHours[i];
-            double serviceScv = inputs.ServiceScv[i];
+            // A unit with a capacity takes the service mixture of the patients offered to it in the bed-limit fixed point.
+            var offeredService = capacityFlows?.Units[i];
+            double mean = unit.Capacity is not null && offeredService is not null ? offeredService.MeanServiceHours : inputs.MeanServiceHours[i];
+            double serviceScv = unit.Capacity is not null && offeredService is not null ? offeredService.ServiceScv : inputs.ServiceScv[i];
             // A full unit is solved at its offered rate with the service of the patients who come (the groups' mixture).
             units[i] = unit.Capacity is int limit
                 ? UnitMetrics.ComputeFinite(unit, flowsPerHour[i], external, mean,
-                    FiniteCapacityFormulas.Solve(LimitedServers(unit, limit), limit, flowsPerHour[i], mean), arrivalScv[i], serviceScv)
+                    FiniteCapacityFormulas.Solve(LimitedServers(unit, limit), limit, flowsPerHour[i], mean, serviceScv, unit.EffectiveService),
+                    arrivalScv[i], serviceScv)
                 : UnitMetrics.Compute(unit, flowsPerHour[i], external, mean, arrivalScv[i], serviceScv);
         }
 

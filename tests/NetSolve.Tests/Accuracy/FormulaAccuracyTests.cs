@@ -23,19 +23,21 @@ public sealed class FormulaAccuracyTests
 
     /// <summary>
     /// ...for at least 90% of the units that count (<see cref="AccuracyRow.Counts"/>): met. Measured 118 of 124 (95.2%,
-    /// seed 2026) with Cosmetatos' ratio for regular service and the light-heavy traffic interpolation for variable
-    /// service on several servers; the misses are light-load units (ρ 0.3-0.45) and a diversion target fed by bursty
-    /// overflow (docs/methods.md).
+    /// seed 2026) with Cosmetatos' ratio for regular service, the light-heavy traffic interpolation for variable
+    /// service on several servers and the M/G/c/K truncation for bed limits with waiting places; the misses are
+    /// light-load units (ρ 0.3-0.45) and a diversion target fed by bursty overflow (docs/methods.md). Asserted at the
+    /// measured 95%, so a regression fails.
     /// </summary>
-    private const double MeasuredShare = 0.90;
+    private const double MeasuredShare = 0.95;
 
     /// <summary>
-    /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 4
-    /// of 113 units not closer: the M/M/c/K unit (which ignores the service cv, equal to the exponential formula), the
-    /// diversion target (overflow taken as Poisson), and two units where the exponential formula happens to be within
-    /// 2%. Held at today's count so a regression fails.
+    /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 3
+    /// of 113 units not closer: the diversion target (overflow taken as Poisson), and two units where the exponential
+    /// formula happens to be within 2%. Those two stay "not closer" also when judged beyond the simulation's 95%
+    /// interval (every value in the interval is nearer the exponential formula than the two-moment one), so no looser
+    /// rule is applied. Held at today's count so a regression fails.
     /// </summary>
-    private const int MeasuredNotBetter = 4;
+    private const int MeasuredNotBetter = 3;
 
     /// <summary>Generated networks in the study, seeds 1 to this.</summary>
     private const int GeneratedNetworks = 20;

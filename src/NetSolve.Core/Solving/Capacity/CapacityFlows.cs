@@ -11,9 +11,10 @@ namespace NetSolve.Solving;
 /// <para>
 /// Finds the offered rates λ that satisfy, for every unit i,
 /// λ_i = γ_i + Σ_j λ_j(1 − B_j(λ_j))·p_ji + Σ_{j diverting to i} λ_j·B_j(λ_j), where γ is the external arrivals, p the
-/// routing fractions and B_j the chance that unit j is full when a patient arrives. B_j is the M/M/c/K blocking
-/// probability at λ_j (Erlang B when capacity equals servers, see <see cref="FiniteCapacityFormulas"/>); 0 for a unit
-/// without capacity. A unit with unlimited servers and a capacity K is an Erlang loss system with K servers.
+/// routing fractions and B_j the chance that unit j is full when a patient arrives. B_j is the blocking probability of
+/// <see cref="FiniteCapacityFormulas"/> at λ_j (Erlang B when capacity equals servers, M/M/c/K or its two-moment
+/// M/G/c/K form otherwise) for the service of the patients offered to j: the classes' mixture weighted by their
+/// offered rates (<see cref="ClassServices"/>); 0 for a unit without capacity. A unit with unlimited servers and a capacity K is an Erlang loss system with K servers.
 /// Each patient group (and the default group of the network's own arrivals and routes) flows through its own routes;
 /// the groups share each unit's blocking, because Poisson arrivals see the unit's time averages.
 /// </para>
@@ -65,6 +66,7 @@ public static class CapacityFlows
         var classes = new List<RoutingTable> { RoutingTable.Build(network) };
         classes.AddRange(network.Groups.Select(group => RoutingTable.Build(network with { Arrivals = group.Arrivals, Routes = group.Routes ?? network.Routes })));
 
+        var services = ClassServices.Of(network);
         var offered = classes.Select(routing => routing.ExternalPerHour.ToArray()).ToArray();
         var blocking = new double[n];
         int iteration = 0;
@@ -73,7 +75,7 @@ public static class CapacityFlows
             var total = Totals(offered, n);
             for (int i = 0; i < n; i++)
             {
-                blocking[i] = Blocking(network.Units[i], total[i]);
+                blocking[i] = network.Units[i].Capacity is null ? 0.0 : Metrics(network.Units[i], total[i], services.Mix(offered, i)).FullProbability;
             }
 
             double largestChange = 0.0;
@@ -101,7 +103,7 @@ public static class CapacityFlows
             }
         }
 
-        return Assemble(network, offered, divertTo, iteration);
+        return Assemble(network, offered, services, divertTo, iteration);
     }
 
     private static double[] Substitute(RoutingTable routing, double[] offered, double[] blocking, int[] divertTo)
@@ -124,7 +126,7 @@ public static class CapacityFlows
         return next;
     }
 
-    private static CapacityFlowSolution Assemble(Network network, double[][] offered, int[] divertTo, int iterations)
+    private static CapacityFlowSolution Assemble(Network network, double[][] offered, ClassServices services, int[] divertTo, int iterations)
     {
         int n = network.Units.Length;
         var total = Totals(offered, n);
@@ -133,9 +135,8 @@ public static class CapacityFlows
         for (int i = 0; i < n; i++)
         {
             var unit = network.Units[i];
-            var metrics = unit.Capacity is int capacity
-                ? FiniteCapacityFormulas.Solve(LimitedServers(unit, capacity), capacity, total[i], unit.MeanServiceHours)
-                : null;
+            var service = services.Mix(offered, i);
+            var metrics = unit.Capacity is null ? null : Metrics(unit, total[i], service);
             double blocked = metrics?.BlockedPerHour ?? 0.0;
             double admitted = metrics is null ? total[i] : total[i] - blocked;
             bool diverts = divertTo[i] >= 0;
@@ -145,7 +146,11 @@ public static class CapacityFlows
             }
 
             rows[i] = new UnitCapacityFlow(unit.Id, total[i], admitted, metrics?.FullProbability ?? 0.0,
-                diverts ? 0.0 : blocked, diverts ? blocked : 0.0, 0.0, metrics);
+                diverts ? 0.0 : blocked, diverts ? blocked : 0.0, 0.0, metrics)
+            {
+                MeanServiceHours = service.MeanHours,
+                ServiceScv = service.Scv,
+            };
         }
 
         return new CapacityFlowSolution(
@@ -154,9 +159,12 @@ public static class CapacityFlows
             iterations);
     }
 
-    private static double Blocking(Unit unit, double offeredPerHour) => unit.Capacity is int capacity
-        ? FiniteCapacityFormulas.Solve(LimitedServers(unit, capacity), capacity, offeredPerHour, unit.MeanServiceHours).FullProbability
-        : 0.0;
+    /// <summary>The one-unit metrics of a unit with a capacity, for the service of the patients offered to it.</summary>
+    private static FiniteCapacityResult Metrics(Unit unit, double offeredPerHour, (double MeanHours, double Scv) service)
+    {
+        int capacity = unit.Capacity ?? throw new ArgumentException("The unit has no capacity.", nameof(unit));
+        return FiniteCapacityFormulas.Solve(LimitedServers(unit, capacity), capacity, offeredPerHour, service.MeanHours, service.Scv, unit.EffectiveService);
+    }
 
     /// <summary>With unlimited servers every patient present is in service, so the unit is a loss system of K servers.</summary>
     private static int LimitedServers(Unit unit, int capacity) => unit.Servers.IsUnlimited ? capacity : Math.Min(unit.Servers.Count, capacity);

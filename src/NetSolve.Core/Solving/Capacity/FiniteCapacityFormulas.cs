@@ -1,3 +1,5 @@
+using NetSolve.Model;
+
 namespace NetSolve.Solving;
 
 /// <summary>
@@ -15,7 +17,7 @@ namespace NetSolve.Solving;
 /// <para>
 /// When K = c nobody waits and P(full) is Erlang B, which depends on the service-time distribution only through its
 /// mean (the insensitivity of the Erlang loss formula): exact for any length of stay. When K &gt; c the values are exact
-/// for exponential service only. A finite unit is never unstable: ρ ≥ 1 is allowed and simply blocks more patients.
+/// for exponential service; other services use the two-moment approximation of <see cref="TwoMomentFiniteCapacity"/>. A finite unit is never unstable: ρ ≥ 1 is allowed and simply blocks more patients.
 /// Thread-safe (pure functions).
 /// </para>
 /// </remarks>
@@ -27,6 +29,9 @@ public static class FiniteCapacityFormulas
     /// <summary>The method named when capacity exceeds servers.</summary>
     public const string MarkovianMethod = "M/M/c/K (exact for Poisson arrivals and exponential service)";
 
+    /// <summary>The method named when capacity exceeds servers and the service is not exponential.</summary>
+    public const string TwoMomentMethod = "M/G/c/K (two-moment truncation)";
+
     /// <summary>Blocking, admitted rate, queue, occupancy and waits of admitted patients in a unit of limited capacity.</summary>
     /// <param name="servers">c: at least 1.</param>
     /// <param name="capacity">K: patients in service and waiting at most; at least <paramref name="servers"/>.</param>
@@ -34,8 +39,30 @@ public static class FiniteCapacityFormulas
     /// <param name="meanServiceHours">1/μ in hours, positive and finite.</param>
     /// <returns>Finite values; with no arrivals every rate, queue and P(full) is 0 and the time in unit is the mean service.</returns>
     /// <exception cref="ArgumentOutOfRangeException">An argument is outside the ranges above, or λ/μ is not finite.</exception>
-    public static FiniteCapacityResult Solve(int servers, int capacity, double arrivalsPerHour, double meanServiceHours)
+    public static FiniteCapacityResult Solve(int servers, int capacity, double arrivalsPerHour, double meanServiceHours) =>
+        Solve(servers, capacity, arrivalsPerHour, meanServiceHours, 1.0, null);
+
+    /// <summary>
+    /// As <see cref="Solve(int, int, double, double)"/> for a service time of any variability: exactly M/M/c/K when
+    /// <paramref name="serviceScv"/> is 1, exactly Erlang loss for any service when K = c, and otherwise the two-moment
+    /// M/G/c/K approximation of <see cref="TwoMomentFiniteCapacity"/> (docs/methods.md, "Bed limits").
+    /// </summary>
+    /// <param name="servers">c: at least 1.</param>
+    /// <param name="capacity">K: patients in service and waiting at most; at least <paramref name="servers"/>.</param>
+    /// <param name="arrivalsPerHour">λ: offered arrivals per hour, finite and not negative; any load, even above c.</param>
+    /// <param name="meanServiceHours">E[S] in hours, positive and finite.</param>
+    /// <param name="serviceScv">cs², the squared coefficient of variation of the service time, 0 to <see cref="GgcFormulas.MaximumScv"/>.</param>
+    /// <param name="serviceShape">The service distribution for the light-traffic term when cs² &gt; 1; null: a gamma.</param>
+    /// <returns>Finite values; with no arrivals every rate, queue and P(full) is 0 and the time in unit is the mean service.</returns>
+    /// <exception cref="ArgumentOutOfRangeException">An argument is outside the ranges above, or λE[S] is not finite.</exception>
+    public static FiniteCapacityResult Solve(int servers, int capacity, double arrivalsPerHour, double meanServiceHours, double serviceScv,
+        ServiceDistribution? serviceShape)
     {
+        if (!(serviceScv >= 0.0) || serviceScv > GgcFormulas.MaximumScv)
+        {
+            throw new ArgumentOutOfRangeException(nameof(serviceScv), serviceScv, "A squared coefficient of variation is between 0 and 1e6.");
+        }
+
         ArgumentOutOfRangeException.ThrowIfLessThan(servers, 1);
         ArgumentOutOfRangeException.ThrowIfLessThan(capacity, servers);
         if (!double.IsFinite(arrivalsPerHour) || arrivalsPerHour < 0.0)
@@ -54,15 +81,21 @@ public static class FiniteCapacityFormulas
             throw new ArgumentOutOfRangeException(nameof(arrivalsPerHour), arrivalsPerHour, "The offered load λ/μ must be finite.");
         }
 
-        string method = capacity == servers ? ErlangLossMethod : MarkovianMethod;
+        bool exponential = serviceScv == 1.0;
+        string method = capacity == servers ? ErlangLossMethod : exponential ? MarkovianMethod : TwoMomentMethod;
         if (offeredLoad == 0.0)
         {
             return new FiniteCapacityResult(0.0, 0.0, 0.0, 0.0, 0.0, 0.0, 0.0, 0.0, meanServiceHours, method);
         }
 
-        return capacity == servers
-            ? ErlangLoss(servers, arrivalsPerHour, meanServiceHours, offeredLoad)
-            : Markovian(servers, capacity, arrivalsPerHour, meanServiceHours, offeredLoad);
+        if (capacity == servers)
+        {
+            return ErlangLoss(servers, arrivalsPerHour, meanServiceHours, offeredLoad);
+        }
+
+        return exponential
+            ? Markovian(servers, capacity, arrivalsPerHour, meanServiceHours, offeredLoad)
+            : TwoMomentFiniteCapacity.Solve(servers, capacity, arrivalsPerHour, meanServiceHours, offeredLoad, serviceScv, serviceShape);
     }
 
     private static FiniteCapacityResult ErlangLoss(int servers, double arrivalsPerHour, double meanServiceHours, double offeredLoad)

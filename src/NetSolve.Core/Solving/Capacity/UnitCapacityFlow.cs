@@ -18,4 +18,11 @@ public sealed record UnitCapacityFlow(
     double TurnedAwayPerHour,
     double DivertedPerHour,
     double DivertedInPerHour,
-    FiniteCapacityResult? Metrics);
+    FiniteCapacityResult? Metrics)
+{
+    /// <summary>Mean service (hours) of the patients offered to the unit: the mixture of the classes by their offered rates.</summary>
+    public double MeanServiceHours { get; init; }
+
+    /// <summary>Squared coefficient of variation of that mixture (1: exponential).</summary>
+    public double ServiceScv { get; init; } = 1.0;
+}
