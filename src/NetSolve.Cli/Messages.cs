@@ -143,6 +143,17 @@ internal static class Messages
     public static string NotCost(string text, double max) =>
         Invariant($"--cost: '{text}' is not UNIT=COST with a cost above 0 and at most {max:0} (write e.g. --cost ward=2.5)");
 
+    /// <summary><c>--target</c> not in the form of a target.</summary>
+    public static string NotTarget(string text, string problem) =>
+        $"--target: '{text}' {problem} (write e.g. --target 'emergency: mean_wait <= 15min' or --target 'wait_over 4h <= 5%')";
+
+    /// <summary><c>--target</c>: turned_away at a unit that is never full.</summary>
+    public static string TargetNeedsCapacity(string text, string unit) =>
+        $"{Program}--target {text}: unit '{unit}' has no capacity, so it is never full; turned_away needs 'capacity'";
+
+    /// <summary><c>staff --only</c> naming no unit.</summary>
+    public const string StaffOnlyEmpty = "--only: give unit ids separated by commas (e.g. --only emergency,imaging)";
+
     /// <summary><c>staff --budget</c>: the servers cannot be placed.</summary>
     public static string BudgetImpossible(string why) => $"{Program}staff: {why}";
 
