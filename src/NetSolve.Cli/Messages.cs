@@ -131,10 +131,10 @@ internal static class Messages
     public static string PathwayProblem(string problem) => $"{Program}pathway: {problem}";
 
     /// <summary><c>staff</c> with no question.</summary>
-    public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, --wait-over with --at-most, or --max-turned-away) or --budget N";
+    public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, --wait-over with --at-most, --max-turned-away or --target), a 'targets' section in the file, or --budget N";
 
     /// <summary><c>staff --budget</c> mixed with targets.</summary>
-    public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --cost";
+    public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --only (--cost weighs its servers)";
 
     /// <summary><c>staff</c>: the two halves of the wait-tail target.</summary>
     public const string StaffWaitTailPair = "staff: --wait-over and --at-most go together (e.g. --wait-over 4h --at-most 5%)";
