@@ -66,8 +66,8 @@ internal sealed partial class NetworkFileParser
             return null;
         }
 
-        var fields = Fields(mapping, TargetFieldKeys, unitId);
         int errors = Diagnostics.Count(d => d.IsError);
+        var fields = Fields(mapping, TargetFieldKeys, unitId);
         double? Duration(string key) => fields.TryGetValue(key, out var field) ? Value(field, unitId, where + "." + key, text => DurationValue.Parse(text, timeUnit)) : null;
         double? wait = Duration(TargetKeys.Of(TargetKind.MeanWait));
         double? time = Duration(TargetKeys.Of(TargetKind.MeanTimeInUnit));
