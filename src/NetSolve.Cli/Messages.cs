@@ -145,11 +145,11 @@ internal static class Messages
 
     /// <summary><c>--target</c> not in the form of a target.</summary>
     public static string NotTarget(string text, string problem) =>
-        $"--target: '{text}' {problem} (write e.g. --target 'emergency: mean_wait <= 15min' or --target 'wait_over 4h <= 5%')";
+        $"--target: '{SafeText.ForDisplay(text)}' {SafeText.ForDisplay(problem)} (write e.g. --target 'emergency: mean_wait <= 15min' or --target 'wait_over 4h <= 5%')";
 
     /// <summary><c>--target</c>: turned_away at a unit that is never full.</summary>
     public static string TargetNeedsCapacity(string text, string unit) =>
-        $"{Program}--target {text}: unit '{unit}' has no capacity, so it is never full; turned_away needs 'capacity'";
+        $"{Program}--target {SafeText.ForDisplay(text)}: unit '{unit}' has no capacity, so it is never full; turned_away needs 'capacity'";
 
     /// <summary><c>staff --only</c> naming no unit.</summary>
     public const string StaffOnlyEmpty = "--only: give unit ids separated by commas (e.g. --only emergency,imaging)";

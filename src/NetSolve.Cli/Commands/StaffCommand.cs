@@ -3,6 +3,7 @@ using System.CommandLine.Parsing;
 using NetSolve.Analysis;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Staffing;
 using NetSolve.Cli.Settings;
 using NetSolve.Parsing;
@@ -166,7 +167,7 @@ internal sealed class StaffCommand() : NetworkCommand(
 
         var ids = network.Units.Select(unit => unit.Id).ToList();
         var problems = Ids(list).Where(id => !ids.Contains(id, StringComparer.Ordinal))
-            .Select(id => Messages.UnknownUnit("--only", list, id, NearestName.Hint(id, ids))).ToList();
+            .Select(id => Messages.UnknownUnit("--only", SafeText.ForDisplay(list), SafeText.ForDisplay(id), NearestName.Hint(id, ids))).ToList();
         return problems.Count == 0 ? Ids(list).ToHashSet(StringComparer.Ordinal) : throw new InputException(string.Join("\n", problems));
     }
 

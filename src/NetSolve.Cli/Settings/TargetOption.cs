@@ -1,6 +1,7 @@
 using System.CommandLine;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Cli.Settings;
 
@@ -52,7 +53,7 @@ internal static class TargetOption
             var given = target.ToTargets(network.TimeUnit);
             if (target.UnitId is string id && !ids.Contains(id, StringComparer.Ordinal))
             {
-                problems.Add(Messages.UnknownUnit("--target", text, id, NearestName.Hint(id, ids)));
+                problems.Add(Messages.UnknownUnit("--target", SafeText.ForDisplay(text), id, NearestName.Hint(id, ids)));
                 continue;
             }
 
