@@ -134,10 +134,10 @@ internal static class Messages
     public static string PathwayProblem(string problem) => $"{Program}pathway: {Q(problem)}";
 
     /// <summary><c>staff</c> with no question.</summary>
-    public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, --wait-over with --at-most, or --max-turned-away) or --budget N";
+    public const string StaffNeedsTarget = "staff: give a target (--max-util, --max-wait, --max-time, --wait-over with --at-most, --max-turned-away or --target), a 'targets' section in the file, or --budget N";
 
     /// <summary><c>staff --budget</c> mixed with targets.</summary>
-    public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --cost";
+    public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --only (--cost weighs its servers)";
 
     /// <summary><c>staff</c>: the two halves of the wait-tail target.</summary>
     public const string StaffWaitTailPair = "staff: --wait-over and --at-most go together (e.g. --wait-over 4h --at-most 5%)";
@@ -145,6 +145,17 @@ internal static class Messages
     /// <summary><c>staff --cost</c> not in the form UNIT=COST.</summary>
     public static string NotCost(string text, double max) =>
         Invariant($"--cost: '{Q(text)}' is not UNIT=COST with a cost above 0 and at most {max:0} (write e.g. --cost ward=2.5)");
+
+    /// <summary><c>--target</c> not in the form of a target.</summary>
+    public static string NotTarget(string text, string problem) =>
+        $"--target: '{SafeText.ForDisplay(text)}' {SafeText.ForDisplay(problem)} (write e.g. --target 'emergency: mean_wait <= 15min' or --target 'wait_over 4h <= 5%')";
+
+    /// <summary><c>--target</c>: turned_away at a unit that is never full.</summary>
+    public static string TargetNeedsCapacity(string text, string unit) =>
+        $"{Program}--target {SafeText.ForDisplay(text)}: unit '{unit}' has no capacity, so it is never full; turned_away needs 'capacity'";
+
+    /// <summary><c>staff --only</c> naming no unit.</summary>
+    public const string StaffOnlyEmpty = "--only: give unit ids separated by commas (e.g. --only emergency,imaging)";
 
     /// <summary><c>staff --budget</c>: the servers cannot be placed.</summary>
     public static string BudgetImpossible(string why) => $"{Program}staff: {Q(why)}";

@@ -20,11 +20,13 @@ internal sealed class MapCommand() : NetworkCommand(
 
     protected override string? FormatDescription => null;
 
-    protected override IEnumerable<Symbol> Symbols => [_output, _direction];
+    private readonly Option<string[]> _target = TargetOption.Create("A unit that misses one is marked on its box.");
+
+    protected override IEnumerable<Symbol> Symbols => [_output, _direction, _target];
 
     protected override int Execute(NetworkRequest request)
     {
-        var solution = request.Solve();
+        var solution = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
         var layout = MapLayoutBuilder.Build(solution, request.GetValue(_direction) == "right" ? MapDirection.LeftToRight : MapDirection.TopToBottom);
         string target = request.GetValue(_output)!;
         byte[] content = Path.GetExtension(target).ToLowerInvariant() switch

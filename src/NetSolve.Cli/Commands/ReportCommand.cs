@@ -57,7 +57,9 @@ internal sealed class ReportCommand() : NetworkCommand(
 
     protected override string? FormatDescription => null;
 
-    protected override IEnumerable<Symbol> Symbols => [_scenarios, _output, _simulate, _seed, _replications, _warmup, _duration, _allowLong];
+    private readonly Option<string[]> _target = TargetOption.Create("The finding names the units that miss one.");
+
+    protected override IEnumerable<Symbol> Symbols => [_scenarios, _output, _simulate, _seed, _replications, _warmup, _duration, _allowLong, _target];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -74,7 +76,7 @@ internal sealed class ReportCommand() : NetworkCommand(
 
     protected override int Execute(NetworkRequest request)
     {
-        var baseline = request.Solve();
+        var baseline = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
         var loader = new ScenarioLoader(request.Warnings);
         var alternatives = (request.GetValue(_scenarios) ?? [])
             .Select(loader.Load)

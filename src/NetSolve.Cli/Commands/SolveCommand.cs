@@ -1,3 +1,5 @@
+using System.CommandLine;
+using NetSolve.Cli.Settings;
 using NetSolve.Presentation.Solution;
 
 namespace NetSolve.Cli.Commands;
@@ -6,9 +8,13 @@ namespace NetSolve.Cli.Commands;
 internal sealed class SolveCommand() : NetworkCommand(
     "solve", "Solve the network: load, utilisation, waits and headroom of every unit, bottleneck and network totals.")
 {
+    private readonly Option<string[]> _target = TargetOption.Create("A missed target is named beside the unit's status.");
+
+    protected override IEnumerable<Symbol> Symbols => [_target];
+
     protected override int Execute(NetworkRequest request)
     {
-        var solution = request.Solve();
+        var solution = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
         request.Output.Write(
             json => SolutionJsonWriter.Write(solution, json),
             csv => SolutionCsvWriter.Write(solution, csv),

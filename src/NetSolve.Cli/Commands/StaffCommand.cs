@@ -3,6 +3,7 @@ using System.CommandLine.Parsing;
 using NetSolve.Analysis;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Staffing;
 using NetSolve.Cli.Settings;
 using NetSolve.Parsing;
@@ -54,12 +55,20 @@ internal sealed class StaffCommand() : NetworkCommand(
         CustomParser = ReadCosts,
     };
 
+    private readonly Option<string[]> _target = TargetOption.Create("Set over the file's targets; staff meets every unit's own targets beside the options above.");
+
+    private readonly Option<string> _only = new("--only")
+    {
+        Description = "Change only these units (ids separated by commas); the others keep their servers and are not checked.",
+        HelpName = "UNIT,UNIT",
+    };
+
     private readonly Option<int?> _budget = SettingOptions.OptionalWholeNumber(
-        "--budget", 0, SettingLimits.MaxBudget, "Instead of targets: place this many extra servers where they cut the mean time in network most.", "N");
+        "--budget", 0, SettingLimits.MaxBudget, "Instead of targets: place this many extra servers where they cut the mean time in network most; with --cost, N is the most they may cost in all (solved exactly).", "N");
 
     protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
 
-    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _cost, _budget];
+    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -69,26 +78,28 @@ internal sealed class StaffCommand() : NetworkCommand(
             yield return Messages.StaffWaitTailPair;
         }
 
-        bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost || settings.IsGiven(_maxTurnedAway);
-        if (settings.IsGiven(_budget))
+        bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost || settings.IsGiven(_maxTurnedAway)
+            || settings.IsGiven(_target);
+        if (settings.IsGiven(_budget) && (targets || settings.IsGiven(_only)))
         {
-            if (targets || settings.IsGiven(_cost))
-            {
-                yield return Messages.StaffBudgetAlone;
-            }
+            yield return Messages.StaffBudgetAlone;
         }
-        else if (!targets)
+
+        if (settings.IsGiven(_only) && settings.TryGetValue(_only, out string? only) && Ids(only).Length == 0)
         {
-            yield return Messages.StaffNeedsTarget;
+            yield return Messages.StaffOnlyEmpty;
         }
     }
+
+    private static string[] Ids(string? list) => list is null ? [] : list.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries);
 
     protected override int Execute(NetworkRequest request)
     {
         var network = request.Network;
         if (request.GetValue(_budget) is int servers)
         {
-            var plan = BudgetAllocation.Allocate(request.Solve(), servers);
+            var costs = Costs(network, request.GetValue(_cost) ?? []);
+            var plan = costs.Count == 0 ? BudgetAllocation.Allocate(request.Solve(), servers) : CostedBudgetAllocation.Allocate(request.Solve(), servers, costs);
             if (plan.Impossible is not null)
             {
                 throw new InputException(Messages.BudgetImpossible(plan.Impossible));
@@ -98,9 +109,16 @@ internal sealed class StaffCommand() : NetworkCommand(
             return ExitCodes.Success;
         }
 
+        network = TargetOption.Apply(network, request.GetValue(_target));
         var targets = Targets(request, network.TimeUnit);
-        var costs = Costs(network, request.GetValue(_cost) ?? []);
-        var staffing = StaffingSearch.MeetTargets(request.Solve(), targets, costs);
+        if (targets.IsEmpty && network.Units.All(unit => unit.Targets is not { IsEmpty: false }))
+        {
+            throw new UsageException(Messages.StaffNeedsTarget);
+        }
+
+        var unitCosts = Costs(network, request.GetValue(_cost) ?? []);
+        var only = Only(network, request.GetValue(_only));
+        var staffing = StaffingSearch.MeetTargets((request with { Network = network }).Solve(), targets, unitCosts, only);
         if (!staffing.IsFeasible)
         {
             throw new InputException(string.Join("\n", staffing.Units.Where(unit => unit.Impossible is not null)
@@ -137,6 +155,20 @@ internal sealed class StaffCommand() : NetworkCommand(
 
         var tail = over is double t && request.GetValue(_atMost) is double probability ? new WaitTailTarget(t, probability) : null;
         return new StaffingTargets(request.GetValue(_maxUtil), maxWait, maxTime, tail, request.GetValue(_maxTurnedAway));
+    }
+
+    /// <summary>The units of <c>--only</c>; null when not given. An id the network lacks is invalid input, every one named.</summary>
+    private static HashSet<string>? Only(Network network, string? list)
+    {
+        if (list is null)
+        {
+            return null;
+        }
+
+        var ids = network.Units.Select(unit => unit.Id).ToList();
+        var problems = Ids(list).Where(id => !ids.Contains(id, StringComparer.Ordinal))
+            .Select(id => Messages.UnknownUnit("--only", SafeText.ForDisplay(list), SafeText.ForDisplay(id), NearestName.Hint(id, ids))).ToList();
+        return problems.Count == 0 ? Ids(list).ToHashSet(StringComparer.Ordinal) : throw new InputException(string.Join("\n", problems));
     }
 
     private static string[] ReadCosts(ArgumentResult result)

@@ -103,7 +103,7 @@ public static class BudgetAllocation
     private static double Gain(UnitResult result, int servers) =>
         servers + 1 > Servers.MaxCount ? 0.0 : MeanQueue(result, servers) - MeanQueue(result, servers + 1);
 
-    private static double MeanQueue(UnitResult result, int servers)
+    internal static double MeanQueue(UnitResult result, int servers)
     {
         if (result.ArrivalScv == 1.0 && result.ServiceScv == 1.0)
         {

@@ -11,6 +11,9 @@ namespace NetSolve.Analysis;
 /// <param name="Impossible">Why the budget is not enough, or null.</param>
 public sealed record BudgetPlan(int Budget, ImmutableArray<UnitAllocation> Units, NetworkSolution Before, NetworkSolution? After, string? Impossible)
 {
-    /// <summary>Servers placed (the whole budget when feasible).</summary>
+    /// <summary>With costs per server: the cost of the servers placed (at most <see cref="Budget"/>); null when every server costs 1.</summary>
+    public double? Spent { get; init; }
+
+    /// <summary>Servers placed (the whole budget when feasible and every server costs 1).</summary>
     public int Placed => Units.Sum(unit => unit.Added);
 }

@@ -51,7 +51,19 @@ public static class StaffingSearch
     /// <param name="solution">The network solved as given.</param>
     /// <param name="targets">What every unit must meet.</param>
     /// <param name="costPerServer">Optional weight of one server per unit id (default 1); every id must name a unit.</param>
-    public static StaffingPlan MeetTargets(NetworkSolution solution, StaffingTargets targets, IReadOnlyDictionary<string, double>? costPerServer = null)
+    public static StaffingPlan MeetTargets(NetworkSolution solution, StaffingTargets targets, IReadOnlyDictionary<string, double>? costPerServer = null) =>
+        MeetTargets(solution, targets, costPerServer, only: null);
+
+    /// <summary>
+    /// Searches the units of <paramref name="solution"/>'s network named in <paramref name="only"/> (every unit when
+    /// null), each against <paramref name="targets"/> and its own (<see cref="StaffingTargets.For"/>); the others keep
+    /// their servers and are not checked.
+    /// </summary>
+    /// <param name="solution">The network solved as given.</param>
+    /// <param name="targets">What every searched unit must meet, beside its own targets.</param>
+    /// <param name="costPerServer">Optional weight of one server per unit id (default 1); every id must name a unit.</param>
+    /// <param name="only">The unit ids that may take servers; null for all. Every id must name a unit.</param>
+    public static StaffingPlan MeetTargets(NetworkSolution solution, StaffingTargets targets, IReadOnlyDictionary<string, double>? costPerServer, IReadOnlySet<string>? only)
     {
         ArgumentNullException.ThrowIfNull(solution);
         ArgumentNullException.ThrowIfNull(targets);
@@ -59,6 +71,11 @@ public static class StaffingSearch
         if (costPerServer?.Keys.FirstOrDefault(id => !network.Units.Any(unit => unit.Id == id)) is string unknown)
         {
             throw new ArgumentException($"No unit '{unknown}' in the network.", nameof(costPerServer));
+        }
+
+        if (only?.FirstOrDefault(id => !network.Units.Any(unit => unit.Id == id)) is string missing)
+        {
+            throw new ArgumentException($"No unit '{missing}' in the network.", nameof(only));
         }
 
         var inputs = SolverInputs.Of(network, network.Groups.IsEmpty ? null : GroupTraffic.Solve(network));
@@ -75,7 +92,13 @@ public static class StaffingSearch
             {
                 var unit = network.Units[i];
                 double cost = costPerServer?.GetValueOrDefault(unit.Id, 1.0) ?? 1.0;
-                int? required = Required(searched.Units[i], inputs.MeanServiceHours[i], floor[i], targets, network.TimeUnit, out string? impossible);
+                if (only is not null && !only.Contains(unit.Id))
+                {
+                    answers[i] = new UnitStaffing(unit.Id, floor[i], floor[i], cost, null);
+                    continue;
+                }
+
+                int? required = Required(searched.Units[i], inputs.MeanServiceHours[i], floor[i], targets.For(unit), network.TimeUnit, out string? impossible);
                 answers[i] = new UnitStaffing(unit.Id, unit.Servers.IsUnlimited ? null : unit.Servers.Count, required, cost, impossible);
                 changed |= required is int r && r != floor[i];
                 floor[i] = required ?? floor[i];

@@ -34,6 +34,9 @@ public sealed record Unit(string Id, string Label, Servers Servers, double MeanS
     /// <summary>What happens to a patient arriving when the unit holds <see cref="Capacity"/> patients.</summary>
     public WhenFull WhenFull { get; init; } = WhenFull.TurnAway;
 
+    /// <summary>What the unit is expected to meet (the file's <c>targets</c> section); null when nothing is set.</summary>
+    public UnitTargets? Targets { get; init; }
+
     /// <summary>The distribution the simulator uses: <see cref="Service"/>, or the v1 meaning of mean and cv.</summary>
     public ServiceDistribution EffectiveService => Service ?? ServiceDistribution.FromMeanAndCv(MeanServiceHours, ServiceCv);
 

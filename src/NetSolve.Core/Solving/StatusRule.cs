@@ -9,7 +9,9 @@ public static class StatusRule
     /// <summary>
     /// Marks as bottleneck the stable unit(s) with finite servers and the smallest headroom (ties within a
     /// relative <see cref="Tolerances.HeadroomTie"/>), even when another unit is unstable; then strained where
-    /// utilisation reaches <paramref name="strainThreshold"/>.
+    /// utilisation reaches <paramref name="strainThreshold"/>. Beside the status, each unit carries the targets it
+    /// misses (<see cref="TargetCheck"/>): the status word keeps its meaning (headroom and strain), and a missed target
+    /// is shown next to it, so a unit can be "ok" by load and still miss its wait target.
     /// </summary>
     public static ImmutableArray<UnitResult> Apply(IReadOnlyList<UnitResult> units, double strainThreshold)
     {
@@ -26,7 +28,8 @@ public static class StatusRule
         var builder = ImmutableArray.CreateBuilder<UnitResult>(units.Count);
         foreach (var unit in units)
         {
-            builder.Add(unit with { Status = StatusOf(unit, smallest, strainThreshold) });
+            var ranked = unit with { Status = StatusOf(unit, smallest, strainThreshold) };
+            builder.Add(ranked with { TargetsBreached = TargetCheck.Breached(ranked) });
         }
 
         return builder.MoveToImmutable();

@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using NetSolve.Model;
 
 namespace NetSolve.Solving;
@@ -59,6 +60,9 @@ public sealed record UnitResult
 
     /// <summary>Status under the contract's rules.</summary>
     public required UnitStatus Status { get; init; }
+
+    /// <summary>The unit's targets (<see cref="Unit.Targets"/>) it misses, in <see cref="TargetKind"/> order; empty when none is set or all are met.</summary>
+    public ImmutableArray<TargetKind> TargetsBreached { get; init; } = [];
 
     /// <summary>True when utilisation is below 1 (always for unlimited servers).</summary>
     public bool IsStable => Status != UnitStatus.Unstable;

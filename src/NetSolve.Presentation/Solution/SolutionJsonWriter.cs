@@ -1,6 +1,7 @@
 using System.Text.Json;
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Metrics;
 using NetSolve.Solving;
 
 namespace NetSolve.Presentation.Solution;
@@ -25,7 +26,7 @@ public static class SolutionJsonWriter
         json.WriteString("network", solution.Network.Name);
         json.WriteString("time_unit", TimeConstants.Name(solution.Network.TimeUnit));
         json.WriteBoolean("stable", solution.IsStable);
-        JsonTableWriter.WriteArray(UnitColumns.Table(solution), "units", json);
+        WriteUnits(solution, json);
         var totals = TotalsColumns.Table(solution);
         json.WritePropertyName("totals");
         JsonTableWriter.WriteObject(totals, totals.Rows[0], json);
@@ -36,5 +37,44 @@ public static class SolutionJsonWriter
 
         json.WriteEndObject();
         json.Flush();
+    }
+
+    /// <summary>The units array; <c>targets_breached</c>, present only when some unit has a target, is an array of keys.</summary>
+    private static void WriteUnits(NetworkSolution solution, Utf8JsonWriter json)
+    {
+        var table = UnitColumns.Table(solution);
+        if (!TargetWords.AnyTargets(solution))
+        {
+            JsonTableWriter.WriteArray(table, "units", json);
+            return;
+        }
+
+        json.WriteStartArray("units");
+        for (int row = 0; row < table.Rows.Length; row++)
+        {
+            json.WriteStartObject();
+            foreach (int i in table.ColumnsFor(Audience.Machines))
+            {
+                string id = table.Columns[i].Id;
+                if (id == UnitColumns.TargetsBreached.Id)
+                {
+                    json.WriteStartArray(id);
+                    foreach (var kind in solution.Units[row].TargetsBreached)
+                    {
+                        json.WriteStringValue(TargetKeys.Of(kind));
+                    }
+
+                    json.WriteEndArray();
+                }
+                else
+                {
+                    JsonTableWriter.WriteCell(json, id, table.Rows[row][i], table.TimeUnit);
+                }
+            }
+
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
     }
 }

@@ -23,6 +23,10 @@ public static class SolutionTableWriter
         output.Write("\n" + Totals(solution) + "\n");
         output.Write(Methods(solution) + "\n");
         output.Write(Finding(solution) + "\n");
+        if (TargetWords.Finding(solution) is string targets)
+        {
+            output.Write(targets + "\n");
+        }
     }
 
     /// <summary>What every table for people says in its title: the rates' time unit and the strain threshold.</summary>

@@ -53,6 +53,12 @@ public static class UnitColumns
     /// <summary>The contract's status word.</summary>
     public static readonly Column<UnitResult> Status = new("status", "status", MetricDimension.Plain, result => StatusWords.Cell(result.Status));
 
+    /// <summary>
+    /// The unit's targets it misses, beside the status (docs/network-file.md, "Targets"): shown only when some unit has a
+    /// target, so outputs without targets keep their columns; JSON writes it as an array of keys.
+    /// </summary>
+    public static readonly Column<UnitResult> TargetsBreached = new("targets_breached", "targets", MetricDimension.Plain, TargetWords.Cell);
+
     /// <summary>The method the unit's metrics come from; people read it in the line under the table (SolutionTableWriter.Methods).</summary>
     public static readonly Column<UnitResult> Method = Columns.Words<UnitResult>("method", "method", result => result.Method, Audience.Machines);
 
@@ -87,6 +93,11 @@ public static class UnitColumns
         ArgumentNullException.ThrowIfNull(solution);
         bool anyCapacity = solution.Network.Units.Any(unit => unit.Capacity is not null);
         var columns = anyCapacity ? All : All.Select(column => CapacityColumns.Contains(column) ? column with { Audience = Audience.Machines } : column);
+        if (TargetWords.AnyTargets(solution))
+        {
+            columns = columns.SelectMany(column => column == Status ? [column, TargetsBreached] : new[] { column });
+        }
+
         return ResultTable.Build(columns, solution.Units, solution.Network.TimeUnit);
     }
 }

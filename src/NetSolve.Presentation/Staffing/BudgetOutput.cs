@@ -34,6 +34,14 @@ public static class BudgetOutput
 
         output.Write($"mean time in network {Show(BudgetTotalsColumns.MeanTimeInSystemBefore)} -> {Show(BudgetTotalsColumns.MeanTimeInSystemAfter)}; "
             + $"patients in network {Show(BudgetTotalsColumns.MeanInSystemBefore)} -> {Show(BudgetTotalsColumns.MeanInSystemAfter)}\n");
+        if (plan.Spent is double spent && plan.Units.Select(unit => unit.UnitId).Any())
+        {
+            output.Write($"cost of the servers placed {PeopleFormat.Number(spent)} of a budget of {Show(BudgetTotalsColumns.Budget)}\n");
+            output.Write("Placed exactly by dynamic programming over the budget (Bellman 1957): with servers of different costs the mean number of "
+                + "patients present is minimised unit by unit over every way to spend the budget; each unit's term is decreasing and convex in its servers.\n");
+            return;
+        }
+
         output.Write("Placed one server at a time where the mean number of patients present falls most (marginal analysis). This is optimal: "
             + "the mean number present in an M/M/c unit is decreasing and convex in its servers (Dyer & Proll 1977, Management Science 23).\n");
     }
@@ -48,6 +56,11 @@ public static class BudgetOutput
         json.WriteString("time_unit", TimeConstants.Name(plan.Before.Network.TimeUnit));
         var totals = BudgetTotalsColumns.Table(plan);
         JsonTableWriter.WriteFields(totals, totals.Rows[0], json);
+        if (plan.Spent is double spent)
+        {
+            JsonTableWriter.WriteNumber(json, "spent", spent);
+        }
+
         JsonTableWriter.WriteArray(BudgetColumns.Table(plan, BudgetColumns.All), "units", json);
         json.WriteEndObject();
         json.Flush();

@@ -57,7 +57,7 @@ public static class StaffingOutput
         ArgumentNullException.ThrowIfNull(output);
         var timeUnit = plan.Before.Network.TimeUnit;
         string Show(Column<StaffingPlan> total) => PeopleFormat.Cell(total.Read(plan), timeUnit);
-        output.Write($"{plan.Before.Network.Name}: fewest added servers so that every unit is {Describe(plan.Targets, timeUnit)}  (rates per {TimeConstants.Name(timeUnit)})\n\n");
+        output.Write($"{plan.Before.Network.Name}: fewest added servers so that every unit is {Describe(plan.Targets, timeUnit)}{(plan.Before.Network.Units.Any(unit => unit.Targets is { IsEmpty: false }) ? " and meets its own targets" : string.Empty)}  (rates per {TimeConstants.Name(timeUnit)})\n\n");
         bool limited = plan.Before.Network.Units.Any(unit => unit.Capacity is not null);
         PeopleTableWriter.Write(StaffingColumns.Table(plan, limited ? StaffingColumns.WithCapacity : StaffingColumns.All), output);
         output.Write("\n");

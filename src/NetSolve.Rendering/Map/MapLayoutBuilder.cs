@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
+using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
 using NetSolve.Solving;
 using Microsoft.Msagl.Core.Geometry.Curves;
@@ -238,6 +239,9 @@ public static class MapLayoutBuilder
         double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
         double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
         string? fullLabel = UnitBoxText.IsShortened(result.Unit.Label) ? SafeText.ForDisplay(result.Unit.Label) : null;
-        return new MapNode(SafeText.ForDisplay(result.Unit.Id), 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null, null, fullLabel);
+        return new MapNode(SafeText.ForDisplay(result.Unit.Id), 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null, null, fullLabel)
+        {
+            TargetsMissed = result.TargetsBreached.IsEmpty ? null : TargetWords.Breached(result),
+        };
     }
 }

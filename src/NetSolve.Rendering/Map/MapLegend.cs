@@ -15,6 +15,11 @@ internal static class MapLegend
         string title = ShownTitle(layout);
         double titleWidth = TextWidth.Of(title, SvgMapWriter.TitleFontSize, bold: true);
         var items = Items(layout.TimeUnit, layout.Edges.Any(edge => edge.Kind == MapEdgeKind.Diversion));
+        if (layout.Nodes.Any(node => node.TargetsMissed is not null))
+        {
+            items.Add(TextItem(TargetWords.BreachMarker + " missed: a unit target not met"));
+        }
+
         double widestItem = items.Max(item => item.Width);
         minWidth = Math.Max(titleWidth, widestItem) + (2.0 * margin);
         double available = Math.Max(layout.Width, minWidth) - (2.0 * margin);

@@ -28,6 +28,9 @@ public sealed record MapNode(
     MapStub? TurnedAway = null,
     string? FullLabel = null)
 {
+    /// <summary>The unit's targets it misses, as keys joined by ", " (<c>mean_wait</c>); null when it has none or meets them.</summary>
+    public string? TargetsMissed { get; init; }
+
     /// <summary>Right edge in map units.</summary>
     public double Right => Left + Width;
 

@@ -124,6 +124,11 @@ public static class SvgMapWriter
             new XAttribute("data-unit", node.UnitId),
             new XAttribute("data-status", StatusWords.Name(node.Status)),
             new XElement(Svg + "title", Tooltip(node)));
+        if (node.TargetsMissed is string missed)
+        {
+            group.Add(new XAttribute("data-targets-missed", missed));
+        }
+
         foreach (var (stub, kind) in new[] { (node.Arrival, "arrival"), (node.Exit, "exit"), (node.TurnedAway, "turned-away") })
         {
             if (stub is not null)

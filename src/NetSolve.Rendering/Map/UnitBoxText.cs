@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
+using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Solution;
 using NetSolve.Solving;
@@ -23,6 +24,11 @@ internal static class UnitBoxText
         }
 
         lines.Add(Detail(HarbourLightsPalette.Text(result.Status), bold: true));
+        if (!result.TargetsBreached.IsEmpty)
+        {
+            lines.Add(Detail(TargetMissed(result), bold: true));
+        }
+
         lines.Add(Detail(Servers(result, timeUnit), bold: false));
         if (!result.Unit.Servers.IsUnlimited)
         {
@@ -51,6 +57,9 @@ internal static class UnitBoxText
 
         return lines.ToImmutable();
     }
+
+    /// <summary>The mark beside the status of a unit that misses a target, naming the targets: <c>x missed: mean_wait</c>.</summary>
+    public static string TargetMissed(UnitResult result) => TargetWords.BreachMarker + " missed: " + TargetWords.Breached(result);
 
     /// <summary>The turned-away rate as the table shows it, with its unit: <c>turned away 0.02/h</c>.</summary>
     public static string TurnedAway(UnitResult result, TimeUnit timeUnit) =>

@@ -1,10 +1,11 @@
+using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Solution;
 using NetSolve.Solving;
 
 namespace NetSolve.Rendering.Report;
 
-/// <summary>The report's one-line finding: which unit saturates first, and at what growth in demand.</summary>
+/// <summary>The report's one-line finding: which unit saturates first, and at what growth in demand; then the targets missed, if any.</summary>
 public static class Finding
 {
     /// <summary>One sentence for <paramref name="solution"/>.</summary>
@@ -16,6 +17,28 @@ public static class Finding
     public static string Summarise(NetworkSolution solution)
     {
         ArgumentNullException.ThrowIfNull(solution);
+        return Targets(solution) is string targets ? Saturation(solution) + " " + targets : Saturation(solution);
+    }
+
+    /// <summary>
+    /// One sentence naming each unit that misses a target and which (<c>Critical care misses its mean_wait target.</c>);
+    /// null when no unit has targets or every target is met.
+    /// </summary>
+    public static string? Targets(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        var missed = solution.Units.Where(u => !u.TargetsBreached.IsEmpty).ToList();
+        if (missed.Count == 0)
+        {
+            return null;
+        }
+
+        string names = Join(missed.Select(u => u.Unit.Label + " (" + TargetWords.Breached(u) + ")"));
+        return missed.Count == 1 ? names + " misses its target." : names + " miss their targets.";
+    }
+
+    private static string Saturation(NetworkSolution solution)
+    {
         var timeUnit = solution.Network.TimeUnit;
         var unstable = solution.Units.Where(u => u.Status == UnitStatus.Unstable).ToList();
         if (unstable.Count > 0)

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using System.Text;
+using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Presentation.Solution;
@@ -33,7 +34,13 @@ internal static class UnitTable
     ];
 
     /// <summary>The table of <paramref name="solution"/>.</summary>
-    public static ResultTable Table(NetworkSolution solution) => ResultTable.Build(Columns, solution.Units, solution.Network.TimeUnit);
+    /// <remarks>With targets in the network, a "Targets" column beside the status names the missed ones.</remarks>
+    public static ResultTable Table(NetworkSolution solution) => ResultTable.Build(
+        TargetWords.AnyTargets(solution)
+            ? Columns.SelectMany(column => column.Id == UnitColumns.Status.Id ? [column, UnitColumns.TargetsBreached with { Header = "Targets" }] : new[] { column })
+            : Columns,
+        solution.Units,
+        solution.Network.TimeUnit);
 
     public static void Append(StringBuilder html, NetworkSolution solution)
     {

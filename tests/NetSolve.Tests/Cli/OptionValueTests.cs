@@ -25,7 +25,7 @@ public sealed class OptionValueTests
                 "netsolve: --max-util: '185%' is not a utilisation from 0 to 1 (write e.g. 0.85 or 85%)",
                 "netsolve: --max-wait: 'abc' is not a duration (write e.g. 30min, 4h, 2d; a bare number is in the file's time unit)",
                 "netsolve: --budget: '-1' is not a whole number from 0 to 1000000",
-                "netsolve: staff: --budget answers its own question; give it without targets or --cost",
+                "netsolve: staff: --budget answers its own question; give it without targets or --only (--cost weighs its servers)",
                 UsageHint,
             ],
             Lines(error));

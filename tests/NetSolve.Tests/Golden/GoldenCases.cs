@@ -102,6 +102,16 @@ internal static class GoldenCases
         yield return new GoldenCase("report.kestrel-general", "html", ["report", Network("kestrel-general")], "report.html");
         yield return new GoldenCase("report.larkspur-simulation.simulate", "html", ["report", Network("larkspur-simulation"), "--simulate", .. ShortSimulation], "report.html");
 
+        // Targets: the example with a targets section, staffed to them, and a budget weighed by cost.
+        foreach (var golden in Printed("solve.ashcombe-targets", "solve", Network("ashcombe-targets"))
+            .Concat(Printed("staff.ashcombe-targets", "staff", Network("ashcombe-targets")))
+            .Concat(Printed("staff.kestrel-general.budget-10-costs", "staff", Network("kestrel-general"), "--budget", "10", "--cost", "critical_care=3", "--cost", "emergency=1.5")))
+        {
+            yield return golden;
+        }
+
+        yield return new GoldenCase("map.ashcombe-targets", "svg", ["map", Network("ashcombe-targets")], "ashcombe-targets.svg");
+
         yield return new GoldenCase("fit.rowan-urgent-care", "yaml", ["fit", Log("rowan-urgent-care")], "rowan-urgent-care.yaml");
         yield return new GoldenCase("fit.rowan-urgent-care.minute", "yaml", ["fit", Log("rowan-urgent-care"), "--time-unit", "minute", "--name", "Rowan Urgent Care Centre"]);
     }

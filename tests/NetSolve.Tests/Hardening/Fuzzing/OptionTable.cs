@@ -34,6 +34,8 @@ internal static class OptionTable
         ["--max-turned-away"] = OptionKind.Fraction,
         ["--cost"] = OptionKind.UnitNumber,
         ["--budget"] = OptionKind.WholeNumber,
+        ["--target"] = OptionKind.Text,
+        ["--only"] = OptionKind.Unit,
         ["--seed"] = OptionKind.Seed,
         ["--replications"] = OptionKind.WholeNumber,
         ["--warmup"] = OptionKind.Duration,
