@@ -45,6 +45,12 @@ internal static class Messages
     /// <summary>A problem the solver found in a network that passed validation (for example traffic that cannot be solved).</summary>
     public static string SolverProblem(string message) => Program + message;
 
+    /// <summary>A first word that is no command; <paramref name="hint"/> is the nearest command ("; did you mean 'solve'?") or empty.</summary>
+    public static string UnknownCommand(string text, string hint) => $"unknown command '{text}'{hint}";
+
+    /// <summary>An option the command does not have; <paramref name="hint"/> is the nearest option or empty.</summary>
+    public static string UnknownOption(string option, string command, string hint) => $"{option}: unknown option for '{command}'{hint}";
+
     // Option values: one message per kind of value, each naming the option.
 
     /// <summary>A simulation whose estimated work is above the bound, refused unless asked for.</summary>

@@ -18,7 +18,7 @@ internal static class NetSolveApp
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)
             {
-                return Usage(parse.Errors.Select(error => error.Message), context);
+                return Usage(UnknownWords.Problems(parse, args), context);
             }
 
             return parse.Invoke(new InvocationConfiguration
