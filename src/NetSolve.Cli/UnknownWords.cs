@@ -13,47 +13,45 @@ namespace NetSolve.Cli;
 /// </remarks>
 internal static class UnknownWords
 {
-    /// <summary>The usage problems of <paramref name="parse"/>, one line each, with unknown words rewritten.</summary>
+    /// <summary>The usage problems of <paramref name="parse"/>, one line each, with unknown words rewritten; empty when there are none.</summary>
     public static IReadOnlyList<string> Problems(ParseResult parse, IReadOnlyList<string> args)
     {
         var unmatched = new HashSet<string>(parse.UnmatchedTokens, StringComparer.Ordinal);
         var command = parse.CommandResult.Command;
-        if (unmatched.Count == 0)
-        {
-            return parse.Errors.Select(error => error.Message).ToList();
-        }
-
         if (command is RootCommand && args.Count > 0 && !IsOptionLike(args[0]) && unmatched.Contains(args[0]))
         {
             return [Messages.UnknownCommand(args[0], NearestName.Hint(args[0], command.Subcommands.Select(sub => sub.Name)))];
         }
 
+        // An unknown option before FILE is taken for FILE, so look at every word, not only the unmatched ones.
+        var known = new HashSet<string>(OptionNames(parse), StringComparer.Ordinal);
         var named = new HashSet<string>(StringComparer.Ordinal);
         var problems = new List<string>();
         for (int i = 0; i < args.Count; i++)
         {
-            string word = args[i];
-            if (!IsOptionLike(word) || !unmatched.Contains(word) || !named.Add(word))
+            string option = args[i].Split('=', 2)[0];
+            if (!IsOptionLike(option) || known.Contains(option) || !named.Add(args[i]))
             {
                 continue;
             }
 
-            string option = word.Split('=', 2)[0];
-            problems.Add(Messages.UnknownOption(option, command.Name, NearestName.Hint(option, OptionNames(parse))));
-            if (i + 1 < args.Count && !IsOptionLike(args[i + 1]) && unmatched.Contains(args[i + 1]))
+            problems.Add(Messages.UnknownOption(option, command.Name, NearestName.Hint(option, known)));
+            if (i + 1 < args.Count && !IsOptionLike(args[i + 1]) && !args[i].Contains('=', StringComparison.Ordinal))
             {
                 named.Add(args[i + 1]); // the misspelt option's value
             }
         }
 
-        // The parser's other problems (a missing FILE, a bad value) stay; its lines about words named above go.
+        // The parser's other problems (a missing FILE, a bad value) stay; its lines about stray words go once an
+        // unknown option explains them.
         problems.AddRange(parse.Errors
             .Select(error => error.Message)
-            .Where(message => !named.Any(word => message.Contains(string.Concat("'", word, "'"), StringComparison.Ordinal))));
+            .Where(message => problems.Count == 0 || !unmatched.Any(word => message.Contains(string.Concat("'", word, "'"), StringComparison.Ordinal))));
         return problems;
     }
 
-    private static bool IsOptionLike(string word) => word.Length > 1 && word[0] == '-';
+    /// <summary>True for a word that looks like an option; a negative number is a value.</summary>
+    private static bool IsOptionLike(string word) => word.Length > 1 && word[0] == '-' && !char.IsAsciiDigit(word[1]) && word[1] != '.';
 
     /// <summary>Every name the matched command answers to: its options and the ones it inherits (<c>--verbose</c>, <c>--help</c>).</summary>
     private static IEnumerable<string> OptionNames(ParseResult parse)
