@@ -98,6 +98,10 @@ internal static class Messages
     public static string UnknownUnit(string option, string text, string id, string hint) =>
         $"{Program}{option} {text}: unknown unit '{id}'{hint}";
 
+    /// <summary>A time on the command line without a unit of time, read in the file's time unit.</summary>
+    public static string BareOptionNumber(string option, string text, double amount, string timeUnitName) =>
+        Invariant($"{Program}warning: {option} {text} has no unit of time, so it was read as {amount:0.###} {timeUnitName}s (the file's time_unit is {timeUnitName}); write e.g. {text}min or {text}h to say which");
+
     // Commands.
 
     /// <summary><c>check</c>: the file is valid.</summary>

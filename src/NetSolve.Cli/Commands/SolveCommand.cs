@@ -1,3 +1,4 @@
+using NetSolve.Analysis;
 using NetSolve.Presentation.Solution;
 
 namespace NetSolve.Cli.Commands;
@@ -9,6 +10,11 @@ internal sealed class SolveCommand() : NetworkCommand(
     protected override int Execute(NetworkRequest request)
     {
         var solution = request.Solve();
+        foreach (var warning in ReturnLoops.Warnings(request.Network, request.File))
+        {
+            request.Warnings.Report(warning.ToString());
+        }
+
         request.Output.Write(
             json => SolutionJsonWriter.Write(solution, json),
             csv => SolutionCsvWriter.Write(solution, csv),
