@@ -48,6 +48,12 @@ internal static class Messages
     /// <summary>A problem the solver found in a network that passed validation (for example traffic that cannot be solved).</summary>
     public static string SolverProblem(string message) => Program + Q(message);
 
+    /// <summary>A first word that is no command; <paramref name="hint"/> is the nearest command ("; did you mean 'solve'?") or empty.</summary>
+    public static string UnknownCommand(string text, string hint) => $"unknown command '{text}'{hint}";
+
+    /// <summary>An option the command does not have; <paramref name="hint"/> is the nearest option or empty.</summary>
+    public static string UnknownOption(string option, string command, string hint) => $"{option}: unknown option for '{command}'{hint}";
+
     // Option values: one message per kind of value, each naming the option.
 
     /// <summary>A simulation whose estimated work is above the bound, refused unless asked for.</summary>
@@ -94,6 +100,10 @@ internal static class Messages
     /// <summary>A unit named in an option that the network does not have.</summary>
     public static string UnknownUnit(string option, string text, string id, string hint) =>
         $"{Program}{option} {Q(text)}: unknown unit '{Q(id)}'{Q(hint)}";
+
+    /// <summary>A time on the command line without a unit of time, read in the file's time unit.</summary>
+    public static string BareOptionNumber(string option, string text, double amount, string timeUnitName) =>
+        Invariant($"{Program}warning: {option} {text} has no unit of time, so it was read as {amount:0.###} {timeUnitName}s (the file's time_unit is {timeUnitName}); write e.g. {text}min or {text}h to say which");
 
     // Commands.
 

@@ -16,9 +16,11 @@ internal static class NetSolveApp
         {
             var root = BuildRoot(context);
             var parse = root.Parse(args);
-            if (parse.Errors.Count > 0)
+            // An unknown option taken for FILE is no parse error: look for unknown words even then.
+            var problems = UnknownWords.Problems(parse, args);
+            if (problems.Count > 0)
             {
-                return Usage(parse.Errors.Select(error => error.Message), context);
+                return Usage(problems, context);
             }
 
             return parse.Invoke(new InvocationConfiguration

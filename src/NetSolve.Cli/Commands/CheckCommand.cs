@@ -1,3 +1,5 @@
+using NetSolve.Analysis;
+
 namespace NetSolve.Cli.Commands;
 
 /// <summary><c>netsolve check FILE</c>: validates a network (or scenario) file and shows its warnings, solving nothing.</summary>
@@ -11,6 +13,11 @@ internal sealed class CheckCommand() : NetworkCommand(
     protected override int Execute(NetworkRequest request)
     {
         var network = request.Network;
+        foreach (var warning in ReturnLoops.Warnings(request.Network, request.File))
+        {
+            request.Warnings.Report(warning.ToString());
+        }
+
         request.Context.Out.Write(Messages.Valid(request.File, network.Units.Length, network.Arrivals.Length, network.Routes.Length) + "\n");
         return ExitCodes.Success;
     }

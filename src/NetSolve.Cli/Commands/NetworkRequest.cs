@@ -1,4 +1,5 @@
 using System.CommandLine;
+using NetSolve.Analysis;
 using NetSolve.Cli.Output;
 using NetSolve.Model;
 using NetSolve.Solving;
@@ -27,7 +28,16 @@ internal sealed record NetworkRequest(
     ParseResult Parse)
 {
     /// <summary>Solves <see cref="Network"/> with <see cref="StrainThreshold"/>.</summary>
-    public NetworkSolution Solve() => NetworkSolver.Solve(Network, StrainThreshold);
+    public NetworkSolution Solve()
+    {
+        var solution = NetworkSolver.Solve(Network, StrainThreshold);
+        foreach (var warning in LoadPlausibility.Warnings(solution, File))
+        {
+            Warnings.Report(warning.ToString());
+        }
+
+        return solution;
+    }
 
     /// <summary>The value of one of the command's options (its default when not given).</summary>
     public T? GetValue<T>(Option<T> option) => Parse.GetValue(option);

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using NetSolve.Analysis;
 using NetSolve.Cli.Settings;
 using NetSolve.Presentation.Solution;
 
@@ -15,6 +16,11 @@ internal sealed class SolveCommand() : NetworkCommand(
     protected override int Execute(NetworkRequest request)
     {
         var solution = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
+        foreach (var warning in ReturnLoops.Warnings(request.Network, request.File))
+        {
+            request.Warnings.Report(warning.ToString());
+        }
+
         request.Output.Write(
             json => SolutionJsonWriter.Write(solution, json),
             csv => SolutionCsvWriter.Write(solution, csv),

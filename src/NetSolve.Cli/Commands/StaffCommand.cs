@@ -143,6 +143,10 @@ internal sealed class StaffCommand() : NetworkCommand(
             {
                 problems.Add(problem);
             }
+            else
+            {
+                BareOptionNumbers.Report(request.Warnings, option.Name, text, timeUnit);
+            }
 
             return hours;
         }

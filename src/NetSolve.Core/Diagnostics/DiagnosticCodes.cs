@@ -50,4 +50,13 @@ public static class DiagnosticCodes
 
     /// <summary>Warning: a key the formulas do not use.</summary>
     public const string IgnoredByFormulas = "NS0252";
+
+    /// <summary>Warning: return routes bring patients back to a unit so often that its routes apply several times per patient.</summary>
+    public const string ReturnLoop = "NS0253";
+
+    /// <summary>Warning: a service time or target written as a bare number, taken in the file's time unit.</summary>
+    public const string BareNumber = "NS0254";
+
+    /// <summary>Warning: a unit far above 100% utilisation, as a time written in the wrong unit makes it.</summary>
+    public const string ImplausibleLoad = "NS0255";
 }

@@ -24,7 +24,17 @@ public static class LocatedYamlReader
             throw new YamlReadException(Position(text, refused, fileName), InputCharacters.Describe(text, refused));
         }
 
-        var root = BlockYamlReader.TryRead(text, fileName, out var fast) ? fast : ReadWithYamlDotNet(text, fileName);
+        YamlNode? root;
+        try
+        {
+            root = BlockYamlReader.TryRead(text, fileName, out var fast) ? fast : ReadWithYamlDotNet(text, fileName);
+        }
+        catch (YamlReadException) when (IndentationTabs.Find(text) is int tab && tab >= 0)
+        {
+            // The library's position and words for an indenting tab mislead; name the tab itself and the fix.
+            throw new YamlReadException(Position(text, tab, fileName), IndentationTabs.Problem);
+        }
+
         RefuseTabs(root);
         return root;
     }

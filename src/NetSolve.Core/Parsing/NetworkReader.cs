@@ -44,6 +44,7 @@ public static class NetworkReader
         if (network is not null && !diagnostics.Any(d => d.IsError))
         {
             StructureRules.Check(network.Value.Network, network.Value.Locations, diagnostics);
+            BareNumbers.Check(root, network.Value.Network.TimeUnit, diagnostics);
         }
 
         var sorted = diagnostics

@@ -111,7 +111,7 @@ public sealed class OptionValueTests
     {
         // 5000 minutes is a short run; in a file measured in days it is 5000 days, past the ten-year limit.
         string path = Path.Combine(Path.GetTempPath(), $"netsolve-days-{Guid.NewGuid():N}.yaml");
-        File.WriteAllText(path, "time_unit: day\nunits:\n  ward:\n    servers: 10\n    service: 2\narrivals:\n  ward: 3\n");
+        File.WriteAllText(path, "time_unit: day\nunits:\n  ward:\n    servers: 10\n    service: 2d\narrivals:\n  ward: 3\n");
         try
         {
             var (code, output, error) = Run("simulate", path, "--duration", "5000");

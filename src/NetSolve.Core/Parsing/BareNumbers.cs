@@ -1,0 +1,68 @@
+using System.Globalization;
+using NetSolve.Diagnostics;
+using NetSolve.Model;
+using NetSolve.Parsing.Values;
+
+namespace NetSolve.Parsing;
+
+/// <summary>
+/// Warns about service times written as a bare number. A bare number is valid (it is in the file's time unit), but
+/// it is the commonest slip in a network file: <c>service: 25</c> meant as minutes in an hourly file is 25 hours, and
+/// the unit then shows thousands of percent. The warning names the unit, the place and the unit of time it was read in.
+/// </summary>
+/// <remarks>Runs on the YAML tree after a successful parse, so only values the reader accepted are looked at.</remarks>
+public static class BareNumbers
+{
+    /// <summary>True when <paramref name="text"/> is a positive number with no unit of time; <paramref name="amount"/> is that number.</summary>
+    public static bool IsBare(string text, out double amount)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        amount = 0.0;
+        return NumberText.Split(text, string.Empty, out string number, out string suffix) && suffix.Length == 0
+            && NumberText.IsNumber(number, out amount) && amount > 0.0;
+    }
+
+    /// <summary>Adds one warning per bare service number under <c>units</c> and under each group's <c>services</c>.</summary>
+    internal static void Check(YamlNode root, TimeUnit timeUnit, List<Diagnostic> diagnostics)
+    {
+        if (root is not YamlMapping top)
+        {
+            return;
+        }
+
+        foreach (var (unitId, unit) in Entries(Child(top, "units")))
+        {
+            Warn(Child(unit, "service"), unitId, null, timeUnit, diagnostics);
+        }
+
+        foreach (var (groupId, group) in Entries(Child(top, "groups")))
+        {
+            foreach (var (unitId, service) in Entries(Child(group, "services")))
+            {
+                Warn(Child(service, "service"), unitId, groupId, timeUnit, diagnostics);
+            }
+        }
+    }
+
+    private static void Warn(YamlNode? node, string unitId, string? groupId, TimeUnit timeUnit, List<Diagnostic> diagnostics)
+    {
+        if (node is not YamlScalar scalar || !IsBare(scalar.Value, out double amount))
+        {
+            return;
+        }
+
+        string number = scalar.Value.Trim();
+
+        string unitName = TimeConstants.Name(timeUnit);
+        string where = groupId is null ? "service" : string.Concat("service of group '", groupId, "'");
+        diagnostics.Add(Diagnostic.Warning(DiagnosticCodes.BareNumber, scalar.Location, unitId, string.Create(
+            CultureInfo.InvariantCulture,
+            $"{where} '{scalar.Value}' has no unit of time, so it was read as {amount:0.###} {unitName}s (the file's time_unit is {unitName}); write e.g. {number}min or {number}h to say which")));
+    }
+
+    private static YamlNode? Child(YamlNode? node, string key) =>
+        node is YamlMapping mapping ? mapping.Entries.FirstOrDefault(entry => entry.Key.Value == key).Value : null;
+
+    private static IEnumerable<(string Key, YamlNode Value)> Entries(YamlNode? node) =>
+        node is YamlMapping mapping ? mapping.Entries.Select(entry => (entry.Key.Value, entry.Value)) : [];
+}
