@@ -193,6 +193,10 @@ internal static class Messages
     /// <summary><c>map</c> written.</summary>
     public static string MapWritten(int units, string target) => Invariant($"map of {units} units written to {Q(target)}");
 
+    /// <summary><c>report</c>: <c>SOURCE_DATE_EPOCH</c> is set but is not a date the report can show.</summary>
+    public static string BadSourceDateEpoch(string value) =>
+        $"SOURCE_DATE_EPOCH: '{value}' is not a whole number of seconds since 1970-01-01 UTC between 0 and 253402300799";
+
     /// <summary><c>report</c> written.</summary>
     public static string ReportWritten(string target) => $"report written to {Q(target)}";
 

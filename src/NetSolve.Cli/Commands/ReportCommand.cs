@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.CommandLine.Parsing;
 using System.Text;
 using NetSolve.Cli.Settings;
+using NetSolve.Presentation.Scenarios;
 using NetSolve.Rendering.Report;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -77,11 +78,18 @@ internal sealed class ReportCommand() : NetworkCommand(
     protected override int Execute(NetworkRequest request)
     {
         var baseline = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
+        var provenance = ReportProvenanceReader.Read(request.File, request.GetValue(_scenarios) ?? []);
         var loader = new ScenarioLoader(request.Warnings);
         var alternatives = (request.GetValue(_scenarios) ?? [])
             .Select(loader.Load)
-            .Select(scenario => new ReportScenario(scenario.Name, NetworkSolver.Solve(scenario.Network, request.StrainThreshold)))
+            .Select(scenario => new ReportScenario(
+                scenario.Name,
+                NetworkSolver.Solve(scenario.Network, request.StrainThreshold),
+                ChangeWords.Describe(scenario.Changes, scenario.Network.TimeUnit)))
             .ToList();
+        // FILE read again as a scenario only for its list of changes (a network file has none); --set changes are in the name.
+        var own = loader.Load(request.File);
+        var baselineChanges = ChangeWords.Describe(own.Changes, own.Network.TimeUnit);
         SimulationResult? simulation = null;
         if (request.GetValue(_simulate))
         {
@@ -105,7 +113,7 @@ internal sealed class ReportCommand() : NetworkCommand(
             }
         }
 
-        string html = HtmlReport.Write(baseline, alternatives, simulation);
+        string html = HtmlReport.Write(baseline, alternatives, simulation, provenance, baselineChanges);
         string target = request.GetValue(_output)!;
         AtomicFile.Write(target, stream => stream.Write(new UTF8Encoding(false).GetBytes(html)));
         request.Context.Out.Write(Messages.ReportWritten(target) + "\n");

@@ -1,3 +1,5 @@
+using NetSolve.Model;
+using NetSolve.Presentation;
 using NetSolve.Presentation.Simulation;
 using System.CommandLine;
 using NetSolve.Cli.Settings;
@@ -41,6 +43,9 @@ internal sealed class SimulateCommand() : NetworkCommand(
 
     protected override bool ForSimulation => true;
 
+    /// <summary>The table ends with what was simulated and the simulation's own caution, not the formulas' assumptions.</summary>
+    protected override bool TableCarriesCaution => false;
+
     protected override IEnumerable<Symbol> Symbols => [_seed, _replications, _warmup, _duration, _precision, _maxReplications, _waitOver, _compare, _threads, _allowLong];
 
     protected override int Execute(NetworkRequest request)
@@ -79,7 +84,7 @@ internal sealed class SimulateCommand() : NetworkCommand(
         request.Output.Write(
             json => SimulationJsonWriter.Write(result, json, formula, threshold),
             csv => WriteCsv(result, formula, csv),
-            table => WriteTable(result, formula, threshold, table));
+            table => WriteTable(result, formula, threshold, table, network));
         return ExitCodes.Success;
     }
 
@@ -97,7 +102,7 @@ internal sealed class SimulateCommand() : NetworkCommand(
         }
     }
 
-    private static void WriteTable(SimulationResult result, NetworkSolution? formula, double threshold, TextWriter writer)
+    private static void WriteTable(SimulationResult result, NetworkSolution? formula, double threshold, TextWriter writer, Network network)
     {
         SimulationTableWriter.Write(result, writer, threshold);
         if (formula is not null)
@@ -105,5 +110,13 @@ internal sealed class SimulateCommand() : NetworkCommand(
             writer.Write("\n");
             ComparisonTableWriter.Write(result, formula, writer);
         }
+
+        writer.Write("\nModelled:\n");
+        foreach (string line in CautionForSimulation.Modelled(network))
+        {
+            writer.Write("  " + line + "\n");
+        }
+
+        writer.Write("\n" + CautionForSimulation.Text + "\n");
     }
 }

@@ -50,14 +50,16 @@ public static class DotMapWriter
         foreach (var edge in layout.Edges)
         {
             bool dashed = edge.Kind != MapEdgeKind.Forward;
-            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, dashed ? MapColours.FeedbackLine : MapColours.ForwardLine, dashed);
+            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, dashed ? MapColours.FeedbackLine : MapColours.ForwardLine, dashed, ranks: edge.Kind == MapEdgeKind.Forward);
         }
 
         dot.Append("}\n");
         return dot.ToString();
     }
 
-    private static void Edge(StringBuilder dot, string from, string to, string rate, double width, string colour, bool dashed)
+    // ranks is false for a return route or diversion: Graphviz then leaves it out of ranking, so its own layout
+    // keeps the heaviest flow running down the page as the SVG map does, rather than breaking cycles its own way.
+    private static void Edge(StringBuilder dot, string from, string to, string rate, double width, string colour, bool dashed, bool ranks = true)
     {
         dot.Append("  ").Append(Quote(from)).Append(" -> ").Append(Quote(to))
             .Append(" [label=").Append(Quote(rate))
@@ -66,6 +68,11 @@ public static class DotMapWriter
         if (dashed)
         {
             dot.Append(", style=dashed");
+        }
+
+        if (!ranks)
+        {
+            dot.Append(", constraint=false");
         }
 
         dot.Append("];\n");

@@ -18,8 +18,8 @@ namespace NetSolve.Rendering.Map;
 /// <remarks>
 /// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
 /// at the unit's box with their rate written in the box; so are patients turned away by a full unit. Patients
-/// diverted from a full unit are a <see cref="MapEdgeKind.Diversion"/> line to its target. Routes that run against the main direction after
-/// layering, and repeat visits, become <see cref="MapEdgeKind.Feedback"/>. Deterministic: the same solution gives the same layout.
+/// diverted from a full unit are a <see cref="MapEdgeKind.Diversion"/> line to its target. Return routes (<see cref="MapEdgeKind.Feedback"/>) are the
+/// back edges of the order <see cref="ReturnRoutes"/> chooses to keep the heaviest flow forward, and repeat visits. Deterministic: the same solution gives the same layout.
 /// </remarks>
 public static class MapLayoutBuilder
 {
@@ -84,16 +84,31 @@ public static class MapLayoutBuilder
             graph.Nodes.Add(graphNodes[i]);
         }
 
-        var edges = new List<(MsaglEdge Edge, string From, string To, bool IsDiversion, double PerHour, double Stroke, string RateText)>(routes.Count + diversions.Count);
         var lines = routes.Select(r => (r.Route.From, r.Route.To, IsDiversion: false, r.PerHour, Text: PeopleFormat.Rate(r.PerHour, timeUnit)))
-            .Concat(diversions.Select(d => (d.From, d.To, IsDiversion: true, PerHour: d.DivertedPerHour, d.Text)));
-        foreach (var (from, to, isDiversion, perHour, rateText) in lines)
+            .Concat(diversions.Select(d => (d.From, d.To, IsDiversion: true, PerHour: d.DivertedPerHour, d.Text)))
+            .ToList();
+        // Return routes are chosen from the flows before layout and handed to the layout reversed, so the layers
+        // follow the heaviest flow rather than the layout engine's own count of lines.
+        var isReturn = ReturnRoutes.Choose(network.Units.Length, lines.Select(line => (index[line.From], index[line.To], line.PerHour)).ToList());
+        var edges = new List<(MsaglEdge Edge, string From, string To, bool IsDiversion, bool IsReturn, double PerHour, double Stroke, string RateText)>(lines.Count);
+        for (int k = 0; k < lines.Count; k++)
         {
+            var (from, to, isDiversion, perHour, rateText) = lines[k];
             double stroke = StrokeWidth(perHour, maxPerHour);
-            var edge = new MsaglEdge(graphNodes[index[from]], graphNodes[index[to]]);
-            edge.EdgeGeometry.TargetArrowhead = new Arrowhead { Length = Math.Max(MinArrowLength, ArrowLengthPerStroke * stroke) };
+            var arrowhead = new Arrowhead { Length = Math.Max(MinArrowLength, ArrowLengthPerStroke * stroke) };
+            bool reversed = isReturn[k] && !string.Equals(from, to, StringComparison.Ordinal);
+            var edge = reversed ? new MsaglEdge(graphNodes[index[to]], graphNodes[index[from]]) : new MsaglEdge(graphNodes[index[from]], graphNodes[index[to]]);
+            if (reversed)
+            {
+                edge.EdgeGeometry.SourceArrowhead = arrowhead;
+            }
+            else
+            {
+                edge.EdgeGeometry.TargetArrowhead = arrowhead;
+            }
+
             graph.Edges.Add(edge);
-            edges.Add((edge, from, to, isDiversion, perHour, stroke, rateText));
+            edges.Add((edge, from, to, isDiversion, isReturn[k], perHour, stroke, rateText));
         }
 
         var settings = new SugiyamaLayoutSettings
@@ -119,7 +134,7 @@ public static class MapLayoutBuilder
         foreach (var edge in graph.Edges)
         {
             bounds.Add(edge.Curve.BoundingBox);
-            bounds.Add(edge.EdgeGeometry.TargetArrowhead.TipPosition);
+            bounds.Add((edge.EdgeGeometry.TargetArrowhead ?? edge.EdgeGeometry.SourceArrowhead!).TipPosition);
         }
 
         // Room for the arrival and exit arrows outside the outermost boxes.
@@ -144,10 +159,14 @@ public static class MapLayoutBuilder
 
         var labels = new RateLabelPlacer(placed);
         var mapEdges = ImmutableArray.CreateBuilder<MapEdge>(edges.Count);
-        foreach (var (edge, from, to, isDiversion, perHour, stroke, rateText) in edges)
+        foreach (var (edge, from, to, isDiversion, isReturnRoute, perHour, stroke, rateText) in edges)
         {
-            var kind = isDiversion ? MapEdgeKind.Diversion
-                : RunsBackwards(placed[index[from]], placed[index[to]], direction) ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
+            var kind = isDiversion ? MapEdgeKind.Diversion : isReturnRoute ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
+            // A return handed to the layout reversed is drawn in its own direction again: from its source to the arrow at its target.
+            var arrowhead = edge.EdgeGeometry.TargetArrowhead ?? edge.EdgeGeometry.SourceArrowhead!;
+            bool reversed = edge.EdgeGeometry.TargetArrowhead is null;
+            var curve = reversed ? edge.Curve.Reverse() : edge.Curve;
+            var tip = arrowhead.TipPosition;
             mapEdges.Add(new MapEdge(
                 SafeText.ForDisplay(from),
                 SafeText.ForDisplay(to),
@@ -155,11 +174,11 @@ public static class MapLayoutBuilder
                 perHour,
                 rateText,
                 stroke,
-                CurvePath.Of(edge.Curve, ToMap),
-                ToMap(edge.Curve.Start),
-                ToMap(edge.Curve.End),
-                ToMap(edge.EdgeGeometry.TargetArrowhead.TipPosition),
-                labels.Place(edge.Curve, ToMap, rateText)));
+                CurvePath.Of(curve, ToMap),
+                ToMap(curve.Start),
+                ToMap(curve.End),
+                ToMap(tip),
+                labels.Place(curve, ToMap, rateText)));
         }
 
         return new MapLayout(
@@ -221,12 +240,6 @@ public static class MapLayoutBuilder
             : new MapPoint(node.Left + StubInset, node.Top - StubLength);
         return new MapStub(perHour, UnitBoxText.TurnedAway(result, timeUnit), StrokeWidth(perHour, maxPerHour), start, tip);
     }
-
-    /// <summary>A route runs backwards when its target's centre is not further along the main direction than its source's.</summary>
-    private static bool RunsBackwards(MapNode from, MapNode to, MapDirection direction) =>
-        ReferenceEquals(from, to) || (direction == MapDirection.TopToBottom
-            ? to.Centre.Y <= from.Centre.Y
-            : to.Centre.X <= from.Centre.X);
 
     /// <summary>Width proportional to flow, the largest flow drawn <see cref="MapTypography.MaxStrokeWidth"/> wide, never thinner than <see cref="MapTypography.MinStrokeWidth"/>.</summary>
     internal static double StrokeWidth(double perHour, double maxPerHour) => maxPerHour > 0.0

@@ -15,6 +15,9 @@ internal sealed class RateLabelPlacer(IReadOnlyList<MapNode> boxes)
     /// <summary>Fractions of the line's parameter range tried in turn: the middle first, then outwards.</summary>
     private static readonly double[] Positions = [0.5, 0.4, 0.6, 0.3, 0.7, 0.2, 0.8, 0.15, 0.85, 0.1, 0.9];
 
+    /// <summary>How far beside the line a label may move, in label sizes: touching it first, then one label further.</summary>
+    private static readonly int[] SideReaches = [1, 2];
+
     /// <summary>Space kept between a label and a box.</summary>
     private const double Clearance = 2.0;
 
@@ -24,9 +27,8 @@ internal sealed class RateLabelPlacer(IReadOnlyList<MapNode> boxes)
         double halfHeight = (MapTypography.RateSize * MapTypography.LineSpacing / 2.0) + Clearance;
         MapPoint best = default;
         double bestOverlap = double.PositiveInfinity;
-        foreach (double position in Positions)
+        foreach (var centre in Candidates(curve, toMap, halfWidth, halfHeight))
         {
-            var centre = toMap(curve[curve.ParStart + ((curve.ParEnd - curve.ParStart) * position)]);
             double overlap = Overlap(centre, halfWidth, halfHeight);
             if (overlap < bestOverlap)
             {
@@ -42,6 +44,34 @@ internal sealed class RateLabelPlacer(IReadOnlyList<MapNode> boxes)
         // Where no position is clear, the one that covers the least of the boxes and labels already placed.
         _labels.Add((best, halfWidth, halfHeight));
         return best;
+    }
+
+    /// <summary>
+    /// Where the label may go, best first: on the line at each of <see cref="Positions"/>; then, where a crowded
+    /// stretch leaves no room on the line, just beside it (above or below a line that runs across, left or right of
+    /// one that runs down), then one label further out.
+    /// </summary>
+    private static IEnumerable<MapPoint> Candidates(ICurve curve, Func<MsaglPoint, MapPoint> toMap, double halfWidth, double halfHeight)
+    {
+        var onLine = Positions.Select(position => curve.ParStart + ((curve.ParEnd - curve.ParStart) * position)).ToList();
+        foreach (double t in onLine)
+        {
+            yield return toMap(curve[t]);
+        }
+
+        foreach (int reach in SideReaches)
+        {
+            foreach (double t in onLine)
+            {
+                var centre = toMap(curve[t]);
+                var ahead = toMap(curve[t] + curve.Derivative(t));
+                bool across = Math.Abs(ahead.X - centre.X) >= Math.Abs(ahead.Y - centre.Y);
+                double dx = across ? 0.0 : ((2 * reach) - 1) * halfWidth;
+                double dy = across ? ((2 * reach) - 1) * halfHeight : 0.0;
+                yield return new MapPoint(centre.X + dx, centre.Y + dy);
+                yield return new MapPoint(centre.X - dx, centre.Y - dy);
+            }
+        }
     }
 
     /// <summary>The area a label at <paramref name="centre"/> would share with the unit boxes and the labels placed so far.</summary>

@@ -19,7 +19,8 @@ namespace NetSolve.Rendering.Report;
 /// </summary>
 /// <remarks>
 /// A Content-Security-Policy of <c>default-src 'none'</c> makes browsers refuse any request the page might
-/// still try. The output depends only on its inputs (no dates), so the same solutions give the same bytes.
+/// still try. The output depends only on its inputs and the provenance handed in (the date included), so the same
+/// solutions and provenance give the same bytes.
 /// </remarks>
 public static class HtmlReport
 {
@@ -47,7 +48,14 @@ public static class HtmlReport
     /// A simulation of <paramref name="baseline"/>'s network (same units in the same order): adds the "Time of day" and
     /// "Formula against simulation" sections. Without it the report has neither, byte for byte as before.
     /// </param>
-    public static string Write(NetworkSolution baseline, IReadOnlyList<ReportScenario>? scenarios = null, SimulationResult? simulation = null)
+    /// <param name="provenance">Date, version and input files, shown under the title; none when null.</param>
+    /// <param name="baselineChanges">What the baseline changes from its own base when FILE is a scenario file or has <c>--set</c> changes; none when null.</param>
+    public static string Write(
+        NetworkSolution baseline,
+        IReadOnlyList<ReportScenario>? scenarios = null,
+        SimulationResult? simulation = null,
+        ReportProvenance? provenance = null,
+        IReadOnlyList<string>? baselineChanges = null)
     {
         ArgumentNullException.ThrowIfNull(baseline);
         if (simulation is not null && !simulation.Units.Select(u => u.Unit.Id).SequenceEqual(baseline.Units.Select(u => u.Unit.Id), StringComparer.Ordinal))
@@ -68,7 +76,18 @@ public static class HtmlReport
 
         html.Append("<header>\n<h1").Append(Heading(network.Name, MaxHeadingLength)).Append("</h1>\n")
             .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Rates per ").Append(unit)
-            .Append("; each time is written with its unit (min, h or d).</p>\n</header>\n");
+            .Append("; each time is written with its unit (min, h or d).</p>\n");
+        if (baselineChanges is { Count: > 0 })
+        {
+            html.Append("<p class=\"what-changed\" id=\"baseline-changes\">Changes from the base network: ").Append(HtmlEncode(string.Join("; ", baselineChanges))).Append("</p>\n");
+        }
+
+        if (provenance is not null)
+        {
+            AppendProvenance(html, provenance);
+        }
+
+        html.Append("</header>\n");
         html.Append("<p class=\"finding\" id=\"finding\"><strong>Finding:</strong> ").Append(HtmlEncode(Finding.Summarise(baseline))).Append("</p>\n");
 
         var layout = MapLayoutBuilder.Build(baseline);
@@ -112,6 +131,17 @@ public static class HtmlReport
         html.Append("<footer>Made with NetSolve. A unit is strained at ")
             .Append(PeopleFormat.Percent(baseline.StrainThreshold)).Append(" utilisation or more.</footer>\n</body>\n</html>\n");
         return html.ToString();
+    }
+
+    /// <summary>The date, the version and every input file with its SHA-256, so a printed report can be traced to its inputs.</summary>
+    private static void AppendProvenance(StringBuilder html, ReportProvenance provenance)
+    {
+        html.Append("<p class=\"provenance\" id=\"provenance\">Made on ")
+            .Append(provenance.Date.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture))
+            .Append(" with NetSolve ").Append(HtmlEncode(provenance.Version)).Append(" from ");
+        html.Append(string.Join(", ", provenance.Inputs.Select(input =>
+            "<span class=\"input\">" + HtmlEncode(input.Name) + " (SHA-256 <code>" + HtmlEncode(input.Sha256) + "</code>)</span>")));
+        html.Append(".</p>\n");
     }
 
     /// <summary>

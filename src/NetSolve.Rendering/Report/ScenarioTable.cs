@@ -32,7 +32,10 @@ internal static class ScenarioTable
         }
 
         html.Append("</tbody>\n</table>\n");
+        AppendWhatChanged(html, scenarios);
 
+        var labels = all.SelectMany(s => s.Solution.Units).GroupBy(u => u.Unit.Id, StringComparer.Ordinal)
+            .ToDictionary(group => group.Key, group => group.First().Unit.Label, StringComparer.Ordinal);
         var ids = all.SelectMany(s => s.Solution.Units.Select(u => u.Unit.Id)).Distinct(StringComparer.Ordinal).ToList();
         html.Append("<table id=\"scenario-units\">\n<thead><tr><th>Unit</th>");
         foreach (var scenario in all)
@@ -43,7 +46,7 @@ internal static class ScenarioTable
         html.Append("</tr></thead>\n<tbody>\n");
         foreach (string id in ids)
         {
-            html.Append("<tr><td>").Append(HtmlEncode(id)).Append("</td>");
+            html.Append("<tr><td>").Append(HtmlEncode(labels[id])).Append("</td>");
             foreach (var scenario in all)
             {
                 var result = scenario.Solution.Units.FirstOrDefault(u => u.Unit.Id == id);
@@ -54,6 +57,21 @@ internal static class ScenarioTable
         }
 
         html.Append("</tbody>\n</table>\n</section>\n");
+    }
+
+    /// <summary>One line per scenario saying what it changes, so the comparison can be read without its files.</summary>
+    private static void AppendWhatChanged(StringBuilder html, IReadOnlyList<ReportScenario> scenarios)
+    {
+        html.Append("<ul id=\"scenario-changes\">\n");
+        foreach (var scenario in scenarios)
+        {
+            string changes = scenario.Changes is { Count: > 0 } listed
+                ? string.Join("; ", listed)
+                : "a network of its own, compared as it is (no changes listed)";
+            html.Append("<li><strong>").Append(HtmlEncode(scenario.Name)).Append("</strong> changes: ").Append(HtmlEncode(changes)).Append("</li>\n");
+        }
+
+        html.Append("</ul>\n");
     }
 
     /// <summary>A unit in one line, in the words and numbers of its map box: <c>◆ bottleneck, 88.3% busy, wait 45.43 min</c>.</summary>

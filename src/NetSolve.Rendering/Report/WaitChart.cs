@@ -7,8 +7,8 @@ namespace NetSolve.Rendering.Report;
 
 /// <summary>Draws mean wait against demand growth with ScottPlot, as SVG.</summary>
 /// <remarks>
-/// Shows the units with the longest waits at the last factor (the first unit to saturate among them), at most
-/// <see cref="ChartSeriesStyles.Count"/>, and a vertical line at the saturation factor. The wait axis is in the unit
+/// Shows the units that saturate first (the finding's), then those with the longest waits at the last factor, at
+/// most <see cref="ChartSeriesStyles.Count"/>; the legend sits below the plot and the axes end at the data. The wait axis is in the unit
 /// that reads best for the longest wait drawn, by the rule every time for people follows (<see cref="PeopleFormat.Time"/>):
 /// minutes below an hour, hours below <see cref="PeopleFormat.HoursBeforeDays"/>, days beyond.
 /// </remarks>
@@ -20,12 +20,20 @@ public static partial class WaitChart
     /// <summary>Chart height in SVG units.</summary>
     public const int Height = 400;
 
-    /// <summary>The curves chosen for the chart, longest final wait first.</summary>
+    /// <summary>
+    /// The curves chosen for the chart: the units the finding names (those that saturate first) first, so the
+    /// chart's first colour and first legend entry are the finding's; then the longest final waits.
+    /// </summary>
     public static IReadOnlyList<WaitCurve> Shown(WaitGrowth growth)
     {
         ArgumentNullException.ThrowIfNull(growth);
-        return growth.Curves.OrderByDescending(curve => curve.WaitHours[^1]).Take(ChartSeriesStyles.Count).ToList();
+        return growth.Curves.OrderByDescending(curve => IsFirst(growth, curve))
+            .ThenByDescending(curve => curve.WaitHours[^1])
+            .Take(ChartSeriesStyles.Count)
+            .ToList();
     }
+
+    private static bool IsFirst(WaitGrowth growth, WaitCurve curve) => growth.FirstToSaturate.Contains(curve.UnitId, StringComparer.Ordinal);
 
     /// <summary>The chart as an SVG document; null when <paramref name="growth"/> has no curves.</summary>
     public static string? Svg(WaitGrowth growth)
@@ -45,19 +53,16 @@ public static partial class WaitChart
         {
             double[] waits = shown[i].WaitHours.Select(hours => TimeConstants.FromHours(hours, timeUnit)).ToArray();
             var series = plot.Add.Scatter(factors, waits);
-            series.LegendText = ReportText.Legend(shown[i].Label);
+            series.LegendText = ReportText.Legend(shown[i].Label) + (IsFirst(growth, shown[i]) ? " (saturates first)" : string.Empty);
             ChartSeriesStyles.Apply(series, i);
         }
 
-        var line = plot.Add.VerticalLine(saturation);
-        line.Color = Color.FromHex("#111111");
-        line.LinePattern = LinePattern.Dashed;
-        line.LineWidth = 1.5f;
-        line.LegendText = "first saturation \u00D7" + PeopleFormat.Factor(saturation);
-
-        plot.XLabel("Demand growth factor (\u00D7 today's arrivals)");
+        // The axes end at the data: the growth axis at the last factor drawn, just below saturation (named in its
+        // title rather than drawn as a line past the data), the wait axis at the longest wait shown.
+        plot.XLabel("Demand growth factor (\u00D7 today's arrivals; first saturation at \u00D7" + PeopleFormat.Factor(saturation) + ")");
         plot.YLabel("Mean wait (" + TimeConstants.Name(timeUnit) + "s)");
-        plot.Axes.SetLimitsX(1.0, saturation + ((saturation - 1.0) * 0.04));
+        plot.Axes.SetLimitsX(1.0, factors[^1]);
+        plot.Axes.SetLimitsY(0.0, TimeConstants.FromHours(shown.Max(curve => curve.WaitHours.Max()), timeUnit));
         plot.Axes.Bottom.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic
         {
             LabelFormatter = value => value.ToString("0.###", CultureInfo.InvariantCulture),
@@ -66,7 +71,8 @@ public static partial class WaitChart
         {
             LabelFormatter = value => value.ToString("0.###", CultureInfo.InvariantCulture),
         };
-        plot.ShowLegend(Alignment.UpperLeft);
+        // Below the plot, never over the lines it names.
+        plot.ShowLegend(Edge.Bottom);
         return WithViewBox(RenumberIds(plot.GetSvgXml(Width, Height), "wait-chart-clip-"));
     }
 

@@ -16,6 +16,9 @@ namespace NetSolve.Rendering.Report;
 /// <param name="Curves">One curve per stable unit with finite servers that patients reach, in file order.</param>
 public sealed record WaitGrowth(double? SaturationFactor, ImmutableArray<double> Factors, ImmutableArray<WaitCurve> Curves)
 {
+    /// <summary>Ids of the units that saturate first (the finding's units), in file order; empty when none does.</summary>
+    public ImmutableArray<string> FirstToSaturate { get; init; } = [];
+
     /// <summary>The last factor drawn puts the first unit to saturate at this utilisation, when that is above today's demand.</summary>
     public const double LastUtilisation = 0.98;
 
@@ -53,7 +56,10 @@ public sealed record WaitGrowth(double? SaturationFactor, ImmutableArray<double>
         }
 
         var curves = candidates.Select((u, c) => new WaitCurve(u.Unit.Id, u.Unit.Label, waits[c].MoveToImmutable())).ToImmutableArray();
-        return new WaitGrowth(saturation, factors, curves);
+        return new WaitGrowth(saturation, factors, curves)
+        {
+            FirstToSaturate = [.. solution.Units.Where(u => u.Status == UnitStatus.Bottleneck && u.Headroom is not null).Select(u => u.Unit.Id)],
+        };
     }
 
     /// <summary>

@@ -14,7 +14,6 @@ public sealed class NetworkCommandShapeTests
     [InlineData("solve")]
     [InlineData("growth")]
     [InlineData("staff", "--max-util", "0.8")]
-    [InlineData("simulate", "-r", "2", "--duration", "2d", "--warmup", "0")]
     public void An_advice_table_ends_with_the_planning_caution_once(params string[] args)
     {
         var (code, output, _) = Run([args[0], Millbrook, .. args[1..]]);

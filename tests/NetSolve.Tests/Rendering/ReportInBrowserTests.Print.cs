@@ -10,8 +10,8 @@ namespace NetSolve.Tests.Rendering;
 /// <summary>A tall bottleneck map printed from chromium: one page of A4 or Letter, whole, and unchanged on screen.</summary>
 public partial class ReportInBrowserTests
 {
-    /// <summary>Units in the tall networks: a 40-unit hospital laid out top to bottom is several A4 pages tall at A4 width.</summary>
-    private const int TallUnitCount = 40;
+    /// <summary>Units in the tall networks: an 80-unit hospital laid out top to bottom is several A4 pages tall at A4 width (40 no longer is once returns no longer stretch the layers).</summary>
+    private const int TallUnitCount = 80;
 
     /// <summary>The report draws the map at most this many times its own size (HtmlReport's limit).</summary>
     private const double MaxMapEnlargement = 1.25;
