@@ -7,4 +7,10 @@ if (args is ["cpu-time", .. var sizes])
     return;
 }
 
+if (args is ["time-varying", .. var counts])
+{
+    TimeVaryingMeasurement.Run(Console.Out, counts.Length == 0 ? [100, 1000] : [.. counts.Select(int.Parse)]);
+    return;
+}
+
 BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);

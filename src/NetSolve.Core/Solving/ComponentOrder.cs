@@ -13,7 +13,13 @@ namespace NetSolve.Solving;
 internal static class ComponentOrder
 {
     /// <summary>The included units, upstream sets first; within a set, in discovery order.</summary>
-    public static int[] Upstream(RoutingTable routing, bool[] include)
+    public static int[] Upstream(RoutingTable routing, bool[] include) => Upstream(routing, include, setSizes: null);
+
+    /// <summary>
+    /// As <see cref="Upstream(RoutingTable, bool[])"/>, and adds to <paramref name="setSizes"/> the number of units of
+    /// each strongly connected set, in the order the sets appear.
+    /// </summary>
+    public static int[] Upstream(RoutingTable routing, bool[] include, List<int>? setSizes)
     {
         int n = routing.UnitCount;
         var index = new int[n];
@@ -77,12 +83,14 @@ internal static class ComponentOrder
                     while (member != unit);
 
                     emitted.Reverse(first, emitted.Count - first);
+                    setSizes?.Add(emitted.Count - first);
                 }
             }
         }
 
         // Tarjan emits sets downstream first; reverse the sets, keeping each set's members together.
         emitted.Reverse();
+        setSizes?.Reverse();
         return [.. emitted];
 
         void Visit(int unit)

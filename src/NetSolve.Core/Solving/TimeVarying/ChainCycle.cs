@@ -19,6 +19,9 @@ internal sealed class ChainCycle
     private readonly ServerRoster _roster;
     private double[] _next = [];
     private double[] _power = [];
+    private double[] _down = [];
+    private double[] _stay = [];
+    private double _birth;
 
     public ChainCycle(double[] arrivalsByStep, int stepsPerHour, ServerRoster roster, double servicePerHour)
     {
@@ -113,14 +116,33 @@ internal sealed class ChainCycle
             return;
         }
 
+        PrepareJump(arrivals, servers, uniform, p.Length);
         int subSteps = Math.Max(1, (int)Math.Ceiling(uniform * hours / MaxUniformizedStep));
         for (int s = 0; s < subSteps; s++)
         {
-            Advance(p, arrivals, servers, uniform, uniform * hours / subSteps);
+            Advance(p, uniform * hours / subSteps);
         }
     }
 
-    private void Advance(double[] p, double arrivals, int servers, double uniform, double expected)
+    // The jump chain's rates for one step, worked out once and used by every Poisson term of the step.
+    private void PrepareJump(double arrivals, int servers, double uniform, int states)
+    {
+        if (_down.Length != states)
+        {
+            _down = new double[states];
+            _stay = new double[states];
+        }
+
+        double birth = arrivals / uniform;
+        _birth = birth;
+        for (int n = 0; n < states; n++)
+        {
+            _down[n] = Math.Min(n, servers) * ServicePerHour / uniform;
+            _stay[n] = 1.0 - (n < states - 1 ? birth : 0.0) - _down[n];
+        }
+    }
+
+    private void Advance(double[] p, double expected)
     {
         double weight = Math.Exp(-expected);
         double covered = weight;
@@ -132,7 +154,7 @@ internal sealed class ChainCycle
 
         for (int k = 1; 1.0 - covered > PoissonTail && k < 200; k++)
         {
-            MultiplyByJump(arrivals, servers, uniform);
+            MultiplyByJump();
             weight *= expected / k;
             covered += weight;
             for (int n = 0; n < p.Length; n++)
@@ -141,27 +163,35 @@ internal sealed class ChainCycle
             }
         }
 
-        double total = _next.Sum();
+        double total = 0.0;
         for (int n = 0; n < p.Length; n++)
         {
-            p[n] = _next[n] / total;
+            total += _next[n];
+        }
+
+        double scale = 1.0 / total;
+        for (int n = 0; n < p.Length; n++)
+        {
+            p[n] = _next[n] * scale;
         }
     }
 
     // _power ← _power · (I + Q/Λ) for the birth–death generator Q; no births out of the last state.
-    private void MultiplyByJump(double arrivals, int servers, double uniform)
+    private void MultiplyByJump()
     {
-        int last = _power.Length - 1;
-        double birth = arrivals / uniform;
+        var power = _power;
+        var down = _down;
+        var stay = _stay;
+        double birth = _birth;
+        int last = power.Length - 1;
         double carried = 0.0;
-        for (int n = 0; n <= last; n++)
+        for (int n = 0; n < last; n++)
         {
-            double current = _power[n];
-            double up = n < last ? birth : 0.0;
-            double down = Math.Min(n, servers) * ServicePerHour / uniform;
-            double fromAbove = n < last ? _power[n + 1] * Math.Min(n + 1, servers) * ServicePerHour / uniform : 0.0;
-            _power[n] = (current * (1.0 - up - down)) + carried + fromAbove;
-            carried = current * up;
+            double current = power[n];
+            power[n] = (current * stay[n]) + carried + (power[n + 1] * down[n + 1]);
+            carried = current * birth;
         }
+
+        power[last] = (power[last] * stay[last]) + carried;
     }
 }

@@ -67,25 +67,14 @@ internal sealed class IncomingRoutes
         }
     }
 
-    /// <summary>True when some positive route leads from a unit to itself or to one earlier in <paramref name="order"/>.</summary>
-    public bool HasBackEdge(int[] order)
+    /// <summary>True when some unit with a positive route into <paramref name="unit"/> is marked in <paramref name="marked"/>.</summary>
+    public bool AnySource(int unit, bool[] marked)
     {
-        var position = new int[_offsets.Length - 1];
-        Array.Fill(position, -1);
-        for (int p = 0; p < order.Length; p++)
+        for (int k = _offsets[unit]; k < _offsets[unit + 1]; k++)
         {
-            position[order[p]] = p;
-        }
-
-        foreach (int target in order)
-        {
-            for (int k = _offsets[target]; k < _offsets[target + 1]; k++)
+            if (_probabilities[k] > 0.0 && marked[_sources[k]])
             {
-                int source = position[_sources[k]];
-                if (_probabilities[k] > 0.0 && source >= 0 && position[target] <= source)
-                {
-                    return true;
-                }
+                return true;
             }
         }
 

@@ -1,3 +1,5 @@
+using NetSolve.Model;
+
 namespace NetSolve.Solving;
 
 /// <summary>
@@ -15,9 +17,10 @@ namespace NetSolve.Solving;
 /// </para>
 /// <para>
 /// Each stage is solved to its periodic steady state exactly by <see cref="PeriodicStage"/>. Units are visited
-/// upstream first (<see cref="ComponentOrder"/>), so a network without loops is exact after one sweep; loops are
-/// swept again with the latest flows (Gauss–Seidel over whole cycles) until no flow changes by more than
-/// <see cref="TimeVaryingOptions.LoopTolerance"/>. Each sweep shrinks the error by the share of patients returning
+/// upstream first (<see cref="ComponentOrder"/>), so a network without loops is exact after one sweep; the units of
+/// a loop (a strongly connected set) are solved again with the latest flows (Gauss–Seidel over whole cycles), and
+/// only while a flow into them changes by more than <see cref="TimeVaryingOptions.LoopTolerance"/> of the largest;
+/// a loop settles before any unit below it is solved. Each sweep shrinks the error by the share of patients returning
 /// round the loop, not by the service times, so long stays cost no more sweeps.
 /// </para>
 /// </remarks>
@@ -49,57 +52,70 @@ internal static class LoadPropagation
         var routing = group.Routing;
         int n = routing.UnitCount;
         var reached = routing.ReachedUnits();
-        int[] order = ComponentOrder.Upstream(routing, reached);
+        var setSizes = new List<int>();
+        int[] order = ComponentOrder.Upstream(routing, reached, setSizes);
         var incoming = IncomingRoutes.Build(routing);
-        bool hasLoops = incoming.HasBackEdge(order);
         var departures = new double[n][];
-        foreach (int j in order)
-        {
-            departures[j] = new double[steps + 1];
-        }
-
         var groupArrivals = new double[n][];
         var groupLoads = new double[n][];
         foreach (int j in order)
         {
+            departures[j] = new double[steps + 1];
             groupArrivals[j] = new double[steps];
             groupLoads[j] = new double[steps + 1];
         }
 
-        for (int sweep = 1; ; sweep++)
+        // Strongly connected sets upstream first: a set without a loop is exact after one solve of its unit, since
+        // everything above it is final; a loop is swept (Gauss–Seidel over whole cycles) until it settles, and only
+        // then is anything below it solved.
+        var changed = new bool[n];
+        double largestFlow = 0.0;
+        int first = 0;
+        foreach (int size in setSizes)
         {
-            double largestChange = 0.0;
-            double largestFlow = 0.0;
-            foreach (int j in order)
+            var set = new ArraySegment<int>(order, first, size);
+            first += size;
+            bool isLoop = size > 1 || RoutesToItself(routing, set[0]);
+            for (int sweep = 1; ; sweep++)
             {
-                incoming.Sum(j, departures, work.Inflow);
-                var external = group.ExternalByStep[j];
-                for (int k = 0; k < steps; k++)
+                double largestChange = 0.0;
+                foreach (int j in set)
                 {
-                    double outside = external is null ? 0.0 : external[k];
-                    work.InputStart[k] = outside + work.Inflow[k];
-                    work.InputEnd[k] = outside + work.Inflow[k + 1];
-                    groupArrivals[j][k] = outside + (0.5 * (work.Inflow[k] + work.Inflow[k + 1]));
+                    if (sweep > 1 && !incoming.AnySource(j, changed))
+                    {
+                        changed[j] = false;
+                        continue;
+                    }
+
+                    SolveUnit(group, j, steps, stepHours, incoming, departures, work, groupArrivals[j], groupLoads[j]);
+                    double change = 0.0;
+                    var previous = departures[j];
+                    for (int k = 0; k <= steps; k++)
+                    {
+                        change = Math.Max(change, Math.Abs(work.Departures[k] - previous[k]));
+                        largestFlow = Math.Max(largestFlow, Math.Abs(work.Departures[k]));
+                        previous[k] = work.Departures[k];
+                    }
+
+                    changed[j] = change > options.LoopTolerance * largestFlow;
+                    largestChange = Math.Max(largestChange, change);
                 }
 
-                UnitStages.Solve(group.Stages[j], stepHours, work, groupLoads[j], work.Departures);
-                var previous = departures[j];
-                for (int k = 0; k <= steps; k++)
+                if (!isLoop || largestChange <= options.LoopTolerance * largestFlow)
                 {
-                    largestChange = Math.Max(largestChange, Math.Abs(work.Departures[k] - previous[k]));
-                    largestFlow = Math.Max(largestFlow, Math.Abs(work.Departures[k]));
-                    previous[k] = work.Departures[k];
+                    break;
+                }
+
+                if (sweep >= options.MaxLoopSweeps)
+                {
+                    throw new TimeVaryingConvergenceException("the flows round loops of routes", largestChange / largestFlow);
                 }
             }
 
-            if (!hasLoops || largestChange <= options.LoopTolerance * largestFlow)
+            // The set is final: its flows count as unchanged for the sets below it, which are solved after it.
+            foreach (int j in set)
             {
-                break;
-            }
-
-            if (sweep >= options.MaxLoopSweeps)
-            {
-                throw new TimeVaryingConvergenceException("the flows round loops of routes", largestChange / largestFlow);
+                changed[j] = false;
             }
         }
 
@@ -108,6 +124,34 @@ internal static class LoadPropagation
             Add(groupArrivals[j], arrivals[j]);
             Add(groupLoads[j], loads[j]);
         }
+    }
+
+    private static bool RoutesToItself(RoutingTable routing, int unit)
+    {
+        for (int e = routing.Offsets[unit]; e < routing.Offsets[unit + 1]; e++)
+        {
+            if (routing.Targets[e] == unit && routing.Probabilities[e] > 0.0)
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    private static void SolveUnit(FlowGroupPlan group, int j, int steps, double stepHours, IncomingRoutes incoming, double[][] departures, Workspace work, double[] unitArrivals, double[] unitLoads)
+    {
+        incoming.Sum(j, departures, work.Inflow);
+        var external = group.ExternalByStep[j];
+        for (int k = 0; k < steps; k++)
+        {
+            double outside = external is null ? 0.0 : external[k];
+            work.InputStart[k] = outside + work.Inflow[k];
+            work.InputEnd[k] = outside + work.Inflow[k + 1];
+            unitArrivals[k] = outside + (0.5 * (work.Inflow[k] + work.Inflow[k + 1]));
+        }
+
+        UnitStages.Solve(group.Stages[j], stepHours, work, unitLoads, work.Departures);
     }
 
     private static void Add(double[] from, double[] into)

@@ -35,6 +35,10 @@ public static class PeriodicBirthDeathChain
     // the step, so steps longer than the one-minute grid of the offered load waste fewer Poisson terms.
     private const int MinChainStepsPerHour = 6;
 
+    // The ratio of successive changes counts as steady when it moved by less than this share of its distance from 1
+    // (the extrapolation's factor r/(1 − r) is then within about this share of its value).
+    private const double SteadyRatio = 0.05;
+
     /// <summary>Solves one unit.</summary>
     /// <param name="arrivalsByStep">Arrival rate per hour in each step of the cycle (hours × <paramref name="stepsPerHour"/>).</param>
     /// <param name="stepsPerHour">Steps per hour.</param>
@@ -129,11 +133,15 @@ public static class PeriodicBirthDeathChain
         return blocks;
     }
 
+    // Cycles from the start until the start of the cycle stops moving. The change from one cycle to the next shrinks
+    // by the cycle map's second eigenvalue r; once r is steady the rest of the way is (p − before)·r/(1 − r) (Aitken's
+    // extrapolation along the slowest direction), so the chain jumps there and goes on from the jumped start.
     private static double[] Settle(ChainCycle chain, int states, double[]? previous, ExactChainOptions options)
     {
         var p = previous is null ? chain.StationaryStart(states) : [.. previous, .. new double[states - previous.Length]];
         var before = new double[states];
-        double lastChange = double.PositiveInfinity;
+        double lastChange = double.NaN;
+        double lastRatio = double.NaN;
         for (int cycle = 1; cycle <= options.MaxCycles; cycle++)
         {
             Array.Copy(p, before, states);
@@ -151,13 +159,38 @@ public static class PeriodicBirthDeathChain
                 return p;
             }
 
-            lastChange = change;
             if (cycle == options.MaxCycles)
             {
                 throw new TimeVaryingConvergenceException("the exact chain", change);
             }
+
+            if (ratio < 1.0 && Math.Abs(ratio - lastRatio) <= SteadyRatio * (1.0 - ratio))
+            {
+                Extrapolate(p, before, ratio / (1.0 - ratio));
+                lastChange = double.NaN;
+                lastRatio = double.NaN;
+                continue;
+            }
+
+            lastChange = change;
+            lastRatio = ratio;
         }
 
         return p;
+    }
+
+    private static void Extrapolate(double[] p, double[] before, double factor)
+    {
+        double total = 0.0;
+        for (int n = 0; n < p.Length; n++)
+        {
+            p[n] = Math.Max(0.0, p[n] + (factor * (p[n] - before[n])));
+            total += p[n];
+        }
+
+        for (int n = 0; n < p.Length; n++)
+        {
+            p[n] /= total;
+        }
     }
 }
