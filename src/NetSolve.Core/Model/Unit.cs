@@ -34,6 +34,13 @@ public sealed record Unit(string Id, string Label, Servers Servers, double MeanS
     /// <summary>What happens to a patient arriving when the unit holds <see cref="Capacity"/> patients.</summary>
     public WhenFull WhenFull { get; init; } = WhenFull.TurnAway;
 
+    /// <summary>
+    /// Servers by hour of day (or of week) from the file's <c>roster</c>; null when the unit keeps
+    /// <see cref="Servers"/> all the time. Never set on a unit with unlimited servers. The simulator and the by-hour
+    /// formulas follow it; the steady-state formulas keep <see cref="Servers"/>, which the file still gives.
+    /// </summary>
+    public Roster? Roster { get; init; }
+
     /// <summary>The distribution the simulator uses: <see cref="Service"/>, or the v1 meaning of mean and cv.</summary>
     public ServiceDistribution EffectiveService => Service ?? ServiceDistribution.FromMeanAndCv(MeanServiceHours, ServiceCv);
 

@@ -54,7 +54,7 @@ internal sealed partial class SimulationEngine
         for (int i = 0; i < n; i++)
         {
             _queues[i] = new int[4];
-            _units[i].Servers = network.Servers[i];
+            _units[i].Servers = network.Rosters[i] is int[] roster ? roster[0] : network.Servers[i];
             _units[i].Capacity = network.Capacity[i];
             _units[i].DivertTo = network.DivertTo[i];
         }
@@ -90,6 +90,10 @@ internal sealed partial class SimulationEngine
             {
                 OnArrivalCandidate(next.Time, next.Unit);
             }
+            else if (next.Patient == SimulationEvent.RosterMarker)
+            {
+                OnHourChange(next.Time, next.Unit);
+            }
             else
             {
                 OnServiceEnd(next.Time, next.Unit, next.Patient);
@@ -122,6 +126,7 @@ internal sealed partial class SimulationEngine
             }
         }
 
+        ScheduleFirstHourChanges();
         long events = 0;
         for (long chunks = 1; ; chunks++)
         {
@@ -203,7 +208,8 @@ internal sealed partial class SimulationEngine
             _unitHistograms[unit].Record(sojourn);
         }
 
-        if (state.Queued > 0)
+        // Busy above Servers only after a roster took servers off: the server who finishes then leaves (docs/network-file.md, "Servers by hour").
+        if (state.Queued > 0 && state.Busy <= state.Servers)
         {
             StartService(now, unit, Dequeue(unit));
         }
@@ -410,7 +416,7 @@ internal sealed partial class SimulationEngine
 
         foreach (var pending in _events.Pending())
         {
-            if (!pending.IsArrival)
+            if (pending.IsServiceEnd)
             {
                 _units[pending.Unit].BusyArea += _end - InWindow(_patients[pending.Patient].ServiceStart);
             }
