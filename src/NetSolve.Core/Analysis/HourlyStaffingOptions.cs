@@ -14,6 +14,12 @@ public sealed record HourlyStaffingOptions
     /// </summary>
     public ImmutableArray<int> ShiftStarts { get; init; } = [];
 
+    /// <summary>
+    /// True: the exact periodic chain for rosters up to 50 servers (the reference; seconds per trial roster on a slow
+    /// unit). False: MOL wherever the load stays below the servers, the chain only where MOL has no answer.
+    /// </summary>
+    public bool ExactChain { get; init; } = true;
+
     /// <summary>Whether to confirm the roster by simulation (<see cref="HourlySimulationCheck"/>).</summary>
     public bool Simulate { get; init; } = true;
 

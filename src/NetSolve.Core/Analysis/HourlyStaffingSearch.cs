@@ -7,7 +7,7 @@ namespace NetSolve.Analysis;
 /// <summary>
 /// The fewest servers in each hour (or shift block) with which every hour of a unit meets the targets, by the
 /// time-varying method: the exact periodic chain for rosters up to <see cref="ExactChainOptions.MaxServers"/>
-/// servers, MOL above (docs/time-of-day.md).
+/// servers, MOL above, or MOL first when <see cref="HourlyStaffingOptions.ExactChain"/> is false (docs/time-of-day.md).
 /// </summary>
 /// <remarks>
 /// <para>
@@ -85,7 +85,7 @@ public static class HourlyStaffingSearch
         }
 
         ShiftBlocks.Level(blocks, servers);
-        var evaluator = new CycleEvaluator(unit, load, targets, meanServiceHours);
+        var evaluator = new CycleEvaluator(unit, load, targets, meanServiceHours, options.ExactChain);
         int budget = options.MaxEvaluations;
         var (waits, ratios) = evaluator.Evaluate(servers);
         budget--;
