@@ -33,7 +33,7 @@ public static class HourlyStaffingColumns
 
     /// <summary>Whether the hour meets the targets in simulation within its interval; absent when not simulated.</summary>
     public static readonly Column<HourlyStaffingRow> SimulationCheck = Columns.Words<HourlyStaffingRow>("simulation_check", "simulated check",
-        row => row.Unit.SimulationMeetsByHour.IsEmpty ? "-" : row.Unit.SimulationMeetsByHour[row.Hour] ? "meets" : "misses");
+        row => row.Unit.SimulationMeetsByHour.IsEmpty ? "not run" : row.Unit.SimulationMeetsByHour[row.Hour] ? "meets" : "misses");
 
     private static readonly string[] Days = ["Mon", "Tue", "Wed", "Thu", "Fri", "Sat", "Sun"];
 
