@@ -149,6 +149,18 @@ internal static class Messages
     /// <summary><c>staff --budget</c> mixed with targets.</summary>
     public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --only (--cost weighs its servers)";
 
+    /// <summary><c>staff --by-hour</c> with a question it does not answer.</summary>
+    public const string StaffByHourTargets = "staff: --by-hour takes --max-wait, --max-time, --wait-over with --at-most and --max-util, not --budget, --cost or --max-turned-away";
+
+    /// <summary><c>staff</c>: --shifts, --exact or --no-check without --by-hour.</summary>
+    public const string StaffByHourOnly = "staff: --shifts, --exact and --no-check shape a roster; give them with --by-hour";
+
+    /// <summary><c>staff --shifts</c> not a list of start hours.</summary>
+    public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";
+
+    /// <summary><c>staff --by-hour</c>: a target no roster can meet.</summary>
+    public static string RosterImpossible(string unitId, string reason) => $"unit '{unitId}': no roster meets the targets: {reason}";
+
     /// <summary><c>staff</c>: the two halves of the wait-tail target.</summary>
     public const string StaffWaitTailPair = "staff: --wait-over and --at-most go together (e.g. --wait-over 4h --at-most 5%)";
 

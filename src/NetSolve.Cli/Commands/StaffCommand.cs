@@ -66,9 +66,31 @@ internal sealed class StaffCommand() : NetworkCommand(
     private readonly Option<int?> _budget = SettingOptions.OptionalWholeNumber(
         "--budget", 0, SettingLimits.MaxBudget, "Instead of targets: place this many extra servers where they cut the mean time in network most; with --cost, N is the most they may cost in all (solved exactly).", "N");
 
+    private readonly Option<bool> _byHour = new("--by-hour")
+    {
+        Description = "Instead of one number per unit: the fewest servers in each hour of the day (a roster) that meet the targets in every hour, from the time-varying queue over the whole day.",
+    };
+
+    private readonly Option<int[]> _shifts = new("--shifts")
+    {
+        Description = "With --by-hour: shift start hours (e.g. 07,15,23); servers stay the same from each start to the next.",
+        HelpName = "HOURS",
+        CustomParser = ReadShifts,
+    };
+
+    private readonly Option<bool> _exact = new("--exact")
+    {
+        Description = "With --by-hour: judge every trial roster by the exact time-dependent queue (up to 50 servers; slower) instead of MOL first.",
+    };
+
+    private readonly Option<bool> _noCheck = new("--no-check")
+    {
+        Description = "With --by-hour: skip the short simulation that checks the roster hour by hour.",
+    };
+
     protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
 
-    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget];
+    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget, _byHour, _shifts, _exact, _noCheck];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -76,6 +98,16 @@ internal sealed class StaffCommand() : NetworkCommand(
         if (tail != atMost)
         {
             yield return Messages.StaffWaitTailPair;
+        }
+
+        if (settings.IsGiven(_byHour) && (settings.IsGiven(_budget) || settings.IsGiven(_cost) || settings.IsGiven(_maxTurnedAway)))
+        {
+            yield return Messages.StaffByHourTargets;
+        }
+
+        if (!settings.IsGiven(_byHour) && (settings.IsGiven(_shifts) || settings.IsGiven(_exact) || settings.IsGiven(_noCheck)))
+        {
+            yield return Messages.StaffByHourOnly;
         }
 
         bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost || settings.IsGiven(_maxTurnedAway)
@@ -114,6 +146,17 @@ internal sealed class StaffCommand() : NetworkCommand(
         if (targets.IsEmpty && network.Units.All(unit => unit.Targets is not { IsEmpty: false }))
         {
             throw new UsageException(Messages.StaffNeedsTarget);
+        }
+
+        if (request.GetValue(_byHour))
+        {
+            // The hour-by-hour search reads the command line's targets only (per-unit file targets are for the steady state).
+            if (targets.IsEmpty)
+            {
+                throw new UsageException(Messages.StaffNeedsTarget);
+            }
+
+            return ExecuteByHour(request with { Network = network }, targets);
         }
 
         var unitCosts = Costs(network, request.GetValue(_cost) ?? []);
@@ -173,6 +216,46 @@ internal sealed class StaffCommand() : NetworkCommand(
         var problems = Ids(list).Where(id => !ids.Contains(id, StringComparer.Ordinal))
             .Select(id => Messages.UnknownUnit("--only", SafeText.ForDisplay(list), SafeText.ForDisplay(id), NearestName.Hint(id, ids))).ToList();
         return problems.Count == 0 ? Ids(list).ToHashSet(StringComparer.Ordinal) : throw new InputException(string.Join("\n", problems));
+    }
+
+    private int ExecuteByHour(NetworkRequest request, StaffingTargets targets)
+    {
+        var network = request.Network;
+        var options = HourlyStaffingOptions.Default with
+        {
+            ShiftStarts = [.. request.GetValue(_shifts) ?? []],
+            ExactChain = request.GetValue(_exact),
+            Simulate = !request.GetValue(_noCheck),
+        };
+        var plan = HourlyStaffingSearch.Find(network, targets, options, out var impossible);
+        if (plan is null)
+        {
+            throw new InputException(Messages.RosterImpossible(impossible!.Value.UnitId, impossible.Value.Reason));
+        }
+
+        request.Output.Write(
+            json => HourlyStaffingOutput.WriteJson(plan, network.Name, network.TimeUnit, json),
+            csv => HourlyStaffingOutput.WriteCsv(plan, network.TimeUnit, csv),
+            table => HourlyStaffingOutput.WriteTable(plan, network.Name, network.TimeUnit, table));
+        return ExitCodes.Success;
+    }
+
+    private static int[] ReadShifts(ArgumentResult result)
+    {
+        string text = string.Join(",", result.Tokens.Select(token => token.Value));
+        var hours = new List<int>();
+        foreach (string part in text.Split(','))
+        {
+            if (!OptionValues.Number(part, value => value is >= 0 and <= 23 && value == Math.Floor(value), out double hour) || (hours.Count > 0 && hour <= hours[^1]))
+            {
+                result.AddError(Messages.NotShifts(text));
+                return [];
+            }
+
+            hours.Add((int)hour);
+        }
+
+        return [.. hours];
     }
 
     private static string[] ReadCosts(ArgumentResult result)

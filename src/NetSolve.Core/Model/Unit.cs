@@ -37,6 +37,13 @@ public sealed record Unit(string Id, string Label, Servers Servers, double MeanS
     /// <summary>What the unit is expected to meet (the file's <c>targets</c> section); null when nothing is set.</summary>
     public UnitTargets? Targets { get; init; }
 
+    /// <summary>
+    /// Servers by hour of day (or of week) from the file's <c>roster</c>; null when the unit keeps
+    /// <see cref="Servers"/> all the time. Never set on a unit with unlimited servers. The simulator and the by-hour
+    /// formulas follow it; the steady-state formulas keep <see cref="Servers"/>, which the file still gives.
+    /// </summary>
+    public Roster? Roster { get; init; }
+
     /// <summary>The distribution the simulator uses: <see cref="Service"/>, or the v1 meaning of mean and cv.</summary>
     public ServiceDistribution EffectiveService => Service ?? ServiceDistribution.FromMeanAndCv(MeanServiceHours, ServiceCv);
 

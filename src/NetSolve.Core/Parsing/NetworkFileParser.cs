@@ -10,7 +10,7 @@ namespace NetSolve.Parsing;
 internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics) : NodeParser(diagnostics)
 {
     private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups", ArrivalCvKey, TargetsKey];
-    private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full"];
+    private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full", RosterKey];
     private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
 
     private readonly Dictionary<string, SourceLocation> _unitLocations = new(StringComparer.Ordinal);
@@ -140,8 +140,9 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             Error(whenFullNode.Location, id, DiagnosticCodes.BadValue, "when_full needs 'capacity': a unit without a capacity is never full");
         }
 
+        var roster = fields.TryGetValue(RosterKey, out var rosterNode) ? ParseRoster(rosterNode, id, servers, capacity) : null;
         return servers is Servers s && service is ParsedService parsed
-            ? new Unit(id, label, s, parsed.MeanHours, parsed.Cv) { Service = parsed.Distribution, Capacity = capacity, WhenFull = whenFull }
+            ? new Unit(id, label, s, parsed.MeanHours, parsed.Cv) { Service = parsed.Distribution, Capacity = capacity, WhenFull = whenFull, Roster = roster }
             : null;
     }
 

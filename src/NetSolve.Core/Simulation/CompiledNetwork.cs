@@ -18,12 +18,14 @@ internal sealed class CompiledNetwork
         Capacity = new int[n];
         DivertTo = new int[n];
         MeanServiceHours = new double[n];
+        Rosters = new int[]?[n];
         for (int i = 0; i < n; i++)
         {
             Servers[i] = units[i].Servers.IsUnlimited ? NoLimit : units[i].Servers.Count;
             Capacity[i] = units[i].Capacity ?? NoLimit;
             DivertTo[i] = units[i].WhenFull.DivertToUnitId is string target ? index[target] : -1;
             MeanServiceHours[i] = units[i].EffectiveService.MeanHours;
+            Rosters[i] = units[i].Roster is Roster roster ? [.. roster.ServersByHour] : null;
         }
 
         var groups = new List<GroupPlan> { Plan(network, network.Arrivals, network.Routes, network.ArrivalProfile) };
@@ -61,6 +63,9 @@ internal sealed class CompiledNetwork
 
     /// <summary>Servers per unit; <see cref="NoLimit"/> for unlimited.</summary>
     public int[] Servers { get; }
+
+    /// <summary>Servers by hour (24 or 168, from Monday 00:00) per unit, or null for a unit without a roster.</summary>
+    public int[]?[] Rosters { get; }
 
     /// <summary>Most patients in each unit; <see cref="NoLimit"/> when none is set.</summary>
     public int[] Capacity { get; }

@@ -54,7 +54,7 @@ internal sealed partial class SimulationEngine
         for (int i = 0; i < n; i++)
         {
             _queues[i] = new int[4];
-            _units[i].Servers = network.Servers[i];
+            _units[i].Servers = network.Rosters[i] is int[] roster ? roster[0] : network.Servers[i];
             _units[i].Capacity = network.Capacity[i];
             _units[i].DivertTo = network.DivertTo[i];
         }
@@ -95,6 +95,10 @@ internal sealed partial class SimulationEngine
             {
                 OnArrivalCandidate(next.Time, next.Unit);
             }
+            else if (next.Patient == SimulationEvent.RosterMarker)
+            {
+                OnHourChange(next.Time, next.Unit);
+            }
             else
             {
                 OnServiceEnd(next.Time, next.Unit, next.Patient);
@@ -127,6 +131,7 @@ internal sealed partial class SimulationEngine
             }
         }
 
+        ScheduleFirstHourChanges();
         long events = 0;
         for (long chunks = 1; ; chunks++)
         {
@@ -209,7 +214,8 @@ internal sealed partial class SimulationEngine
             _unitHistograms[unit].Record(sojourn);
         }
 
-        if (state.Queued > 0)
+        // Busy above Servers only after a roster took servers off: the server who finishes then leaves (docs/network-file.md, "Servers by hour").
+        if (state.Queued > 0 && state.Busy <= state.Servers)
         {
             StartService(now, unit, Dequeue(unit));
         }
@@ -416,7 +422,7 @@ internal sealed partial class SimulationEngine
 
         foreach (var pending in _events.Pending())
         {
-            if (!pending.IsArrival)
+            if (pending.IsServiceEnd)
             {
                 _units[pending.Unit].BusyArea += _end - InWindow(_patients[pending.Patient].ServiceStart);
             }

@@ -18,7 +18,10 @@ public static class TimeVaryingSolver
 {
     /// <summary>Solves a validated network hour by hour.</summary>
     /// <param name="network">The network; units with unlimited servers and no roster have no queue.</param>
-    /// <param name="rosters">Servers by hour for some units, by unit id; the others keep their servers all day.</param>
+    /// <param name="rosters">
+    /// Servers by hour for some units, by unit id; a unit not listed follows its <see cref="Unit.Roster"/> from the
+    /// file, or else keeps its servers all day.
+    /// </param>
     /// <param name="options">Grid and convergence of the offered load; null for the defaults.</param>
     /// <param name="chainOptions">Exact chain settings; null for the defaults.</param>
     /// <exception cref="TimeVaryingConvergenceException">Flows or a unit did not settle to a periodic pattern.</exception>
@@ -38,6 +41,10 @@ public static class TimeVaryingSolver
             if (rosters is not null && rosters.TryGetValue(unit.Id, out var given))
             {
                 roster = given;
+            }
+            else if (unit.Roster is Roster fromFile)
+            {
+                roster = ServerRoster.ByHour(fromFile.ServersByHour);
             }
             else if (!unit.Servers.IsUnlimited)
             {
