@@ -78,6 +78,15 @@ public sealed class DocumentedCommandsTests
     }
 
     [Fact]
+    public void A_line_marked_long_runs_with_the_short_run_cap_added()
+    {
+        // solve takes no run length, so the added cap shows itself as the usage error it causes.
+        var failures = DocumentedCommandRunner.RunAll(Repository.Root, [Command(5, "netsolve solve networks/harbourside.yaml   # long")]);
+
+        Assert.Contains("exited 2, expected 0: netsolve: --duration", Assert.Single(failures), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_line_outside_the_shell_subset_fails_naming_what_it_uses()
     {
         var failures = DocumentedCommandRunner.RunAll(Repository.Root, [Command(4, "netsolve solve $HOME/x.yaml")]);
