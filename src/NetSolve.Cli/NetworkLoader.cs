@@ -16,18 +16,15 @@ internal static class NetworkLoader
     /// <summary>What a FILE argument may be, as named when it is neither (a folder, say).</summary>
     public const string FileKind = Messages.NetworkOrScenarioFile;
 
-    /// <summary>The network, or an <see cref="InputException"/> carrying every diagnostic when a file is invalid.</summary>
+    /// <summary>
+    /// The network with the list of changes that made it (the scenario file's, then the <c>--set</c> ones, in
+    /// planner's words from <see cref="ChangeWords"/>, for the outputs' headers), or an <see cref="InputException"/>
+    /// carrying every diagnostic when a file is invalid.
+    /// </summary>
     /// <param name="path">The network or scenario file.</param>
     /// <param name="warnings">Where warnings go.</param>
     /// <param name="overrides">What-if texts from <c>--set</c>, applied in order after reading (see <see cref="OverrideParser"/>).</param>
     /// <param name="forSimulation">True for <c>simulate</c>: warnings that the formulas ignore a key do not apply.</param>
-    public static Network Load(string path, WarningLog warnings, IReadOnlyList<string>? overrides = null, bool forSimulation = false) =>
-        Read(path, warnings, overrides, forSimulation).Network;
-
-    /// <summary>
-    /// As <see cref="Load"/>, with the list of changes that made the network: the scenario file's, then the
-    /// <c>--set</c> ones, in planner's words (<see cref="ChangeWords"/>), for the outputs' headers.
-    /// </summary>
     public static LoadedNetwork Read(string path, WarningLog warnings, IReadOnlyList<string>? overrides = null, bool forSimulation = false)
     {
         ArgumentNullException.ThrowIfNull(warnings);
