@@ -1,6 +1,8 @@
+using System.Collections.Immutable;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
 using NetSolve.Parsing;
+using NetSolve.Presentation.Scenarios;
 using NetSolve.Scenarios;
 
 namespace NetSolve.Cli;
@@ -14,12 +16,16 @@ internal static class NetworkLoader
     /// <summary>What a FILE argument may be, as named when it is neither (a folder, say).</summary>
     public const string FileKind = Messages.NetworkOrScenarioFile;
 
-    /// <summary>The network, or an <see cref="InputException"/> carrying every diagnostic when a file is invalid.</summary>
+    /// <summary>
+    /// The network with the list of changes that made it (the scenario file's, then the <c>--set</c> ones, in
+    /// planner's words from <see cref="ChangeWords"/>, for the outputs' headers), or an <see cref="InputException"/>
+    /// carrying every diagnostic when a file is invalid.
+    /// </summary>
     /// <param name="path">The network or scenario file.</param>
     /// <param name="warnings">Where warnings go.</param>
     /// <param name="overrides">What-if texts from <c>--set</c>, applied in order after reading (see <see cref="OverrideParser"/>).</param>
     /// <param name="forSimulation">True for <c>simulate</c>: warnings that the formulas ignore a key do not apply.</param>
-    public static Network Load(string path, WarningLog warnings, IReadOnlyList<string>? overrides = null, bool forSimulation = false)
+    public static LoadedNetwork Read(string path, WarningLog warnings, IReadOnlyList<string>? overrides = null, bool forSimulation = false)
     {
         ArgumentNullException.ThrowIfNull(warnings);
         if (InputFile.TryRead(path, FileKind, out var problem) is not string text)
@@ -27,7 +33,7 @@ internal static class NetworkLoader
             throw new InputException(problem!.ToString());
         }
 
-        var (network, diagnostics) = IsScenario(text, path) ? ReadScenario(text, path) : ReadNetwork(text, path);
+        var (network, scenarioChanges, diagnostics) = IsScenario(text, path) ? ReadScenario(text, path) : ReadNetwork(text, path);
         var errors = diagnostics.Where(d => d.IsError).ToList();
         if (errors.Count > 0)
         {
@@ -39,13 +45,21 @@ internal static class NetworkLoader
             warnings.Report(warning.ToString());
         }
 
-        return overrides is null || overrides.Count == 0
-            ? network!
-            : ApplyOverrides(network!, path, overrides, warnings);
+        if (overrides is null || overrides.Count == 0)
+        {
+            return new LoadedNetwork(network!, scenarioChanges);
+        }
+
+        var changed = ApplyOverrides(network!, path, overrides, warnings, out var setChanges);
+        return new LoadedNetwork(changed, scenarioChanges.AddRange(ChangeWords.Describe(setChanges, network!.TimeUnit)));
     }
 
     /// <summary>Applies <c>--set</c> texts to <paramref name="network"/>; every bad text is reported, one line each.</summary>
-    public static Network ApplyOverrides(Network network, string path, IReadOnlyList<string> overrides, WarningLog warnings)
+    public static Network ApplyOverrides(Network network, string path, IReadOnlyList<string> overrides, WarningLog warnings) =>
+        ApplyOverrides(network, path, overrides, warnings, out _);
+
+    /// <summary>As the other overload, also giving the parsed changes in the order they applied.</summary>
+    private static Network ApplyOverrides(Network network, string path, IReadOnlyList<string> overrides, WarningLog warnings, out IReadOnlyList<NetworkChange> applied)
     {
         ArgumentNullException.ThrowIfNull(network);
         ArgumentNullException.ThrowIfNull(overrides);
@@ -75,6 +89,8 @@ internal static class NetworkLoader
                     warnings.Report(warning.ToString());
                 }
 
+                applied = changes;
+
                 // The name travels into every table, JSON document, map and report: say that these are what-if numbers.
                 return changed with { Name = Messages.WhatIfName(changed.Name, overrides) };
             }
@@ -97,18 +113,19 @@ internal static class NetworkLoader
         }
     }
 
-    private static (Network? Network, IReadOnlyList<Diagnostic> Diagnostics) ReadNetwork(string text, string path)
+    private static (Network? Network, ImmutableArray<string> Changes, IReadOnlyList<Diagnostic> Diagnostics) ReadNetwork(string text, string path)
     {
         var result = NetworkReader.ReadText(text, path);
-        return (result.Network, result.Diagnostics);
+        return (result.Network, [], result.Diagnostics);
     }
 
-    private static (Network? Network, IReadOnlyList<Diagnostic> Diagnostics) ReadScenario(string text, string path)
+    private static (Network? Network, ImmutableArray<string> Changes, IReadOnlyList<Diagnostic> Diagnostics) ReadScenario(string text, string path)
     {
         var result = ScenarioReader.ReadText(text, path, basePath => NetworkReader.ReadFile(ScenarioReader.ResolveBase(path, basePath)));
 
         // The name travels into every output, as a what-if's does: say which scenario the numbers are for.
         var network = result.Scenario is Scenario scenario ? scenario.Network with { Name = Messages.ScenarioName(scenario.Network.Name, scenario.Name) } : null;
-        return (network, result.Diagnostics);
+        var changes = result.Scenario is Scenario read ? ChangeWords.Describe(read.Changes, read.Network.TimeUnit) : [];
+        return (network, changes, result.Diagnostics);
     }
 }

@@ -27,7 +27,7 @@ internal sealed class MapCommand() : NetworkCommand(
     protected override int Execute(NetworkRequest request)
     {
         var solution = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
-        var layout = MapLayoutBuilder.Build(solution, request.GetValue(_direction) == "right" ? MapDirection.LeftToRight : MapDirection.TopToBottom);
+        var layout = MapLayoutBuilder.Build(solution, request.GetValue(_direction) == "right" ? MapDirection.LeftToRight : MapDirection.TopToBottom) with { Changes = request.Changes };
         string target = request.GetValue(_output)!;
         byte[] content = Path.GetExtension(target).ToLowerInvariant() switch
         {

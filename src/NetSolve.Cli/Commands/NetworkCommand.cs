@@ -54,10 +54,10 @@ internal abstract class NetworkCommand(string name, string description)
         {
             string path = parse.GetValue(file)!;
             var warnings = new WarningLog(context);
-            var network = NetworkLoader.Load(path, warnings, parse.GetValue(set), ForSimulation);
-            var output = new ResultOutput(context.Out, format is null ? OutputFormat.Table : CommonOptions.FormatOf(parse.GetValue(format)), TableCarriesCaution);
+            var loaded = NetworkLoader.Read(path, warnings, parse.GetValue(set), ForSimulation);
+            var output = new ResultOutput(context.Out, format is null ? OutputFormat.Table : CommonOptions.FormatOf(parse.GetValue(format)), TableCarriesCaution, loaded.Changes);
             double threshold = strain is null ? Defaults.StrainThreshold : parse.GetValue(strain);
-            return Execute(new NetworkRequest(path, network, threshold, output, context, warnings, parse));
+            return Execute(new NetworkRequest(path, loaded.Network, threshold, output, context, warnings, parse) { Changes = loaded.Changes });
         });
         return command;
     }

@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.CommandLine;
 using NetSolve.Analysis;
 using NetSolve.Cli.Output;
@@ -27,6 +28,13 @@ internal sealed record NetworkRequest(
     WarningLog Warnings,
     ParseResult Parse)
 {
+    /// <summary>
+    /// What the scenario file and <c>--set</c> changed, in planner's words and in the order they applied; empty for a
+    /// plain network file. <see cref="Output"/> already lists them under a table's title and in JSON; a command that
+    /// writes a file of its own (the map) shows them itself.
+    /// </summary>
+    public ImmutableArray<string> Changes { get; init; } = [];
+
     /// <summary>Solves <see cref="Network"/> with <see cref="StrainThreshold"/>.</summary>
     public NetworkSolution Solve()
     {

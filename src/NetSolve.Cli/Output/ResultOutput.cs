@@ -1,6 +1,7 @@
 using System.Text;
 using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Scenarios;
 
 namespace NetSolve.Cli.Output;
 
@@ -11,7 +12,11 @@ namespace NetSolve.Cli.Output;
 /// <param name="output">Stdout.</param>
 /// <param name="format">The format asked for.</param>
 /// <param name="withCaution">True when the table ends with <see cref="Caution.Text"/>; JSON and CSV never carry it.</param>
-internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool withCaution)
+/// <param name="changes">
+/// What a scenario file or <c>--set</c> changed, listed under the table's title and in the JSON's <c>changes</c>
+/// array (<see cref="ChangesHeader"/>); CSV rows stay plain data. Null or empty leaves every output as it was.
+/// </param>
+internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool withCaution, IReadOnlyList<string>? changes = null)
 {
     /// <summary>The format asked for.</summary>
     public OutputFormat Format => format;
@@ -34,7 +39,7 @@ internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool 
         {
             using var buffer = new MemoryStream();
             json(buffer);
-            return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+            return Encoding.UTF8.GetString(ChangesHeader.AddToJson(buffer.ToArray(), changes ?? [])) + "\n";
         }
 
         using var writer = new StringWriter(System.Globalization.CultureInfo.InvariantCulture) { NewLine = output.NewLine };
@@ -45,6 +50,12 @@ internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool 
         else
         {
             table(writer);
+            if (changes is { Count: > 0 })
+            {
+                string titled = ChangesHeader.AddToTable(writer.ToString(), changes, output.NewLine);
+                writer.GetStringBuilder().Clear().Append(titled);
+            }
+
             if (withCaution)
             {
                 writer.Write("\n" + Caution.Text + "\n");

@@ -19,7 +19,7 @@ public static class DotMapWriter
         var dot = new StringBuilder();
         dot.Append("digraph ").Append(Quote(layout.Title)).Append(" {\n");
         dot.Append("  graph [rankdir=").Append(layout.Direction == MapDirection.TopToBottom ? "TB" : "LR")
-            .Append(", fontname=\"DejaVu Sans\", labelloc=t, label=").Append(Quote(MapLegend.ShownTitle(layout) + " (rates per " + TimeConstants.Name(layout.TimeUnit) + ")")).Append("];\n");
+            .Append(", fontname=\"DejaVu Sans\", labelloc=t, label=").Append(Quote(MapLegend.ShownTitle(layout) + " (rates per " + TimeConstants.Name(layout.TimeUnit) + ")" + (MapLegend.ShownSubtitle(layout) is string subtitle ? "\n" + subtitle : string.Empty))).Append("];\n");
         dot.Append("  node [shape=box, fontname=\"DejaVu Sans\", fontsize=11];\n");
         dot.Append("  edge [fontname=\"DejaVu Sans\", fontsize=10];\n");
         foreach (var node in layout.Nodes)

@@ -18,4 +18,11 @@ public sealed record MapLayout(
     double Width,
     double Height,
     ImmutableArray<MapNode> Nodes,
-    ImmutableArray<MapEdge> Edges);
+    ImmutableArray<MapEdge> Edges)
+{
+    /// <summary>
+    /// What a scenario file or <c>--set</c> changed, one phrase each, drawn as a line under the title; empty for a
+    /// network as written, which then draws exactly as before.
+    /// </summary>
+    public ImmutableArray<string> Changes { get; init; } = [];
+}

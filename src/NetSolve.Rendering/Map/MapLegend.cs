@@ -1,6 +1,7 @@
 using System.Xml.Linq;
 using NetSolve.Model;
 using NetSolve.Presentation;
+using NetSolve.Presentation.Scenarios;
 
 namespace NetSolve.Rendering.Map;
 
@@ -21,12 +22,22 @@ internal static class MapLegend
         }
 
         double widestItem = items.Max(item => item.Width);
-        minWidth = Math.Max(titleWidth, widestItem) + (2.0 * margin);
+        string? subtitle = ShownSubtitle(layout);
+        double subtitleWidth = subtitle is null ? 0.0 : TextWidth.Of(subtitle, MapTypography.DetailSize, bold: false);
+        minWidth = Math.Max(Math.Max(titleWidth, subtitleWidth), widestItem) + (2.0 * margin);
         double available = Math.Max(layout.Width, minWidth) - (2.0 * margin);
 
         var header = new XElement(Svg + "g", new XAttribute("class", "legend"));
         double y = margin + SvgMapWriter.TitleFontSize;
         header.Add(SvgMapWriter.Text(margin, y, SvgMapWriter.TitleFontSize, title, bold: true));
+        if (subtitle is not null)
+        {
+            y += MapTypography.DetailSize * 1.5;
+            var line = SvgMapWriter.Text(margin, y, MapTypography.DetailSize, subtitle);
+            line.Add(new XAttribute("class", "changes"));
+            header.Add(line);
+        }
+
         y += SvgMapWriter.TitleFontSize * 0.6;
 
         double rowHeight = SvgMapWriter.SwatchHeight + 8.0;
@@ -57,6 +68,18 @@ internal static class MapLegend
         Math.Max(layout.Width - (2.0 * MapTypography.Margin), MapTypography.MaxTitleWidth),
         SvgMapWriter.TitleFontSize,
         bold: true);
+
+    /// <summary>
+    /// The changes line under the title (<c>changes: imaging: +1 server; ...</c>), cut as the title is; null when the
+    /// network is drawn as written.
+    /// </summary>
+    internal static string? ShownSubtitle(MapLayout layout) => layout.Changes.IsDefaultOrEmpty
+        ? null
+        : Ellipsis.Fit(
+            ChangesHeader.Line(layout.Changes),
+            Math.Max(layout.Width - (2.0 * MapTypography.Margin), MapTypography.MaxTitleWidth),
+            MapTypography.DetailSize,
+            bold: false);
 
     private static List<LegendItem> Items(TimeUnit timeUnit, bool hasDiversion)
     {

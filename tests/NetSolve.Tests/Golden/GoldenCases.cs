@@ -46,6 +46,12 @@ internal static class GoldenCases
             }
         }
 
+        // A scenario file with --set on top: the changes line under the title and the JSON's changes array are pinned.
+        foreach (var golden in Printed("solve.harbourside-fourth-scanner.set-lab-7", "solve", Scenario("harbourside-fourth-scanner"), "--set", "servers.lab=7"))
+        {
+            yield return golden;
+        }
+
         foreach (var golden in Printed("compare.harbourside.scenarios", "compare", [Network("harbourside"), .. Scenarios.Select(Scenario)]))
         {
             yield return golden;
