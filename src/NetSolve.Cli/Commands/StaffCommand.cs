@@ -250,7 +250,7 @@ internal sealed class StaffCommand() : NetworkCommand(
         {
             byte[]? chart = string.Equals(Path.GetExtension(chartPath), ".png", StringComparison.OrdinalIgnoreCase)
                 ? RosterChart.Png(plan, network)
-                : RosterChart.Svg(plan, network) is string svg ? new UTF8Encoding(false).GetBytes("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + svg + "\n") : null;
+                : RosterChart.Svg(plan, network) is string svg ? new UTF8Encoding(false).GetBytes(svg + "\n") : null;
             if (chart is null)
             {
                 throw new InputException(Messages.RosterChartEmpty(chartPath));
