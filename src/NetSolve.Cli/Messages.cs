@@ -155,6 +155,12 @@ internal static class Messages
     /// <summary><c>staff</c>: --shifts, --exact or --no-check without --by-hour.</summary>
     public const string StaffByHourOnly = "staff: --shifts, --exact and --no-check shape a roster; give them with --by-hour";
 
+    /// <summary><c>staff</c>: --chart without --by-hour.</summary>
+    public const string StaffChartByHourOnly = "staff: --chart draws a roster by hour; give it with --by-hour";
+
+    /// <summary><c>staff --by-hour --chart</c> when no unit has a roster to draw (every unit has unlimited servers).</summary>
+    public static string RosterChartEmpty(string path) => $"--chart '{Q(path)}': no unit has a limited number of servers, so there is no roster to draw";
+
     /// <summary><c>staff --shifts</c> not a list of start hours.</summary>
     public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";
 

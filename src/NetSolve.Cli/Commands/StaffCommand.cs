@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.CommandLine.Parsing;
+using System.Text;
 using NetSolve.Analysis;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
@@ -7,6 +8,7 @@ using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Staffing;
 using NetSolve.Cli.Settings;
 using NetSolve.Parsing;
+using NetSolve.Rendering.Staffing;
 
 namespace NetSolve.Cli.Commands;
 
@@ -88,9 +90,14 @@ internal sealed class StaffCommand() : NetworkCommand(
         Description = "With --by-hour: skip the short simulation that checks the roster hour by hour.",
     };
 
+    /// <summary>Chart extensions and what they write.</summary>
+    private static readonly string[] ChartExtensions = [".svg", ".png"];
+
+    private readonly Option<string> _chart = ChartOption();
+
     protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
 
-    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget, _byHour, _shifts, _exact, _noCheck];
+    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget, _byHour, _shifts, _exact, _noCheck, _chart];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -108,6 +115,11 @@ internal sealed class StaffCommand() : NetworkCommand(
         if (!settings.IsGiven(_byHour) && (settings.IsGiven(_shifts) || settings.IsGiven(_exact) || settings.IsGiven(_noCheck)))
         {
             yield return Messages.StaffByHourOnly;
+        }
+
+        if (!settings.IsGiven(_byHour) && settings.IsGiven(_chart))
+        {
+            yield return Messages.StaffChartByHourOnly;
         }
 
         bool targets = settings.IsGiven(_maxUtil) || settings.IsGiven(_maxWait) || settings.IsGiven(_maxTime) || tail || atMost || settings.IsGiven(_maxTurnedAway)
@@ -233,11 +245,48 @@ internal sealed class StaffCommand() : NetworkCommand(
             throw new InputException(Messages.RosterImpossible(impossible!.Value.UnitId, impossible.Value.Reason));
         }
 
+        // The chart is drawn and written before anything is printed, so a chart that cannot be written leaves no output behind.
+        if (request.GetValue(_chart) is string chartPath)
+        {
+            byte[]? chart = string.Equals(Path.GetExtension(chartPath), ".png", StringComparison.OrdinalIgnoreCase)
+                ? RosterChart.Png(plan, network)
+                : RosterChart.Svg(plan, network) is string svg ? new UTF8Encoding(false).GetBytes(svg + "\n") : null;
+            if (chart is null)
+            {
+                throw new InputException(Messages.RosterChartEmpty(chartPath));
+            }
+
+            AtomicFile.Write(chartPath, stream => stream.Write(chart));
+        }
+
         request.Output.Write(
             json => HourlyStaffingOutput.WriteJson(plan, network.Name, network.TimeUnit, json),
             csv => HourlyStaffingOutput.WriteCsv(plan, network.TimeUnit, csv),
             table => HourlyStaffingOutput.WriteTable(plan, network.Name, network.TimeUnit, table));
         return ExitCodes.Success;
+    }
+
+    /// <summary><c>--chart FILE</c>: its extension (.svg or .png) picks the format; another is a usage error.</summary>
+    private static Option<string> ChartOption()
+    {
+        var option = new Option<string>("--chart")
+        {
+            Description = "With --by-hour: also draw the roster here, per unit demand by hour against the roster's servers and the flat staffing; the extension picks the format: .svg or .png.",
+            HelpName = "FILE",
+        };
+        option.Validators.Add(result =>
+        {
+            string value = result.GetValueOrDefault<string>() ?? string.Empty;
+            if (value.IndexOfAny(Path.GetInvalidPathChars()) >= 0)
+            {
+                result.AddError(Messages.NotPath("--chart", value));
+            }
+            else if (!ChartExtensions.Contains(Path.GetExtension(value).ToLowerInvariant(), StringComparer.Ordinal))
+            {
+                result.AddError(Messages.WrongExtension("--chart", value, ChartExtensions));
+            }
+        });
+        return option;
     }
 
     private static int[] ReadShifts(ArgumentResult result)

@@ -116,6 +116,14 @@ internal static class GoldenCases
             yield return golden;
         }
 
+        // Staffing by hour on the roster example: every format with the short simulated check (under a second), and
+        // shift blocks without it.
+        foreach (var golden in Printed("staff.wrenfield-emergency-roster.by-hour-max-wait-10min", "staff", Network("wrenfield-emergency-roster"), "--by-hour", "--max-wait", "10min")
+            .Concat(Printed("staff.wrenfield-emergency-roster.by-hour-shifts-no-check", "staff", Network("wrenfield-emergency-roster"), "--by-hour", "--max-wait", "10min", "--shifts", "07,15,23", "--no-check")))
+        {
+            yield return golden;
+        }
+
         yield return new GoldenCase("map.ashcombe-targets", "svg", ["map", Network("ashcombe-targets")], "ashcombe-targets.svg");
 
         yield return new GoldenCase("fit.rowan-urgent-care", "yaml", ["fit", Log("rowan-urgent-care")], "rowan-urgent-care.yaml");

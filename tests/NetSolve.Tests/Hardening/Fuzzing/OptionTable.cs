@@ -40,6 +40,7 @@ internal static class OptionTable
         ["--shifts"] = OptionKind.Text,
         ["--exact"] = OptionKind.Flag,
         ["--no-check"] = OptionKind.Flag,
+        ["--chart"] = OptionKind.OutputPath,
         ["--seed"] = OptionKind.Seed,
         ["--replications"] = OptionKind.WholeNumber,
         ["--warmup"] = OptionKind.Duration,
