@@ -155,6 +155,10 @@ internal static class Messages
     /// <summary><c>staff</c>: --shifts, --exact or --no-check without --by-hour.</summary>
     public const string StaffByHourOnly = "staff: --shifts, --exact and --no-check shape a roster; give them with --by-hour";
 
+    /// <summary><c>solve</c>: the hour-by-hour formulas did not settle; the steady state is still written.</summary>
+    public static string SolveByHourNotSettled(string file, string reason) =>
+        $"{file}: warning: no hour-by-hour view: the time-varying formulas did not settle ({reason}); the steady state below is the daily average";
+
     /// <summary><c>staff --shifts</c> not a list of start hours.</summary>
     public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";
 
