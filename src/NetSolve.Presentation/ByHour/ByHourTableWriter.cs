@@ -19,6 +19,9 @@ public static class ByHourTableWriter
     private static readonly Column<ByHourRow>[] DetailColumns =
         [ByHourColumns.Hour, ByHourColumns.ArrivalRate, ByHourColumns.Servers, ByHourColumns.Utilisation, ByHourColumns.MeanQueue, ByHourColumns.MeanWait];
 
+    /// <summary>True when <see cref="Write"/> writes a section: an hour-by-hour solution in which some unit's arrivals or servers vary.</summary>
+    public static bool HasSection(NetworkSolution solution) => ByHourUnit.All(solution).Any(unit => unit.Varies);
+
     /// <summary>Writes the section; nothing without an hour-by-hour solution.</summary>
     public static void Write(NetworkSolution solution, TextWriter output)
     {

@@ -13,7 +13,7 @@ public static class SolutionTableWriter
     {
         ArgumentNullException.ThrowIfNull(solution);
         ArgumentNullException.ThrowIfNull(output);
-        string average = solution.ByHour is null ? string.Empty : "; steady state at the daily average arrivals, by hour below";
+        string average = !ByHourTableWriter.HasSection(solution) ? string.Empty : "; steady state at the daily average arrivals, by hour below";
         output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)}{average})\n\n");
         PeopleTableWriter.Write(UnitColumns.Table(solution), output);
         if (!solution.Groups.IsEmpty)

@@ -48,6 +48,18 @@ public sealed class ByHourOutputTests
     }
 
     [Fact]
+    public void By_hour_on_a_network_without_a_profile_adds_hours_to_json_but_no_empty_section_to_the_table()
+    {
+        var table = CliRun.Run("solve", TestFiles.Network("millbrook-clinic"), "--by-hour");
+        Assert.Equal(0, table.ExitCode);
+        Assert.DoesNotContain("by hour below", table.Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("hour by hour", table.Out, StringComparison.Ordinal);
+
+        using var json = JsonDocument.Parse(CliRun.Run("solve", TestFiles.Network("millbrook-clinic"), "--by-hour", "--format", "json").Out);
+        Assert.All(json.RootElement.GetProperty("units").EnumerateArray(), unit => Assert.Equal(24, unit.GetProperty("by_hour").GetProperty("hours").GetInt32()));
+    }
+
+    [Fact]
     public void A_constant_profile_gives_the_steady_state_in_every_hour()
     {
         var result = CliRun.Run("solve", ClinicFlatProfile, "--format", "json");
