@@ -161,6 +161,10 @@ internal static class Messages
     /// <summary><c>staff --by-hour --chart</c> when no unit has a roster to draw (every unit has unlimited servers).</summary>
     public static string RosterChartEmpty(string path) => $"--chart '{Q(path)}': no unit has a limited number of servers, so there is no roster to draw";
 
+    /// <summary><c>solve</c>: the hour-by-hour formulas did not settle; the steady state is still written.</summary>
+    public static string SolveByHourNotSettled(string file, string reason) =>
+        $"{file}: warning: no hour-by-hour view: the time-varying formulas did not settle ({reason}); the steady state below is the daily average";
+
     /// <summary><c>staff --shifts</c> not a list of start hours.</summary>
     public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";
 

@@ -16,7 +16,6 @@ internal sealed partial class NetworkFileParser
     private static readonly string[] ProfileKeys = ["hour_of_day", "day_of_week"];
     private static readonly string[] GroupKeys = ["label", "arrivals", "routes", "arrival_profile", "services"];
     private static readonly string[] ServiceKeys = ["service", "service_cv", "service_distribution", "service_samples"];
-    private const string SimulateHint = "netsolve simulate uses it";
 
     private readonly List<(string UnitId, YamlScalar Target)> _diversions = [];
     private readonly Dictionary<string, SourceLocation> _groupLocations = new(StringComparer.Ordinal);
@@ -220,8 +219,7 @@ internal sealed partial class NetworkFileParser
             return null;
         }
 
-        Warning(mapping.Location, null, DiagnosticCodes.IgnoredByFormulas,
-            $"{where} is ignored by the formulas, which use the mean arrival rate; {SimulateHint}");
+        // No warning: solve shows the hour-by-hour formulas beside the daily-average steady state, and simulate follows the profile.
         return ArrivalProfile.Create(hours, days);
     }
 

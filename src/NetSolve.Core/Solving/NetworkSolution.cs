@@ -20,6 +20,12 @@ public sealed record NetworkSolution(
     /// </summary>
     public ImmutableArray<GroupResult> Groups { get; init; } = [];
 
+    /// <summary>
+    /// The hour-by-hour solution (docs/time-of-day.md), present only when arrivals vary by hour and the caller asked
+    /// for it (<see cref="HourByHour.AddWhenArrivalsVary"/>); the steady-state <see cref="Units"/> are then the daily average.
+    /// </summary>
+    public TimeVaryingSolution? ByHour { get; init; }
+
     /// <summary>True exactly when no unit is unstable.</summary>
     public bool IsStable => Units.All(unit => unit.IsStable);
 }

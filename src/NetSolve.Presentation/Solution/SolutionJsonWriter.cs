@@ -1,5 +1,6 @@
 using System.Text.Json;
 using NetSolve.Model;
+using NetSolve.Presentation.ByHour;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Solving;
@@ -39,11 +40,15 @@ public static class SolutionJsonWriter
         json.Flush();
     }
 
-    /// <summary>The units array; <c>targets_breached</c>, present only when some unit has a target, is an array of keys.</summary>
+    /// <summary>
+    /// The units array; <c>targets_breached</c>, present only when some unit has a target, is an array of keys; <c>by_hour</c>,
+    /// present only with an hour-by-hour solution, is an object of arrays.
+    /// </summary>
     private static void WriteUnits(NetworkSolution solution, Utf8JsonWriter json)
     {
         var table = UnitColumns.Table(solution);
-        if (!TargetWords.AnyTargets(solution))
+        var byHour = ByHourUnit.All(solution);
+        if (!TargetWords.AnyTargets(solution) && byHour.Count == 0)
         {
             JsonTableWriter.WriteArray(table, "units", json);
             return;
@@ -70,6 +75,11 @@ public static class SolutionJsonWriter
                 {
                     JsonTableWriter.WriteCell(json, id, table.Rows[row][i], table.TimeUnit);
                 }
+            }
+
+            if (byHour.Count > 0)
+            {
+                ByHourJsonWriter.Write(byHour[row], table.TimeUnit, json);
             }
 
             json.WriteEndObject();

@@ -1,4 +1,5 @@
 using NetSolve.Model;
+using NetSolve.Presentation.ByHour;
 using NetSolve.Presentation.Formats;
 using NetSolve.Solving;
 
@@ -12,7 +13,8 @@ public static class SolutionTableWriter
     {
         ArgumentNullException.ThrowIfNull(solution);
         ArgumentNullException.ThrowIfNull(output);
-        output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)})\n\n");
+        string average = !ByHourTableWriter.HasSection(solution) ? string.Empty : "; steady state at the daily average arrivals, by hour below";
+        output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)}{average})\n\n");
         PeopleTableWriter.Write(UnitColumns.Table(solution), output);
         if (!solution.Groups.IsEmpty)
         {
@@ -27,6 +29,8 @@ public static class SolutionTableWriter
         {
             output.Write(targets + "\n");
         }
+
+        ByHourTableWriter.Write(solution, output);
     }
 
     /// <summary>What every table for people says in its title: the rates' time unit and the strain threshold.</summary>

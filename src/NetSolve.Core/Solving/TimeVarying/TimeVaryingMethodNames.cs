@@ -12,6 +12,9 @@ public static class TimeVaryingMethodNames
     /// <summary>MOL where the load is below the servers; a fluid queue where the load reaches them and while it drains.</summary>
     public const string ModifiedOfferedLoadWithFluid = "MOL, fluid queue while the load reaches the servers";
 
+    /// <summary>No waiting places and more servers than the exact chain takes: Erlang B at the time-varying offered load (Jagerman 1975).</summary>
+    public const string ModifiedOfferedLoadLoss = "MOL (Erlang B at the time-varying offered load)";
+
     /// <summary>Unlimited servers: nobody waits; the patients in the unit are the offered load.</summary>
     public const string InfiniteServers = MethodNames.InfiniteServers;
 

@@ -6,7 +6,9 @@ namespace NetSolve.Solving;
 /// Hour-by-hour waits of every unit of a network: the offered load from <see cref="TimeVaryingTraffic"/>, then per
 /// unit MOL (<see cref="ModifiedOfferedLoad"/>) where the load stays below the servers, else the exact chain
 /// (<see cref="PeriodicBirthDeathChain"/>) for units of at most <see cref="ExactChainOptions.MaxServers"/> servers,
-/// else MOL with a fluid queue (<see cref="FluidQueue"/>).
+/// else MOL with a fluid queue (<see cref="FluidQueue"/>). A unit with a capacity and at most that many servers gets the
+/// exact chain with its capacity (arrivals at a full unit turned away); a larger one without waiting places gets
+/// <see cref="ModifiedOfferedLoadLoss"/>; a larger one with waiting places the methods above, which ignore its capacity.
 /// </summary>
 /// <remarks>
 /// Each unit is taken on its own, fed by the infinite-server arrival rate λ_j(t): upstream queues, which delay and
@@ -73,6 +75,22 @@ public static class TimeVaryingSolver
         double meanArrivals = load.ArrivalsPerHourByHour.Average();
         double meanLoad = load.OfferedLoadByHour.Average();
         double meanServiceHours = meanArrivals > 0.0 ? meanLoad / meanArrivals : unit.EffectiveService.MeanHours;
+        if (unit.Capacity is int capacity)
+        {
+            // A capacity bounds the chain at capacity + 1 states and it always has an answer, where MOL and the fluid
+            // would let the queue grow past the places the unit has. Large units without waiting places take seconds in
+            // the chain (a long stay settles over many cycles), so they get MOL's loss form instead.
+            if (roster.Max <= chainOptions.MaxServers)
+            {
+                return PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions, Math.Max(capacity, roster.Max));
+            }
+
+            if (capacity <= roster.Servers.Min())
+            {
+                return ModifiedOfferedLoadLoss.Evaluate(load, roster);
+            }
+        }
+
         if (meanLoad >= roster.MeanOver(cycleHours))
         {
             return HourlyWaits.Unstable;

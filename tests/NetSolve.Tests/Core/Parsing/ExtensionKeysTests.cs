@@ -59,15 +59,15 @@ public sealed class ExtensionKeysTests
         Assert.Equal(9 * 24.0, Assert.Single(group.Services).Service.MeanHours, 12);
     }
 
-    // Source: docs/methods.md: the formulas use service distributions, capacities, diversions and patient groups; only
-    // the hour-of-day profile is still replaced by its mean rate, and that alone is reported.
+    // Source: docs/methods.md and docs/time-of-day.md: the formulas use service distributions, capacities, diversions and
+    // patient groups, and solve follows the arrival profile hour by hour, so nothing is reported as ignored.
     [Fact]
-    public void Only_the_arrival_profile_is_reported_as_left_to_the_simulation()
+    public void No_key_of_the_simulation_example_is_reported_as_left_to_the_simulation()
     {
         var result = NetworkReader.ReadFile(Path.Combine("networks", "larkspur-simulation.yaml"));
 
         var ignored = result.Diagnostics.Where(d => d.Code == DiagnosticCodes.IgnoredByFormulas).Select(d => d.ToString()).ToList();
-        Assert.Equal(["networks/larkspur-simulation.yaml:7:3: warning: arrival_profile is ignored by the formulas, which use the mean arrival rate; netsolve simulate uses it"], ignored);
+        Assert.Empty(ignored);
     }
 
     [Fact]
