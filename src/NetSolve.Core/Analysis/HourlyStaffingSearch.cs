@@ -134,7 +134,7 @@ public static class HourlyStaffingSearch
                 ? [.. Enumerable.Range(0, hours).Select(h => HourlyTargetCheck.WaitOver(waits, h, tail))]
                 : [],
             MeetsByHour = [.. ratios.Select(HourlyTargetCheck.Meets)],
-            FlatServers = Flat(evaluator, servers.Max(), hours),
+            FlatServers = Flat(evaluator, servers.Max(), hours, ratios.All(HourlyTargetCheck.Meets)),
         };
     }
 
@@ -156,14 +156,19 @@ public static class HourlyStaffingSearch
         return worst;
     }
 
-    /// <summary>The fewest servers, the same all day, that meet the targets in every hour, searched from <paramref name="start"/>.</summary>
-    private static int Flat(CycleEvaluator evaluator, int start, int hours)
+    /// <summary>
+    /// The fewest servers, the same all day, that meet the targets in every hour, searched down from the roster's most
+    /// servers <paramref name="start"/>: having at least the roster's servers in every hour, that many meet the
+    /// targets whenever the roster does. When the roster itself misses (the search ran out of evaluations) there is
+    /// nothing to compare, and the roster's most servers are reported, so the search never runs without bound.
+    /// </summary>
+    private static int Flat(CycleEvaluator evaluator, int start, int hours, bool rosterMeets)
     {
         bool Meets(int c) => evaluator.Evaluate([.. Enumerable.Repeat(c, hours)]).Ratios.All(HourlyTargetCheck.Meets);
         int c = start;
-        while (!Meets(c) && c < Servers.MaxCount)
+        if (!rosterMeets)
         {
-            c++;
+            return c;
         }
 
         while (c > 1 && Meets(c - 1))
