@@ -59,7 +59,8 @@ public static class TerminalText
         return escaped.ToString();
     }
 
-    private static int FirstUnsafe(string text, bool keepLineFeeds)
+    /// <summary>The index of the first character that must not reach a screen or file as it is, or -1; a valid surrogate pair is safe.</summary>
+    public static int FirstUnsafe(string text, bool keepLineFeeds)
     {
         for (int i = 0; i < text.Length; i++)
         {
@@ -77,7 +78,11 @@ public static class TerminalText
         return -1;
     }
 
-    private static bool IsUnsafe(char c, bool keepLineFeeds) => c switch
+    /// <summary>
+    /// A control character (C0 except line feed when kept, DEL, C1), a bidirectional override or isolate, U+FFFE/U+FFFF
+    /// or a surrogate (callers skip valid pairs first): the one rule shared by terminal escaping and display cleaning.
+    /// </summary>
+    public static bool IsUnsafe(char c, bool keepLineFeeds) => c switch
     {
         '\n' => !keepLineFeeds,
         < ' ' or '\u007F' => true,

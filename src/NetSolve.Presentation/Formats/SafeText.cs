@@ -1,3 +1,4 @@
+using NetSolve.Diagnostics;
 using System.Text;
 
 namespace NetSolve.Presentation.Formats;
@@ -28,7 +29,7 @@ public static class SafeText
     private static string Clean(string text, bool keepLineFeeds)
     {
         ArgumentNullException.ThrowIfNull(text);
-        int first = FirstUnsafe(text, keepLineFeeds);
+        int first = TerminalText.FirstUnsafe(text, keepLineFeeds);
         if (first < 0)
         {
             return text;
@@ -46,41 +47,12 @@ public static class SafeText
             }
             else
             {
-                clean.Append(IsUnsafe(c, keepLineFeeds) ? Shown(c) : c);
+                clean.Append(TerminalText.IsUnsafe(c, keepLineFeeds) ? Shown(c) : c);
             }
         }
 
         return clean.ToString();
     }
-
-    private static int FirstUnsafe(string text, bool keepLineFeeds)
-    {
-        for (int i = 0; i < text.Length; i++)
-        {
-            char c = text[i];
-            if (char.IsHighSurrogate(c) && i + 1 < text.Length && char.IsLowSurrogate(text[i + 1]))
-            {
-                i++;
-            }
-            else if (IsUnsafe(c, keepLineFeeds))
-            {
-                return i;
-            }
-        }
-
-        return -1;
-    }
-
-    private static bool IsUnsafe(char c, bool keepLineFeeds) => c switch
-    {
-        '\n' => !keepLineFeeds,
-        < ' ' or '\u007F' => true,
-        >= '\u0080' and <= '\u009F' => true,
-        >= '\u202A' and <= '\u202E' => true,
-        >= '\u2066' and <= '\u2069' => true,
-        '\uFFFE' or '\uFFFF' => true,
-        _ => char.IsSurrogate(c),
-    };
 
     private static char Shown(char c) => c switch
     {
