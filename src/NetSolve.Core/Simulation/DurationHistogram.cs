@@ -87,33 +87,16 @@ internal sealed class DurationHistogram
 
         double below = Zeros;
         double last = 0.0;
-        for (int i = 0; i < _octaves.Length; i++)
+        foreach (var (low, high, count) in NonEmptyBuckets())
         {
-            if (_octaves[i] is not long[] counts)
+            last = high;
+            if (below + count >= target)
             {
-                continue;
+                double within = Math.Clamp((target - below) / count, 0.0, 1.0);
+                return low + (within * (high - low));
             }
 
-            long octaveKey = (long)(_firstOctave + i) << SubBucketBits;
-            for (int b = 0; b < BucketsPerOctave; b++)
-            {
-                long count = counts[b];
-                if (count == 0)
-                {
-                    continue;
-                }
-
-                double low = LowerEdge(octaveKey + b);
-                double high = LowerEdge(octaveKey + b + 1);
-                last = high;
-                if (below + count >= target)
-                {
-                    double within = Math.Clamp((target - below) / count, 0.0, 1.0);
-                    return low + (within * (high - low));
-                }
-
-                below += count;
-            }
+            below += count;
         }
 
         return last;
@@ -136,6 +119,22 @@ internal sealed class DurationHistogram
         }
 
         double below = Zeros;
+        foreach (var (low, high, count) in NonEmptyBuckets())
+        {
+            if (duration < high)
+            {
+                return duration <= low ? below / Count : (below + (count * (duration - low) / (high - low))) / Count;
+            }
+
+            below += count;
+        }
+
+        return 1.0;
+    }
+
+    /// <summary>Every bucket holding a count, shortest first, with its edges: the walk shared by quantiles and shares.</summary>
+    private IEnumerable<(double Low, double High, long Count)> NonEmptyBuckets()
+    {
         for (int i = 0; i < _octaves.Length; i++)
         {
             if (_octaves[i] is not long[] counts)
@@ -146,24 +145,12 @@ internal sealed class DurationHistogram
             long octaveKey = (long)(_firstOctave + i) << SubBucketBits;
             for (int b = 0; b < BucketsPerOctave; b++)
             {
-                long count = counts[b];
-                if (count == 0)
+                if (counts[b] != 0)
                 {
-                    continue;
+                    yield return (LowerEdge(octaveKey + b), LowerEdge(octaveKey + b + 1), counts[b]);
                 }
-
-                double low = LowerEdge(octaveKey + b);
-                double high = LowerEdge(octaveKey + b + 1);
-                if (duration < high)
-                {
-                    return duration <= low ? below / Count : (below + (count * (duration - low) / (high - low))) / Count;
-                }
-
-                below += count;
             }
         }
-
-        return 1.0;
     }
 
     private static double LowerEdge(long key) => BitConverter.Int64BitsToDouble(key << MantissaShift);
