@@ -17,7 +17,8 @@ namespace NetSolve.Analysis;
 /// find it full, and those patients change the flows elsewhere. So when the network has capacities every step is
 /// solved afresh by <see cref="NetworkSolver.Solve"/>, fixed point of turn-away and diversion included, and units with
 /// a capacity are left out of the saturation order. For each of them <see cref="BedLimits"/> finds by bisection the
-/// factor at which P(full) passes 1% and 5%: P(full) rises monotonically with the offered rate, and the unit's offered
+/// factor at which P(full) passes 1% and 5% by the solver's own one-unit formula (M/M/c/K, Erlang loss or the
+/// two-moment M/G/c/K for the unit's service variability): P(full) rises monotonically with the offered rate, and the unit's offered
 /// rate is taken as linear in the factor, so the knock-on effects of diversion (patients diverted into the unit from
 /// elsewhere, and those its own refusals spare downstream) are held at today's values. The saturation factors of
 /// units without a capacity are likewise linear in today's flows. Thread-safe.
@@ -194,10 +195,14 @@ public static class GrowthAnalysis
                 continue;
             }
 
+            // The same one-unit formula as the solver: M/M/c/K for exponential service, Erlang loss when K = c (any
+            // service), otherwise the two-moment M/G/c/K with the unit's service SCV (the groups' mixture) and family.
             int servers = result.Unit.Servers.IsUnlimited ? capacity : Math.Min(result.Unit.Servers.Count, capacity);
             double meanServiceHours = result.OfferedLoad / admitted;
-            double Full(double factor) =>
-                FiniteCapacityFormulas.Solve(servers, capacity, fixedOffered + (factor * grownOffered), meanServiceHours).FullProbability;
+            double serviceScv = result.ServiceScv;
+            var serviceShape = result.Unit.EffectiveService;
+            double Full(double factor) => FiniteCapacityFormulas.Solve(
+                servers, capacity, fixedOffered + (factor * grownOffered), meanServiceHours, serviceScv, serviceShape).FullProbability;
             points.Add(new BedLimitPoint(result.Unit.Id, capacity, result.PFull, FactorWhereFull(Full, FullLow), FactorWhereFull(Full, FullHigh)));
         }
 

@@ -82,4 +82,43 @@ public sealed class GrowthBedLimitTests
         Assert.Null(point.Full1PercentFactor);
         Assert.Null(point.Full5PercentFactor);
     }
+    private static Network WaitingRoomUnit(ServiceDistribution service) => new(
+        "Waiting room test",
+        TimeUnit.Hour,
+        [new Unit("bays", "bays", Servers.Of(4), service.MeanHours) { Capacity = 6, Service = service }],
+        [new Arrival("bays", 2.5)],
+        []);
+
+    [Theory]
+    [InlineData(0.0)]
+    [InlineData(0.5)]
+    [InlineData(1.5)]
+    public void The_bed_limit_points_use_the_solvers_two_moment_formula_for_the_units_service(double cv)
+    {
+        // Exact by hand: a single unit with Poisson arrivals, so growing the network by the reported factor and solving
+        // it afresh must give exactly the share of full arrivals the point names (the solver's M/G/c/K with this cv).
+        var service = cv == 0.0 ? ServiceDistribution.Deterministic(1.0) : ServiceDistribution.Gamma(1.0, cv);
+        var network = WaitingRoomUnit(service);
+        var point = Assert.Single(GrowthAnalysis.Run(NetworkSolver.Solve(network)).BedLimits);
+        foreach (var (share, factor) in new[] { (0.01, point.Full1PercentFactor!.Value), (0.05, point.Full5PercentFactor!.Value) })
+        {
+            var grown = network with { Arrivals = [new Arrival("bays", 2.5 * factor)] };
+            Assert.Equal(share, NetworkSolver.Solve(grown).Units[0].PFull, 1e-9);
+        }
+    }
+
+    [Fact]
+    public void Regular_service_reaches_the_bed_limit_points_later_than_exponential_and_variable_service_sooner()
+    {
+        // From memory: at a fixed load a waiting room fills less often the less variable the service (P(full) of M/D/c/K
+        // below M/M/c/K below M/G/c/K with cs² > 1; Gross & Harris, Fundamentals of Queueing Theory, M/G/1/K), so the
+        // 5% point moves to a higher growth factor for regular service and to a lower one for variable service.
+        double Factor(ServiceDistribution service) =>
+            Assert.Single(GrowthAnalysis.Run(NetworkSolver.Solve(WaitingRoomUnit(service))).BedLimits).Full5PercentFactor!.Value;
+        double regular = Factor(ServiceDistribution.Deterministic(1.0));
+        double exponential = Factor(ServiceDistribution.Exponential(1.0));
+        double variable = Factor(ServiceDistribution.Gamma(1.0, 1.5));
+        Assert.True(regular > exponential * 1.02);
+        Assert.True(variable < exponential * 0.98);
+    }
 }
