@@ -20,7 +20,7 @@ public static class FormulaSimulationComparison
         return formula.Method switch
         {
             GgcMethodNames.AllenCunneen or GgcMethodNames.KraemerLangenbachBelz or GgcMethodNames.Cosmetatos or GgcMethodNames.LightHeavyTraffic
-                or FiniteCapacityFormulas.TwoMomentMethod => true,
+                or FiniteCapacityFormulas.TwoMomentMethod or MethodNames.DivertedOverflow => true,
             FiniteCapacityFormulas.MarkovianMethod => formula.ArrivalScv != 1.0 || formula.ServiceScv != 1.0,
             _ => false,
         };

@@ -12,4 +12,10 @@ public static class MethodNames
 
     /// <summary>Poisson arrivals and exponential service on c servers: exact (Jackson's product form).</summary>
     public const string ErlangC = GgcMethodNames.ErlangC;
+
+    /// <summary>
+    /// A unit receiving patients diverted from full units: its two-moment wait multiplied by the effect of their bursts
+    /// (interrupted Poisson overflow, solved exactly for exponential service; an approximation).
+    /// </summary>
+    public const string DivertedOverflow = "Diverted overflow bursts (interrupted Poisson, G/G/c)";
 }

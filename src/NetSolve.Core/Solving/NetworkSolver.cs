@@ -59,6 +59,11 @@ public static class NetworkSolver
                 : UnitMetrics.Compute(unit, flowsPerHour[i], external, mean, arrivalScv[i], serviceScv);
         }
 
+        if (capacityFlows is not null)
+        {
+            DivertedArrivals.Apply(network, capacityFlows, units);
+        }
+
         var results = StatusRule.Apply(units, strainThreshold);
         return new NetworkSolution(network, results, Totals(results, external), strainThreshold);
     }
