@@ -18,7 +18,11 @@ public static class ReportAssumptions
 
     /// <summary>The treatment of bed limits, as the report states it.</summary>
     public const string BedLimits =
-        "Bed limits are modelled by M/M/c/K, or by the Erlang loss formula (exact for any length of stay) when capacity equals servers; patients who find a unit full are turned away or diverted, and the flows with turn-away and diversion are found by a fixed point of the traffic equations.";
+        "Bed limits are modelled by M/M/c/K for exponential service, by its two-moment M/G/c/K form for other lengths of stay, or by the Erlang loss formula (exact for any length of stay) when capacity equals servers; patients who find a unit full are turned away or diverted, and the flows with turn-away and diversion are found by a fixed point of the traffic equations.";
+
+    /// <summary>The treatment of patients diverted from full units, as the report states it.</summary>
+    public const string DivertedBursts =
+        "Diverted patients arrive in bursts while their unit is full: at a unit receiving them (without a bed limit of its own) the wait is corrected by an interrupted Poisson model of the diverted stream, solved exactly for exponential service.";
 
     /// <summary>The treatment of patient groups, as the report states it.</summary>
     public const string Groups =
@@ -55,6 +59,10 @@ public static class ReportAssumptions
         if (limited.Count > 0)
         {
             lines.Add(BedLimits + " Units with a bed limit: " + string.Join(", ", limited.Select(Limit)) + ".");
+            if (solution.Units.Any(unit => string.Equals(unit.Method, MethodNames.DivertedOverflow, StringComparison.Ordinal)))
+            {
+                lines.Add(DivertedBursts);
+            }
         }
         else
         {

@@ -22,22 +22,23 @@ public sealed class FormulaAccuracyTests
     private const double GoalError = 0.15;
 
     /// <summary>
-    /// ...for at least 90% of the units that count (<see cref="AccuracyRow.Counts"/>): met. Measured 118 of 124 (95.2%,
+    /// ...for at least 90% of the units that count (<see cref="AccuracyRow.Counts"/>): met. Measured 119 of 124 (96.0%,
     /// seed 2026) with Cosmetatos' ratio for regular service, the light-heavy traffic interpolation for variable
-    /// service on several servers and the M/G/c/K truncation for bed limits with waiting places; the misses are
-    /// light-load units (ρ 0.3-0.45) and a diversion target fed by bursty overflow (docs/methods.md). Asserted at the
-    /// measured 95%, so a regression fails.
+    /// service on several servers, the M/G/c/K truncation for bed limits with waiting places and the diverted-overflow
+    /// model for a unit fed by a full unit's diversions; the misses are light-load units (ρ 0.33-0.46, docs/methods.md).
+    /// Asserted at 95% (the measured 96.0% rounded down: 0.96 × 124 is just above 119), so a regression of two units fails.
     /// </summary>
     private const double MeasuredShare = 0.95;
 
     /// <summary>
-    /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 3
-    /// of 113 units not closer: the diversion target (overflow taken as Poisson), and two units where the exponential
-    /// formula happens to be within 2%. Those two stay "not closer" also when judged beyond the simulation's 95%
-    /// interval (every value in the interval is nearer the exponential formula than the two-moment one), so no looser
-    /// rule is applied. Held at today's count so a regression fails.
+    /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 2
+    /// of 113 units not closer (generated-6 u3, generated-12 u1): units in loops of routes fed by correlated flows,
+    /// where the exponential formula happens to be within 2% by two errors of opposite sign (docs/methods.md). They
+    /// stay "not closer" also when judged beyond the simulation's 95% interval (every value in the interval is nearer
+    /// the exponential formula than the two-moment one), so no looser rule is applied. Held at today's count so a
+    /// regression fails.
     /// </summary>
-    private const int MeasuredNotBetter = 3;
+    private const int MeasuredNotBetter = 2;
 
     /// <summary>Generated networks in the study, seeds 1 to this.</summary>
     private const int GeneratedNetworks = 20;
@@ -48,8 +49,8 @@ public sealed class FormulaAccuracyTests
 
     // Source: the project's simulator (seed 2026, 10 replications of 50,000 h after 2,000 h) against NetworkSolver;
     // the goal is issue 11's: two-moment waits within 15% of simulation for at least 90% of units, and closer than the
-    // exponential formula wherever an arrival or service cv differs from 1. The first is met, the second not quite:
-    // see MeasuredNotBetter.
+    // exponential formula wherever an arrival or service cv differs from 1. The first is met (119 of 124), the second
+    // not quite (111 of 113): see MeasuredNotBetter.
     [Fact(Explicit = true)]
     public void Two_moment_waits_meet_the_accuracy_goal_against_the_simulator()
     {

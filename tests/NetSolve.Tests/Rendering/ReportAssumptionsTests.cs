@@ -24,6 +24,7 @@ public sealed class ReportAssumptionsTests
         }
 
         Assert.Contains(ReportAssumptions.BedLimits, section, StringComparison.Ordinal);
+        Assert.Contains(ReportAssumptions.DivertedBursts, section, StringComparison.Ordinal);
         Assert.Contains("emergency (capacity 30, diverts to urgent_care)", section, StringComparison.Ordinal);
         Assert.Contains("ward (capacity 240, turns away)", section, StringComparison.Ordinal);
         Assert.Contains(ReportAssumptions.Variability, section, StringComparison.Ordinal);
@@ -42,5 +43,6 @@ public sealed class ReportAssumptionsTests
         Assert.Contains(ReportAssumptions.SteadyState, section, StringComparison.Ordinal);
         Assert.DoesNotContain(ReportAssumptions.Groups, section, StringComparison.Ordinal);
         Assert.DoesNotContain(ReportAssumptions.BedLimits, section, StringComparison.Ordinal);
+        Assert.DoesNotContain(ReportAssumptions.DivertedBursts, section, StringComparison.Ordinal);
     }
 }
