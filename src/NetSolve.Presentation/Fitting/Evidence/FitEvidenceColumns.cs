@@ -37,6 +37,6 @@ public static class FitEvidenceColumns
         Columns.Number<FitEvidenceRow>("observed_wait_lower", "observed wait lower", MetricDimension.Time, row => row.Unit.Waits?.Mean.Interval.Lower, Audience.Machines),
         Columns.Number<FitEvidenceRow>("observed_wait_upper", "observed wait upper", MetricDimension.Time, row => row.Unit.Waits?.Mean.Interval.Upper, Audience.Machines),
         Columns.Number<FitEvidenceRow>("predicted_wait", "predicted wait", MetricDimension.Time, row => row.PredictedWaitHours),
-        Columns.Number<FitEvidenceRow>("warnings", "warnings", MetricDimension.Count, row => row.Unit.Warnings.Length),
+        Columns.Number<FitEvidenceRow>("warning_count", "warnings", MetricDimension.Count, row => row.Unit.Warnings.Length),
     ];
 }

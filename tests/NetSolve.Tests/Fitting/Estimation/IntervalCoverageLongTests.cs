@@ -66,9 +66,11 @@ public sealed class IntervalCoverageLongTests
 
     private void Report(string stays, params (string What, int Covered)[] results)
     {
-        foreach (var (what, covered) in results)
-        {
-            _output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{stays} stays, {what}: covered in {covered} of {Seeds} extracts ({100.0 * covered / Seeds:0.0}%)"));
-        }
+        var lines = results.Select(result => string.Create(CultureInfo.InvariantCulture,
+            $"{stays} stays, {result.What}: covered in {result.Covered} of {Seeds} extracts ({100.0 * result.Covered / Seeds:0.0}%)")).ToList();
+        lines.ForEach(_output.WriteLine);
+
+        // The test runner shows output only for failures: the summary also goes to a file, for docs/movement-log.md.
+        File.AppendAllLines(Path.Combine(Path.GetTempPath(), "netsolve-fit-interval-coverage.txt"), lines);
     }
 }

@@ -46,6 +46,8 @@ public sealed class FitEvidenceWritersTests
         Assert.Equal(JsonValueKind.Null, root.GetProperty("units")[1].GetProperty("predicted_wait").ValueKind);
         Assert.Equal("yes", root.GetProperty("units")[1].GetProperty("never_queued").GetString());
         Assert.Equal("too_short", root.GetProperty("arrival_profile").GetProperty("hour_of_day").GetString());
+        Assert.All(root.GetProperty("units").EnumerateArray(), unit =>
+            Assert.Equal(unit.EnumerateObject().Count(), unit.EnumerateObject().Select(field => field.Name).Distinct(StringComparer.Ordinal).Count()));
     }
 
     private static string Write(global::NetSolve.Fitting.Estimation.NetworkEvidence evidence, IReadOnlyDictionary<string, double?> predicted, TimeUnit timeUnit)
