@@ -150,7 +150,7 @@ internal static class Messages
     public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --only (--cost weighs its servers)";
 
     /// <summary><c>staff --by-hour</c> with a question it does not answer.</summary>
-    public const string StaffByHourTargets = "staff: --by-hour takes --max-wait, --max-time and --wait-over with --at-most, not --max-util, --budget, --cost or --max-turned-away (a utilisation cap by hour is each hour's offered load divided by the cap, shown in the roster table)";
+    public const string StaffByHourTargets = "staff: --by-hour takes --max-wait, --max-time, --max-util and --wait-over with --at-most, not --budget, --cost or --max-turned-away";
 
     /// <summary><c>staff</c>: --shifts, --exact or --no-check without --by-hour.</summary>
     public const string StaffByHourOnly = "staff: --shifts, --exact and --no-check shape a roster; give them with --by-hour";
