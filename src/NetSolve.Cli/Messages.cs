@@ -165,6 +165,10 @@ internal static class Messages
     public static string SolveByHourNotSettled(string file, string reason) =>
         $"{file}: warning: no hour-by-hour view: the time-varying formulas did not settle ({reason}); the steady state below is the daily average";
 
+    /// <summary><c>report</c>: the hour-by-hour formulas did not settle; the report goes on without its hour-by-hour section.</summary>
+    public static string ReportByHourNotSettled(string file, string reason) =>
+        $"{file}: warning: no hour-by-hour section: the time-varying formulas did not settle ({reason}); the report shows the daily average";
+
     /// <summary><c>staff --shifts</c> not a list of start hours.</summary>
     public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";
 
