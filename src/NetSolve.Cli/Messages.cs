@@ -150,7 +150,7 @@ internal static class Messages
     public const string StaffBudgetAlone = "staff: --budget answers its own question; give it without targets or --only (--cost weighs its servers)";
 
     /// <summary><c>staff --by-hour</c> with a question it does not answer.</summary>
-    public const string StaffByHourTargets = "staff: --by-hour takes --max-wait, --max-time and --wait-over with --at-most, not --max-util, --budget, --cost or --max-turned-away (a utilisation cap by hour is each hour's offered load divided by the cap, shown in the roster table)";
+    public const string StaffByHourTargets = "staff: --by-hour takes --max-wait, --max-time, --max-util and --wait-over with --at-most, not --budget, --cost or --max-turned-away";
 
     /// <summary><c>staff</c>: --shifts, --exact or --no-check without --by-hour.</summary>
     public const string StaffByHourOnly = "staff: --shifts, --exact and --no-check shape a roster; give them with --by-hour";
@@ -164,6 +164,10 @@ internal static class Messages
     /// <summary><c>solve</c>: the hour-by-hour formulas did not settle; the steady state is still written.</summary>
     public static string SolveByHourNotSettled(string file, string reason) =>
         $"{file}: warning: no hour-by-hour view: the time-varying formulas did not settle ({reason}); the steady state below is the daily average";
+
+    /// <summary><c>report</c>: the hour-by-hour formulas did not settle; the report goes on without its hour-by-hour section.</summary>
+    public static string ReportByHourNotSettled(string file, string reason) =>
+        $"{file}: warning: no hour-by-hour section: the time-varying formulas did not settle ({reason}); the report shows the daily average";
 
     /// <summary><c>staff --shifts</c> not a list of start hours.</summary>
     public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";

@@ -77,7 +77,7 @@ internal sealed class ReportCommand() : NetworkCommand(
 
     protected override int Execute(NetworkRequest request)
     {
-        var baseline = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
+        var baseline = WithHours((request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve(), request);
         var provenance = ReportProvenanceReader.Read(request.File, request.GetValue(_scenarios) ?? []);
         var loader = new ScenarioLoader(request.Warnings);
         var alternatives = (request.GetValue(_scenarios) ?? [])
@@ -118,5 +118,19 @@ internal sealed class ReportCommand() : NetworkCommand(
         AtomicFile.Write(target, stream => stream.Write(new UTF8Encoding(false).GetBytes(html)));
         request.Context.Out.Write(Messages.ReportWritten(target) + "\n");
         return ExitCodes.Success;
+    }
+
+    /// <summary>Adds the hour-by-hour solution when arrivals vary by hour; warns and goes on without it if it does not settle.</summary>
+    private static NetworkSolution WithHours(NetworkSolution solution, NetworkRequest request)
+    {
+        try
+        {
+            return HourByHour.AddWhenArrivalsVary(solution);
+        }
+        catch (TimeVaryingConvergenceException problem)
+        {
+            request.Warnings.Report(Messages.ReportByHourNotSettled(request.File, problem.Message));
+            return solution;
+        }
     }
 }

@@ -107,7 +107,7 @@ internal sealed class StaffCommand() : NetworkCommand(
             yield return Messages.StaffWaitTailPair;
         }
 
-        if (settings.IsGiven(_byHour) && (settings.IsGiven(_budget) || settings.IsGiven(_cost) || settings.IsGiven(_maxTurnedAway) || settings.IsGiven(_maxUtil)))
+        if (settings.IsGiven(_byHour) && (settings.IsGiven(_budget) || settings.IsGiven(_cost) || settings.IsGiven(_maxTurnedAway)))
         {
             yield return Messages.StaffByHourTargets;
         }

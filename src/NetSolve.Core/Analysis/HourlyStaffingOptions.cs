@@ -15,8 +15,9 @@ public sealed record HourlyStaffingOptions
     public ImmutableArray<int> ShiftStarts { get; init; } = [];
 
     /// <summary>
-    /// True: the exact periodic chain for rosters up to 50 servers (the reference; seconds per trial roster on a slow
-    /// unit). False: MOL wherever the load stays below the servers, the chain only where MOL has no answer.
+    /// True: the exact periodic chain for rosters up to 50 servers (the reference). False: the hour-by-hour solver's own
+    /// choice: MOL where the load stays below the servers, the chain for heavily loaded small units and where MOL has
+    /// no answer.
     /// </summary>
     public bool ExactChain { get; init; } = true;
 

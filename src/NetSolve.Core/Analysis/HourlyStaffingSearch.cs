@@ -7,22 +7,26 @@ namespace NetSolve.Analysis;
 /// <summary>
 /// The fewest servers in each hour (or shift block) with which every hour of a unit meets the targets, by the
 /// time-varying method: the exact periodic chain for rosters up to <see cref="ExactChainOptions.MaxServers"/>
-/// servers, MOL above, or MOL first when <see cref="HourlyStaffingOptions.ExactChain"/> is false (docs/time-of-day.md).
+/// servers, MOL above, or the solver's own choice when <see cref="HourlyStaffingOptions.ExactChain"/> is false
+/// (docs/time-of-day.md).
 /// </summary>
 /// <remarks>
 /// <para>
 /// The queue carries over from hour to hour, so an hour cannot be staffed on its own. The search starts from the
 /// stationary staffing of each hour at its offered load (the modified-offered-load staffing of Jennings, Mandelbaum,
-/// Massey and Whitt, "Server staffing to meet time-varying demand", Management Science 42(10), 1996, 1383–1394),
-/// solves the whole cycle, and adds one server to the hour (or block) that misses its target most until every hour
-/// meets it; then it tries one server fewer in each hour or block, most slack first, keeping every change after which
-/// every hour still meets the targets, until a pass removes none. The result is a local minimum: no single hour can
-/// lose a server; it is not proven to be the fewest staff-hours overall.
+/// Massey and Whitt, "Server staffing to meet time-varying demand", Management Science 42(10), 1996, 1383–1394), and
+/// from ceil(load ÷ cap) in each hour under a utilisation cap, which needs no solve at all. It solves the whole cycle
+/// and adds one server to every block with an hour that misses its target, round after round, until every hour
+/// meets it; then it tries one server fewer in each block, most slack first, keeping every change after which every
+/// hour still meets the targets, until a pass removes none. The result is a local minimum: no single block can lose
+/// a server; it is not proven to be the fewest staff-hours overall.
 /// </para>
 /// <para>
-/// Every hour keeps at least one server. Units with unlimited servers are left out. A capacity is not modelled here
-/// (the chain is solved without one), the service is taken as exponential by the chain, and each unit is fed by the
-/// infinite-server flow, as in <see cref="TimeVaryingSolver"/>. Thread-safe.
+/// The work is bounded: at most <see cref="HourlyStaffingOptions.MaxEvaluations"/> solves of the cycle per unit,
+/// the flat comparison included, and a roster tried before is not solved again. Every hour keeps at least one
+/// server. Units with unlimited servers are left out. A capacity is not modelled here (the chain is solved without
+/// one), the service is taken as exponential by the chain, and each unit is fed by the infinite-server flow, as in
+/// <see cref="TimeVaryingSolver"/>. Thread-safe.
 /// </para>
 /// </remarks>
 public static class HourlyStaffingSearch
@@ -75,41 +79,48 @@ public static class HourlyStaffingSearch
         double meanServiceHours = meanArrivals > 0.0 ? loads.Average() / meanArrivals : unit.EffectiveService.MeanHours;
         var blocks = ShiftBlocks.Of(options.ShiftStarts, hours);
         var servers = new int[hours];
+        var waitTargets = targets with { MaxTurnedAway = null, MaxUtilisation = null };
         for (int h = 0; h < hours; h++)
         {
-            servers[h] = StaffingSearch.MinimumServers(loads[h] / meanServiceHours, meanServiceHours, 1, targets with { MaxTurnedAway = null }, out impossible) ?? 0;
+            servers[h] = Math.Max(1, UnderCap(loads[h], targets.MaxUtilisation));
+            if (waitTargets.IsEmpty)
+            {
+                continue;
+            }
+
+            int? stationary = StaffingSearch.MinimumServers(loads[h] / meanServiceHours, meanServiceHours, 1, waitTargets, out impossible);
             if (impossible is not null)
             {
                 return null;
             }
+
+            servers[h] = Math.Max(servers[h], stationary ?? 0);
         }
 
         ShiftBlocks.Level(blocks, servers);
         var evaluator = new CycleEvaluator(unit, load, targets, meanServiceHours, options.ExactChain);
         int budget = options.MaxEvaluations;
+        bool Spend() => evaluator.Solves < budget;
         var (waits, ratios) = evaluator.Evaluate(servers);
-        budget--;
-        while (budget > 0 && !ratios.All(HourlyTargetCheck.Meets))
+        while (Spend() && !ratios.All(HourlyTargetCheck.Meets))
         {
-            int worst = Worst(ratios, loads, servers);
-            ShiftBlocks.Add(blocks, servers, blocks[worst], 1);
+            AddWhereMissing(blocks, servers, ratios, loads);
             (waits, ratios) = evaluator.Evaluate(servers);
-            budget--;
         }
 
-        for (bool removed = ratios.All(HourlyTargetCheck.Meets); removed && budget > 0;)
+        var floor = blocks.Select((_, h) => Math.Max(1, UnderCap(loads[h], targets.MaxUtilisation))).ToArray();
+        for (bool removed = ratios.All(HourlyTargetCheck.Meets) && !waitTargets.IsEmpty; removed && Spend();)
         {
             removed = false;
             foreach (int block in ShiftBlocks.BySlack(blocks, ratios))
             {
-                if (budget <= 0 || servers[ShiftBlocks.FirstHour(blocks, block)] <= 1)
+                if (!Spend() || !ShiftBlocks.CanRemove(blocks, servers, floor, block))
                 {
                     continue;
                 }
 
                 ShiftBlocks.Add(blocks, servers, block, -1);
                 var (fewerWaits, fewerRatios) = evaluator.Evaluate(servers);
-                budget--;
                 if (fewerRatios.All(HourlyTargetCheck.Meets))
                 {
                     (waits, ratios, removed) = (fewerWaits, fewerRatios, true);
@@ -121,6 +132,7 @@ public static class HourlyStaffingSearch
             }
         }
 
+        int flat = Flat(evaluator, servers, floor.Max(), ratios.All(HourlyTargetCheck.Meets), budget);
         impossible = null;
         return new UnitHourlyStaffing
         {
@@ -134,48 +146,69 @@ public static class HourlyStaffingSearch
                 ? [.. Enumerable.Range(0, hours).Select(h => HourlyTargetCheck.WaitOver(waits, h, tail))]
                 : [],
             MeetsByHour = [.. ratios.Select(HourlyTargetCheck.Meets)],
-            FlatServers = Flat(evaluator, servers.Max(), hours, ratios.All(HourlyTargetCheck.Meets)),
+            FlatServers = flat,
+            Evaluations = evaluator.Solves,
         };
     }
 
-    /// <summary>The hour that misses most; where every hour is unstable, the one with the highest load per server.</summary>
-    private static int Worst(double[] ratios, ImmutableArray<double> loads, int[] servers)
+    /// <summary>Servers that keep an hour's utilisation at or under the cap: ceil(load ÷ cap); 0 without a cap.</summary>
+    private static int UnderCap(double load, double? cap) =>
+        cap is double most && most > 0.0 ? (int)Math.Ceiling((load / most) - StaffingSearch.TargetTolerance) : 0;
+
+    /// <summary>
+    /// One server more in every block with an hour that misses its targets; where every hour is unstable, in the block
+    /// of the hour with the highest load per server (the one that keeps the cycle from settling).
+    /// </summary>
+    private static void AddWhereMissing(int[] blocks, int[] servers, double[] ratios, ImmutableArray<double> loads)
     {
-        bool unstable = ratios.All(double.IsPositiveInfinity);
-        int worst = 0;
-        double worstValue = double.NegativeInfinity;
-        for (int h = 0; h < ratios.Length; h++)
+        if (ratios.All(double.IsPositiveInfinity))
         {
-            double value = unstable ? loads[h] / Math.Max(servers[h], 1) : ratios[h];
-            if (value > worstValue)
+            int worst = 0;
+            for (int h = 1; h < ratios.Length; h++)
             {
-                (worst, worstValue) = (h, value);
+                worst = loads[h] / Math.Max(servers[h], 1) > loads[worst] / Math.Max(servers[worst], 1) ? h : worst;
             }
+
+            ShiftBlocks.Add(blocks, servers, blocks[worst], 1);
+            return;
         }
 
-        return worst;
+        foreach (int block in Enumerable.Range(0, ratios.Length).Where(h => !HourlyTargetCheck.Meets(ratios[h])).Select(h => blocks[h]).Distinct().ToArray())
+        {
+            ShiftBlocks.Add(blocks, servers, block, 1);
+        }
     }
 
     /// <summary>
-    /// The fewest servers, the same all day, that meet the targets in every hour, searched down from the roster's most
-    /// servers <paramref name="start"/>: having at least the roster's servers in every hour, that many meet the
-    /// targets whenever the roster does. When the roster itself misses (the search ran out of evaluations) there is
-    /// nothing to compare, and the roster's most servers are reported, so the search never runs without bound.
+    /// The fewest servers, the same all day, that meet the targets in every hour, searched by halving between the
+    /// highest floor (ceil(load ÷ cap), or 1) and the roster's most servers: having at least the roster's servers in
+    /// every hour, that many meet the targets whenever the roster does, and more servers never wait longer. When the
+    /// roster itself misses (the search ran out of evaluations), or the budget runs out, the roster's most servers are
+    /// reported, so the search never runs without bound.
     /// </summary>
-    private static int Flat(CycleEvaluator evaluator, int start, int hours, bool rosterMeets)
+    private static int Flat(CycleEvaluator evaluator, int[] roster, int floor, bool rosterMeets, int budget)
     {
-        bool Meets(int c) => evaluator.Evaluate([.. Enumerable.Repeat(c, hours)]).Ratios.All(HourlyTargetCheck.Meets);
-        int c = start;
+        int hours = roster.Length;
+        int high = roster.Max();
         if (!rosterMeets)
         {
-            return c;
+            return high;
         }
 
-        while (c > 1 && Meets(c - 1))
+        int low = Math.Max(1, floor) - 1;
+        while (high - low > 1 && evaluator.Solves < budget)
         {
-            c--;
+            int middle = low + ((high - low) / 2);
+            if (evaluator.Evaluate([.. Enumerable.Repeat(middle, hours)]).Ratios.All(HourlyTargetCheck.Meets))
+            {
+                high = middle;
+            }
+            else
+            {
+                low = middle;
+            }
         }
 
-        return c;
+        return high - low > 1 ? roster.Max() : high;
     }
 }

@@ -67,8 +67,19 @@ internal static class ShiftBlocks
         }
     }
 
-    /// <summary>The first hour of <paramref name="block"/>.</summary>
-    public static int FirstHour(int[] blocks, int block) => Array.IndexOf(blocks, block);
+    /// <summary>True when every hour of <paramref name="block"/> has more servers than its floor.</summary>
+    public static bool CanRemove(int[] blocks, int[] servers, int[] floor, int block)
+    {
+        for (int h = 0; h < blocks.Length; h++)
+        {
+            if (blocks[h] == block && servers[h] <= floor[h])
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
 
     /// <summary>Blocks, the one whose worst hour is furthest inside its targets first.</summary>
     public static int[] BySlack(int[] blocks, double[] ratios) =>

@@ -33,6 +33,9 @@ public sealed record UnitHourlyStaffing
     /// <summary>The fewest servers, the same all day, with which every hour meets the targets by the same method.</summary>
     public required int FlatServers { get; init; }
 
+    /// <summary>Solves of the whole cycle the search made for this unit (at most <see cref="HourlyStaffingOptions.MaxEvaluations"/>).</summary>
+    public int Evaluations { get; init; }
+
     /// <summary>Server-hours over the cycle with the roster.</summary>
     public int StaffHours => ServersByHour.Sum();
 

@@ -107,6 +107,7 @@ public static class HtmlReport
         UnitTable.Append(html, baseline);
         html.Append("</section>\n");
 
+        HourByHourSection.Append(html, baseline);
         AppendGrowth(html, baseline);
 
         if (scenarios.Count > 0)

@@ -162,13 +162,13 @@ public static class RosterChart
     }
 
     /// <summary>Every 3 hours of a day (a label at 24:00 would run off the chart), or each day's start of a week.</summary>
-    private static double[] Ticks(int cycleHours)
+    internal static double[] Ticks(int cycleHours)
     {
         int step = cycleHours == ArrivalProfile.HoursPerDay ? TickEveryHours : ArrivalProfile.HoursPerDay;
         return [.. Enumerable.Range(0, cycleHours / step).Select(k => (double)(k * step))];
     }
 
-    private static string HourLabel(double hour, int cycleHours)
+    internal static string HourLabel(double hour, int cycleHours)
     {
         int whole = (int)hour;
         string clock = (whole % ArrivalProfile.HoursPerDay).ToString("00", CultureInfo.InvariantCulture) + ":00";

@@ -116,6 +116,42 @@ public sealed class HourlyStaffingSearchTests
         Assert.All(unit.SimulationMeetsByHour, Assert.True);
     }
 
+    // Exact by hand: under a utilisation cap alone each hour needs ceil(offered load ÷ cap) servers, no search; the
+    // one solve is for the waits shown beside the roster.
+    [Fact]
+    public void A_utilisation_cap_alone_staffs_each_hour_at_its_load_over_the_cap_with_one_solve()
+    {
+        var network = Read("arrival_profile:\n  hour_of_day: " + DayProfile);
+        var cap = new StaffingTargets(MaxUtilisation: 0.85);
+
+        var plan = HourlyStaffingSearch.Find(network, cap, NoSimulation, out var impossible);
+
+        Assert.Null(impossible);
+        var unit = plan!.Units[0];
+        for (int h = 0; h < 24; h++)
+        {
+            Assert.Equal(Math.Max(1, (int)Math.Ceiling(unit.OfferedLoadByHour[h] / 0.85)), unit.ServersByHour[h]);
+        }
+
+        Assert.Equal(1, unit.Evaluations);
+        Assert.Equal(unit.ServersByHour.Max(), unit.FlatServers);
+    }
+
+    // Exact by hand: the search counts its solves of the cycle and stops at the budget, whatever the network; the
+    // millbrook clinic with a 10-minute target once ran for over a minute.
+    [Theory]
+    [InlineData("millbrook-clinic", 6)]
+    [InlineData("wrenfield-emergency-roster", 6)]
+    public void The_search_makes_no_more_solves_than_its_budget(string example, int budget)
+    {
+        var network = NetworkReader.ReadFile(Support.TestFiles.Network(example)).Network!;
+
+        var plan = HourlyStaffingSearch.Find(network, TenMinutes, NoSimulation with { MaxEvaluations = budget }, out _);
+
+        Assert.NotNull(plan);
+        Assert.All(plan.Units, unit => Assert.InRange(unit.Evaluations, 1, budget));
+    }
+
     private static bool MeetsEveryHour(UnitLoadOverCycle load, int[] servers)
     {
         var waits = PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, ServerRoster.ByHour(servers), 0.5);

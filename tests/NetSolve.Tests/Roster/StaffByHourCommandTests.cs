@@ -31,8 +31,8 @@ public sealed class StaffByHourCommandTests
 
     [Theory]
     [InlineData("--shifts", "15,07", "--shifts: '15,07' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23")]
-    [InlineData("--budget", "2", "staff: --by-hour takes --max-wait, --max-time and --wait-over with --at-most, not --max-util, --budget, --cost or --max-turned-away (a utilisation cap by hour is each hour's offered load divided by the cap, shown in the roster table)")]
-    [InlineData("--max-util", "85%", "staff: --by-hour takes --max-wait, --max-time and --wait-over with --at-most, not --max-util, --budget, --cost or --max-turned-away (a utilisation cap by hour is each hour's offered load divided by the cap, shown in the roster table)")]
+    [InlineData("--budget", "2", "staff: --by-hour takes --max-wait, --max-time, --max-util and --wait-over with --at-most, not --budget, --cost or --max-turned-away")]
+    [InlineData("--max-turned-away", "0.05", "staff: --by-hour takes --max-wait, --max-time, --max-util and --wait-over with --at-most, not --budget, --cost or --max-turned-away")]
     public void Bad_by_hour_options_are_usage_errors(string option, string value, string expected)
     {
         var result = CliRun.Run("staff", TestFiles.Network("wrenfield-emergency-roster"), "--by-hour", "--max-wait", "10min", option, value);

@@ -4,29 +4,38 @@ namespace NetSolve.Solving;
 /// One unit's birth–death chain over one cycle of the grid, advanced by uniformization (see
 /// <see cref="PeriodicBirthDeathChain"/>). Holds only the rates; the distribution is the caller's array. Not thread-safe.
 /// </summary>
+/// <remarks>
+/// Two things keep a cycle cheap. Each step's mean distribution comes from the same Poisson sum as its end
+/// (∫p = (h/Λh)·Σ_k P(N &gt; k)·p·P^k, N the number of jumps), so steps need not be short for the hourly means to be
+/// exact, and a long step costs about Λh + 6√Λh products instead of a fixed number per short step. And only the
+/// states holding more than <see cref="WindowCut"/> are multiplied (the window widens by one state each jump): a unit
+/// of 40 servers queueing in the afternoon holds nothing near 0, and a quiet night holds nothing far up.
+/// </remarks>
 internal sealed class ChainCycle
 {
     // The Poisson weights left out of each sub-step: below double precision of a total of 1.
     private const double PoissonTail = 1e-16;
 
-    // Largest Λh in one sub-step: keeps the Poisson sum to about 20 terms.
-    private const double MaxUniformizedStep = 1.0;
-
-    private const double SimpsonEnd = 1.0 / 6.0;
-    private const double SimpsonMiddle = 4.0 / 6.0;
+    // States holding less than this are left out of the products: dropping up to a few thousand of them each step
+    // moves the distribution by far less than the convergence tolerance.
+    private const double WindowCut = 1e-22;
 
     private readonly double[] _arrivals;
     private readonly ServerRoster _roster;
+    private readonly double _maxJumps;
     private double[] _next = [];
     private double[] _power = [];
+    private double[] _integral = [];
+    private double[] _average = [];
     private double[] _down = [];
     private double[] _stay = [];
     private double _birth;
 
-    public ChainCycle(double[] arrivalsByStep, int stepsPerHour, ServerRoster roster, double servicePerHour)
+    public ChainCycle(double[] arrivalsByStep, int stepsPerHour, ServerRoster roster, double servicePerHour, double maxJumpsPerSum)
     {
         _arrivals = arrivalsByStep;
         _roster = roster;
+        _maxJumps = maxJumpsPerSum;
         StepsPerHour = stepsPerHour;
         ServicePerHour = servicePerHour;
         CycleHours = arrivalsByStep.Length / stepsPerHour;
@@ -45,6 +54,9 @@ internal sealed class ChainCycle
 
     /// <summary>Mean completions per hour the servers could make over the cycle.</summary>
     public double MeanCapacity { get; }
+
+    /// <summary>Products of the distribution with the jump matrix so far, each over the window of states that hold any chance: the work done.</summary>
+    public long Products { get; private set; }
 
     /// <summary>Arrival rate per hour in step <paramref name="step"/>.</summary>
     public double ArrivalsAt(int step) => _arrivals[step];
@@ -80,7 +92,7 @@ internal sealed class ChainCycle
         return p;
     }
 
-    /// <summary>Advances <paramref name="p"/> through one cycle, recording into <paramref name="stats"/> when given.</summary>
+    /// <summary>Advances <paramref name="p"/> through one cycle, recording each step's mean into <paramref name="stats"/> when given.</summary>
     /// <returns>The largest chance of the last state seen at any step boundary.</returns>
     public double Run(double[] p, ChainHourStats? stats)
     {
@@ -88,40 +100,50 @@ internal sealed class ChainCycle
         {
             _next = new double[p.Length];
             _power = new double[p.Length];
+            _integral = new double[p.Length];
+            _average = new double[p.Length];
         }
 
-        double halfStepHours = 0.5 / StepsPerHour;
+        double stepHours = 1.0 / StepsPerHour;
         double lastState = p[^1];
         for (int step = 0; step < _arrivals.Length; step++)
         {
-            // Simpson's rule over the step (start, middle, end) keeps the hourly means accurate to the fourth order.
             double arrivals = _arrivals[step];
             int servers = ServersAt(step);
-            stats?.Record(step, this, p, SimpsonEnd);
-            AdvanceFor(p, arrivals, servers, halfStepHours);
-            stats?.Record(step, this, p, SimpsonMiddle);
-            AdvanceFor(p, arrivals, servers, halfStepHours);
-            stats?.Record(step, this, p, SimpsonEnd);
+            double uniform = arrivals + (servers * ServicePerHour);
+            double[]? average = stats is null ? null : _average;
+            if (average is not null)
+            {
+                Array.Clear(average);
+            }
+
+            if (uniform <= 0.0)
+            {
+                // Nothing moves: the step's mean is its start.
+                for (int n = 0; average is not null && n < p.Length; n++)
+                {
+                    average[n] = p[n] * stepHours;
+                }
+            }
+            else
+            {
+                PrepareJump(arrivals, servers, uniform, p.Length);
+                int subSteps = Math.Max(1, (int)Math.Ceiling(uniform * stepHours / _maxJumps));
+                for (int s = 0; s < subSteps; s++)
+                {
+                    Advance(p, uniform * stepHours / subSteps, stepHours / subSteps, average);
+                }
+            }
+
+            if (stats is not null)
+            {
+                stats.Record(step, this, _average, 1.0 / stepHours);
+            }
+
             lastState = Math.Max(lastState, p[^1]);
         }
 
         return lastState;
-    }
-
-    private void AdvanceFor(double[] p, double arrivals, int servers, double hours)
-    {
-        double uniform = arrivals + (servers * ServicePerHour);
-        if (uniform <= 0.0)
-        {
-            return;
-        }
-
-        PrepareJump(arrivals, servers, uniform, p.Length);
-        int subSteps = Math.Max(1, (int)Math.Ceiling(uniform * hours / MaxUniformizedStep));
-        for (int s = 0; s < subSteps; s++)
-        {
-            Advance(p, uniform * hours / subSteps);
-        }
     }
 
     // The jump chain's rates for one step, worked out once and used by every Poisson term of the step.
@@ -142,56 +164,116 @@ internal sealed class ChainCycle
         }
     }
 
-    private void Advance(double[] p, double expected)
+    // p ← p·e^(Q·hours) = Σ_k Poisson(k; expected)·p·P^k; when average is given it gains ∫ p over the sub-step.
+    private void Advance(double[] p, double expected, double hours, double[]? average)
     {
+        int last = p.Length - 1;
+        int lo = 0;
+        while (lo < last && p[lo] <= WindowCut)
+        {
+            lo++;
+        }
+
+        int hi = last;
+        while (hi > lo && p[hi] <= WindowCut)
+        {
+            hi--;
+        }
+
+        Array.Clear(_power);
+        Array.Clear(_next);
         double weight = Math.Exp(-expected);
         double covered = weight;
-        Array.Copy(p, _power, p.Length);
-        for (int n = 0; n < p.Length; n++)
+        double beyond = Math.Max(0.0, 1.0 - covered);
+        for (int n = lo; n <= hi; n++)
         {
+            _power[n] = p[n];
             _next[n] = weight * p[n];
         }
 
-        for (int k = 1; 1.0 - covered > PoissonTail && k < 200; k++)
+        if (average is not null)
         {
-            MultiplyByJump();
+            Array.Clear(_integral);
+            for (int n = lo; n <= hi; n++)
+            {
+                _integral[n] = beyond * p[n];
+            }
+        }
+
+        for (int k = 1; !Done(k, expected, weight); k++)
+        {
+            lo = Math.Max(0, lo - 1);
+            hi = Math.Min(last, hi + 1);
+            MultiplyByJump(lo, hi);
+            Products++;
             weight *= expected / k;
             covered += weight;
-            for (int n = 0; n < p.Length; n++)
+            beyond = Math.Max(0.0, 1.0 - covered);
+            for (int n = lo; n <= hi; n++)
             {
                 _next[n] += weight * _power[n];
+            }
+
+            if (average is not null)
+            {
+                for (int n = lo; n <= hi; n++)
+                {
+                    _integral[n] += beyond * _power[n];
+                }
             }
         }
 
         double total = 0.0;
-        for (int n = 0; n < p.Length; n++)
+        for (int n = lo; n <= hi; n++)
         {
             total += _next[n];
         }
 
         double scale = 1.0 / total;
-        for (int n = 0; n < p.Length; n++)
+        Array.Clear(p);
+        for (int n = lo; n <= hi; n++)
         {
             p[n] = _next[n] * scale;
         }
+
+        if (average is not null)
+        {
+            double perJump = hours / expected * scale;
+            for (int n = lo; n <= hi; n++)
+            {
+                average[n] += perJump * _integral[n];
+            }
+        }
     }
 
-    // _power ← _power · (I + Q/Λ) for the birth–death generator Q; no births out of the last state.
-    private void MultiplyByJump()
+    // The Poisson terms after k − 1 sum to less than PoissonTail: past the mode, each later weight is at most
+    // expected/k times the one before, so the rest is below weight·r/(1 − r), r = expected/k.
+    private static bool Done(int k, double expected, double weight)
+    {
+        double ratio = expected / k;
+        return ratio < 1.0 && weight * ratio / (1.0 - ratio) <= PoissonTail;
+    }
+
+    // _power ← _power · (I + Q/Λ) over states lo..hi (zero outside them before and after); no births out of the last state.
+    private void MultiplyByJump(int lo, int hi)
     {
         var power = _power;
         var down = _down;
         var stay = _stay;
         double birth = _birth;
         int last = power.Length - 1;
-        double carried = 0.0;
-        for (int n = 0; n < last; n++)
+        double carried = lo > 0 ? power[lo - 1] * birth : 0.0;
+        int end = Math.Min(hi, last - 1);
+        for (int n = lo; n <= end; n++)
         {
             double current = power[n];
             power[n] = (current * stay[n]) + carried + (power[n + 1] * down[n + 1]);
             carried = current * birth;
         }
 
-        power[last] = (power[last] * stay[last]) + carried;
+        if (hi == last)
+        {
+            power[last] = (power[last] * stay[last]) + carried;
+        }
     }
 }

@@ -7,8 +7,8 @@ internal sealed class ChainHourStats
 
     public ChainHourStats(int cycleHours) => _hours = new HourAccumulator(cycleHours);
 
-    /// <summary>Adds <paramref name="weight"/> × the moments of <paramref name="p"/> in step <paramref name="step"/>.</summary>
-    public void Record(int step, ChainCycle chain, double[] p, double weight)
+    /// <summary>Adds the moments of <paramref name="p"/> × <paramref name="scale"/> (the step's mean distribution) as one step of hour <paramref name="step"/> ÷ steps per hour.</summary>
+    public void Record(int step, ChainCycle chain, double[] p, double scale)
     {
         int servers = chain.ServersAt(step);
         double inUnit = 0.0;
@@ -24,7 +24,7 @@ internal sealed class ChainHourStats
             }
         }
 
-        _hours.Add(step / chain.StepsPerHour, weight, queue, inUnit, allBusy, chain.ArrivalsAt(step));
+        _hours.Add(step / chain.StepsPerHour, 1.0, scale * queue, scale * inUnit, scale * allBusy, chain.ArrivalsAt(step));
     }
 
     /// <summary>The hourly values of the recorded cycle.</summary>

@@ -9,6 +9,13 @@ public sealed record ExactChainOptions
     /// <summary>Most servers (in any hour) for which the hour-by-hour solver falls back on the exact chain.</summary>
     public int MaxServers { get; init; } = 50;
 
+    /// <summary>
+    /// Share of the servers the offered load reaches in its busiest hour from which units of at most
+    /// <see cref="MaxServers"/> servers get the exact chain instead of MOL: MOL misses the carried-over queue of units
+    /// loaded near their servers (docs/time-of-day.md, section 7).
+    /// </summary>
+    public double HeavyPeakLoad { get; init; } = 0.8;
+
     /// <summary>Absolute: the chain is cut where the chance of the last state stays below this in every step of the cycle.</summary>
     public double TruncationMass { get; init; } = 1e-12;
 
@@ -22,8 +29,9 @@ public sealed record ExactChainOptions
     public int MaxStates { get; init; } = 20_000;
 
     /// <summary>
-    /// Largest expected number of jumps Λh in one step of the chain (Λ = λ + cμ): Simpson's rule on the hourly means
-    /// then errs by about (Λh)⁴/2880 of the swing within a step, 2e-5 at the default 0.5.
+    /// Largest expected number of jumps Λh (Λ = λ + cμ) in one uniformization sum; a longer step of the chain is cut
+    /// into equal sums. A sum needs about Λh + 6√Λh products, so long sums are cheaper per hour; 50 keeps e^(−Λh)
+    /// far above the smallest double.
     /// </summary>
-    public double MaxJumpsPerStep { get; init; } = 0.5;
+    public double MaxJumpsPerStep { get; init; } = 50.0;
 }

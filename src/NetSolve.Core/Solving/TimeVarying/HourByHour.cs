@@ -16,7 +16,7 @@ public static class HourByHour
     }
 
     /// <summary>
-    /// Adds the hour-by-hour solution (the solver's defaults: MOL where the load stays below the servers) to
+    /// Adds the hour-by-hour solution (the solver's defaults: MOL where the load stays below the servers, the exact chain for heavily loaded small units and where MOL has no answer) to
     /// <paramref name="solution"/> when arrivals vary by hour; returns it unchanged otherwise.
     /// </summary>
     /// <exception cref="TimeVaryingConvergenceException">Flows or a unit did not settle to a periodic pattern.</exception>

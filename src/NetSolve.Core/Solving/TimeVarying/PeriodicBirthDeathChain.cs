@@ -30,9 +30,9 @@ public static class PeriodicBirthDeathChain
     // The number of extra states, beyond the most servers, the first truncation tries.
     private const int FirstQueueRoom = 40;
 
-    // Fewest steps of the chain per hour (ten minutes): arrival rates are averaged over each step, and Simpson's rule
-    // over each gives hourly means accurate to the fourth order in Λh. Uniformization costs about Λ·T jumps whatever
-    // the step, so steps longer than the one-minute grid of the offered load waste fewer Poisson terms.
+    // Fewest steps of the chain per hour (ten minutes): arrival rates are averaged over each step. The hourly means
+    // are exact integrals of the chain within each step, so a longer step loses nothing there, and uniformization
+    // costs fewer products per hour in long sums than in short ones.
     private const int MinChainStepsPerHour = 6;
 
     // The ratio of successive changes counts as steady when it moved by less than this share of its distance from 1
@@ -54,8 +54,8 @@ public static class PeriodicBirthDeathChain
         ArgumentNullException.ThrowIfNull(roster);
         ArgumentOutOfRangeException.ThrowIfLessThan(stepsPerHour, 1);
         options ??= ExactChainOptions.Default;
-        int chainStepsPerHour = ChainSteps(arrivalsByStep, stepsPerHour, roster.Max / meanServiceHours, options);
-        var chain = new ChainCycle(Coarsen(arrivalsByStep, stepsPerHour / chainStepsPerHour), chainStepsPerHour, roster, 1.0 / meanServiceHours);
+        int chainStepsPerHour = ChainSteps(stepsPerHour);
+        var chain = new ChainCycle(Coarsen(arrivalsByStep, stepsPerHour / chainStepsPerHour), chainStepsPerHour, roster, 1.0 / meanServiceHours, options.MaxJumpsPerStep);
         if (capacity is not null)
         {
             ArgumentOutOfRangeException.ThrowIfLessThan(capacity.Value, Math.Max(1, roster.Max), nameof(capacity));
@@ -107,13 +107,12 @@ public static class PeriodicBirthDeathChain
         return Math.Min(options.MaxStates, roster.Max + Math.Max(FirstQueueRoom, room));
     }
 
-    // The fewest steps per hour, dividing the grid's, with Λh at most the option's limit; the grid itself otherwise.
-    private static int ChainSteps(IReadOnlyList<double> arrivalsByStep, int stepsPerHour, double mostServicePerHour, ExactChainOptions options)
+    // The fewest steps per hour, dividing the grid's, of at most ten minutes each; the grid itself otherwise.
+    private static int ChainSteps(int stepsPerHour)
     {
-        double uniform = arrivalsByStep.Max() + mostServicePerHour;
         for (int steps = MinChainStepsPerHour; steps < stepsPerHour; steps++)
         {
-            if (stepsPerHour % steps == 0 && uniform / steps <= options.MaxJumpsPerStep)
+            if (stepsPerHour % steps == 0)
             {
                 return steps;
             }

@@ -9,8 +9,6 @@ public static class TimeVaryingMethodNames
     /// <summary>The time-dependent birth–death chain of an M_t/M/c_t unit, solved numerically over the cycle.</summary>
     public const string ExactChain = "exact time-dependent chain (M_t/M/c_t)";
 
-    /// <summary>MOL where the load is below the servers; a fluid queue where the load reaches them and while it drains.</summary>
-    public const string ModifiedOfferedLoadWithFluid = "MOL, fluid queue while the load reaches the servers";
 
     /// <summary>No waiting places and more servers than the exact chain takes: Erlang B at the time-varying offered load (Jagerman 1975).</summary>
     public const string ModifiedOfferedLoadLoss = "MOL (Erlang B at the time-varying offered load)";

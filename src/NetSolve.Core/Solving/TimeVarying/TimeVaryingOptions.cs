@@ -28,8 +28,8 @@ public sealed record TimeVaryingOptions
     public int MaxLoopSweeps { get; init; } = 10_000;
 
     /// <summary>
-    /// Use the exact chain for every unit of at most <see cref="ExactChainOptions.MaxServers"/> servers, not only where
-    /// MOL has no answer. Slower; the reference when checking MOL.
+    /// Use the exact chain for every unit of at most <see cref="ExactChainOptions.MaxServers"/> servers, not only heavily
+    /// loaded ones and where MOL has no answer. Slower; the reference when checking MOL.
     /// </summary>
     public bool ExactForSmallUnits { get; init; }
 }

@@ -5,10 +5,12 @@ namespace NetSolve.Solving;
 /// <summary>
 /// Hour-by-hour waits of every unit of a network: the offered load from <see cref="TimeVaryingTraffic"/>, then per
 /// unit MOL (<see cref="ModifiedOfferedLoad"/>) where the load stays below the servers, else the exact chain
-/// (<see cref="PeriodicBirthDeathChain"/>) for units of at most <see cref="ExactChainOptions.MaxServers"/> servers,
-/// else MOL with a fluid queue (<see cref="FluidQueue"/>). A unit with a capacity and at most that many servers gets the
-/// exact chain with its capacity (arrivals at a full unit turned away); a larger one without waiting places gets
-/// <see cref="ModifiedOfferedLoadLoss"/>; a larger one with waiting places the methods above, which ignore its capacity.
+/// (<see cref="PeriodicBirthDeathChain"/>) whatever the servers. Units of at most
+/// <see cref="ExactChainOptions.MaxServers"/> servers whose varying load reaches
+/// <see cref="ExactChainOptions.HeavyPeakLoad"/> of the servers get the chain even where MOL has an answer, since MOL
+/// misses the queue carried over from the busy hours. A unit with a capacity gets the chain with its capacity (arrivals
+/// at a full unit turned away), except a large one without waiting places, which gets
+/// <see cref="ModifiedOfferedLoadLoss"/>.
 /// </summary>
 /// <remarks>
 /// Each unit is taken on its own, fed by the infinite-server arrival rate λ_j(t): upstream queues, which delay and
@@ -77,18 +79,15 @@ public static class TimeVaryingSolver
         double meanServiceHours = meanArrivals > 0.0 ? meanLoad / meanArrivals : unit.EffectiveService.MeanHours;
         if (unit.Capacity is int capacity)
         {
-            // A capacity bounds the chain at capacity + 1 states and it always has an answer, where MOL and the fluid
-            // would let the queue grow past the places the unit has. Large units without waiting places take seconds in
-            // the chain (a long stay settles over many cycles), so they get MOL's loss form instead.
-            if (roster.Max <= chainOptions.MaxServers)
-            {
-                return PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions, Math.Max(capacity, roster.Max));
-            }
-
-            if (capacity <= roster.Servers.Min())
+            // A capacity bounds the chain at capacity + 1 states and it always has an answer, where MOL would let the
+            // queue grow past the places the unit has. Large units without waiting places (a ward of hundreds of beds,
+            // stays of days) settle slowly in the chain, and Erlang B at the load is their standard form.
+            if (roster.Max > chainOptions.MaxServers && capacity <= roster.Servers.Min())
             {
                 return ModifiedOfferedLoadLoss.Evaluate(load, roster);
             }
+
+            return PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions, Math.Max(capacity, roster.Max));
         }
 
         if (meanLoad >= roster.MeanOver(cycleHours))
@@ -97,14 +96,35 @@ public static class TimeVaryingSolver
         }
 
         bool small = roster.Max <= chainOptions.MaxServers;
-        if (small && options.ExactForSmallUnits)
+        if (small && (options.ExactForSmallUnits || (Varies(load, roster) && PeakLoadShare(load, roster) >= chainOptions.HeavyPeakLoad)))
         {
             return PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions);
         }
 
         return ModifiedOfferedLoad.TryEvaluate(load, roster)
-            ?? (small
-                ? PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions)
-                : FluidQueue.Evaluate(load, roster, meanServiceHours));
+            ?? PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions);
+    }
+
+    // True when the offered load or the servers change over the cycle: with both constant MOL is the stationary Erlang C
+    // model and exact, so the chain would only cost time.
+    private static bool Varies(UnitLoadOverCycle load, ServerRoster roster)
+    {
+        var loads = load.OfferedLoadByHour;
+        double spread = loads.Max() - loads.Min();
+        return spread > 1e-9 * Math.Max(1.0, loads.Max()) || roster.Servers.Distinct().Skip(1).Any();
+    }
+
+    // The largest share of its servers the offered load reaches in any hour (+∞ in an hour without servers but with load).
+    private static double PeakLoadShare(UnitLoadOverCycle load, ServerRoster roster)
+    {
+        double peak = 0.0;
+        for (int h = 0; h < load.OfferedLoadByHour.Length; h++)
+        {
+            int servers = roster.At(h);
+            double offered = load.OfferedLoadByHour[h];
+            peak = Math.Max(peak, servers > 0 ? offered / servers : (offered > 0.0 ? double.PositiveInfinity : 0.0));
+        }
+
+        return peak;
     }
 }

@@ -84,10 +84,10 @@ public class TimeVaryingSolverTests
     }
 
     // Exact by hand: where the offered load passes the servers MOL has no answer; a small unit falls back on the exact
-    // chain, a large one on the fluid queue, and arrivals beyond the servers over the whole day are unstable.
+    // chain whatever its servers, and arrivals beyond the servers over the whole day are unstable.
     [Theory]
     [InlineData(4, 3.2, TimeVaryingMethodNames.ExactChain)]
-    [InlineData(80, 64.0, TimeVaryingMethodNames.ModifiedOfferedLoadWithFluid)]
+    [InlineData(80, 64.0, TimeVaryingMethodNames.ExactChain)]
     [InlineData(4, 4.2, TimeVaryingMethodNames.Unstable)]
     public void Overloaded_hours_fall_back_on_a_named_method(int servers, double arrivalsPerHour, string method)
     {

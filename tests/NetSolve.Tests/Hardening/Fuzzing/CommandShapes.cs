@@ -40,10 +40,10 @@ internal static class CommandShapes
         return line;
     }
 
-    /// <summary>The file a command line asks to be written, relative to the run's folder, if any.</summary>
+    /// <summary>The file a command line asks to be written (<c>--output</c>, or the roster chart of <c>staff --chart</c>), relative to the run's folder, if any.</summary>
     public static string? OutputFile(IReadOnlyList<string> line)
     {
-        int at = line.ToList().FindLastIndex(argument => argument is "--output" or "-o");
+        int at = line.ToList().FindLastIndex(argument => argument is "--output" or "-o" or "--chart");
         string prefix = FuzzInput.Folder + "/";
         return at >= 0 && at + 1 < line.Count && line[at + 1].StartsWith(prefix, StringComparison.Ordinal) ? line[at + 1][prefix.Length..] : null;
     }
