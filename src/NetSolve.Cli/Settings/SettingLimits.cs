@@ -36,4 +36,11 @@ internal static class SettingLimits
     /// replications on a loaded machine took minutes with no word of warning.
     /// </summary>
     public const double MaxSimulatedEvents = 1e9;
+
+    /// <summary>
+    /// Most estimated state-steps of the exact chain (<see cref="NetSolve.Analysis.ExactChainWork"/>) before
+    /// <c>staff --by-hour --exact</c> asks for <c>--allow-long</c>: about twenty seconds of one core (docs/hardening.md),
+    /// where an emergency department of a few dozen servers and half-hour visits needs under a tenth of it.
+    /// </summary>
+    public const double MaxExactChainStateSteps = 2e9;
 }

@@ -14,6 +14,12 @@ internal static class FuzzRunner
     /// <summary>A run longer than this is a hang.</summary>
     public static readonly TimeSpan HangLimit = TimeSpan.FromSeconds(20);
 
+    /// <summary>
+    /// How long a hung run is still waited for, to tell a slow run (it ends, and its time is recorded; on a shared
+    /// machine the wall time can be many times the processor time) from one that may never end.
+    /// </summary>
+    public static readonly TimeSpan GiveUpLimit = TimeSpan.FromSeconds(120);
+
     /// <summary>A process larger than this during a run is a memory failure: 2 GB.</summary>
     public const long MemoryLimit = 2L * 1024 * 1024 * 1024;
 
@@ -29,6 +35,7 @@ internal static class FuzzRunner
             string given = string.Join('\n', input.Files.Select(file => Encoding.UTF8.GetString(file.Content)));
             using var watch = new MemoryWatch();
             var clock = Stopwatch.StartNew();
+            var processorAtStart = Process.GetCurrentProcess().TotalProcessorTime;
             var run = Task.Factory.StartNew(() => CliRun.Run(arguments), CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
             var findings = new List<FuzzFinding>();
             int exitCode = -1;
@@ -52,7 +59,11 @@ internal static class FuzzRunner
                 }
                 else
                 {
-                    findings.Add(new FuzzFinding(FuzzFailureKind.Hang, string.Create(CultureInfo.InvariantCulture, $"still running after {HangLimit.TotalSeconds:0} s")));
+                    finished = run.Wait(GiveUpLimit - HangLimit);
+                    exitCode = finished ? run.Result.ExitCode : -1;
+                    findings.Add(new FuzzFinding(FuzzFailureKind.Hang, finished
+                        ? string.Create(CultureInfo.InvariantCulture, $"took {clock.Elapsed.TotalSeconds:0} s, over {HangLimit.TotalSeconds:0} s (process time {(Process.GetCurrentProcess().TotalProcessorTime - processorAtStart).TotalSeconds:0} s, every worker's)")
+                        : string.Create(CultureInfo.InvariantCulture, $"still running after {GiveUpLimit.TotalSeconds:0} s")));
                 }
             }
             catch (AggregateException exception)
