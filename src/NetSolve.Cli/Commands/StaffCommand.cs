@@ -87,7 +87,7 @@ internal sealed class StaffCommand() : NetworkCommand(
 
     private readonly Option<bool> _allowLong = new("--allow-long")
     {
-        Description = "With --by-hour --exact: search even when the estimated work of the exact chain is above 2 billion state-steps, which is refused by default as a likely slip.",
+        Description = "With --by-hour --exact: search even when the estimated work of the exact chain is above 200 million state-steps, which is refused by default as a likely slip.",
     };
 
     private readonly Option<bool> _noCheck = new("--no-check")

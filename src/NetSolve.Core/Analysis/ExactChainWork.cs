@@ -12,15 +12,17 @@ namespace NetSolve.Analysis;
 /// </summary>
 /// <remarks>
 /// The count takes each unit's busiest hour at the roster the search starts from (one server above the offered load),
-/// <see cref="TypicalCycles"/> cycles per solve and <see cref="TypicalEvaluations"/> trial rosters per unit (one pass
-/// adding servers and one removing them, an hour each); units whose servers exceed
+/// the cycles the chain runs to settle from the relaxation time there (1 / (c·μ·(1 − √ρ)²), as <see cref="RelaxationTime"/>
+/// takes it, times ln(1/tolerance) ≈ 23 time constants, in cycles; at least <see cref="FewestCycles"/>) and
+/// <see cref="TypicalEvaluations"/> trial rosters per unit (one pass adding servers and one removing them, an hour
+/// each); units whose servers exceed
 /// <see cref="ExactChainOptions.MaxServers"/> are solved by MOL and cost nothing here. It is an order of magnitude,
 /// meant to tell a run of seconds from one of hours, not a forecast.
 /// </remarks>
 public static class ExactChainWork
 {
-    /// <summary>Cycles the chain typically runs before it settles (Aitken's extrapolation shortens the slow ones).</summary>
-    public const double TypicalCycles = 10.0;
+    /// <summary>Cycles the chain runs at least before it is seen to settle.</summary>
+    public const double FewestCycles = 3.0;
 
     /// <summary>Trial rosters per unit in a typical search: an adding pass and a removing pass over 24 hours, and the first.</summary>
     public const double TypicalEvaluations = 49.0;
@@ -67,6 +69,9 @@ public static class ExactChainWork
         double stepsPerHour = Math.Max(1.0, Math.Ceiling((mostArrivals + (servers / meanServiceHours)) / JumpsPerStep));
         double busiest = Math.Clamp(mostLoad / servers, 0.5, 0.999);
         double states = servers + Math.Ceiling(Math.Log(ExactChainOptions.Default.TruncationMass) / Math.Log(busiest));
-        return TypicalEvaluations * TypicalCycles * states * stepsPerHour * load.OfferedLoadByHour.Length;
+        double relaxationHours = meanServiceHours / (servers * Math.Pow(1.0 - Math.Sqrt(busiest), 2.0));
+        double cycleHours = load.OfferedLoadByHour.Length;
+        double cycles = Math.Max(FewestCycles, Math.Ceiling(relaxationHours * -Math.Log(ExactChainOptions.Default.Tolerance) / cycleHours));
+        return TypicalEvaluations * cycles * states * stepsPerHour * cycleHours;
     }
 }
