@@ -60,7 +60,7 @@ public sealed class OptionCorpusTests
     [Fact]
     public void An_exact_roster_search_estimated_at_hours_of_work_is_refused_with_the_way_round()
     {
-        // A unit of fifty one-minute servers: the chain steps every 20 s of the cycle over a hundred states, for each trial roster.
+        // A desk whose busiest hour needs fifty one-minute servers: thousands of chain steps per hour over thousands of states, for each trial roster.
         string network = CorpusCase.File("exact-chain-fast-service.yaml");
 
         var result = CorpusCase.Run(["staff", network, "--by-hour", "--exact", "--max-wait", "5min", "--no-check"]);
