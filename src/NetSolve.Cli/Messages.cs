@@ -155,6 +155,13 @@ internal static class Messages
     /// <summary><c>staff</c>: --shifts, --exact or --no-check without --by-hour.</summary>
     public const string StaffByHourOnly = "staff: --shifts, --exact and --no-check shape a roster; give them with --by-hour";
 
+    /// <summary><c>staff</c>: --allow-long without --by-hour --exact.</summary>
+    public const string StaffAllowLongExactOnly = "staff: --allow-long lifts the bound on the exact chain's work; give it with --by-hour --exact";
+
+    /// <summary><c>staff --by-hour --exact</c>: the estimated work of the exact chain is above the bound.</summary>
+    public static string StaffExactTooLong(double work, double bound) =>
+        Invariant($"--exact: judging every trial roster by the exact chain would take about {work:0.#e+0} state-steps, more than the bound of {bound:0.#e+0} (without --exact the search uses MOL first and the chain only where MOL has no answer; --allow-long to run it anyway)");
+
     /// <summary><c>staff</c>: --chart without --by-hour.</summary>
     public const string StaffChartByHourOnly = "staff: --chart draws a roster by hour; give it with --by-hour";
 

@@ -15,7 +15,8 @@ internal static class NetSolveApp
         try
         {
             var root = BuildRoot(context);
-            var parse = root.Parse(args);
+            // No response files: "@name" is a value as typed (a shift list, a label), never a file to read arguments from.
+            var parse = root.Parse(args, new ParserConfiguration { ResponseFileTokenReplacer = null });
             // An unknown option taken for FILE is no parse error: look for unknown words even then.
             var problems = UnknownWords.Problems(parse, args);
             if (problems.Count > 0)

@@ -88,15 +88,23 @@ internal static class SimulationCliOptions
     };
 
     /// <summary>
-    /// The events a run will simulate, roughly: two per visit (arrival and departure) at the solved arrival rates,
-    /// over warm-up and duration, in every replication.
+    /// The work of one replication besides its events, in events of the same time, per unit and per patient group
+    /// (and one for all patients): starting the replication and pooling its histograms and counts when it ends. Measured
+    /// (docs/hardening.md) so that thousands of short replications, each cheap in events, are not mistaken for a short run.
+    /// </summary>
+    public const double SetUpEventsPerMetric = 200;
+
+    /// <summary>
+    /// The work of a run in events, roughly: two per visit (arrival and departure) at the solved arrival rates, over
+    /// warm-up and duration, plus each replication's set-up and pooling (<see cref="SetUpEventsPerMetric"/>), in every replication.
     /// </summary>
     public static double EstimatedEvents(NetworkSolution solution, SimulationOptions options)
     {
         ArgumentNullException.ThrowIfNull(solution);
         ArgumentNullException.ThrowIfNull(options);
         double visitsPerHour = solution.Units.Sum(unit => double.IsFinite(unit.ArrivalsPerHour) ? unit.ArrivalsPerHour : 0.0);
-        return 2.0 * visitsPerHour * (options.WarmupHours + options.DurationHours) * options.Replications;
+        double setUp = SetUpEventsPerMetric * (solution.Network.Units.Length + solution.Network.Groups.Length + 1);
+        return ((2.0 * visitsPerHour * (options.WarmupHours + options.DurationHours)) + setUp) * options.Replications;
     }
 
     /// <summary>Refuses a run above <see cref="SettingLimits.MaxSimulatedEvents"/> unless <paramref name="allowLong"/>: a usage error naming the bound.</summary>

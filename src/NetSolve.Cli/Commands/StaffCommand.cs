@@ -85,6 +85,11 @@ internal sealed class StaffCommand() : NetworkCommand(
         Description = "With --by-hour: judge every trial roster by the exact time-dependent queue (up to 50 servers; slower) instead of MOL first.",
     };
 
+    private readonly Option<bool> _allowLong = new("--allow-long")
+    {
+        Description = "With --by-hour --exact: search even when the estimated work of the exact chain is above 200 million state-steps, which is refused by default as a likely slip.",
+    };
+
     private readonly Option<bool> _noCheck = new("--no-check")
     {
         Description = "With --by-hour: skip the short simulation that checks the roster hour by hour.",
@@ -97,7 +102,7 @@ internal sealed class StaffCommand() : NetworkCommand(
 
     protected override string FormatDescription => "Output: table (for people), json (one document) or csv (one row per unit).";
 
-    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget, _byHour, _shifts, _exact, _noCheck, _chart];
+    protected override IEnumerable<Symbol> Symbols => [_maxUtil, _maxWait, _maxTime, _waitOver, _atMost, _maxTurnedAway, _target, _only, _cost, _budget, _byHour, _shifts, _exact, _allowLong, _noCheck, _chart];
 
     protected override IEnumerable<string> CheckSettings(CommandResult settings)
     {
@@ -115,6 +120,11 @@ internal sealed class StaffCommand() : NetworkCommand(
         if (!settings.IsGiven(_byHour) && (settings.IsGiven(_shifts) || settings.IsGiven(_exact) || settings.IsGiven(_noCheck)))
         {
             yield return Messages.StaffByHourOnly;
+        }
+
+        if (settings.IsGiven(_allowLong) && !(settings.IsGiven(_byHour) && settings.IsGiven(_exact)))
+        {
+            yield return Messages.StaffAllowLongExactOnly;
         }
 
         if (!settings.IsGiven(_byHour) && settings.IsGiven(_chart))
@@ -239,6 +249,11 @@ internal sealed class StaffCommand() : NetworkCommand(
             ExactChain = request.GetValue(_exact),
             Simulate = !request.GetValue(_noCheck),
         };
+        if (options.ExactChain && !request.GetValue(_allowLong) && ExactChainWork.Estimate(network) is double work && work > SettingLimits.MaxExactChainStateSteps)
+        {
+            throw new UsageException(Messages.StaffExactTooLong(work, SettingLimits.MaxExactChainStateSteps));
+        }
+
         var plan = HourlyStaffingSearch.Find(network, targets, options, out var impossible);
         if (plan is null)
         {

@@ -36,4 +36,12 @@ internal static class SettingLimits
     /// replications on a loaded machine took minutes with no word of warning.
     /// </summary>
     public const double MaxSimulatedEvents = 1e9;
+
+    /// <summary>
+    /// Most estimated state-steps of the exact chain (<see cref="NetSolve.Analysis.ExactChainWork"/>) before
+    /// <c>staff --by-hour --exact</c> asks for <c>--allow-long</c>: 2e8, at most about twenty seconds of one core. Measured
+    /// (docs/hardening.md): the wrenfield emergency roster, estimated at 1.5e9, had not finished after 49 s of processor
+    /// time (a debug build), so the chain does fewer than 3e7 state-steps a second and a search above the bound is long.
+    /// </summary>
+    public const double MaxExactChainStateSteps = 2e8;
 }

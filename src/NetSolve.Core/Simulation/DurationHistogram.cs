@@ -132,8 +132,17 @@ internal sealed class DurationHistogram
         return 1.0;
     }
 
-    /// <summary>Every bucket holding a count, shortest first, with its edges: the walk shared by quantiles and shares.</summary>
-    private IEnumerable<(double Low, double High, long Count)> NonEmptyBuckets()
+    /// <summary>Bytes held by the counts: 1 KB per touched octave and the window over them (to bound what a run keeps).</summary>
+    public long Bytes => (_octaves.Length * (long)sizeof(long)) + (_octaves.Count(octave => octave is not null) * (long)BucketsPerOctave * sizeof(long));
+
+    /// <summary>The bucket holding <paramref name="duration"/> (positive and finite): keys order the buckets, and key + 1 is the next one.</summary>
+    public static long BucketOf(double duration) => BitConverter.DoubleToInt64Bits(duration) >> MantissaShift;
+
+    /// <summary>The lower edge of the bucket <paramref name="key"/>, which is the upper edge of bucket key − 1.</summary>
+    public static double LowerEdge(long key) => BitConverter.Int64BitsToDouble(key << MantissaShift);
+
+    /// <summary>Every bucket holding a count, shortest first, with its edges: the walk shared by quantiles, shares and pooling.</summary>
+    public IEnumerable<(double Low, double High, long Count)> NonEmptyBuckets()
     {
         for (int i = 0; i < _octaves.Length; i++)
         {
@@ -152,8 +161,6 @@ internal sealed class DurationHistogram
             }
         }
     }
-
-    private static double LowerEdge(long key) => BitConverter.Int64BitsToDouble(key << MantissaShift);
 
     private void RecordRarely(double duration)
     {

@@ -48,6 +48,29 @@ internal static class QuantileInterval
             }
         }
 
+        return Inverted(pooled, point, centre, n, sumSquares);
+    }
+
+    /// <summary>
+    /// As above, with the replications' shares read from their <paramref name="shares"/> moments rather than their
+    /// histograms: the same interval to rounding, from memory that does not grow with the replications.
+    /// </summary>
+    public static Estimate? Of(double fraction, DurationHistogram pooled, ShareMoments shares)
+    {
+        ArgumentNullException.ThrowIfNull(shares);
+        double point = pooled.Quantile(fraction);
+        if (!double.IsFinite(point))
+        {
+            return null;
+        }
+
+        double centre = pooled.ShareAtMost(point);
+        return Inverted(pooled, point, centre, shares.Replications, shares.SumOfSquares(point, centre));
+    }
+
+    /// <summary>The Student t interval of the mean share, [centre − h, centre + h], turned into durations by the pooled histogram.</summary>
+    private static Estimate Inverted(DurationHistogram pooled, double point, double centre, int n, double sumSquares)
+    {
         if (n < 2)
         {
             return new Estimate(point, null, n);

@@ -1,8 +1,8 @@
 namespace NetSolve.Simulation;
 
 /// <summary>
-/// What one finished replication counted behind its percentiles and tail probabilities, kept whole so that the
-/// replications can be pooled: the pooled histogram gives the point estimate of a percentile and the pooled counts
+/// What one finished replication counted behind its percentiles and tail probabilities, handed whole to the
+/// <see cref="ReplicationPool"/>: the pooled histogram gives the point estimate of a percentile and the pooled counts
 /// the point estimate of P(wait &gt; t), each from every observation of the run rather than an average of
 /// per-replication estimates (which is biased for a percentile on short runs).
 /// </summary>

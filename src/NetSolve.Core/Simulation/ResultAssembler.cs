@@ -3,21 +3,21 @@ using NetSolve.Model;
 
 namespace NetSolve.Simulation;
 
-/// <summary>Turns the rows of the finished replications, in replication order, into a <see cref="SimulationResult"/>.</summary>
+/// <summary>Turns the pooled replications (their rows in replication order and the pooled counts) into a <see cref="SimulationResult"/>.</summary>
 internal sealed class ResultAssembler
 {
     private readonly MetricLayout _layout;
     private readonly IReadOnlyList<double[]> _rows;
-    private readonly IReadOnlyList<ReplicationTallies> _tallies;
+    private readonly ReplicationPool _pool;
 
     /// <param name="layout">Where each metric sits in a row.</param>
-    /// <param name="rows">The finished replications' rows, in replication order.</param>
-    /// <param name="tallies">The same replications' counts, in the same order, for the pooled estimates.</param>
-    public ResultAssembler(MetricLayout layout, IReadOnlyList<double[]> rows, IReadOnlyList<ReplicationTallies> tallies)
+    /// <param name="pool">The finished replications, pooled.</param>
+    public ResultAssembler(MetricLayout layout, ReplicationPool pool)
     {
+        ArgumentNullException.ThrowIfNull(pool);
         _layout = layout;
-        _rows = rows;
-        _tallies = tallies;
+        _rows = pool.Rows;
+        _pool = pool;
     }
 
     public SimulationResult Assemble(Network network, SimulationOptions options, long events)
@@ -50,7 +50,7 @@ internal sealed class ResultAssembler
                 Group = network.Groups[g],
                 ThroughputPerHour = Required(_layout.Group(g, MetricLayout.GroupThroughputPerHour), 0.0),
                 MeanTimeInSystemHours = At(_layout.Group(g, MetricLayout.GroupMeanTimeInSystemHours)),
-                TimeInSystemPercentiles = Percentiles(_layout.Group(g, MetricLayout.GroupPercentiles), tally => tally.GroupTimes[g + 1]),
+                TimeInSystemPercentiles = _pool.GroupTimes[g + 1].Percentiles(),
             });
         }
 
@@ -69,7 +69,7 @@ internal sealed class ResultAssembler
                 TurnedAwayPerHour = Required(_layout.Total(MetricLayout.TotalTurnedAwayPerHour), 0.0),
                 MeanInSystem = Required(_layout.Total(MetricLayout.TotalMeanInSystem), 0.0),
                 MeanTimeInSystemHours = At(_layout.Total(MetricLayout.TotalMeanTimeInSystemHours)),
-                TimeInSystemPercentiles = Percentiles(_layout.Total(MetricLayout.TotalPercentiles), tally => ReplicationTallies.Pool(tally.GroupTimes)),
+                TimeInSystemPercentiles = _pool.AllTimes.Percentiles(),
             },
             Groups = groups.MoveToImmutable(),
         };
@@ -102,29 +102,10 @@ internal sealed class ResultAssembler
             FullProbability = Required(_layout.Unit(u, MetricLayout.FullProbability), 0.0),
             TurnedAwayPerHour = Required(_layout.Unit(u, MetricLayout.TurnedAwayPerHour), 0.0),
             DivertedPerHour = Required(_layout.Unit(u, MetricLayout.DivertedPerHour), 0.0),
-            TimeInUnitPercentiles = Percentiles(_layout.Unit(u, MetricLayout.UnitPercentiles), tally => tally.UnitTimes[u]),
+            TimeInUnitPercentiles = _pool.UnitTimes[u].Percentiles(),
             WaitOver = waitOver.MoveToImmutable(),
             MeanQueueByHour = byHour.MoveToImmutable(),
         };
-    }
-
-    /// <summary>
-    /// The percentiles of the pooled histogram (<paramref name="histogramOf"/> picks a replication's), each with its
-    /// interval inverted from the replications' shares below it (<see cref="QuantileInterval"/>). The replications'
-    /// own percentiles stay in the rows at <paramref name="first"/> on; the interval no longer reads them.
-    /// </summary>
-    private ImmutableArray<PercentileEstimate> Percentiles(int first, Func<ReplicationTallies, DurationHistogram> histogramOf)
-    {
-        var each = _tallies.Select(histogramOf).ToList();
-        var pooled = ReplicationTallies.Pool(each);
-        var builder = ImmutableArray.CreateBuilder<PercentileEstimate>(MetricLayout.Percentiles.Length);
-        for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
-        {
-            var estimate = QuantileInterval.Of(MetricLayout.Percentiles[p], pooled, each);
-            builder.Add(new PercentileEstimate(MetricLayout.Percentiles[p] * 100.0, estimate));
-        }
-
-        return builder.MoveToImmutable();
     }
 
     /// <summary>
@@ -133,8 +114,8 @@ internal sealed class ResultAssembler
     /// </summary>
     private WaitOverEstimate WaitOver(int u, int t, double thresholdHours)
     {
-        long starts = _tallies.Sum(tally => tally.Starts[u]);
-        long over = _tallies.Sum(tally => tally.WaitOver[(u * _layout.WaitThresholds) + t]);
+        long starts = _pool.Starts[u];
+        long over = _pool.WaitOver[(u * _layout.WaitThresholds) + t];
         int slot = _layout.Unit(u, _layout.WaitOverOffset + t);
         if (starts == 0)
         {

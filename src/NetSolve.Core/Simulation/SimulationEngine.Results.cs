@@ -30,11 +30,7 @@ internal sealed partial class SimulationEngine
             row[_layout.Unit(u, MetricLayout.FullProbability)] = Ratio(state.Full, state.Accepted + state.Full, 0.0);
             row[_layout.Unit(u, MetricLayout.TurnedAwayPerHour)] = state.TurnedAway / window;
             row[_layout.Unit(u, MetricLayout.DivertedPerHour)] = state.Diverted / window;
-            for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
-            {
-                row[_layout.Unit(u, MetricLayout.UnitPercentiles + p)] = _unitHistograms[u].Quantile(MetricLayout.Percentiles[p]);
-            }
-
+            FillUnread(row, _layout.Unit(u, MetricLayout.UnitPercentiles));
             for (int t = 0; t < thresholds; t++)
             {
                 row[_layout.Unit(u, _layout.WaitOverOffset + t)] = Ratio(_waitOver[(u * thresholds) + t], state.Starts, 0.0);
@@ -52,21 +48,14 @@ internal sealed partial class SimulationEngine
         row[_layout.Total(MetricLayout.TotalMeanInSystem)] = inSystem;
         row[_layout.Total(MetricLayout.TotalMeanTimeInSystemHours)] = exits > 0 ? _groupTimeSum.Sum() / exits : double.NaN;
         row[_layout.Total(MetricLayout.TotalTurnedAwayPerHour)] = _networkTurnedAway / window;
-        var all = ReplicationTallies.Pool(_groupHistograms);
-        for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
-        {
-            row[_layout.Total(MetricLayout.TotalPercentiles + p)] = all.Quantile(MetricLayout.Percentiles[p]);
-        }
+        FillUnread(row, _layout.Total(MetricLayout.TotalPercentiles));
 
         for (int named = 0; named < _layout.NamedGroups; named++)
         {
             int g = named + 1;
             row[_layout.Group(named, MetricLayout.GroupThroughputPerHour)] = _groupExits[g] / window;
             row[_layout.Group(named, MetricLayout.GroupMeanTimeInSystemHours)] = _groupExits[g] > 0 ? _groupTimeSum[g] / _groupExits[g] : double.NaN;
-            for (int p = 0; p < MetricLayout.Percentiles.Length; p++)
-            {
-                row[_layout.Group(named, MetricLayout.GroupPercentiles + p)] = _groupHistograms[g].Quantile(MetricLayout.Percentiles[p]);
-            }
+            FillUnread(row, _layout.Group(named, MetricLayout.GroupPercentiles));
         }
 
         return row;
@@ -86,6 +75,14 @@ internal sealed partial class SimulationEngine
 
         return new ReplicationTallies(_unitHistograms, _groupHistograms, starts, _waitOver);
     }
+
+    /// <summary>
+    /// Marks the replication's own percentiles, from <paramref name="first"/> on, as not measured (NaN): the result's
+    /// percentiles and their intervals come from the pooled histograms (<see cref="ReplicationPool"/>), so reading each
+    /// replication's here would only cost a walk of every histogram per replication (the larger part of a short
+    /// replication's time when there are thousands of them).
+    /// </summary>
+    private static void FillUnread(double[] row, int first) => Array.Fill(row, double.NaN, first, MetricLayout.Percentiles.Length);
 
     private static DurationHistogram[] NewHistograms(int count)
     {

@@ -33,32 +33,31 @@ public static class Simulator
         var compiled = CompiledNetwork.Compile(network);
         var layout = new MetricLayout(network.Units.Length, thresholds.Length, network.Groups.Length);
         int most = options.Precision is null ? options.Replications : options.MaxReplications;
-        var rows = new double[most][];
-        var events = new long[most];
-        var tallies = new ReplicationTallies[most];
-        var series = new IReadOnlyList<double>[most];
+        var pool = new ReplicationPool(network.Units.Length, network.Groups.Length, thresholds.Length);
         var tracker = new ProgressTracker(progress, options.Replications);
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
         var meanServiceHours = network.Units.Select(unit => unit.EffectiveService.MeanHours).ToArray();
 
-        void RunReplications(int from, int to) => Parallel.For(from, to, parallel, (replication, state) =>
+        // Each worker takes the next replication number in turn, so they finish nearly in order and the pool holds
+        // few early arrivals; results never depend on which worker ran which.
+        void RunReplications(int from, int to)
         {
-            if (cancellation.IsCancellationRequested)
+            int taken = from;
+            int workers = Math.Max(1, Math.Min(to - from, options.MaxDegreeOfParallelism > 0 ? options.MaxDegreeOfParallelism : Environment.ProcessorCount));
+            Parallel.For(0, workers, new ParallelOptions { MaxDegreeOfParallelism = workers }, _ =>
             {
-                state.Stop();
-                return;
-            }
-
-            var engine = new SimulationEngine(compiled, layout, thresholds, options.WarmupHours, options.DurationHours, options.Seed, replication);
-            if (engine.Run(tracker.For(replication), cancellation))
-            {
-                rows[replication] = engine.ResultRow();
-                events[replication] = engine.EventCount;
-                tallies[replication] = engine.Tallies();
-                series[replication] = engine.InNetworkSeries;
-                tracker.Update(replication, 1.0);
-            }
-        });
+                int replication;
+                while (!cancellation.IsCancellationRequested && (replication = Interlocked.Increment(ref taken) - 1) < to)
+                {
+                    var engine = new SimulationEngine(compiled, layout, thresholds, options.WarmupHours, options.DurationHours, options.Seed, replication);
+                    if (engine.Run(tracker.For(replication), cancellation))
+                    {
+                        pool.Finish(replication, new ReplicationOutput(engine.ResultRow(), engine.EventCount, engine.Tallies(), engine.InNetworkSeries));
+                        tracker.Update(replication, 1.0);
+                    }
+                }
+            });
+            pool.Flush(to);
+        }
 
         // The sequential procedure (PrecisionCheck): each step's size depends only on the rows so far, never on
         // timing, so the same seed stops at the same count on any machine and thread count.
@@ -71,8 +70,7 @@ public static class Simulator
             double target = PrecisionCheck.AdjustedTarget(precision);
             while (true)
             {
-                var finishedSoFar = rows.Take(started).Where(row => row is not null).ToList();
-                worst = PrecisionCheck.WorstRelativeHalfWidth(layout, finishedSoFar, meanServiceHours);
+                worst = PrecisionCheck.WorstRelativeHalfWidth(layout, pool.Rows, meanServiceHours);
                 reached = worst <= target;
                 if (reached.Value || started >= most || cancellation.IsCancellationRequested)
                 {
@@ -86,12 +84,8 @@ public static class Simulator
             }
         }
 
-        var finished = rows.Take(started).Where(row => row is not null).ToList();
-        long totalEvents = events.Sum();
-        var finishedTallies = tallies.Take(started).Where(tally => tally is not null).ToList();
-        var result = new ResultAssembler(layout, finished, finishedTallies).Assemble(network, options with { Replications = started }, totalEvents);
-        var finishedSeries = series.Take(started).Where(one => one is not null).ToList();
-        double? cut = WarmupCheck.TruncationHours(finishedSeries, options.WarmupHours + options.DurationHours);
+        var result = new ResultAssembler(layout, pool).Assemble(network, options with { Replications = started }, pool.Events);
+        double? cut = WarmupCheck.TruncationHours(pool.InNetworkSeriesSum, pool.Rows.Count, options.WarmupHours + options.DurationHours);
         return result with { WorstRelativeHalfWidth = worst, PrecisionReached = reached, MserTruncationHours = cut };
     }
 }

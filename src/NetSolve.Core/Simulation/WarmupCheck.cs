@@ -24,18 +24,38 @@ internal static class WarmupCheck
             return null;
         }
 
-        int points = series[0].Count;
-        var mean = new double[points];
+        var sum = new double[series[0].Count];
         foreach (var replication in series)
         {
-            for (int i = 0; i < points; i++)
+            for (int i = 0; i < sum.Length; i++)
             {
-                mean[i] += replication[i] / series.Count;
+                sum[i] += replication[i];
             }
         }
 
+        return TruncationHours(sum, series.Count, endHours);
+    }
+
+    /// <summary>
+    /// As above, from the replications' series summed point by point (<paramref name="sum"/>) over
+    /// <paramref name="replications"/> of them, as the run pools them without keeping each.
+    /// </summary>
+    public static double? TruncationHours(IReadOnlyList<double> sum, int replications, double endHours)
+    {
+        ArgumentNullException.ThrowIfNull(sum);
+        if (replications == 0 || sum.Count == 0)
+        {
+            return null;
+        }
+
+        var mean = new double[sum.Count];
+        for (int i = 0; i < mean.Length; i++)
+        {
+            mean[i] = sum[i] / replications;
+        }
+
         return MserTruncation.TruncatedBatches(mean) is int batches
-            ? batches * MserTruncation.BatchSize * (endHours / points)
+            ? batches * MserTruncation.BatchSize * (endHours / mean.Length)
             : null;
     }
 }

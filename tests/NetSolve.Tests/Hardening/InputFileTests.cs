@@ -143,5 +143,42 @@ public sealed class InputFileTests : IDisposable
         Assert.Contains("is a named pipe (FIFO), not a movement log", result.Error, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void The_file_type_is_asked_of_the_operating_system_so_a_directory_pipe_and_device_are_told_apart()
+    {
+        Assert.SkipUnless(OperatingSystem.IsLinux() || OperatingSystem.IsMacOS(), "the file type is asked on Linux and macOS");
+        string file = folder.Write("plain.yaml", "a: 1\n"u8.ToArray());
+        string pipe = Path.Combine(folder.Path, "pipe.yaml");
+        NamedPipe.Create(pipe);
+
+        Assert.Null(InputFileType.NotRegular(file));
+        Assert.Equal("a directory", InputFileType.NotRegular(folder.Path));
+        Assert.Equal("a named pipe (FIFO)", InputFileType.NotRegular(pipe));
+        Assert.Equal("a character device", InputFileType.NotRegular("/dev/null"));
+    }
+
+    [Theory]
+    // Exact by hand: the S_IFMT values of POSIX sys/stat.h (IEEE Std 1003.1), with permission bits set beside them.
+    [InlineData(0x81A4, null)]
+    [InlineData(0x41ED, "a directory")]
+    [InlineData(0x1180, "a named pipe (FIFO)")]
+    [InlineData(0x21B6, "a character device")]
+    [InlineData(0x61B0, "a block device")]
+    [InlineData(0xC1FF, "a socket")]
+    [InlineData(0xA1FF, "not a regular file")]
+    public void Each_file_type_is_named_for_the_message(int mode, string? named)
+    {
+        Assert.Equal(named, InputFileType.Describe(mode));
+    }
+
+    [Fact]
+    public void The_file_type_check_does_not_call_the_runtime_s_private_helper_library()
+    {
+        // A Native AOT build links that library into the program and does not ship it, so a call to it would fail there.
+        string source = File.ReadAllText(Path.Combine(Repository.Root, "src", "NetSolve.Core", "Parsing", "InputFileType.cs"));
+
+        Assert.DoesNotContain("[DllImport(\"libSystem.Native", source, StringComparison.Ordinal);
+    }
+
     public void Dispose() => folder.Dispose();
 }

@@ -45,4 +45,37 @@ public sealed class OptionCorpusTests
 
         Assert.Equal(2, result.ExitCode);
     }
+
+    [Fact]
+    public void A_value_starting_with_an_at_sign_is_a_value_not_a_response_file_to_read()
+    {
+        // Found by the fuzzer: the parser took "@SUM(A1:A9)" for a file of arguments and said so without naming the option.
+        var result = CorpusCase.Run(["staff", Harbourside, "--by-hour", "--max-wait", "1h", "--shifts", "@SUM(A1:A9)"]);
+
+        Assert.Equal(2, result.ExitCode);
+        Assert.StartsWith("netsolve: --shifts", result.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("Response file", result.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void An_exact_roster_search_estimated_at_hours_of_work_is_refused_with_the_way_round()
+    {
+        // A desk whose busiest hour needs fifty one-minute servers: thousands of chain steps per hour over thousands of states, for each trial roster.
+        string network = CorpusCase.File("exact-chain-fast-service.yaml");
+
+        var result = CorpusCase.Run(["staff", network, "--by-hour", "--exact", "--max-wait", "5min", "--no-check"]);
+
+        Assert.Equal(2, result.ExitCode);
+        Assert.StartsWith("netsolve: --exact: ", result.Error, StringComparison.Ordinal);
+        Assert.Contains("--allow-long", result.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Allow_long_on_staff_needs_the_exact_roster_search()
+    {
+        var result = CorpusCase.Run(["staff", Harbourside, "--allow-long"]);
+
+        Assert.Equal(2, result.ExitCode);
+        Assert.Contains("give it with --by-hour --exact", result.Error, StringComparison.Ordinal);
+    }
 }

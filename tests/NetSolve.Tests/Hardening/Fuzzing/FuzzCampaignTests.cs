@@ -18,7 +18,7 @@ public sealed class FuzzCampaignTests
     [Fact]
     public void A_few_hundred_mutated_inputs_across_every_surface_keep_the_contract()
     {
-        var report = FuzzCampaign.Run(Inputs, Seed, _ => { }, Inputs, minimise: false);
+        var report = FuzzCampaign.Run(Inputs, Seed, _ => { }, Inputs, minimise: false, workers: Environment.ProcessorCount);
 
         Assert.Equal(Inputs, report.Total);
         Assert.True(report.Classes.Count == 0, "Failure classes:\n" + string.Join('\n', report.Classes.Select(entry => string.Create(CultureInfo.InvariantCulture,

@@ -30,6 +30,12 @@ internal sealed class FuzzReport
     /// <summary>Wall time of the whole campaign, minimising included.</summary>
     public TimeSpan Elapsed { get; set; }
 
+    /// <summary>Per command, the inputs run and their summed run time: where a campaign's time goes.</summary>
+    public Dictionary<string, (int Inputs, TimeSpan Time)> ByCommand { get; } = new(StringComparer.Ordinal);
+
+    /// <summary>Parallel workers the campaign ran inputs on.</summary>
+    public int Workers { get; set; } = 1;
+
     /// <summary>Inputs run in all.</summary>
     public int Total => Inputs.Values.Sum();
 
@@ -39,6 +45,8 @@ internal sealed class FuzzReport
         Increment(Inputs, input.Surface);
         Increment(ExitCodes, (input.Surface, outcome.ExitCode));
         PeakWorkingSet = Math.Max(PeakWorkingSet, outcome.PeakWorkingSet);
+        var (inputs, time) = ByCommand.GetValueOrDefault(input.Arguments[0]);
+        ByCommand[input.Arguments[0]] = (inputs + 1, time + outcome.Elapsed);
         if (outcome.Elapsed > Slowest)
         {
             Slowest = outcome.Elapsed;

@@ -17,7 +17,7 @@ internal static class FuzzSummary
     {
         var text = new StringBuilder();
         var invariant = CultureInfo.InvariantCulture;
-        text.Append(invariant, $"{report.Total:N0} inputs from seed {seed}, in {report.Elapsed.TotalMinutes:0.0} min, made by\n\n```sh\n{command}\n```\n\n");
+        text.Append(invariant, $"{report.Total:N0} inputs from seed {seed}, in {report.Elapsed.TotalMinutes:0.0} min ({report.Total / Math.Max(report.Elapsed.TotalSeconds, 1e-9):0.0} inputs a second, {report.Workers} workers), made by\n\n```sh\n{command}\n```\n\n");
         text.Append("| surface | inputs | exit 0 | exit 1 | exit 2 | other | failing |\n|---|---:|---:|---:|---:|---:|---:|\n");
         foreach (var surface in InputGenerator.Surfaces)
         {
@@ -33,7 +33,13 @@ internal static class FuzzSummary
         }
 
         text.Append(invariant, $"- largest working set of the test process during a run: {report.PeakWorkingSet / (1024.0 * 1024.0):0} MB (limit {FuzzRunner.MemoryLimit / (1024 * 1024)} MB)\n");
-        text.Append(invariant, $"- slowest input: {report.Slowest.TotalSeconds:0.00} s ({report.SlowestCommand}; a hang is over {FuzzRunner.HangLimit.TotalSeconds:0} s)\n");
+        text.Append(invariant, $"- slowest input in wall time: {report.Slowest.TotalSeconds:0.00} s ({report.SlowestCommand}; a hang is over {FuzzRunner.HangLimit.TotalSeconds:0} s of processor time, or still running after {FuzzRunner.GiveUpLimit.TotalSeconds:0} s)\n");
+        text.Append("\nWhere the time went (run time summed over the workers):\n\n| command | inputs | mean run time |\n|---|---:|---:|\n");
+        foreach (var (name, (inputs, time)) in report.ByCommand.OrderByDescending(entry => entry.Value.Time))
+        {
+            text.Append(invariant, $"| {Cell(name)} | {inputs} | {time.TotalMilliseconds / inputs:0} ms |\n");
+        }
+
         if (report.Classes.Count > 0)
         {
             text.Append("\nFailure classes, each with its (minimised) example:\n\n| kind | seen | finding | example command |\n|---|---:|---|---|\n");
