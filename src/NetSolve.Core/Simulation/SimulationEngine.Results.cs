@@ -87,6 +87,9 @@ internal sealed partial class SimulationEngine
         return new ReplicationTallies(_unitHistograms, _groupHistograms, starts, _waitOver);
     }
 
+    /// <summary>The replication's journey tallies; null when the network defines no journey.</summary>
+    public JourneyTallies? JourneyTallies() => _journeys?.Tallies();
+
     private static DurationHistogram[] NewHistograms(int count)
     {
         var histograms = new DurationHistogram[count];

@@ -37,6 +37,7 @@ public static class Simulator
         var events = new long[most];
         var tallies = new ReplicationTallies[most];
         var series = new IReadOnlyList<double>[most];
+        var journeys = new JourneyTallies?[most];
         var tracker = new ProgressTracker(progress, options.Replications);
         var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
         var meanServiceHours = network.Units.Select(unit => unit.EffectiveService.MeanHours).ToArray();
@@ -56,6 +57,7 @@ public static class Simulator
                 events[replication] = engine.EventCount;
                 tallies[replication] = engine.Tallies();
                 series[replication] = engine.InNetworkSeries;
+                journeys[replication] = engine.JourneyTallies();
                 tracker.Update(replication, 1.0);
             }
         });
@@ -92,6 +94,13 @@ public static class Simulator
         var result = new ResultAssembler(layout, finished, finishedTallies).Assemble(network, options with { Replications = started }, totalEvents);
         var finishedSeries = series.Take(started).Where(one => one is not null).ToList();
         double? cut = WarmupCheck.TruncationHours(finishedSeries, options.WarmupHours + options.DurationHours);
-        return result with { WorstRelativeHalfWidth = worst, PrecisionReached = reached, MserTruncationHours = cut };
+        var finishedJourneys = journeys.Take(started).OfType<JourneyTallies>().ToList();
+        return result with
+        {
+            WorstRelativeHalfWidth = worst,
+            PrecisionReached = reached,
+            MserTruncationHours = cut,
+            Journeys = JourneyResults.Assemble(network, finishedJourneys, options.DurationHours),
+        };
     }
 }
