@@ -106,6 +106,7 @@ public static class HtmlReport
         html.Append("<section id=\"units\">\n<h2>Units</h2>\n");
         UnitTable.Append(html, baseline);
         html.Append("</section>\n");
+        JourneySection.Append(html, baseline, simulation);
 
         AppendGrowth(html, baseline);
 
