@@ -26,7 +26,7 @@ public static class JourneyFormula
 
     /// <summary>
     /// One estimate per journey of the solved network for every patient, followed, when the network has patient
-    /// groups, by one per journey and named group, in the order of <see cref="Network.Groups"/>.
+    /// groups, by one per journey and named group whose patients enter the journey, in the order of <see cref="Network.Groups"/>.
     /// </summary>
     public static ImmutableArray<JourneyEstimate> Estimate(NetworkSolution solution)
     {
@@ -46,7 +46,7 @@ public static class JourneyFormula
             bool stable = members.All(u => solution.Units[u].IsStable && solution.Units[u].MeanWaitHours is not null);
             var parts = flows.Select(flow => (Flow: flow, Chain: stable ? Chain(solution, flow, members) : null)).ToList();
             results.Add(Result(journey, null, parts.Select(part => (part.Flow.EntriesPerHour(members), part.Chain)).ToList(), stable));
-            foreach (var part in parts.Where(part => part.Flow.Group is not null))
+            foreach (var part in parts.Where(part => part.Flow.Group is not null && part.Flow.EntriesPerHour(members) > 0.0))
             {
                 results.Add(Result(journey, part.Flow.Group, [(part.Flow.EntriesPerHour(members), part.Chain)], stable));
             }

@@ -5,7 +5,7 @@ namespace NetSolve.Simulation;
 
 /// <summary>
 /// Pools the replications' <see cref="JourneyTallies"/> into one <see cref="SimulatedJourney"/> per journey for every
-/// patient, followed, when the network has patient groups, by one per journey and named group.
+/// patient, followed, when the network has patient groups, by one per journey and named group that made the journey.
 /// </summary>
 internal static class JourneyResults
 {
@@ -29,7 +29,11 @@ internal static class JourneyResults
             results.Add(Pool(journey, null, tallies, slots, windowHours));
             for (int g = 1; g < groups; g++)
             {
-                results.Add(Pool(journey, network.Groups[g - 1], tallies, [(j * groups) + g], windowHours));
+                int slot = (j * groups) + g;
+                if (tallies.Any(tally => tally.Counts[slot] > 0))
+                {
+                    results.Add(Pool(journey, network.Groups[g - 1], tallies, [slot], windowHours));
+                }
             }
         }
 

@@ -55,7 +55,7 @@ public sealed record SimulationResult
 
     /// <summary>
     /// Per journey of <see cref="Network.Journeys"/>, in order: the figures for every patient, then, when the network
-    /// has patient groups, one per named group. Empty without journeys or when no replication finished.
+    /// has patient groups, one per named group that made the journey. Empty without journeys or when no replication finished.
     /// </summary>
     public ImmutableArray<SimulatedJourney> Journeys { get; init; } = [];
 }
