@@ -7,9 +7,11 @@ using NetSolve.Solving;
 namespace NetSolve.Rendering.Report;
 
 /// <summary>
-/// The report's "Journeys" section: one line per journey for every patient, with its mean, its 90th percentile and
-/// the share longer than each of its times (the 4-hour share for an emergency journey), by the formula and, when the
-/// report carries a simulation, by the simulation beside it. Nothing when the network defines no journey.
+/// The report's journey sections: one line per journey for every patient, with its mean, its 90th percentile and
+/// the share longer than each of its times (the 4-hour share for an emergency journey). By the formula after the
+/// units ("Journeys"); with a simulation, again after the comparison with the simulated shares beside the formula's
+/// ("Journeys: formula against simulation"), so that the report without a simulation is the start of the one with.
+/// Nothing when the network defines no journey.
 /// </summary>
 internal static class JourneySection
 {
@@ -21,8 +23,17 @@ internal static class JourneySection
             return;
         }
 
-        html.Append("<section id=\"journeys\">\n<h2>Journeys</h2>\n<p>The time from entering a journey's units to leaving them, per patient; ")
-            .Append("formula: each visit's wait and service as phases joined by the routes (docs/methods.md, \"Journeys\").</p>\n<ul>\n");
+        if (simulation is null)
+        {
+            html.Append("<section id=\"journeys\">\n<h2>Journeys</h2>\n<p>The time from entering a journey's units to leaving them, per patient; ")
+                .Append("formula: each visit's wait and service as phases joined by the routes (docs/methods.md, \"Journeys\").</p>\n<ul>\n");
+        }
+        else
+        {
+            html.Append("<section id=\"journeys-simulated\">\n<h2>Journeys: formula against simulation</h2>\n<p>The formula's figures, ")
+                .Append("with the simulation's share of patients longer than each time (measured per patient) in brackets.</p>\n<ul>\n");
+        }
+
         foreach (var estimate in estimates)
         {
             var simulated = simulation?.Journeys.FirstOrDefault(journey => journey.Group is null && journey.Journey.Id == estimate.Journey.Id);
