@@ -26,6 +26,9 @@ public sealed record Network(
     /// <summary>Patient groups beside the default group formed by <see cref="Arrivals"/> and <see cref="Routes"/>; empty in v1.</summary>
     public ImmutableArray<PatientGroup> Groups { get; init; } = [];
 
+    /// <summary>Named sets of units whose time per patient is reported as a whole (docs/network-file.md, "Journeys"); empty when the file has none.</summary>
+    public ImmutableArray<Journey> Journeys { get; init; } = [];
+
     /// <summary>Total external arrivals per hour of the default group (the v1 arrivals).</summary>
     public double ExternalArrivalsPerHour => Arrivals.Sum(arrival => arrival.PerHour);
 

@@ -9,7 +9,7 @@ namespace NetSolve.Parsing;
 /// <summary>Turns the located YAML of a network file into a <see cref="Network"/>, collecting every problem.</summary>
 internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic> diagnostics) : NodeParser(diagnostics)
 {
-    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups", ArrivalCvKey, TargetsKey];
+    private static readonly string[] TopKeys = ["name", "time_unit", "units", "arrivals", "routes", "arrival_profile", "groups", ArrivalCvKey, TargetsKey, JourneysKey];
     private static readonly string[] UnitKeys = ["label", "servers", "service", "service_cv", "service_distribution", "service_samples", "capacity", "when_full", RosterKey];
     private static readonly string[] TimeUnitNames = ["minute", "hour", "day"];
 
@@ -53,13 +53,14 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         var profile = fields.TryGetValue("arrival_profile", out var profileNode) ? ParseProfile(profileNode, null) : null;
         var groups = fields.TryGetValue("groups", out var groupsNode) ? ParseGroups(groupsNode, timeUnit, known) : [];
         units = fields.TryGetValue(TargetsKey, out var targetsNode) ? ParseTargets(targetsNode, units, timeUnit) : units;
+        var journeys = fields.TryGetValue(JourneysKey, out var journeysNode) ? ParseJourneys(journeysNode, timeUnit) : [];
 
         if (Diagnostics.Any(d => d.IsError))
         {
             return null;
         }
 
-        var network = new Network(name, timeUnit, units, arrivals, routes) { ArrivalProfile = profile, Groups = groups };
+        var network = new Network(name, timeUnit, units, arrivals, routes) { ArrivalProfile = profile, Groups = groups, Journeys = journeys };
         return (network, new NetworkLocations(_unitLocations, _routeLocations) { Groups = _groupLocations });
     }
 

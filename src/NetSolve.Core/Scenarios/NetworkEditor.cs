@@ -110,7 +110,10 @@ public static partial class NetworkEditor
                 return new EditResult(null, [.. _diagnostics]);
             }
 
-            var changed = new Network(network.Name, network.TimeUnit, [.. _units], [.. _arrivals], [.. _routes]);
+            var changed = new Network(network.Name, network.TimeUnit, [.. _units], [.. _arrivals], [.. _routes])
+            {
+                Journeys = JourneysOfOpenUnits(network.Journeys, _units),
+            };
             if (!_arrivals.Any(arrival => arrival.PerHour > 0.0))
             {
                 Error(_lastArrivalChange == default ? _origin : _lastArrivalChange, null, ChangeCodes.BrokenNetwork, "no positive arrival rate is left: at least one unit needs patients arriving from outside");
@@ -131,6 +134,15 @@ public static partial class NetworkEditor
             }
 
             return new EditResult(_diagnostics.Any(d => d.IsError) ? null : changed, [.. _diagnostics]);
+        }
+
+        /// <summary>The journeys without the units a change closed; a journey left with no unit is dropped.</summary>
+        private static ImmutableArray<Journey> JourneysOfOpenUnits(ImmutableArray<Journey> journeys, List<Unit> units)
+        {
+            var open = units.Select(unit => unit.Id).ToHashSet(StringComparer.Ordinal);
+            return [.. journeys
+                .Select(journey => journey with { UnitIds = [.. journey.UnitIds.Where(open.Contains)] })
+                .Where(journey => journey.UnitIds.Length > 0)];
         }
 
         private static HashSet<string> UnreachedIds(Network network)

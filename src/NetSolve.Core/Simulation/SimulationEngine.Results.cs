@@ -84,6 +84,9 @@ internal sealed partial class SimulationEngine
     /// </summary>
     private static void FillUnread(double[] row, int first) => Array.Fill(row, double.NaN, first, MetricLayout.Percentiles.Length);
 
+    /// <summary>The replication's journey tallies; null when the network defines no journey.</summary>
+    public JourneyTallies? JourneyTallies() => _journeys?.Tallies();
+
     private static DurationHistogram[] NewHistograms(int count)
     {
         var histograms = new DurationHistogram[count];

@@ -34,6 +34,7 @@ internal sealed partial class SimulationEngine
     private readonly long[] _groupExits;
     private readonly double[] _groupTimeSum;
     private readonly DurationHistogram[] _groupHistograms;
+    private readonly JourneyTracker? _journeys;
     private bool _handledStillQueued;
     private long _entered;
     private long _networkTurnedAway;
@@ -67,6 +68,7 @@ internal sealed partial class SimulationEngine
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
         _groupHistograms = NewHistograms(groups);
+        _journeys = JourneyTracker.For(network.Network, groups, warmupHours);
     }
 
     /// <summary>
@@ -265,6 +267,7 @@ internal sealed partial class SimulationEngine
 
             if (turnAway)
             {
+                _journeys?.Leave(now, patient, _patients[patient].Group);
                 ReleasePatient(patient);
                 return;
             }
@@ -279,6 +282,7 @@ internal sealed partial class SimulationEngine
         }
 
         _patients[patient].UnitArrival = now;
+        _journeys?.Arrive(now, unit, patient, _patients[patient].Group);
         if (state.Busy < state.Servers)
         {
             state.Busy++;
@@ -345,6 +349,7 @@ internal sealed partial class SimulationEngine
             _groupHistograms[group].Record(time);
         }
 
+        _journeys?.Leave(now, patient, group);
         ReleasePatient(patient);
     }
 

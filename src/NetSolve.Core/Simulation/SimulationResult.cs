@@ -52,4 +52,10 @@ public sealed record SimulationResult
 
     /// <summary>Per-group results for <see cref="Network.Groups"/>, in order.</summary>
     public required ImmutableArray<SimulatedGroup> Groups { get; init; }
+
+    /// <summary>
+    /// Per journey of <see cref="Network.Journeys"/>, in order: the figures for every patient, then, when the network
+    /// has patient groups, one per named group that made the journey. Empty without journeys or when no replication finished.
+    /// </summary>
+    public ImmutableArray<SimulatedJourney> Journeys { get; init; } = [];
 }

@@ -34,6 +34,8 @@ public static class Simulator
         var layout = new MetricLayout(network.Units.Length, thresholds.Length, network.Groups.Length);
         int most = options.Precision is null ? options.Replications : options.MaxReplications;
         var pool = new ReplicationPool(network.Units.Length, network.Groups.Length, thresholds.Length);
+        // Journey tallies are small (one histogram per journey and group), so each replication's are kept for pooling.
+        var journeys = new JourneyTallies?[most];
         var tracker = new ProgressTracker(progress, options.Replications);
         var meanServiceHours = network.Units.Select(unit => unit.EffectiveService.MeanHours).ToArray();
 
@@ -52,6 +54,7 @@ public static class Simulator
                     if (engine.Run(tracker.For(replication), cancellation))
                     {
                         pool.Finish(replication, new ReplicationOutput(engine.ResultRow(), engine.EventCount, engine.Tallies(), engine.InNetworkSeries));
+                        journeys[replication] = engine.JourneyTallies();
                         tracker.Update(replication, 1.0);
                     }
                 }
@@ -86,6 +89,13 @@ public static class Simulator
 
         var result = new ResultAssembler(layout, pool).Assemble(network, options with { Replications = started }, pool.Events);
         double? cut = WarmupCheck.TruncationHours(pool.InNetworkSeriesSum, pool.Rows.Count, options.WarmupHours + options.DurationHours);
-        return result with { WorstRelativeHalfWidth = worst, PrecisionReached = reached, MserTruncationHours = cut };
+        var finishedJourneys = journeys.Take(started).OfType<JourneyTallies>().ToList();
+        return result with
+        {
+            WorstRelativeHalfWidth = worst,
+            PrecisionReached = reached,
+            MserTruncationHours = cut,
+            Journeys = JourneyResults.Assemble(network, finishedJourneys, options.DurationHours),
+        };
     }
 }

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -89,6 +90,6 @@ public static class ComparedMetricColumns
     public static ResultTable Table(SimulationResult simulated, NetworkSolution formula)
     {
         ArgumentNullException.ThrowIfNull(simulated);
-        return ResultTable.Build(All, ComparisonRow.Of(simulated, formula), simulated.Network.TimeUnit);
+        return ResultTable.Build(All, ComparisonRow.Of(simulated, formula).AddRange(JourneyComparisonRows.Of(simulated, formula)), simulated.Network.TimeUnit);
     }
 }

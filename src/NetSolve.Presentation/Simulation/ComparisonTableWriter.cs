@@ -2,6 +2,7 @@ using System.Globalization;
 using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -17,7 +18,7 @@ public static class ComparisonTableWriter
         ArgumentNullException.ThrowIfNull(simulated);
         ArgumentNullException.ThrowIfNull(formula);
         ArgumentNullException.ThrowIfNull(output);
-        var rows = ComparisonRow.Of(simulated, formula);
+        var rows = ComparisonRow.Of(simulated, formula).AddRange(JourneyComparisonRows.Of(simulated, formula));
         output.Write($"formulas against simulation; rates per {TimeConstants.Name(simulated.Network.TimeUnit)}; "
             + "error: (formula - simulated) / simulated; verdict: is the formula inside the simulation's 95% interval?\n");
         output.Write("formula method per unit:\n");

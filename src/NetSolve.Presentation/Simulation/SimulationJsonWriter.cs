@@ -1,7 +1,9 @@
 using System.Collections.Immutable;
 using System.Text.Json;
+using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Simulation;
 using NetSolve.Solving;
@@ -49,6 +51,12 @@ public static class SimulationJsonWriter
         json.WriteEndArray();
         WriteTotals(json, result.Totals!, timeUnit);
         WriteGroups(json, result.Groups, timeUnit);
+        JourneyJsonWriter.Write(result.Journeys, timeUnit, json);
+        if (formula is not null && !result.Journeys.IsDefaultOrEmpty)
+        {
+            JourneyComparisonRows.WriteJson(result.Journeys, JourneyFormula.Estimate(formula), timeUnit, json);
+        }
+
         json.WriteEndObject();
         json.Flush();
     }

@@ -1,5 +1,6 @@
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Presentation.Solution;
 using NetSolve.Simulation;
@@ -24,6 +25,7 @@ public static class SimulationTableWriter
         PeopleTableWriter.Write(ResultTable.Build(SimulatedUnitColumns.ForPeople, rows, timeUnit), output);
         WritePercentiles(result, output);
         WriteWaitOver(result, rows, output);
+        JourneyTableWriter.Write(result.Journeys, timeUnit, output);
         TimeOfDayTableWriter.Write(result, rows, output);
         WriteTotals(result, output);
     }

@@ -1,7 +1,9 @@
 using System.Text.Json;
+using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Presentation.ByHour;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Solving;
 
@@ -35,6 +37,8 @@ public static class SolutionJsonWriter
         {
             GroupColumns.WriteArray(solution, json);
         }
+
+        JourneyJsonWriter.Write(JourneyFormula.Estimate(solution), solution.Network.TimeUnit, json);
 
         json.WriteEndObject();
         json.Flush();

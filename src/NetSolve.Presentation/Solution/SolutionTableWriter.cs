@@ -1,6 +1,8 @@
+using NetSolve.Analysis;
 using NetSolve.Model;
 using NetSolve.Presentation.ByHour;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Solving;
 
 namespace NetSolve.Presentation.Solution;
@@ -30,6 +32,7 @@ public static class SolutionTableWriter
             output.Write(targets + "\n");
         }
 
+        JourneyTableWriter.Write(JourneyFormula.Estimate(solution), solution.Network.TimeUnit, output);
         ByHourTableWriter.Write(solution, output);
     }
 

@@ -106,6 +106,7 @@ public static class HtmlReport
         html.Append("<section id=\"units\">\n<h2>Units</h2>\n");
         UnitTable.Append(html, baseline);
         html.Append("</section>\n");
+        JourneySection.Append(html, baseline, null);
 
         HourByHourSection.Append(html, baseline);
         AppendGrowth(html, baseline);
@@ -119,6 +120,7 @@ public static class HtmlReport
         {
             TimeOfDaySection.Append(html, simulation);
             SimulationComparisonTable.Append(html, baseline, simulation);
+            JourneySection.Append(html, baseline, simulation);
         }
 
         html.Append("<section id=\"assumptions\">\n<h2>Assumptions and caution</h2>\n<p>")

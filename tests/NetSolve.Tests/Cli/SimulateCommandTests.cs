@@ -49,8 +49,9 @@ public sealed class SimulateCommandTests
         var rows = CsvRows.Parse(csv.Out);
         Assert.Equal(["unit", "metric", "formula", "simulated", "simulated_ci", "verdict", "time_unit", "relative_error", "method", "formula_exact", "suspect", "relative_error_ci"], rows[0]);
 
-        // Source: the larkspur file has five units; the comparison judges seven metrics of each.
-        Assert.Equal(5 * 7, rows.Count - 1);
+        // Source: the larkspur file has five units; the comparison judges seven metrics of each, and its one journey
+        // six (mean, p50, p90, p95, p99 and the share over 4 h).
+        Assert.Equal((5 * 7) + 6, rows.Count - 1);
         Assert.Equal(
             ComparisonTableRows.Parse(table.Out).Select(row => (row.Unit, row.Metric, row.Verdict)),
             rows.Skip(1).Select(row => (row[0], row[1], row[5])));

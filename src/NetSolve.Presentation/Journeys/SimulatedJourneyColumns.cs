@@ -1,0 +1,72 @@
+using System.Collections.Immutable;
+using NetSolve.Analysis;
+using NetSolve.Model;
+using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Metrics;
+using NetSolve.Presentation.Simulation;
+using NetSolve.Simulation;
+
+namespace NetSolve.Presentation.Journeys;
+
+/// <summary>
+/// The registry of a journey's simulated figures: the same ids as <see cref="JourneyColumns"/>, each with its
+/// <c>_ci</c> half-width, so that a journey reads the same from <c>solve</c> and <c>simulate</c>.
+/// </summary>
+public static class SimulatedJourneyColumns
+{
+    /// <summary>The journey's name.</summary>
+    public static readonly Column<SimulatedJourney> Journey = Columns.Words<SimulatedJourney>("journey", "journey", row => row.Journey.Id);
+
+    /// <summary>The journey's display name.</summary>
+    public static readonly Column<SimulatedJourney> Label = Columns.Words<SimulatedJourney>("label", "label", row => row.Journey.Label, Audience.Machines);
+
+    /// <summary>Whose journeys: every patient, or one patient group.</summary>
+    public static readonly Column<SimulatedJourney> Patients = Columns.Words<SimulatedJourney>("patients", "patients", row => JourneyColumns.PatientsWord(row.Group), Audience.People);
+
+    /// <summary>Journeys finished per unit of time.</summary>
+    public static readonly EstimateMetric<SimulatedJourney> Rate = new("journey_rate", "journeys", MetricDimension.Rate, row => row.PerHour);
+
+    /// <summary>The mean journey time.</summary>
+    public static readonly EstimateMetric<SimulatedJourney> MeanTime = new("mean_time", "mean time", MetricDimension.Time, row => row.MeanHours);
+
+    /// <summary>The shares longer than each of the journey's times, as people read them.</summary>
+    public static readonly Column<SimulatedJourney> Over = Columns.Words<SimulatedJourney>("over", "share longer than", row => OverWords(row), Audience.People);
+
+    /// <summary>The time t of a share over t.</summary>
+    public static readonly Column<WaitOverEstimate> OverTime = Columns.Number<WaitOverEstimate>("time", "longer than", MetricDimension.Time, over => over.WaitHours);
+
+    /// <summary>The fields of each object of a journey's <c>over</c> array.</summary>
+    public static readonly ImmutableArray<Column<WaitOverEstimate>> OverForJson = [OverTime, .. WaitOverColumns.Probability.ForMachines, WaitOverColumns.UpperBound];
+
+    /// <summary>The columns of <paramref name="rows"/>: the patients column only when some row is for a group.</summary>
+    public static ImmutableArray<Column<SimulatedJourney>> For(IReadOnlyList<SimulatedJourney> rows, Audience audience)
+    {
+        ArgumentNullException.ThrowIfNull(rows);
+        var percentiles = JourneyFormula.Fractions.Select((fraction, i) => new EstimateMetric<SimulatedJourney>(
+            SimulatedUnitColumns.PercentileKey(fraction * 100.0),
+            SimulatedUnitColumns.PercentileKey(fraction * 100.0),
+            MetricDimension.Time,
+            row => row.Percentiles[i].Hours));
+        var metrics = new[] { Rate, MeanTime }.Concat(percentiles).ToList();
+        if (audience == Audience.Machines)
+        {
+            return [Journey, Label, .. metrics.SelectMany(metric => metric.ForMachines)];
+        }
+
+        var patients = rows.Any(row => row.Group is not null) ? [Patients] : Array.Empty<Column<SimulatedJourney>>();
+        return [Journey, .. patients, .. metrics.Select(metric => metric.ForPeople), Over];
+    }
+
+    /// <summary>The journey table of <paramref name="rows"/> for <paramref name="audience"/>.</summary>
+    public static ResultTable Table(IReadOnlyList<SimulatedJourney> rows, TimeUnit timeUnit, Audience audience) => ResultTable.Build(For(rows, audience), rows, timeUnit);
+
+    private static string OverWords(SimulatedJourney row) => row.MeanHours is null
+        ? PeopleFormat.Missing
+        : string.Join("; ", row.Over.Select(over => "> " + PeopleFormat.Time(over.WaitHours) + ": " + ShareWords(over)));
+
+    private static string ShareWords(WaitOverEstimate over) => over.UpperBound is double bound
+        ? "< " + PeopleFormat.Percent(bound)
+        : over.Probability.HalfWidth is double half
+            ? PeopleFormat.Percent(over.Probability.Mean) + " \u00B1 " + PeopleFormat.Percent(half)
+            : PeopleFormat.Percent(over.Probability.Mean);
+}
