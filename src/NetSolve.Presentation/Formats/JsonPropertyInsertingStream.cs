@@ -96,15 +96,7 @@ public sealed class JsonPropertyInsertingStream(Stream inner, ReadOnlyMemory<byt
 
                     break;
                 case Stage.AfterFirstName:
-                    if (EndsFirstValue(b))
-                    {
-                        inner.Write(buffer[passed..i]);
-                        inner.WriteByte((byte)',');
-                        inner.Write(member.Span);
-                        passed = i;
-                        _stage = Stage.Done;
-                    }
-
+                    passed = AfterFirstName(buffer, i, passed);
                     break;
             }
         }
@@ -132,6 +124,40 @@ public sealed class JsonPropertyInsertingStream(Stream inner, ReadOnlyMemory<byt
         _held.Clear();
         _stage = _insertAfterValue ? Stage.AfterFirstName : Stage.Done;
         _depth = 1;
+    }
+
+    /// <summary>
+    /// One byte after the first name: white space between values is held back, so that the new property goes right
+    /// after the first value, before the line break that leads to the next property or the closing brace.
+    /// </summary>
+    /// <returns>Where the bytes not yet passed on start.</returns>
+    private int AfterFirstName(ReadOnlySpan<byte> buffer, int i, int passed)
+    {
+        byte b = buffer[i];
+        if (!_inString && _depth == 1 && IsWhiteSpace(b))
+        {
+            inner.Write(buffer[passed..i]);
+            _held.Add(b);
+            return i + 1;
+        }
+
+        bool ends = EndsFirstValue(b);
+        if (!ends && _held.Count == 0)
+        {
+            return passed;
+        }
+
+        inner.Write(buffer[passed..i]);
+        if (ends)
+        {
+            inner.WriteByte((byte)',');
+            inner.Write(member.Span);
+            _stage = Stage.Done;
+        }
+
+        inner.Write(System.Runtime.InteropServices.CollectionsMarshal.AsSpan(_held));
+        _held.Clear();
+        return i;
     }
 
     /// <summary>True at the comma or closing brace that ends the root's first value (strings and nesting skipped).</summary>

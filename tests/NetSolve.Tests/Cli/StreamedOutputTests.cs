@@ -13,8 +13,8 @@ public sealed class StreamedOutputTests
     public static TheoryData<string[]> Commands => new()
     {
         { ["solve", Example("kestrel-general.yaml"), "--format", "json"] },
-        { ["solve", Example("harbourside.yaml"), "--set", "lab.servers=7", "--format", "json"] },
-        { ["solve", Example("harbourside.yaml"), "--set", "lab.servers=7"] },
+        { ["solve", Example("scenarios/harbourside-fourth-scanner.yaml"), "--set", "servers.lab=7", "--format", "json"] },
+        { ["solve", Example("scenarios/harbourside-fourth-scanner.yaml"), "--set", "servers.lab=7"] },
         { ["solve", Example("kestrel-general.yaml"), "--format", "csv"] },
         { ["growth", Example("kestrel-general.yaml"), "--format", "json"] },
     };
