@@ -58,11 +58,10 @@ internal sealed class TableSink(TextWriter output, string? underTitle) : TextWri
         if (!_titleWritten && underTitle is not null)
         {
             _line.Append(NewLine).Append(underTitle);
-            _titleWritten = true;
         }
 
-        output.Write(SafeText.ForTerminal(_line.ToString()));
-        _line.Clear();
+        _titleWritten = true;
+        WriteHeldLine();
     }
 
     private void EndLine()
@@ -73,6 +72,11 @@ internal sealed class TableSink(TextWriter output, string? underTitle) : TextWri
         }
 
         _titleWritten = true;
+        WriteHeldLine();
+    }
+
+    private void WriteHeldLine()
+    {
         output.Write(SafeText.ForTerminal(_line.ToString()));
         _line.Clear();
     }
