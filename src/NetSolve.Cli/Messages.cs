@@ -20,6 +20,11 @@ internal static class Messages
     /// <summary>Starts every line the program writes about itself (not lines that start with a file path).</summary>
     public const string Program = "netsolve: ";
 
+    /// <summary>Warnings of one kind past the first few of one file, summed up in one line.</summary>
+    public static string MoreWarnings(string file, int count, string code) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"{Q(file)}: warning: {count:N0} more warnings of a kind shown above (code {code}) are not listed; {WarningLog.ShownPerKind} of each kind are");
+
     /// <summary>Follows the usage errors.</summary>
     public const string UsageHint = "Run 'netsolve --help' for usage.";
 

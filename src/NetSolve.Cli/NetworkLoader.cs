@@ -40,10 +40,7 @@ internal static class NetworkLoader
             throw new InputException(string.Join("\n", errors.Select(d => d.ToString())));
         }
 
-        foreach (var warning in diagnostics.Where(d => !forSimulation || d.Code != DiagnosticCodes.IgnoredByFormulas))
-        {
-            warnings.Report(warning.ToString());
-        }
+        warnings.ReportAll(diagnostics.Where(d => !forSimulation || d.Code != DiagnosticCodes.IgnoredByFormulas), path);
 
         if (overrides is null || overrides.Count == 0)
         {

@@ -1,13 +1,13 @@
-using System.Text;
 using NetSolve.Presentation;
-using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Scenarios;
 
 namespace NetSolve.Cli.Output;
 
 /// <summary>
-/// Writes a command's one result to stdout in the format asked for, whole or not at all: everything is rendered
-/// first, so a failure never leaves half a document. A table that carries advice ends with the planning caution.
+/// Writes a command's one result to stdout in the format asked for, streamed as the writer produces it: memory stays
+/// flat however long the output. Everything that can fail on bad input (reading, the rules, solving, simulating)
+/// has happened before the first byte; the writers only format a finished result, so a bad input never leaves half
+/// a document. A table that carries advice ends with the planning caution.
 /// </summary>
 /// <param name="output">Stdout.</param>
 /// <param name="format">The format asked for.</param>
@@ -21,7 +21,7 @@ internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool 
     /// <summary>The format asked for.</summary>
     public OutputFormat Format => format;
 
-    /// <summary>Renders the result with the writer for <see cref="Format"/>, then writes it.</summary>
+    /// <summary>Writes the result with the writer for <see cref="Format"/>.</summary>
     /// <param name="json">Writes the JSON document (UTF-8); a line break follows it.</param>
     /// <param name="csv">Writes the CSV rows.</param>
     /// <param name="table">Writes the table for people.</param>
@@ -30,41 +30,36 @@ internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool 
         ArgumentNullException.ThrowIfNull(json);
         ArgumentNullException.ThrowIfNull(csv);
         ArgumentNullException.ThrowIfNull(table);
-        output.Write(Render(json, csv, table));
+        switch (format)
+        {
+            case OutputFormat.Json:
+                using (var bytes = Utf8Sink.Over(output))
+                using (var document = ChangesHeader.IntoJson(bytes, changes ?? []))
+                {
+                    json(document);
+                    document.Flush();
+                }
+
+                output.Write("\n");
+                break;
+            case OutputFormat.Csv:
+                csv(output);
+                break;
+            default:
+                WriteTable(table);
+                break;
+        }
     }
 
-    private string Render(Action<Stream> json, Action<TextWriter> csv, Action<TextWriter> table)
+    private void WriteTable(Action<TextWriter> table)
     {
-        if (format == OutputFormat.Json)
+        using var sink = new TableSink(output, changes is { Count: > 0 } ? ChangesHeader.Line(changes) : null) { NewLine = output.NewLine };
+        table(sink);
+        if (withCaution)
         {
-            using var buffer = new MemoryStream();
-            json(buffer);
-            return Encoding.UTF8.GetString(ChangesHeader.AddToJson(buffer.ToArray(), changes ?? [])) + "\n";
+            sink.Write("\n" + Caution.Text + "\n");
         }
 
-        using var writer = new StringWriter(System.Globalization.CultureInfo.InvariantCulture) { NewLine = output.NewLine };
-        if (format == OutputFormat.Csv)
-        {
-            csv(writer);
-        }
-        else
-        {
-            table(writer);
-            if (changes is { Count: > 0 })
-            {
-                string titled = ChangesHeader.AddToTable(writer.ToString(), changes, output.NewLine);
-                writer.GetStringBuilder().Clear().Append(titled);
-            }
-
-            if (withCaution)
-            {
-                writer.Write("\n" + Caution.Text + "\n");
-            }
-
-            // A label or name with an escape or other control character must not drive the terminal.
-            return SafeText.ForTerminal(writer.ToString());
-        }
-
-        return writer.ToString();
+        sink.Finish();
     }
 }

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Presentation.Scenarios;
 
@@ -43,7 +44,7 @@ public static class ChangesHeader
 
     /// <summary>
     /// A JSON document with a top-level <c>changes</c> array of strings after its <c>network</c> name (first when it
-    /// has none); the document itself, byte for byte, when nothing changed or it is not an object.
+    /// does not start with one); the document itself, byte for byte, when nothing changed or it is not an object.
     /// </summary>
     public static byte[] AddToJson(byte[] json, IReadOnlyList<string> changes)
     {
@@ -54,35 +55,42 @@ public static class ChangesHeader
             return json;
         }
 
-        using var document = JsonDocument.Parse(json);
-        if (document.RootElement.ValueKind != JsonValueKind.Object)
+        using var buffer = new MemoryStream(json.Length + 64);
+        using (var withChanges = IntoJson(buffer, changes))
         {
-            return json;
-        }
-
-        bool hasName = document.RootElement.TryGetProperty(NameProperty, out _);
-        using var buffer = new MemoryStream();
-        using (var writer = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = true }))
-        {
-            writer.WriteStartObject();
-            if (!hasName)
-            {
-                WriteChanges(writer, changes);
-            }
-
-            foreach (var property in document.RootElement.EnumerateObject())
-            {
-                property.WriteTo(writer);
-                if (hasName && property.NameEquals(NameProperty))
-                {
-                    WriteChanges(writer, changes);
-                }
-            }
-
-            writer.WriteEndObject();
+            withChanges.Write(json);
         }
 
         return buffer.ToArray();
+    }
+
+    /// <summary>
+    /// A stream that passes a JSON document on to <paramref name="output"/> as it is written, adding the <c>changes</c>
+    /// array as <see cref="AddToJson"/> does; <paramref name="output"/> itself when nothing changed. The document is
+    /// never held whole, so an output of any size streams through.
+    /// </summary>
+    public static Stream IntoJson(Stream output, IReadOnlyList<string> changes)
+    {
+        ArgumentNullException.ThrowIfNull(output);
+        ArgumentNullException.ThrowIfNull(changes);
+        if (changes.Count == 0)
+        {
+            return output;
+        }
+
+        // The array as the only property of an indented object: "{", the member, a line break and "}". The member
+        // alone (without the braces) is what goes into a document that has other properties.
+        using var alone = new MemoryStream();
+        using (var writer = new Utf8JsonWriter(alone, new JsonWriterOptions { Indented = true }))
+        {
+            writer.WriteStartObject();
+            WriteChanges(writer, changes);
+            writer.WriteEndObject();
+        }
+
+        byte[] whole = alone.ToArray();
+        int memberEnd = Array.LastIndexOf(whole, (byte)'\n', whole.Length - 1);
+        return new JsonPropertyInsertingStream(output, whole.AsMemory(1, memberEnd - 1), whole, System.Text.Encoding.UTF8.GetBytes(NameProperty));
     }
 
     private static void WriteChanges(Utf8JsonWriter writer, IReadOnlyList<string> changes)
