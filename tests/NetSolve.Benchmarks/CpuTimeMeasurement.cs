@@ -1,5 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
+using NetSolve.Parsing;
+using NetSolve.Simulation;
 
 namespace NetSolve.Benchmarks;
 
@@ -13,6 +15,34 @@ internal static class CpuTimeMeasurement
 {
     // Small networks run quickly, so they get more runs: enough for the JIT's tiering to settle within the process.
     private static int Runs(int units) => units <= 10 ? 20 : 5;
+
+    /// <summary>
+    /// <c>cpu-time-file NET.yaml HOURS [RUNS]</c>: the same measurement on a network file, one replication of HOURS
+    /// simulated hours with no warm-up, so that events per CPU-second can be set beside the C event loop of
+    /// ../shared/perf on the very same network (its README defines the ratio). At 100,000 units a run is long and
+    /// the JIT has settled within it, so no warm-up run is made; the first line is the cost of compiling the network.
+    /// </summary>
+    public static void RunFile(TextWriter output, string path, double hours, int runs)
+    {
+        var read = NetworkReader.ReadFile(path);
+        var network = read.Network ?? throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture, $"{path} is not a valid network file"));
+        var cpuBefore = Process.GetCurrentProcess().TotalProcessorTime;
+        var compiled = CompiledNetwork.Compile(network);
+        var layout = new MetricLayout(network.Units.Length, 0, network.Groups.Length);
+        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"units {network.Units.Length}  compile cpu {(Process.GetCurrentProcess().TotalProcessorTime - cpuBefore).TotalMilliseconds:F0} ms"));
+        for (int run = 1; run <= runs; run++)
+        {
+            cpuBefore = Process.GetCurrentProcess().TotalProcessorTime;
+            var wall = Stopwatch.StartNew();
+            var engine = new SimulationEngine(compiled, layout, [], 0.0, hours, 1, 0);
+            engine.Run(null, CancellationToken.None);
+            wall.Stop();
+            var cpu = Process.GetCurrentProcess().TotalProcessorTime - cpuBefore;
+            long events = engine.EventCount;
+            output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"units {network.Units.Length,6}  run {run}  events {events,9}  wall {wall.Elapsed.TotalMilliseconds,8:F0} ms  cpu {cpu.TotalMilliseconds,8:F0} ms  {events / cpu.TotalSeconds / 1e6,6:F2} M events/cpu-s  managed heap {GC.GetTotalMemory(false) / 1e6,6:F0} MB"));
+        }
+    }
 
     public static void Run(TextWriter output, int[] sizes)
     {

@@ -7,6 +7,12 @@ if (args is ["cpu-time", .. var sizes])
     return;
 }
 
+if (args is ["cpu-time-file", var path, var hours, .. var rest])
+{
+    CpuTimeMeasurement.RunFile(Console.Out, path, double.Parse(hours, System.Globalization.CultureInfo.InvariantCulture), rest.Length == 0 ? 3 : int.Parse(rest[0], System.Globalization.CultureInfo.InvariantCulture));
+    return;
+}
+
 if (args is ["time-varying", .. var counts])
 {
     TimeVaryingMeasurement.Run(Console.Out, counts.Length == 0 ? [100, 1000] : [.. counts.Select(int.Parse)]);

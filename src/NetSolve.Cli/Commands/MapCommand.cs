@@ -26,6 +26,12 @@ internal sealed class MapCommand() : NetworkCommand(
 
     protected override int Execute(NetworkRequest request)
     {
+        if (request.Network.Units.Length > MapLayoutBuilder.MaxUnits)
+        {
+            request.Context.Report(Messages.MapTooLarge(request.Network.Units.Length, MapLayoutBuilder.MaxUnits));
+            return ExitCodes.InvalidInput;
+        }
+
         var solution = (request with { Network = TargetOption.Apply(request.Network, request.GetValue(_target)) }).Solve();
         var layout = MapLayoutBuilder.Build(solution, request.GetValue(_direction) == "right" ? MapDirection.LeftToRight : MapDirection.TopToBottom) with { Changes = request.Changes };
         string target = request.GetValue(_output)!;

@@ -8,10 +8,14 @@ namespace NetSolve.Simulation;
 /// A bucket is the double's exponent and the top <see cref="SubBucketBits"/> bits of its mantissa, read straight from
 /// its bits: 128 buckets per octave, each at most 2^−7 (0.78%) of its lower edge wide, so a quantile read from the
 /// buckets (interpolated linearly inside its bucket) is within 0.78% of a value of the sample that has the same rank.
-/// Buckets are kept per octave, an array of 128 counts (1 KB) made the first time the octave is touched, and the
-/// octaves are a window from the lowest to the highest touched: memory grows only with the range of scales seen,
-/// 1 KB per octave, at most 2,047 octaves (2 MB) for durations spanning every double, typically 20-40 KB. Mutable,
-/// not thread-safe: one per unit or group within a replication.
+/// A histogram starts sparse: the buckets it has counted, as sorted (bucket, count) pairs of 8 bytes each, so a unit
+/// that sees a few hundred patients in a replication costs about 8 bytes per patient, not 1 KB per octave touched
+/// (a network of 100,000 units would otherwise need gigabytes). Past <see cref="SparseBuckets"/> buckets, or a count
+/// too large for 32 bits, it turns dense: buckets kept per octave, an array of 128 counts (1 KB) made the first time
+/// the octave is touched, the octaves a window from the lowest to the highest touched: memory grows only with the
+/// range of scales seen, 1 KB per octave, at most 2,047 octaves (2 MB) for durations spanning every double,
+/// typically 20-40 KB. Both forms hold the same buckets and give the same quantiles. Mutable, not thread-safe: one
+/// per unit or group within a replication.
 /// </remarks>
 internal sealed class DurationHistogram
 {
@@ -24,8 +28,22 @@ internal sealed class DurationHistogram
     private const int MantissaShift = 52 - SubBucketBits;
     private const int BucketsPerOctave = 1 << SubBucketBits;
 
+    /// <summary>Most buckets held sparse (4 KB): past them the dense form is smaller or about as small, and quicker.</summary>
+    public const int SparseBuckets = 512;
+
+    private const int CountBits = 32;
+    private const long SparseCountMask = (1L << CountBits) - 1;
+
     private long[]?[] _octaves = [];
     private int _firstOctave;
+
+    // While sparse (_octaves empty): bucket key << 32 | count, sorted by key, in the first _sparseCount entries.
+    private long[] _sparse = [];
+    private int _sparseCount;
+    private bool _isDense;
+
+    /// <summary>Whether the buckets are still held as sorted pairs rather than octave arrays.</summary>
+    internal bool IsSparse => !_isDense;
 
     /// <summary>Durations counted, zeros included.</summary>
     public long Count { get; private set; }
@@ -55,10 +73,20 @@ internal sealed class DurationHistogram
         ArgumentNullException.ThrowIfNull(other);
         Zeros += other.Zeros;
         Count += other.Count;
+        for (int k = 0; k < other._sparseCount; k++)
+        {
+            AddToBucket(other._sparse[k] >> CountBits, other._sparse[k] & SparseCountMask);
+        }
+
         for (int i = 0; i < other._octaves.Length; i++)
         {
             if (other._octaves[i] is long[] counts)
             {
+                if (!_isDense)
+                {
+                    TurnDense();
+                }
+
                 long[] mine = OctaveFor(other._firstOctave + i);
                 for (int b = 0; b < BucketsPerOctave; b++)
                 {
@@ -144,6 +172,12 @@ internal sealed class DurationHistogram
     /// <summary>Every bucket holding a count, shortest first, with its edges: the walk shared by quantiles, shares and pooling.</summary>
     public IEnumerable<(double Low, double High, long Count)> NonEmptyBuckets()
     {
+        for (int k = 0; k < _sparseCount; k++)
+        {
+            long key = _sparse[k] >> CountBits;
+            yield return (LowerEdge(key), LowerEdge(key + 1), _sparse[k] & SparseCountMask);
+        }
+
         for (int i = 0; i < _octaves.Length; i++)
         {
             if (_octaves[i] is not long[] counts)
@@ -176,9 +210,82 @@ internal sealed class DurationHistogram
             throw new ArgumentOutOfRangeException(nameof(duration), duration, "A duration is zero or positive and finite.");
         }
 
-        long key = BitConverter.DoubleToInt64Bits(duration) >> MantissaShift;
-        OctaveFor((int)(key >> SubBucketBits))[key & (BucketsPerOctave - 1)]++;
+        AddToBucket(BitConverter.DoubleToInt64Bits(duration) >> MantissaShift, 1);
         Count++;
+    }
+
+    /// <summary>Adds <paramref name="count"/> to bucket <paramref name="key"/> in whichever form the histogram has.</summary>
+    private void AddToBucket(long key, long count)
+    {
+        if (!_isDense && !AddSparse(key, count))
+        {
+            TurnDense();
+        }
+
+        if (_isDense)
+        {
+            OctaveFor((int)(key >> SubBucketBits))[key & (BucketsPerOctave - 1)] += count;
+        }
+    }
+
+    /// <summary>Adds to a sparse bucket, inserting it in order if new; false when that does not fit the sparse form.</summary>
+    private bool AddSparse(long key, long count)
+    {
+        int low = 0;
+        int high = _sparseCount;
+        while (low < high)
+        {
+            int middle = (int)((uint)(low + high) >> 1);
+            if (_sparse[middle] >> CountBits < key)
+            {
+                low = middle + 1;
+            }
+            else
+            {
+                high = middle;
+            }
+        }
+
+        if (low < _sparseCount && _sparse[low] >> CountBits == key)
+        {
+            if ((_sparse[low] & SparseCountMask) + count > SparseCountMask)
+            {
+                return false;
+            }
+
+            _sparse[low] += count;
+            return true;
+        }
+
+        if (_sparseCount == SparseBuckets || count > SparseCountMask)
+        {
+            return false;
+        }
+
+        if (_sparseCount == _sparse.Length)
+        {
+            Array.Resize(ref _sparse, Math.Max(4, _sparse.Length * 2));
+        }
+
+        Array.Copy(_sparse, low, _sparse, low + 1, _sparseCount - low);
+        _sparse[low] = (key << CountBits) | count;
+        _sparseCount++;
+        return true;
+    }
+
+    /// <summary>Moves the sparse buckets into octaves; from then on the histogram stays dense.</summary>
+    private void TurnDense()
+    {
+        var sparse = _sparse;
+        int count = _sparseCount;
+        _sparse = [];
+        _sparseCount = 0;
+        _isDense = true;
+        for (int k = 0; k < count; k++)
+        {
+            long key = sparse[k] >> CountBits;
+            OctaveFor((int)(key >> SubBucketBits))[key & (BucketsPerOctave - 1)] += sparse[k] & SparseCountMask;
+        }
     }
 
     /// <summary>The counts of the octave with biased exponent <paramref name="exponent"/>, made (and the window widened) if new.</summary>

@@ -28,7 +28,8 @@ internal sealed partial class SimulationEngine
         int count = state.Queued;
         if (count == queue.Length)
         {
-            var grown = new int[queue.Length * 2];
+            // Queues start empty and get 4 places with their first patient: most units of a large network never queue.
+            var grown = new int[Math.Max(4, queue.Length * 2)];
             for (int i = 0; i < count; i++)
             {
                 grown[i] = queue[(state.QueueHead + i) & (queue.Length - 1)];

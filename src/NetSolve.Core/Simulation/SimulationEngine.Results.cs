@@ -38,7 +38,8 @@ internal sealed partial class SimulationEngine
 
             for (int h = 0; h < 24; h++)
             {
-                row[_layout.Unit(u, _layout.QueueByHourOffset + h)] = exposure[h] > 0.0 ? _queueAreaByHour[(u * 24) + h] / exposure[h] : double.NaN;
+                double area = _queueAreaByHour[u] is double[] byHour ? byHour[h] : 0.0;
+                row[_layout.Unit(u, _layout.QueueByHourOffset + h)] = exposure[h] > 0.0 ? area / exposure[h] : double.NaN;
             }
         }
 

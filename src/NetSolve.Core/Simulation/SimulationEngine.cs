@@ -25,7 +25,7 @@ internal sealed partial class SimulationEngine
 
     private readonly UnitState[] _units;
     private readonly int[][] _queues;
-    private readonly double[] _queueAreaByHour;
+    private readonly double[]?[] _queueAreaByHour;
     private readonly long[] _waitOver;
     private readonly DurationHistogram[] _unitHistograms;
     private readonly GroupPlan[] _groups;
@@ -54,13 +54,13 @@ internal sealed partial class SimulationEngine
         _queues = new int[n][];
         for (int i = 0; i < n; i++)
         {
-            _queues[i] = new int[4];
+            _queues[i] = [];
             _units[i].Servers = network.Rosters[i] is int[] roster ? roster[0] : network.Servers[i];
             _units[i].Capacity = network.Capacity[i];
             _units[i].DivertTo = network.DivertTo[i];
         }
 
-        _queueAreaByHour = new double[n * 24];
+        _queueAreaByHour = new double[n][];
         _waitOver = new long[n * waitThresholdsHours.Length];
         _unitHistograms = NewHistograms(n);
         _groups = network.Groups;
@@ -176,15 +176,7 @@ internal sealed partial class SimulationEngine
         int entry = plan.EntryUnits[0];
         if (plan.EntryUnits.Length > 1)
         {
-            double draw = _random.NextDouble();
-            var cumulative = plan.EntryCumulative;
-            int k = 0;
-            while (k < cumulative.Length - 1 && draw >= cumulative[k])
-            {
-                k++;
-            }
-
-            entry = plan.EntryUnits[k];
+            entry = plan.EntryUnits[PickEntry(plan.EntryCumulative, _random.NextDouble())];
         }
 
         int patient = AllocatePatient();
@@ -364,6 +356,12 @@ internal sealed partial class SimulationEngine
 
         double draw = _random.NextDouble();
         var routes = plan.Routes;
+        if (stop - start > CumulativeSearch.ScanUpTo)
+        {
+            int chosen = CumulativeSearch.FirstAbove(routes, start, stop, draw);
+            return chosen < 0 ? -1 : routes[chosen].Target;
+        }
+
         for (int k = start; k < stop; k++)
         {
             if (draw < routes[k].Cumulative)
@@ -373,6 +371,23 @@ internal sealed partial class SimulationEngine
         }
 
         return -1;
+    }
+
+    /// <summary>The entry unit's place among the group's entry units for a uniform <paramref name="draw"/>.</summary>
+    private static int PickEntry(double[] cumulative, double draw)
+    {
+        if (cumulative.Length > CumulativeSearch.ScanUpTo)
+        {
+            return CumulativeSearch.FirstAbove(cumulative, draw);
+        }
+
+        int k = 0;
+        while (k < cumulative.Length - 1 && draw >= cumulative[k])
+        {
+            k++;
+        }
+
+        return k;
     }
 
     /// <summary>The later of <paramref name="time"/> and the end of the warm-up: where a span inside the window starts.</summary>
@@ -387,23 +402,25 @@ internal sealed partial class SimulationEngine
     /// The area under the queue-length curve is the sum of the waits inside the window, so it is added up per patient
     /// when a wait ends (and for those still waiting when the run ends) rather than at every change of the queue: a
     /// patient who never waits costs nothing, and the busy area is added the same way when a service ends. Times are
-    /// not negative, so truncation is the floor.
+    /// not negative, so truncation is the floor. A unit's 24 hourly areas are made with its first wait: in a large
+    /// network most units never queue, and 192 bytes for each of them would be most of the engine's memory.
     /// </remarks>
     private void AddQueueSpan(int unit, double from, double to)
     {
         _units[unit].QueueArea += to - from;
+        var byHour = _queueAreaByHour[unit] ??= new double[24];
         long hour = (long)from;
         double hourEnd = hour + 1.0;
-        int slot = (unit * 24) + (int)(hour % 24);
+        int slot = (int)(hour % 24);
         while (to > hourEnd)
         {
-            _queueAreaByHour[slot] += hourEnd - from;
+            byHour[slot] += hourEnd - from;
             from = hourEnd;
             hourEnd += 1.0;
-            slot = (slot + 1) % 24 == 0 ? slot - 23 : slot + 1;
+            slot = slot == 23 ? 0 : slot + 1;
         }
 
-        _queueAreaByHour[slot] += to - from;
+        byHour[slot] += to - from;
     }
 
     /// <summary>Adds the spans still open when the run ends: waits of queued patients and services in progress.</summary>

@@ -23,6 +23,14 @@ namespace NetSolve.Rendering.Map;
 /// </remarks>
 public static class MapLayoutBuilder
 {
+    /// <summary>
+    /// Most units a map is drawn for. The layered layout's time grows faster than n log n on networks with many long
+    /// routes (measured: 2.8 s at 200 units, 33 s at 1,000; with the layout's quicker settings for large graphs still
+    /// 12 s of CPU at 1,000), so <c>map</c> refuses a larger network at once with a suggestion, and the report leaves
+    /// its map out, rather than either running for minutes (docs/performance.md, "Map and report at scale").
+    /// </summary>
+    public const int MaxUnits = 250;
+
     /// <summary>Gap between boxes in one layer: room for an exit arrow and a little air, no more, so 40 units fit A4 width.</summary>
     private const double NodeSeparation = 24.0;
 

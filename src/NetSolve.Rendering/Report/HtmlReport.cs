@@ -90,18 +90,18 @@ public static class HtmlReport
         html.Append("</header>\n");
         html.Append("<p class=\"finding\" id=\"finding\"><strong>Finding:</strong> ").Append(HtmlEncode(Finding.Summarise(baseline))).Append("</p>\n");
 
-        var layout = MapLayoutBuilder.Build(baseline);
-        var map = SvgMapWriter.Write(layout).Root!;
-        // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
-        double mapWidth = double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture);
-        double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
-        html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n");
-        AppendPrintNote(html, map, mapWidth, maxWidthPx);
-        html.Append("<div class=\"map-frame\" style=\"max-width:").Append(Coordinates.Format(maxWidthPx)).Append("px\">\n")
-            .Append(map.ToString()).Append("\n</div>\n")
-            .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
-            .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
-            .Append(".</figcaption>\n</figure>\n</section>\n");
+        if (baseline.Units.Length > MapLayoutBuilder.MaxUnits)
+        {
+            // The layout of a network this large would take minutes (MapLayoutBuilder.MaxUnits); the table still lists every unit.
+            html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<p class=\"map-left-out\" id=\"map-left-out\">The network has ")
+                .Append(baseline.Units.Length.ToString(CultureInfo.InvariantCulture)).Append(" units; a map is drawn for at most ")
+                .Append(MapLayoutBuilder.MaxUnits.ToString(CultureInfo.InvariantCulture))
+                .Append(", so it is left out here. The table below lists every unit.</p>\n</section>\n");
+        }
+        else
+        {
+            AppendMap(html, baseline, unit);
+        }
 
         html.Append("<section id=\"units\">\n<h2>Units</h2>\n");
         UnitTable.Append(html, baseline);
@@ -164,6 +164,22 @@ public static class HtmlReport
         html.Append("<p class=\"map-print-note\" id=\"map-print-note\">This map is too large for one page, so the printout shrinks it to fit: its smallest text comes out at about ")
             .Append(printedPt.ToString("0.0", CultureInfo.InvariantCulture))
             .Append(" pt, which may be hard to read. Open the report's HTML file on a screen to see the map at full size.</p>\n");
+    }
+
+    /// <summary>The bottleneck map, as inline SVG with its caption.</summary>
+    private static void AppendMap(StringBuilder html, NetworkSolution baseline, string unit)
+    {
+        var map = SvgMapWriter.Write(MapLayoutBuilder.Build(baseline)).Root!;
+        // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
+        double mapWidth = double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture);
+        double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
+        html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n");
+        AppendPrintNote(html, map, mapWidth, maxWidthPx);
+        html.Append("<div class=\"map-frame\" style=\"max-width:").Append(Coordinates.Format(maxWidthPx)).Append("px\">\n")
+            .Append(map.ToString()).Append("\n</div>\n")
+            .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
+            .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
+            .Append(".</figcaption>\n</figure>\n</section>\n");
     }
 
     private static void AppendGrowth(StringBuilder html, NetworkSolution baseline)

@@ -1,0 +1,75 @@
+using System.Globalization;
+using System.Text;
+using NetSolve.Rendering.Map;
+using static NetSolve.Tests.Support.CliRun;
+
+namespace NetSolve.Tests.Cli;
+
+/// <summary>Networks larger than a map is drawn for: <c>map</c> refuses at once, <c>report</c> leaves the map out.</summary>
+public sealed class LargeMapTests : IDisposable
+{
+    private readonly string _folder = Path.Combine(Path.GetTempPath(), "netsolve-large-map-" + Guid.NewGuid().ToString("N"));
+
+    public LargeMapTests() => Directory.CreateDirectory(_folder);
+
+    public void Dispose() => Directory.Delete(_folder, recursive: true);
+
+    [Fact]
+    public void Map_refuses_a_network_larger_than_it_draws_with_a_suggestion_and_writes_nothing()
+    {
+        string network = Chain(MapLayoutBuilder.MaxUnits + 1);
+        string target = Path.Combine(_folder, "map.svg");
+        var (code, output, error) = Run("map", network, "-o", target);
+
+        Assert.Equal(1, code);
+        Assert.Equal(string.Empty, output);
+        Assert.Equal(
+            string.Create(CultureInfo.InvariantCulture, $"netsolve: the network has {MapLayoutBuilder.MaxUnits + 1} units and a map is drawn for at most {MapLayoutBuilder.MaxUnits}, because its layout time grows faster than the units: map one part of the network at a time (a file with one hospital's units), or use 'report', whose unit table lists every unit\n"),
+            error);
+        Assert.False(File.Exists(target));
+    }
+
+    [Fact]
+    public void Map_still_draws_a_network_of_exactly_the_largest_size()
+    {
+        string target = Path.Combine(_folder, "map.dot");
+        var (code, _, _) = Run("map", Chain(MapLayoutBuilder.MaxUnits), "-o", target);
+
+        Assert.Equal(0, code);
+        Assert.True(File.Exists(target));
+    }
+
+    [Fact]
+    public void Report_on_a_network_larger_than_a_map_is_drawn_for_says_so_and_keeps_every_unit_in_its_table()
+    {
+        int units = MapLayoutBuilder.MaxUnits + 1;
+        string target = Path.Combine(_folder, "report.html");
+        var (code, _, _) = Run("report", Chain(units), "-o", target);
+
+        Assert.Equal(0, code);
+        string html = File.ReadAllText(target);
+        Assert.Contains(string.Create(CultureInfo.InvariantCulture, $"The network has {units} units; a map is drawn for at most {MapLayoutBuilder.MaxUnits}, so it is left out here."), html, StringComparison.Ordinal);
+        Assert.DoesNotContain("id=\"map-figure\"", html, StringComparison.Ordinal);
+        Assert.Contains("w" + (units - 1).ToString("D3", CultureInfo.InvariantCulture), html, StringComparison.Ordinal);
+    }
+
+    /// <summary>A network file of <paramref name="units"/> units in a line, patients arriving at the first.</summary>
+    private string Chain(int units)
+    {
+        var yaml = new StringBuilder("name: Long corridor of invented wards\ntime_unit: hour\n\nunits:\n");
+        for (int i = 0; i < units; i++)
+        {
+            yaml.Append(CultureInfo.InvariantCulture, $"  w{i:D3}:\n    servers: 2\n    service: 1h\n");
+        }
+
+        yaml.Append("\narrivals:\n  w000: 1/h\n\nroutes:\n");
+        for (int i = 0; i + 1 < units; i++)
+        {
+            yaml.Append(CultureInfo.InvariantCulture, $"  w{i:D3}:\n    w{i + 1:D3}: 0.9\n");
+        }
+
+        string path = Path.Combine(_folder, string.Create(CultureInfo.InvariantCulture, $"chain-{units}.yaml"));
+        File.WriteAllText(path, yaml.ToString());
+        return path;
+    }
+}
