@@ -16,6 +16,15 @@ public sealed record ExactChainOptions
     /// </summary>
     public double HeavyPeakLoad { get; init; } = 0.8;
 
+    /// <summary>
+    /// Units of more than <see cref="MaxServers"/> servers loaded past <see cref="HeavyPeakLoad"/> also get the exact
+    /// chain when their servers complete at most this many services an hour when all busy (c/E[S]): the chain's cost
+    /// grows with that rate, and this is the rate of the busiest unit the server limit already admits (50 servers, 15
+    /// minutes). Slow large units are where MOL misleads most (an assessment unit of 64 beds and stays near a day:
+    /// docs/time-of-day.md, section 8).
+    /// </summary>
+    public double MaxCompletionsPerHour { get; init; } = 200.0;
+
     /// <summary>Absolute: the chain is cut where the chance of the last state stays below this in every step of the cycle.</summary>
     public double TruncationMass { get; init; } = 1e-12;
 

@@ -24,6 +24,12 @@ public sealed record HourlyWaits(
     /// <summary>No periodic steady state: the arrays are empty.</summary>
     public static HourlyWaits Unstable { get; } = new(TimeVaryingMethodNames.Unstable, [], [], [], []);
 
+    /// <summary>
+    /// Chance that a patient arriving in the hour finds the unit full and is turned away or diverted (0 to 1); empty
+    /// for a unit without a capacity. Fed back into the load of the units downstream (<see cref="TimeVaryingSolver"/>).
+    /// </summary>
+    public ImmutableArray<double> TurnedAwayShareByHour { get; init; } = [];
+
     /// <summary>True when the values exist (the unit keeps up over the cycle).</summary>
     public bool IsStable => !MeanQueueByHour.IsEmpty;
 }

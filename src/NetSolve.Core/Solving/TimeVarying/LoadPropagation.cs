@@ -28,7 +28,7 @@ internal static class LoadPropagation
 {
     /// <summary>Arrival rate per hour in each step (mean over the step) and offered load at each step boundary.</summary>
     public static (double[][] ArrivalsByStep, double[][] LoadByNode) Run(
-        int unitCount, int steps, double stepHours, IReadOnlyList<FlowGroupPlan> groups, TimeVaryingOptions options)
+        int unitCount, int steps, double stepHours, IReadOnlyList<FlowGroupPlan> groups, TimeVaryingOptions options, double[]?[]? admittedShare = null)
     {
         var arrivals = new double[unitCount][];
         var loads = new double[unitCount][];
@@ -41,13 +41,13 @@ internal static class LoadPropagation
         var work = new Workspace(steps);
         foreach (var group in groups)
         {
-            Propagate(group, steps, stepHours, options, work, arrivals, loads);
+            Propagate(group, steps, stepHours, options, work, arrivals, loads, admittedShare);
         }
 
         return (arrivals, loads);
     }
 
-    private static void Propagate(FlowGroupPlan group, int steps, double stepHours, TimeVaryingOptions options, Workspace work, double[][] arrivals, double[][] loads)
+    private static void Propagate(FlowGroupPlan group, int steps, double stepHours, TimeVaryingOptions options, Workspace work, double[][] arrivals, double[][] loads, double[]?[]? admittedShare)
     {
         var routing = group.Routing;
         int n = routing.UnitCount;
@@ -87,7 +87,7 @@ internal static class LoadPropagation
                         continue;
                     }
 
-                    SolveUnit(group, j, steps, stepHours, incoming, departures, work, groupArrivals[j], groupLoads[j]);
+                    SolveUnit(group, j, steps, stepHours, incoming, departures, work, groupArrivals[j], groupLoads[j], admittedShare?[j]);
                     double change = 0.0;
                     var previous = departures[j];
                     for (int k = 0; k <= steps; k++)
@@ -139,7 +139,9 @@ internal static class LoadPropagation
         return false;
     }
 
-    private static void SolveUnit(FlowGroupPlan group, int j, int steps, double stepHours, IncomingRoutes incoming, double[][] departures, Workspace work, double[] unitArrivals, double[] unitLoads)
+    // The unit's arrivals and load are those offered to it; when it sends some away, its departures are those of the
+    // admitted share only (the stages are linear, so they are solved again for the admitted input).
+    private static void SolveUnit(FlowGroupPlan group, int j, int steps, double stepHours, IncomingRoutes incoming, double[][] departures, Workspace work, double[] unitArrivals, double[] unitLoads, double[]? admitted)
     {
         incoming.Sum(j, departures, work.Inflow);
         var external = group.ExternalByStep[j];
@@ -152,6 +154,18 @@ internal static class LoadPropagation
         }
 
         UnitStages.Solve(group.Stages[j], stepHours, work, unitLoads, work.Departures);
+        if (admitted is null)
+        {
+            return;
+        }
+
+        for (int k = 0; k < steps; k++)
+        {
+            work.InputStart[k] *= admitted[k];
+            work.InputEnd[k] *= admitted[k];
+        }
+
+        UnitStages.Solve(group.Stages[j], stepHours, work, new double[steps + 1], work.Departures);
     }
 
     private static void Add(double[] from, double[] into)

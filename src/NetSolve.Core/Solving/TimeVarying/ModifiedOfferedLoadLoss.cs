@@ -28,6 +28,7 @@ public static class ModifiedOfferedLoadLoss
             hours.Add(LoadBlocks.HourOf(b), blocks.Steps[b], 0.0, load * (1.0 - full), full, blocks.Arrivals[b]);
         }
 
-        return hours.ToWaits(TimeVaryingMethodNames.ModifiedOfferedLoadLoss, unit.StepsPerHour);
+        var waits = hours.ToWaits(TimeVaryingMethodNames.ModifiedOfferedLoadLoss, unit.StepsPerHour);
+        return waits with { TurnedAwayShareByHour = waits.WaitProbabilityByHour };
     }
 }

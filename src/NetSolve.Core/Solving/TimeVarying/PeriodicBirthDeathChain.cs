@@ -62,7 +62,7 @@ public static class PeriodicBirthDeathChain
             var full = Settle(chain, capacity.Value + 1, null, options);
             var limited = new ChainHourStats(chain.CycleHours);
             chain.Run(full, limited);
-            return limited.ToWaits(chain);
+            return limited.ToWaits(chain, hasCapacity: true);
         }
 
         if (chain.MeanArrivals >= chain.MeanCapacity)

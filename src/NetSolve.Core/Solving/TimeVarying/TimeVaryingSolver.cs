@@ -20,6 +20,13 @@ namespace NetSolve.Solving;
 /// </remarks>
 public static class TimeVaryingSolver
 {
+    // Rounds of feeding the turned-away shares back into the traffic equations; each round costs one solve of the
+    // network, and the shares settle in a few (the change shrinks with the share of load a full unit passes on).
+    private const int MaxTurnedAwayRounds = 10;
+
+    // Largest change in any hour's admitted share at which the turned-away flows count as settled.
+    private const double TurnedAwayTolerance = 1e-4;
+
     /// <summary>Solves a validated network hour by hour.</summary>
     /// <param name="network">The network; units with unlimited servers and no roster have no queue.</param>
     /// <param name="rosters">
@@ -38,8 +45,7 @@ public static class TimeVaryingSolver
         ArgumentNullException.ThrowIfNull(network);
         options ??= TimeVaryingOptions.Default;
         chainOptions ??= ExactChainOptions.Default;
-        var traffic = TimeVaryingTraffic.Solve(network, options);
-        var waits = network.Units.Select((unit, j) =>
+        var rosterOf = network.Units.Select(unit =>
         {
             ServerRoster? roster = null;
             if (rosters is not null && rosters.TryGetValue(unit.Id, out var given))
@@ -55,9 +61,87 @@ public static class TimeVaryingSolver
                 roster = ServerRoster.Constant(unit.Servers.Count);
             }
 
-            return SolveUnit(unit, traffic.Units[j], roster, options, chainOptions);
-        });
+            return roster;
+        }).ToArray();
+
+        // Units with a capacity send patients away when full, mostly in their busy hours; the units below them then
+        // receive fewer patients than the infinite-server load says. The turned-away shares are fed back into the
+        // traffic equations until they settle (a fixed point, as for the steady-state blocking).
+        var traffic = TimeVaryingTraffic.Solve(network, options);
+        var waits = SolveUnits(network, traffic, rosterOf, options, chainOptions);
+        double[]?[]? shares = null;
+        for (int round = 1; round <= MaxTurnedAwayRounds; round++)
+        {
+            var flows = TurnedAway(network, traffic, waits);
+            if (flows is null)
+            {
+                break;
+            }
+
+            double change = Change(shares, flows.AdmittedShareByHour);
+            if (change <= TurnedAwayTolerance)
+            {
+                break;
+            }
+
+            shares = flows.AdmittedShareByHour;
+            traffic = TimeVaryingTraffic.Solve(network, options, flows);
+            waits = SolveUnits(network, traffic, rosterOf, options, chainOptions);
+        }
+
         return new TimeVaryingSolution(traffic, [.. waits]);
+    }
+
+    private static HourlyWaits[] SolveUnits(Network network, TimeVaryingTrafficSolution traffic, ServerRoster?[] rosters, TimeVaryingOptions options, ExactChainOptions chainOptions) =>
+        [.. network.Units.Select((unit, j) => SolveUnit(unit, traffic.Units[j], rosters[j], options, chainOptions))];
+
+    // The admitted share of each unit that turns patients away and the diverted patients each unit receives, by hour;
+    // null when no unit sends anyone away.
+    private static TurnedAwayFlows? TurnedAway(Network network, TimeVaryingTrafficSolution traffic, HourlyWaits[] waits)
+    {
+        int n = network.Units.Length;
+        var admitted = new double[]?[n];
+        var divertedIn = new double[]?[n];
+        var index = network.BuildIndex();
+        bool any = false;
+        for (int j = 0; j < n; j++)
+        {
+            var away = waits[j].TurnedAwayShareByHour;
+            if (away.IsDefaultOrEmpty || away.All(share => share <= 0.0))
+            {
+                continue;
+            }
+
+            any = true;
+            admitted[j] = [.. away.Select(share => 1.0 - share)];
+            if (network.Units[j].WhenFull.DivertToUnitId is string target)
+            {
+                int t = index[target];
+                divertedIn[t] ??= new double[away.Length];
+                var arrivals = traffic.Units[j].ArrivalsPerHourByHour;
+                for (int h = 0; h < away.Length; h++)
+                {
+                    divertedIn[t]![h] += away[h] * arrivals[h];
+                }
+            }
+        }
+
+        return any ? new TurnedAwayFlows(admitted, divertedIn) : null;
+    }
+
+    private static double Change(double[]?[]? before, double[]?[] after)
+    {
+        double change = 0.0;
+        for (int j = 0; j < after.Length; j++)
+        {
+            for (int h = 0; after[j] is not null && h < after[j]!.Length; h++)
+            {
+                double previous = before?[j] is { } shares ? shares[h] : 1.0;
+                change = Math.Max(change, Math.Abs(after[j]![h] - previous));
+            }
+        }
+
+        return change;
     }
 
     /// <summary>Hourly waits of one unit from its load over the cycle; null roster for unlimited servers.</summary>
@@ -96,7 +180,8 @@ public static class TimeVaryingSolver
         }
 
         bool small = roster.Max <= chainOptions.MaxServers;
-        if (small && (options.ExactForSmallUnits || (Varies(load, roster) && PeakLoadShare(load, roster) >= chainOptions.HeavyPeakLoad)))
+        bool affordable = small || roster.Max / meanServiceHours <= chainOptions.MaxCompletionsPerHour;
+        if ((small && options.ExactForSmallUnits) || (affordable && Varies(load, roster) && PeakLoadShare(load, roster) >= chainOptions.HeavyPeakLoad))
         {
             return PeriodicBirthDeathChain.Solve(load.ArrivalsByStep, load.StepsPerHour, roster, meanServiceHours, chainOptions);
         }

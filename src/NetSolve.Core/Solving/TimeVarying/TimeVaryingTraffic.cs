@@ -19,7 +19,14 @@ public static class TimeVaryingTraffic
 
     /// <summary>Solves the time-varying traffic equations of a validated network to their periodic steady state.</summary>
     /// <exception cref="TimeVaryingConvergenceException">Flows round loops did not settle within the sweeps allowed.</exception>
-    public static TimeVaryingTrafficSolution Solve(Network network, TimeVaryingOptions? options = null)
+    public static TimeVaryingTrafficSolution Solve(Network network, TimeVaryingOptions? options = null) => Solve(network, options, null);
+
+    /// <summary>
+    /// Solves the traffic equations with the patients that full units send away: each unit's own arrivals and load
+    /// stay those offered to it, but only its admitted share flows on, and diverted patients join the unit they are
+    /// diverted to (then follow that unit's routes).
+    /// </summary>
+    internal static TimeVaryingTrafficSolution Solve(Network network, TimeVaryingOptions? options, TurnedAwayFlows? turnedAway)
     {
         ArgumentNullException.ThrowIfNull(network);
         options ??= TimeVaryingOptions.Default;
@@ -41,10 +48,42 @@ public static class TimeVaryingTraffic
         int steps = cycleHours * stepsPerHour;
 
         var plans = groups.Select(group => new FlowGroupPlan(
-            ExternalOnGrid(group.Routing, group.Profile, steps, stepsPerHour), group.Routing, group.Stages)).ToArray();
-        var (arrivals, loads) = LoadPropagation.Run(network.Units.Length, steps, 1.0 / stepsPerHour, plans, options);
+            ExternalOnGrid(group.Routing, group.Profile, steps, stepsPerHour), group.Routing, group.Stages)).ToList();
+        double[]?[]? admitted = null;
+        if (turnedAway is not null)
+        {
+            admitted = [.. turnedAway.AdmittedShareByHour.Select(share => OnGrid(share, steps, stepsPerHour))];
+            var diverted = turnedAway.DivertedInByHour.Select(rate => OnGrid(rate, steps, stepsPerHour)).ToArray();
+            var divertedArrivals = network.Units
+                .Select((unit, j) => (unit.Id, Rate: diverted[j]?.Average() ?? 0.0))
+                .Where(target => target.Rate > 0.0)
+                .Select(target => new Arrival(target.Id, target.Rate))
+                .ToList();
+            if (divertedArrivals.Count > 0)
+            {
+                plans.Add(new FlowGroupPlan(diverted, RoutingTable.Build(network with { Arrivals = [.. divertedArrivals] }), groups[0].Stages));
+            }
+        }
+
+        var (arrivals, loads) = LoadPropagation.Run(network.Units.Length, steps, 1.0 / stepsPerHour, plans, options, admitted);
         var units = network.Units.Select((unit, j) => new UnitLoadOverCycle(unit.Id, arrivals[j], loads[j], stepsPerHour));
         return new TimeVaryingTrafficSolution(cycleHours, stepsPerHour, [.. units]);
+    }
+
+    private static double[]? OnGrid(double[]? byHour, int steps, int stepsPerHour)
+    {
+        if (byHour is null)
+        {
+            return null;
+        }
+
+        var rates = new double[steps];
+        for (int k = 0; k < steps; k++)
+        {
+            rates[k] = byHour[k / stepsPerHour % byHour.Length];
+        }
+
+        return rates;
     }
 
     private static ServiceStages[] UnitStagesOf(Network network, Dictionary<int, ServiceDistribution> own)
