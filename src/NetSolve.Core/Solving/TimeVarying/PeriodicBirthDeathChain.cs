@@ -153,7 +153,8 @@ public static class PeriodicBirthDeathChain
 
             double ratio = change / lastChange;
             double remaining = ratio < 1.0 ? change * ratio / (1.0 - ratio) : double.PositiveInfinity;
-            if (change <= options.Tolerance && remaining <= options.Tolerance)
+            // No change at all (a constant load started from its own stationary distribution) has no ratio to go by.
+            if (change <= options.Tolerance && (remaining <= options.Tolerance || change == 0.0))
             {
                 return p;
             }
