@@ -8,12 +8,14 @@ namespace NetSolve.Solving;
 /// (<see cref="PeriodicBirthDeathChain"/>) whatever the servers. Units of at most
 /// <see cref="ExactChainOptions.MaxServers"/> servers whose varying load reaches
 /// <see cref="ExactChainOptions.HeavyPeakLoad"/> of the servers get the chain even where MOL has an answer, since MOL
-/// misses the queue carried over from the busy hours. A unit with a capacity gets the chain with its capacity (arrivals
+/// misses the queue carried over from the busy hours; so do larger units loaded that heavily whose servers complete
+/// few services an hour (<see cref="ExactChainOptions.MaxCompletionsPerHour"/>), where the chain is cheap. A unit with a capacity gets the chain with its capacity (arrivals
 /// at a full unit turned away), except a large one without waiting places, which gets
 /// <see cref="ModifiedOfferedLoadLoss"/>.
 /// </summary>
 /// <remarks>
-/// Each unit is taken on its own, fed by the infinite-server arrival rate λ_j(t): upstream queues, which delay and
+/// Each unit is taken on its own, fed by the infinite-server arrival rate λ_j(t) net of the patients that full units
+/// above it turn away or divert (<see cref="TurnedAwayFlows"/>, fed back until the shares settle): upstream queues, which delay and
 /// smooth the flow, are not fed back. The mean service used for waits is the unit's mean over its patients (offered
 /// load over arrival rate over the cycle), so groups with their own service times count by their share. The exact
 /// chain assumes exponential service; MOL carries the service cv through the offered load only. Thread-safe.
