@@ -81,7 +81,7 @@ public sealed class ReplicationPoolTests
     [Fact]
     public void Past_the_budget_the_replications_histograms_are_let_go()
     {
-        var pool = new ReplicationPool(units: 1, namedGroups: 0, thresholds: 0, keptBytesLimit: 200_000);
+        var pool = new ReplicationPool(units: 1, namedGroups: 0, thresholds: 0, keptBytesLimit: 20_000);
 
         pool.Finish(0, Output(0.0));
         Assert.True(pool.KeepsReplications);
