@@ -160,8 +160,11 @@ internal sealed class DurationHistogram
         return 1.0;
     }
 
-    /// <summary>Bytes held by the counts: 1 KB per touched octave and the window over them (to bound what a run keeps).</summary>
-    public long Bytes => (_octaves.Length * (long)sizeof(long)) + (_octaves.Count(octave => octave is not null) * (long)BucketsPerOctave * sizeof(long));
+    /// <summary>
+    /// Bytes held by the counts (to bound what a run keeps): the sparse pairs' array while sparse, else 1 KB per touched
+    /// octave and the window over them. Sparse histograms count too: a run of many small replications keeps mostly those.
+    /// </summary>
+    public long Bytes => (_sparse.Length * (long)sizeof(long)) + (_octaves.Length * (long)sizeof(long)) + (_octaves.Count(octave => octave is not null) * (long)BucketsPerOctave * sizeof(long));
 
     /// <summary>The bucket holding <paramref name="duration"/> (positive and finite): keys order the buckets, and key + 1 is the next one.</summary>
     public static long BucketOf(double duration) => BitConverter.DoubleToInt64Bits(duration) >> MantissaShift;
