@@ -161,8 +161,8 @@ internal sealed class DurationHistogram
     }
 
     /// <summary>
-    /// Bytes held by the counts (to bound what a run keeps): while sparse, 8 bytes per slot of the sorted pairs; when
-    /// dense, 1 KB per touched octave and the window over them.
+    /// Bytes held by the counts (to bound what a run keeps): the sparse pairs' array while sparse, else 1 KB per touched
+    /// octave and the window over them. Sparse histograms count too: a run of many small replications keeps mostly those.
     /// </summary>
     public long Bytes => (_sparse.Length * (long)sizeof(long)) + (_octaves.Length * (long)sizeof(long)) + (_octaves.Count(octave => octave is not null) * (long)BucketsPerOctave * sizeof(long));
 

@@ -74,6 +74,7 @@ internal sealed partial class SimulationEngine
             starts[u] = _units[u].Starts;
         }
 
+        _unitTimes.Flush();
         return new ReplicationTallies(_unitHistograms, _groupHistograms, starts, _waitOver);
     }
 

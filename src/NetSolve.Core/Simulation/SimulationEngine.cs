@@ -28,6 +28,7 @@ internal sealed partial class SimulationEngine
     private readonly double[]?[] _queueAreaByHour;
     private readonly long[] _waitOver;
     private readonly DurationHistogram[] _unitHistograms;
+    private readonly DeferredDurations _unitTimes;
     private readonly GroupPlan[] _groups;
     private readonly ServiceSampler[] _samplers;
 
@@ -63,6 +64,7 @@ internal sealed partial class SimulationEngine
         _queueAreaByHour = new double[n][];
         _waitOver = new long[n * waitThresholdsHours.Length];
         _unitHistograms = NewHistograms(n);
+        _unitTimes = new DeferredDurations(_unitHistograms);
         _groups = network.Groups;
         _samplers = network.Samplers;
         _groupExits = new long[groups];
@@ -157,6 +159,7 @@ internal sealed partial class SimulationEngine
         }
 
         EventCount = events;
+        _unitTimes.Flush();
         SampleSeries(_end);
         CloseOpenSpans();
         return true;
@@ -205,7 +208,7 @@ internal sealed partial class SimulationEngine
             double sojourn = now - record.UnitArrival;
             state.Completions++;
             state.SojournSum += sojourn;
-            _unitHistograms[unit].Record(sojourn);
+            _unitTimes.Record(unit, sojourn);
         }
 
         // Busy above Servers only after a roster took servers off: the server who finishes then leaves (docs/network-file.md, "Servers by hour").

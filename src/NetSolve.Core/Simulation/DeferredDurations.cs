@@ -1,0 +1,57 @@
+namespace NetSolve.Simulation;
+
+/// <summary>
+/// Durations waiting to be counted in one of many histograms (one per unit), counted a few thousand at a time.
+/// </summary>
+/// <remarks>
+/// Counting a time in unit straight away costs a cache miss on most service ends once a network has hundreds of
+/// units: each unit's histogram is a few KB to 20 KB, far more in all than the processor's caches, and the event loop
+/// waits for each miss in turn because the next event depends on the one before. Counted together from a small
+/// buffer (48 KB), the counts do not depend on one another, so the processor works on several misses at once;
+/// measured at 1,000 units (docs/performance.md), the histogram went from about 40% of the replication's profile
+/// samples to 16%, and events per CPU-second rose by about 40%.
+/// Counts do not depend on their order, so the histograms end exactly as if each duration had been counted at once.
+/// </remarks>
+internal sealed class DeferredDurations
+{
+    /// <summary>Durations held before they are counted: 4,096 × 12 bytes stay within the processor's second-level cache.</summary>
+    public const int Capacity = 4096;
+
+    private readonly DurationHistogram[] _histograms;
+    private readonly int[] _owners = new int[Capacity];
+    private readonly double[] _durations = new double[Capacity];
+    private int _count;
+
+    /// <param name="histograms">Where the durations are counted: the owner passed to <see cref="Record"/> indexes it.</param>
+    public DeferredDurations(DurationHistogram[] histograms) => _histograms = histograms;
+
+    /// <summary>Durations recorded and not yet counted.</summary>
+    public int Pending => _count;
+
+    /// <summary>Records <paramref name="duration"/> for histogram <paramref name="owner"/>; it is counted by the next <see cref="Flush"/> at the latest.</summary>
+    public void Record(int owner, double duration)
+    {
+        int k = _count;
+        _owners[k] = owner;
+        _durations[k] = duration;
+        _count = k + 1;
+        if (_count == Capacity)
+        {
+            Flush();
+        }
+    }
+
+    /// <summary>Counts every recorded duration in its histogram. Call before the histograms are read.</summary>
+    public void Flush()
+    {
+        var histograms = _histograms;
+        var owners = _owners;
+        var durations = _durations;
+        for (int k = 0; k < _count; k++)
+        {
+            histograms[owners[k]].Record(durations[k]);
+        }
+
+        _count = 0;
+    }
+}
