@@ -20,7 +20,7 @@ internal sealed partial class NetworkFileParser
     private readonly List<(string UnitId, YamlScalar Target)> _diversions = [];
     private readonly Dictionary<string, SourceLocation> _groupLocations = new(StringComparer.Ordinal);
 
-    private ParsedService? ParseService(Dictionary<string, YamlNode> fields, YamlMapping owner, string id, TimeUnit timeUnit)
+    private ParsedService? ParseService(FieldValues fields, YamlMapping owner, string id, TimeUnit timeUnit)
     {
         ServiceKind? kind = null;
         SourceLocation? keyLocation = null;

@@ -123,7 +123,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             return null;
         }
 
-        var fields = Fields(mapping, UnitKeys, id);
+        var fields = KnownFields(mapping, UnitKeys, id);
         string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, id, "label") is YamlScalar labelScalar
             ? labelScalar.Value
             : id;
