@@ -30,16 +30,16 @@ public static class BareNumbers
             return;
         }
 
-        foreach (var (unitId, unit) in Entries(Child(top, "units")))
+        foreach (var (unitKey, unit) in Entries(Child(top, "units")))
         {
-            Warn(Child(unit, "service"), unitId, null, timeUnit, diagnostics);
+            Warn(Child(unit, "service"), unitKey.Value, null, timeUnit, diagnostics);
         }
 
-        foreach (var (groupId, group) in Entries(Child(top, "groups")))
+        foreach (var (groupKey, group) in Entries(Child(top, "groups")))
         {
-            foreach (var (unitId, service) in Entries(Child(group, "services")))
+            foreach (var (unitKey, service) in Entries(Child(group, "services")))
             {
-                Warn(Child(service, "service"), unitId, groupId, timeUnit, diagnostics);
+                Warn(Child(service, "service"), unitKey.Value, groupKey.Value, timeUnit, diagnostics);
             }
         }
     }
@@ -60,9 +60,26 @@ public static class BareNumbers
             $"{where} '{scalar.Value}' has no unit of time, so it was read as {amount:0.###} {unitName}s (the file's time_unit is {unitName}); write e.g. {number}min or {number}h to say which")));
     }
 
-    private static YamlNode? Child(YamlNode? node, string key) =>
-        node is YamlMapping mapping ? mapping.Entries.FirstOrDefault(entry => entry.Key.Value == key).Value : null;
+    /// <summary>The first value under <paramref name="key"/>; a plain loop, as it runs once per unit.</summary>
+    private static YamlNode? Child(YamlNode? node, string key)
+    {
+        if (node is not YamlMapping mapping)
+        {
+            return null;
+        }
 
-    private static IEnumerable<(string Key, YamlNode Value)> Entries(YamlNode? node) =>
-        node is YamlMapping mapping ? mapping.Entries.Select(entry => (entry.Key.Value, entry.Value)) : [];
+        var entries = mapping.Entries;
+        for (int i = 0; i < entries.Count; i++)
+        {
+            if (string.Equals(entries[i].Key.Value, key, StringComparison.Ordinal))
+            {
+                return entries[i].Value;
+            }
+        }
+
+        return null;
+    }
+
+    private static IReadOnlyList<KeyValuePair<YamlScalar, YamlNode>> Entries(YamlNode? node) =>
+        node is YamlMapping mapping ? mapping.Entries : [];
 }

@@ -22,26 +22,23 @@ internal static class BlockYamlReader
     public static bool TryRead(string text, string fileName, out YamlNode? root)
     {
         root = null;
-        // One line per '\n' at most: sizing the list up front avoids regrowing it for 100,000-unit files.
-        var lines = new List<Line>(text.AsSpan().Count('\n') + 1);
-        if (!Tokenize(text, lines))
+        // Lines are read one ahead as the mappings are built, not listed first: for a 100,000-unit file the list
+        // was a 25 MB array held through the whole read.
+        var lines = new LineCursor(text);
+        lines.Advance();
+        if (!lines.HasCurrent)
+        {
+            return !lines.Failed;
+        }
+
+        if (lines.Current.Indent != 0)
         {
             return false;
         }
 
-        if (lines.Count == 0)
-        {
-            return true;
-        }
-
-        if (lines[0].Indent != 0)
-        {
-            return false;
-        }
-
-        int next = 0;
-        var mapping = ReadMapping(lines, ref next, 0, fileName, 0);
-        if (mapping is null || next != lines.Count)
+        var scratch = new List<List<KeyValuePair<YamlScalar, YamlNode>>>();
+        var mapping = ReadMapping(lines, 0, fileName, 0, scratch);
+        if (mapping is null || lines.HasCurrent || lines.Failed)
         {
             return false;
         }
@@ -50,26 +47,37 @@ internal static class BlockYamlReader
         return true;
     }
 
-    private static YamlMapping? ReadMapping(List<Line> lines, ref int next, int indent, string fileName, int depth)
+    /// <summary>
+    /// Reads the mapping whose keys stand at <paramref name="indent"/>, using one reusable entry list per depth
+    /// (<paramref name="scratch"/>) so that each mapping keeps an array of exactly its entries.
+    /// </summary>
+    private static YamlMapping? ReadMapping(LineCursor lines, int indent, string fileName, int depth, List<List<KeyValuePair<YamlScalar, YamlNode>>> scratch)
     {
         if (depth > LocatedYamlReader.MaxDepth)
         {
             return null;
         }
 
-        var first = lines[next];
-        var entries = new List<KeyValuePair<YamlScalar, YamlNode>>();
-        while (next < lines.Count && lines[next].Indent == indent)
+        if (scratch.Count == depth)
         {
-            var line = lines[next++];
+            scratch.Add([]);
+        }
+
+        var entries = scratch[depth];
+        entries.Clear();
+        int firstNumber = lines.Current.Number;
+        while (lines.HasCurrent && lines.Current.Indent == indent)
+        {
+            var line = lines.Current;
+            lines.Advance();
             var key = new YamlScalar(new SourceLocation(fileName, line.Number, indent + 1), line.Key, IsPlain: true);
             if (line.Value is not null)
             {
                 entries.Add(new(key, new YamlScalar(new SourceLocation(fileName, line.Number, line.ValueColumn), line.Value, line.ValueIsPlain)));
             }
-            else if (next < lines.Count && lines[next].Indent > indent)
+            else if (lines.HasCurrent && lines.Current.Indent > indent)
             {
-                var child = ReadMapping(lines, ref next, lines[next].Indent, fileName, depth + 1);
+                var child = ReadMapping(lines, lines.Current.Indent, fileName, depth + 1, scratch);
                 if (child is null)
                 {
                     return null;
@@ -84,48 +92,68 @@ internal static class BlockYamlReader
         }
 
         // A line indented deeper than its siblings but not under an empty key is not a block mapping.
-        if (next < lines.Count && lines[next].Indent > indent)
+        if (lines.HasCurrent && lines.Current.Indent > indent)
         {
             return null;
         }
 
-        return new YamlMapping(new SourceLocation(fileName, first.Number, indent + 1), entries);
+        return new YamlMapping(new SourceLocation(fileName, firstNumber, indent + 1), entries.ToArray());
     }
 
-    private static bool Tokenize(string text, List<Line> lines)
+    /// <summary>The next line with a key on it, read when asked for; blank and comment lines are passed over.</summary>
+    private sealed class LineCursor(string text)
     {
         // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each.
-        var pool = new Dictionary<string, string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
-        int lineNumber = 0;
-        int position = 0;
-        while (position <= text.Length)
+        private readonly StringPool _pool = new Dictionary<string, string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
+        private int _position;
+        private int _lineNumber;
+
+        public Line Current { get; private set; }
+
+        public bool HasCurrent { get; private set; }
+
+        /// <summary>True once a line outside the accepted subset was met; reading stops there.</summary>
+        public bool Failed { get; private set; }
+
+        public void Advance()
         {
-            int end = text.IndexOf('\n', position);
-            if (end < 0)
+            HasCurrent = false;
+            while (!Failed && _position <= text.Length)
             {
-                end = text.Length;
-            }
+                int end = text.IndexOf('\n', _position);
+                if (end < 0)
+                {
+                    end = text.Length;
+                }
 
-            lineNumber++;
-            var span = text.AsSpan(position, end - position);
-            if (span.EndsWith("\r"))
-            {
-                span = span[..^1];
-            }
+                _lineNumber++;
+                var span = text.AsSpan(_position, end - _position);
+                if (span.EndsWith("\r"))
+                {
+                    span = span[..^1];
+                }
 
-            if (!ReadLine(span, lineNumber, lines, pool))
-            {
-                return false;
-            }
+                _position = end + 1;
+                if (!ReadLine(span, _lineNumber, _pool, out var line))
+                {
+                    Failed = true;
+                    return;
+                }
 
-            position = end + 1;
+                if (line is Line keyed)
+                {
+                    Current = keyed;
+                    HasCurrent = true;
+                    return;
+                }
+            }
         }
-
-        return true;
     }
 
-    private static bool ReadLine(ReadOnlySpan<char> span, int number, List<Line> lines, StringPool pool)
+    /// <summary>False when the line is outside the accepted subset; <paramref name="line"/> is null for a blank or comment line.</summary>
+    private static bool ReadLine(ReadOnlySpan<char> span, int number, StringPool pool, out Line? line)
     {
+        line = null;
         foreach (char c in span)
         {
             // Control characters, YAML's other line breaks (NEL, LS, PS), byte order marks and surrogates: let YamlDotNet decide.
@@ -174,7 +202,7 @@ internal static class BlockYamlReader
         var rest = span[valueStart..];
         if (rest.Length == 0 || rest[0] == '#')
         {
-            lines.Add(new Line(number, indent, key, null, colon + 2, true));
+            line = new Line(number, indent, key, null, colon + 2, true);
             return true;
         }
 
@@ -183,7 +211,7 @@ internal static class BlockYamlReader
             return false;
         }
 
-        lines.Add(new Line(number, indent, key, value, valueStart + 1, isPlain));
+        line = new Line(number, indent, key, value, valueStart + 1, isPlain);
         return true;
     }
 

@@ -24,10 +24,17 @@ public static class LocatedYamlReader
             throw new YamlReadException(Position(text, refused, fileName), InputCharacters.Describe(text, refused));
         }
 
+        // The block reader declines every line with a tab (or any other control character), so a tree it built
+        // has no tab to look for: only YamlDotNet's trees need the walk of RefuseTabs.
+        if (BlockYamlReader.TryRead(text, fileName, out var fast))
+        {
+            return fast;
+        }
+
         YamlNode? root;
         try
         {
-            root = BlockYamlReader.TryRead(text, fileName, out var fast) ? fast : ReadWithYamlDotNet(text, fileName);
+            root = ReadWithYamlDotNet(text, fileName);
         }
         catch (YamlReadException) when (IndentationTabs.Find(text) is int tab && tab >= 0)
         {

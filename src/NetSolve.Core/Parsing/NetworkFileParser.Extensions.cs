@@ -20,7 +20,7 @@ internal sealed partial class NetworkFileParser
     private readonly List<(string UnitId, YamlScalar Target)> _diversions = [];
     private readonly Dictionary<string, SourceLocation> _groupLocations = new(StringComparer.Ordinal);
 
-    private ParsedService? ParseService(Dictionary<string, YamlNode> fields, YamlMapping owner, string id, TimeUnit timeUnit)
+    private ParsedService? ParseService(FieldValues fields, YamlMapping owner, string id, TimeUnit timeUnit)
     {
         ServiceKind? kind = null;
         SourceLocation? keyLocation = null;
@@ -56,7 +56,7 @@ internal sealed partial class NetworkFileParser
             return ParseEmpirical(samplesNode, serviceNode, cvNode, owner, id, timeUnit, keyLocation);
         }
 
-        double? mean = serviceNode is null ? null : Value(serviceNode, id, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit));
+        double? mean = serviceNode is null ? null : Value(serviceNode, id, FieldLabels.Service, DurationParser(timeUnit));
         if (serviceNode is null)
         {
             Error(owner.Location, id, DiagnosticCodes.MissingKey, "missing 'service' (the mean time a patient holds a server, e.g. 45min)");
@@ -92,6 +92,14 @@ internal sealed partial class NetworkFileParser
         };
         return new ParsedService(m, c, distribution, keyLocation);
     }
+
+    /// <summary>One duration parser per time unit, made once: a lambda over the time unit here would be a closure per unit.</summary>
+    private static Func<string, ValueResult<double>> DurationParser(TimeUnit timeUnit) => timeUnit switch
+    {
+        TimeUnit.Minute => static text => DurationValue.Parse(text, TimeUnit.Minute),
+        TimeUnit.Day => static text => DurationValue.Parse(text, TimeUnit.Day),
+        _ => static text => DurationValue.Parse(text, TimeUnit.Hour),
+    };
 
     private ParsedService? ParseEmpirical(YamlNode? samplesNode, YamlNode? serviceNode, YamlNode? cvNode, YamlMapping owner, string id, TimeUnit timeUnit, SourceLocation? keyLocation)
     {

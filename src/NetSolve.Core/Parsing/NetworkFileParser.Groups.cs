@@ -91,7 +91,7 @@ internal sealed partial class NetworkFileParser
                 continue;
             }
 
-            var fields = Fields(serviceMapping, ServiceKeys, key.Value);
+            var fields = KnownFields(serviceMapping, ServiceKeys, key.Value);
             if (ParseService(fields, serviceMapping, key.Value, timeUnit) is ParsedService parsed)
             {
                 services.Add(new GroupService(key.Value, parsed.Distribution ?? ServiceDistribution.FromMeanAndCv(parsed.MeanHours, parsed.Cv)));

@@ -15,31 +15,79 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     /// <summary>Every problem found so far, in the order found.</summary>
     protected List<Diagnostic> Diagnostics { get; } = diagnostics;
 
+    // Most mappings (a unit's fields, its routes) hold a handful of keys: a linear scan finds duplicates there
+    // without a dictionary per mapping, which matters for 100,000-unit files.
+    private const int ScanLimit = 16;
+
     protected Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
     {
         var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
         foreach (var (key, value) in UniqueEntries(mapping, unitId))
         {
-            if (Array.IndexOf(knownKeys, key.Value) < 0)
+            if (IsKnown(key, knownKeys, unitId))
             {
-                string hint = NearestName.Suggest(key.Value, knownKeys) is string best
-                    ? $"; did you mean '{best}'?"
-                    : $" (known keys: {string.Join(", ", knownKeys)})";
-                Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
-                continue;
+                fields[key.Value] = value;
             }
-
-            fields[key.Value] = value;
         }
 
         return fields;
     }
 
+    /// <summary>
+    /// The same checks and messages as <see cref="Fields"/>, with the fields left where they are in the mapping:
+    /// for the mappings a file has one of per unit.
+    /// </summary>
+    protected FieldValues KnownFields(YamlMapping mapping, string[] knownKeys, string? unitId)
+    {
+        var entries = mapping.Entries;
+        int count = 0;
+        if (entries.Count > ScanLimit)
+        {
+            foreach (var (key, _) in UniqueEntries(mapping, unitId))
+            {
+                count += IsKnown(key, knownKeys, unitId) ? 1 : 0;
+            }
+
+            return new FieldValues(mapping, knownKeys, count);
+        }
+
+        for (int i = 0; i < entries.Count; i++)
+        {
+            var key = entries[i].Key;
+            if (FirstOccurrence(entries, i, null) is SourceLocation first)
+            {
+                ReportDuplicate(key, first, unitId);
+            }
+            else if (IsKnown(key, knownKeys, unitId))
+            {
+                count++;
+            }
+        }
+
+        return new FieldValues(mapping, knownKeys, count);
+    }
+
+    /// <summary>True for a key of <paramref name="knownKeys"/>; otherwise reports it with the nearest known key.</summary>
+    private bool IsKnown(YamlScalar key, string[] knownKeys, string? unitId)
+    {
+        if (Array.IndexOf(knownKeys, key.Value) >= 0)
+        {
+            return true;
+        }
+
+        string hint = NearestName.Suggest(key.Value, knownKeys) is string best
+            ? $"; did you mean '{best}'?"
+            : $" (known keys: {string.Join(", ", knownKeys)})";
+        Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
+        return false;
+    }
+
+    private void ReportDuplicate(YamlScalar key, SourceLocation first, string? unitId) =>
+        Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
+            $"duplicate key '{key.Value}' (first at line {first.Line})"));
+
     protected IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
     {
-        // Most mappings (a unit's fields, its routes) hold a handful of keys: a linear scan finds duplicates there
-        // without a dictionary per mapping, which matters for 100,000-unit files.
-        const int ScanLimit = 16;
         var entries = mapping.Entries;
         var seen = entries.Count > ScanLimit ? new Dictionary<string, SourceLocation>(entries.Count, StringComparer.Ordinal) : null;
         for (int i = 0; i < entries.Count; i++)
@@ -47,8 +95,7 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
             var (key, value) = entries[i];
             if (FirstOccurrence(entries, i, seen) is SourceLocation first)
             {
-                Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
-                    $"duplicate key '{key.Value}' (first at line {first.Line})"));
+                ReportDuplicate(key, first, unitId);
                 continue;
             }
 
@@ -102,8 +149,10 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     }
 
     /// <summary>Reads a unit's servers: a plain (unquoted) <see cref="ServersValue"/>; null after reporting a mistake.</summary>
-    protected Servers? ServersField(YamlNode node, string unitId) =>
-        Value(node, unitId, FieldLabels.Servers, text => node is YamlScalar { IsPlain: false } ? ServersValue.Quoted(text) : ServersValue.Parse(text));
+    /// <remarks>The parser is chosen before the call, not inside a lambda over the node: no closure per unit.</remarks>
+    protected Servers? ServersField(YamlNode node, string unitId) => node is YamlScalar { IsPlain: false }
+        ? Value(node, unitId, FieldLabels.Servers, ServersValue.Quoted)
+        : Value(node, unitId, FieldLabels.Servers, ServersValue.Parse);
 
     protected YamlScalar? Scalar(YamlNode node, string? unitId, string what)
     {

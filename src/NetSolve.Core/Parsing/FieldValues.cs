@@ -1,0 +1,42 @@
+using System.Diagnostics.CodeAnalysis;
+
+namespace NetSolve.Parsing;
+
+/// <summary>
+/// The known fields of a mapping, looked up where they stand in the mapping instead of copied into a dictionary:
+/// a 100,000-unit file would otherwise build 100,000 dictionaries of three or four keys each.
+/// </summary>
+/// <remarks>
+/// A key answers with its first occurrence, as the reader's checks keep the first and report later duplicates;
+/// a key outside <paramref name="KnownKeys"/> is never found, as unknown keys are reported and left out.
+/// </remarks>
+/// <param name="Mapping">The mapping the fields are in.</param>
+/// <param name="KnownKeys">The keys this kind of mapping may have.</param>
+/// <param name="Count">How many different known keys the mapping holds.</param>
+internal readonly record struct FieldValues(YamlMapping Mapping, string[] KnownKeys, int Count)
+{
+    public bool TryGetValue(string key, [MaybeNullWhen(false)] out YamlNode value)
+    {
+        value = null;
+        if (Array.IndexOf(KnownKeys, key) < 0)
+        {
+            return false;
+        }
+
+        var entries = Mapping.Entries;
+        for (int i = 0; i < entries.Count; i++)
+        {
+            if (string.Equals(entries[i].Key.Value, key, StringComparison.Ordinal))
+            {
+                value = entries[i].Value;
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    public YamlNode? GetValueOrDefault(string key) => TryGetValue(key, out var value) ? value : null;
+
+    public bool ContainsKey(string key) => TryGetValue(key, out _);
+}
