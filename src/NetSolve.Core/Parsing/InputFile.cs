@@ -72,6 +72,45 @@ public static class InputFile
         }
     }
 
+    /// <summary>
+    /// <paramref name="path"/> opened for one sequential read of any size (a movement log is streamed, never held as
+    /// one text), after the same refusals as <see cref="TryRead(string, string, out Diagnostic?)"/>; null with
+    /// <paramref name="problem"/> set otherwise. The caller disposes the stream.
+    /// </summary>
+    public static Stream? TryOpen(string path, string kind, out Diagnostic? problem)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        var location = new SourceLocation(path, 0, 0);
+        problem = null;
+        if (Directory.Exists(path))
+        {
+            problem = Unreadable(location, $"is a directory, not {kind}");
+            return null;
+        }
+
+        if (!File.Exists(path))
+        {
+            problem = Unreadable(location, "no such file");
+            return null;
+        }
+
+        if (InputFileType.NotRegular(path) is string what)
+        {
+            problem = Unreadable(location, $"is {what}, not {kind}; only regular files are read");
+            return null;
+        }
+
+        try
+        {
+            return new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 1 << 16, FileOptions.SequentialScan);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            problem = Unreadable(location, "cannot be read: " + exception.Message);
+            return null;
+        }
+    }
+
     /// <summary>The bytes of the file, or null when it holds more than <paramref name="maxBytes"/>.</summary>
     /// <remarks>The length is checked before reading, and the read stops one byte past the limit in case the file grows.</remarks>
     private static byte[]? ReadBounded(string path, long maxBytes)
