@@ -13,4 +13,10 @@ if (args is ["time-varying", .. var counts])
     return;
 }
 
+if (args is ["movement-log", var rows, var path, .. var seed])
+{
+    MovementLogGenerator.Write(path, long.Parse(rows, System.Globalization.CultureInfo.InvariantCulture), seed.Length == 0 ? 16 : int.Parse(seed[0], System.Globalization.CultureInfo.InvariantCulture), Console.Out);
+    return;
+}
+
 BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);

@@ -113,6 +113,8 @@ public static class MovementLogReader
             return new MovementLogReadResult(null, [.. diagnostics]);
         }
 
+        int patients = rows.Patients;
+        rows.ReleasePatientIds();
         var (units, unitOfName) = UnitNaming.Name(rows.UnitSpellings, options);
         rows.Rows.RenumberUnits(unitOfName);
         var journeys = new JourneyBuilder(rows.Rows, start.ToUnixTimeMilliseconds(), end.ToUnixTimeMilliseconds(), (long)options.NewJourneyAfter.TotalMilliseconds);
@@ -125,7 +127,7 @@ public static class MovementLogReader
         }
 
         var problems = LogProblems.Count(rows, journeys, start.ToUnixTimeMilliseconds());
-        var log = new MovementLog(units, rows.Rows, journeys, rows.Patients, rows.HasStartTimes, start, end, options, problems);
+        var log = new MovementLog(units, rows.Rows, journeys, patients, rows.HasStartTimes, start, end, options, problems);
         return new MovementLogReadResult(log, [.. diagnostics]);
     }
 }

@@ -32,6 +32,9 @@ internal sealed class JourneyBuilder(StayTable rows, long extractStartMs, long e
     /// <summary>Stays inside another stay.</summary>
     public long Nested { get; private set; }
 
+    /// <summary>Rows arriving after a row of the same patient that the file puts later: the file is not in time order.</summary>
+    public long RowsOutOfOrder { get; private set; }
+
     /// <summary>Stays wholly outside the extract.</summary>
     public long OutsideExtract { get; private set; }
 
@@ -44,7 +47,8 @@ internal sealed class JourneyBuilder(StayTable rows, long extractStartMs, long e
     /// <summary>Sorts, groups and labels the stays.</summary>
     public void Build()
     {
-        var order = new List<int>(rows.Count);
+        int[] sorted = new int[rows.Count];
+        int inside = 0;
         for (int i = 0; i < rows.Count; i++)
         {
             ref readonly var row = ref rows[i];
@@ -56,15 +60,13 @@ internal sealed class JourneyBuilder(StayTable rows, long extractStartMs, long e
                 continue;
             }
 
-            order.Add(i);
+            sorted[inside++] = i;
         }
 
-        int[] sorted = [.. order];
-        order.Clear();
-        order.TrimExcess();
-        Array.Sort(sorted, Compare);
-        var kept = new List<int>(sorted.Length);
-        for (int k = 0; k < sorted.Length; k++)
+        // Sorted and compacted in place: a 10-million-row log holds no second copy of its order.
+        Array.Sort(sorted, 0, inside, Comparer<int>.Create(Compare));
+        int kept = 0;
+        for (int k = 0; k < inside; k++)
         {
             if (k > 0 && Compare(sorted[k - 1], sorted[k]) == 0)
             {
@@ -73,10 +75,11 @@ internal sealed class JourneyBuilder(StayTable rows, long extractStartMs, long e
                 continue;
             }
 
-            kept.Add(sorted[k]);
+            sorted[kept++] = sorted[k];
         }
 
-        Order = [.. kept];
+        Array.Resize(ref sorted, kept);
+        Order = sorted;
         Next = new int[Order.Length];
         Enters = new bool[Order.Length];
         for (int start = 0; start < Order.Length;)
@@ -87,6 +90,7 @@ internal sealed class JourneyBuilder(StayTable rows, long extractStartMs, long e
                 end++;
             }
 
+            CountRowsOutOfOrder(start, end);
             Patient(start, end);
             start = end;
         }
@@ -135,6 +139,39 @@ internal sealed class JourneyBuilder(StayTable rows, long extractStartMs, long e
         }
 
         Next[main] = EndOf(rows[Order[main]]) == long.MaxValue ? StayOutcome.StillRunning : StayOutcome.Exit;
+    }
+
+    /// <summary>
+    /// Counts the stays of one patient that arrive earlier than a stay the file puts before them: walking back from
+    /// the latest arrival, a stay is out of order when a later-arriving one has a smaller line.
+    /// </summary>
+    private void CountRowsOutOfOrder(int start, int end)
+    {
+        int earliestLineLater = int.MaxValue;
+        for (int runEnd = end; runEnd > start;)
+        {
+            long arrived = rows[Order[runEnd - 1]].ArrivedMs;
+            int runStart = runEnd - 1;
+            while (runStart > start && rows[Order[runStart - 1]].ArrivedMs == arrived)
+            {
+                runStart--;
+            }
+
+            int earliestLineHere = int.MaxValue;
+            for (int p = runStart; p < runEnd; p++)
+            {
+                int line = rows[Order[p]].Line;
+                earliestLineHere = Math.Min(earliestLineHere, line);
+                if (earliestLineLater < line)
+                {
+                    RowsOutOfOrder++;
+                    Example(Order[p], "the row arrives before an earlier row of the same patient (rows out of order)");
+                }
+            }
+
+            earliestLineLater = Math.Min(earliestLineLater, earliestLineHere);
+            runEnd = runStart;
+        }
     }
 
     private void Example(int index, string message)

@@ -24,7 +24,7 @@ internal static class LogProblems
             ZeroDurations = rows.ZeroDurations,
             NegativeDurations = rows.NegativeDurations,
             UnknownColumns = rows.UnknownColumns,
-            RowsOutOfOrder = rows.RowsOutOfOrder,
+            RowsOutOfOrder = journeys.RowsOutOfOrder,
             StillRunningAtEnd = stillRunning,
             RunningAtStart = runningAtStart,
             OutsideExtract = journeys.OutsideExtract,

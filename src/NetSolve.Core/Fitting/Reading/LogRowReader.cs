@@ -14,9 +14,9 @@ internal sealed class LogRowReader(string fileName, LogHeader header, MovementLo
     /// <summary>Errors reported before reading stops: enough to see a pattern, few enough to read.</summary>
     public const int MaxErrors = 20;
 
-    private readonly Dictionary<string, int> _patients = new(StringComparer.Ordinal);
+    private PatientIds _patients = new();
+    private int _line;
     private readonly Dictionary<string, int> _unitKeys = new(options.IgnoreCase ? StringComparer.OrdinalIgnoreCase : StringComparer.Ordinal);
-    private readonly List<long> _lastArrivedOfPatient = [];
     private readonly LogClock _clock = new(options.TimeZone);
 
     /// <summary>Header columns not known (ignored).</summary>
@@ -49,13 +49,8 @@ internal sealed class LogRowReader(string fileName, LogHeader header, MovementLo
     /// <summary>Rows whose times run backwards (dropped).</summary>
     public long NegativeDurations { get; private set; }
 
-    /// <summary>Rows arriving before an earlier row of the same patient.</summary>
-    public long RowsOutOfOrder { get; private set; }
-
     /// <summary>Local times in an hour a clock change repeated or skipped.</summary>
     public long ClockChangeTimes => _clock.ClockChangeTimes;
-
-    private int _line;
 
     /// <summary>Reads one data row, which starts on <paramref name="line"/>; problems go to the diagnostics.</summary>
     public void Read(SepReader.Row row, int line)
@@ -77,6 +72,12 @@ internal sealed class LogRowReader(string fileName, LogHeader header, MovementLo
 
         if (!Acceptable(row, 0, "patient") || !Acceptable(row, 1, "unit"))
         {
+            return;
+        }
+
+        if (patient.Length > PatientIds.MaxLength)
+        {
+            Error(At(row, 0), null, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture, $"a patient id is at most {PatientIds.MaxLength} characters"));
             return;
         }
 
@@ -115,23 +116,12 @@ internal sealed class LogRowReader(string fileName, LogHeader header, MovementLo
         }
     }
 
+    /// <summary>Lets go of the patient ids once every row is read: only their numbers are needed from then on.</summary>
+    public void ReleasePatientIds() => _patients = new PatientIds();
+
     private void Keep(SepReader.Row row, ReadOnlySpan<char> patient, string unitName, long arrived, long started, long left)
     {
-        var patients = _patients.GetAlternateLookup<ReadOnlySpan<char>>();
-        if (!patients.TryGetValue(patient, out int patientNumber))
-        {
-            patientNumber = _patients.Count;
-            patients[patient] = patientNumber;
-            _lastArrivedOfPatient.Add(long.MinValue);
-        }
-
-        if (arrived < _lastArrivedOfPatient[patientNumber])
-        {
-            RowsOutOfOrder++;
-            Messy(At(row, 2), unitName, "the row arrives before an earlier row of the same patient (rows out of order)");
-        }
-
-        _lastArrivedOfPatient[patientNumber] = Math.Max(arrived, _lastArrivedOfPatient[patientNumber]);
+        int patientNumber = _patients.Intern(patient);
         if (!_unitKeys.TryGetValue(unitName, out int unitNumber))
         {
             unitNumber = _unitKeys.Count;
