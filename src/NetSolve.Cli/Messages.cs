@@ -281,6 +281,9 @@ internal static class Messages
     public static string FitNeverQueued(string unit, int peak) =>
         Invariant($"unit '{Q(unit)}': never queued: at least {peak} servers (no patient waited, so the peak in service shows demand, not capacity; set servers from the roster)");
 
+    /// <summary><c>fit</c>: the progress bar's label while a large log is read.</summary>
+    public static string ReadingLog(string fileName) => $"reading {Q(fileName)}";
+
     /// <summary><c>fit</c>: the log has no start-of-service times.</summary>
     public const string FitNoStartTimes = "no start-of-service times (column 'started'): waits count as service, so mean service and servers include any waiting";
 

@@ -81,7 +81,7 @@ internal static class FitCommand
         using var stream = InputFile.TryOpen(path, "a movement log", out var problem) ?? throw new InputException(problem!.ToString());
         long length = stream.CanSeek ? stream.Length : 0;
         var (log, diagnostics) = context.IsTerminal && length >= ProgressBarFromBytes
-            ? ReadProgressBar.Run("reading " + Path.GetFileName(path), length, progress => MovementLogReader.Read(stream, path, options, progress), context.Error)
+            ? ReadProgressBar.Run(Messages.ReadingLog(Path.GetFileName(path)), length, progress => MovementLogReader.Read(stream, path, options, progress), context.Error)
             : MovementLogReader.Read(stream, path, options);
         if (log is null)
         {
