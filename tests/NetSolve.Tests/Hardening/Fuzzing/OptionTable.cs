@@ -60,6 +60,8 @@ internal static class OptionTable
         ["--ignore-case"] = OptionKind.Flag,
         ["--strict"] = OptionKind.Flag,
         ["--unit-map"] = OptionKind.Text,
+        ["fit --report"] = OptionKind.OutputPath,
+        ["fit --servers"] = OptionKind.Text,
     };
 
     /// <summary>Each command's options (help left out), as the command tree declares them.</summary>
