@@ -69,6 +69,18 @@ public static class UnitObservationsBuilder
         return byUnit;
     }
 
+    /// <summary>One field of every stay, in an array made at its final size (a large unit's stays are not copied twice).</summary>
+    private static ImmutableArray<T> Column<T>((double Stay, double Age, bool Censored)[] seen, Func<(double Stay, double Age, bool Censored), T> field)
+    {
+        var column = ImmutableArray.CreateBuilder<T>(seen.Length);
+        foreach (var stay in seen)
+        {
+            column.Add(field(stay));
+        }
+
+        return column.MoveToImmutable();
+    }
+
     private static UnitObservations Build(MovementLog log, int unit, UnitCounts counts, int[] positions)
     {
         const double PerHour = CensoredStayMean.MillisecondsPerHour;
@@ -109,7 +121,7 @@ public static class UnitObservationsBuilder
         Array.Sort(seen);
         waits.Sort();
         entries.Sort();
-        return new UnitObservations(log.Units[unit].Id, [.. seen.Select(stay => stay.Stay)], [.. seen.Select(stay => stay.Censored)], [.. seen.Select(stay => stay.Age)],
+        return new UnitObservations(log.Units[unit].Id, Column(seen, stay => stay.Stay), Column(seen, stay => stay.Censored), Column(seen, stay => stay.Age),
             waits.ToImmutable(), entries.ToImmutable(), [.. routes.Select(route => new RouteCount(route.Key, route.Value))],
             counts.Stays == 0 ? null : Math.Max(1, counts.PeakInService), counts.Timed > 0 && counts.Waited == 0);
     }
