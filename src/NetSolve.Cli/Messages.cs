@@ -1,5 +1,6 @@
 using System.Globalization;
 using NetSolve.Diagnostics;
+using NetSolve.Fitting.Reading;
 using NetSolve.Presentation.Formats;
 
 namespace NetSolve.Cli;
@@ -255,6 +256,64 @@ internal static class Messages
         Invariant($"arrivals over {window:0.##} {timeUnitName}s. Servers are the most patients seen in service at once:"),
         "check them against the roster before planning with this file.",
     ];
+
+    /// <summary><c>fit --time-zone</c>: not a zone of the bundled tz database.</summary>
+    public static string NotTimeZone(string text) =>
+        $"--time-zone: '{Q(text)}' is not an IANA time zone name (write e.g. Europe/London, America/New_York or UTC)";
+
+    /// <summary><c>fit --extract-start</c> / <c>--extract-end</c>: not a time in a log format.</summary>
+    public static string NotLogTime(string option, string text) =>
+        $"{option}: '{Q(text)}' is not a time (write e.g. 2026-03-02T08:15, 2026-03-02T08:15:30+01:00 or 02/03/2026 08:15)";
+
+    /// <summary><c>fit</c>: the extract's end is not after its start.</summary>
+    public const string ExtractEndsBeforeStart = "--extract-end: the extract must end after it starts (--extract-start)";
+
+    /// <summary><c>fit</c>: the summary's account of the log read and its window.</summary>
+    public static string FitRead(long patients, long journeys, long stays, string from, string to) =>
+        Invariant($"read {stays:N0} stays of {patients:N0} patients in {journeys:N0} journeys, extract {from} to {to} (UTC)");
+
+    /// <summary><c>fit</c>: the messy rows found, each kind with its count and what was done ("messy rows: none" when clean).</summary>
+    public static string FitMessyRows(LogProblemCounts p, double newJourneyAfterHours)
+    {
+        ArgumentNullException.ThrowIfNull(p);
+        (long Count, string What)[] kinds =
+        [
+            (p.Duplicates, "exact duplicates dropped"),
+            (p.Readmissions, Invariant($"readmissions (a new journey after a gap over {newJourneyAfterHours:0.##} h)")),
+            (p.OverlappingStays, "overlapping stays taken as transfers"),
+            (p.NestedStays, "stays inside another stay kept out of routing"),
+            (p.ZeroDurations, "stays of no length (kept)"),
+            (p.NegativeDurations, "stays running backwards dropped"),
+            (p.UnknownColumns, "unknown columns ignored"),
+            (p.RowsOutOfOrder, "rows out of time order"),
+            (p.OutsideExtract, "stays outside the extract dropped"),
+            (p.ClockChangeTimes, "local times in a clock-change hour"),
+        ];
+        var counts = kinds.Where(kind => kind.Count > 0).Select(kind => Invariant($"{kind.Count:N0} {kind.What}")).ToList();
+        return counts.Count > 0 ? "messy rows: " + string.Join("; ", counts) : "messy rows: none";
+    }
+
+    /// <summary><c>fit</c>: stays cut by the extract's ends, allowed for in the mean stays.</summary>
+    public static string FitCensored(long stillRunning, long runningAtStart) =>
+        Invariant($"{stillRunning:N0} stays still running at the extract's end and {runningAtStart:N0} already running at its start: mean stays are fitted with them counted as such, not dropped (exponential and lognormal maximum likelihood with censoring, Kaplan-Meier curve)");
+
+    /// <summary><c>fit</c>: a unit where no patient waited, so its peak in service is only a lower bound on servers.</summary>
+    public static string FitNeverQueued(string unit, int peak) =>
+        Invariant($"unit '{Q(unit)}': never queued: at least {peak} servers (no patient waited, so the peak in service shows demand, not capacity; set servers from the roster)");
+
+    /// <summary><c>fit --servers</c>: not UNIT=N with N a whole number of at least 1.</summary>
+    public static string FitServersNotCount(string entry) =>
+        $"--servers: '{Q(entry)}' is not UNIT=N with N a whole number of servers, at least 1 (write e.g. --servers ward=30)";
+
+    /// <summary><c>fit --servers</c>: the unit is not in the log.</summary>
+    public static string FitServersUnknownUnit(string unit, IEnumerable<string> units) =>
+        $"--servers: the log has no unit '{Q(unit)}' (its units: {Q(string.Join(", ", units))})";
+
+    /// <summary><c>fit</c>: the progress bar's label while a large log is read.</summary>
+    public static string ReadingLog(string fileName) => $"reading {Q(fileName)}";
+
+    /// <summary><c>fit</c>: the log has no start-of-service times.</summary>
+    public const string FitNoStartTimes = "no start-of-service times (column 'started'): waits count as service, so mean service and servers include any waiting";
 
     // Files written.
 

@@ -33,6 +33,20 @@ public static class NetworkYamlWriter
             {
                 output.Write($"    service_cv: {Number(u.ServiceCv)}\n");
             }
+
+            if (u.Service is { Kind: ServiceKind.Exponential or ServiceKind.Lognormal } service)
+            {
+                output.Write($"    service_distribution: {(service.Kind == ServiceKind.Lognormal ? "lognormal" : "exponential")}\n");
+            }
+        }
+
+        if (network.ArrivalProfile is ArrivalProfile profile)
+        {
+            output.Write($"\narrival_profile:\n  hour_of_day: [{string.Join(", ", profile.HourOfDay.Select(Number))}]\n");
+            if (!profile.DayOfWeek.IsDefaultOrEmpty)
+            {
+                output.Write($"  day_of_week: [{string.Join(", ", profile.DayOfWeek.Select(Number))}]\n");
+            }
         }
 
         output.Write("\narrivals:\n");

@@ -25,4 +25,10 @@ if (args is ["time-varying", .. var counts])
     return;
 }
 
+if (args is ["movement-log", var rows, var logPath, .. var seed])
+{
+    MovementLogGenerator.Write(logPath, long.Parse(rows, System.Globalization.CultureInfo.InvariantCulture), seed.Length == 0 ? 16 : int.Parse(seed[0], System.Globalization.CultureInfo.InvariantCulture), Console.Out);
+    return;
+}
+
 BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);

@@ -2,10 +2,14 @@ using System.CommandLine;
 using System.CommandLine.Parsing;
 using System.Text;
 using NetSolve.Cli.Settings;
+using NetSolve.Cli.Terminal;
 using NetSolve.Fitting;
+using NetSolve.Fitting.Reading;
 using NetSolve.Model;
 using NetSolve.Presentation;
-using NetSolve.Presentation.Fitting;
+using NetSolve.Presentation.Fitting.Evidence;
+using NetSolve.Rendering.Report;
+using NetSolve.Solving;
 using NetSolve.Parsing;
 
 namespace NetSolve.Cli.Commands;
@@ -13,6 +17,9 @@ namespace NetSolve.Cli.Commands;
 /// <summary><c>netsolve fit LOG.csv</c>: estimates a network file from a log of patient movements.</summary>
 internal static class FitCommand
 {
+    /// <summary>Logs smaller than this (about 600,000 rows) read in a few seconds: no progress bar.</summary>
+    private const long ProgressBarFromBytes = 40L * 1024 * 1024;
+
     public static Command Create(CliContext context)
     {
         var log = new Argument<string>("LOG") { Description = "Movement log (CSV: patient,unit,arrived,started,left; see docs/movement-log.md)." };
@@ -20,35 +27,69 @@ internal static class FitCommand
         var timeUnit = SettingOptions.Choice("--time-unit", "Time unit of the network file written: minute, hour or day.", "hour", ["minute", "hour", "day"]);
         var name = new Option<string?>("--name") { Description = "Network name (default: the log's file name)." };
         name.Validators.Add(result => RefuseUnsafeName(result, result.GetValueOrDefault<string?>()));
+        var format = SettingOptions.Choice("--format", "Summary: table (for people) or json (the fit evidence as one document).", "table", ["table", "json"], "-f");
+        var report = new Option<string?>("--report")
+        {
+            Description = "Also write an HTML report of the fitted network with a section on how sure the fit is.",
+            HelpName = "FILE",
+        };
+        var roster = new Option<string[]>("--servers")
+        {
+            Description = "Servers of a unit from the roster or bed count (repeat per unit); units not given get the peak in service, flagged when they never queued.",
+            HelpName = "UNIT=N",
+        };
+        var reading = new FitLogOptions();
         var command = new Command("fit", "Estimate a network from a log of patient movements: arrival rates, routing fractions, service times and servers.")
         {
-            log, output, timeUnit, name,
+            log, output, timeUnit, name, format, report, roster,
         };
+        foreach (var option in reading.All)
+        {
+            command.Options.Add(option);
+        }
+
         command.SetAction(parse =>
         {
             string path = parse.GetValue(log)!;
-            var visits = ReadLog(path);
+            var movements = ReadLog(path, reading.Read(parse), context);
             var unit = Enum.Parse<TimeUnit>(parse.GetValue(timeUnit)!, ignoreCase: true);
             FittedNetwork fitted;
             try
             {
-                fitted = NetworkFitter.Fit(visits, parse.GetValue(name) ?? Path.GetFileNameWithoutExtension(path), unit);
+                fitted = NetworkFitter.Fit(movements, parse.GetValue(name) ?? Path.GetFileNameWithoutExtension(path), unit, FitRoster.Read(parse.GetValue(roster) ?? [], movements));
             }
             catch (ArgumentException exception)
             {
                 throw new InputException(Messages.FitProblem(path, exception.Message.Split(" (Parameter", 2)[0]), exception);
             }
 
-            string[] header = Messages.FittedHeader(Path.GetFileName(path), fitted.Patients, visits.Count,
-                TimeConstants.FromHours(fitted.WindowHours, unit), TimeConstants.Name(unit));
-            if (parse.GetValue(output) is string target)
+            string[] header = [.. Messages.FittedHeader(Path.GetFileName(path), fitted.Patients, movements.Stays,
+                TimeConstants.FromHours(fitted.WindowHours, unit), TimeConstants.Name(unit)), .. FitNotes.Lines(fitted, withRowOrder: false)];
+            var solution = NetworkSolver.Solve(fitted.Network);
+            var predicted = FitPredictedWaits.Of(solution);
+            if (parse.GetValue(report) is string reportTarget)
+            {
+                string html = HtmlReport.Write(solution, provenance: ReportProvenanceReader.Read(path, []), fitEvidence: fitted.Evidence);
+                AtomicFile.Write(reportTarget, stream => stream.Write(new UTF8Encoding(false).GetBytes(html)));
+            }
+
+            string? target = parse.GetValue(output);
+            if (target is not null)
             {
                 AtomicFile.Write(target, stream =>
                 {
                     using var writer = new StreamWriter(stream, new UTF8Encoding(false));
                     NetworkYamlWriter.Write(fitted.Network, writer, header);
                 });
-                WriteSummary(fitted, context.Out);
+            }
+
+            if (parse.GetValue(format) == "json")
+            {
+                FitJsonSummary.Write(fitted, predicted, target is null ? Yaml(fitted, header) : null, context.Out);
+            }
+            else if (target is not null)
+            {
+                WriteSummary(fitted, predicted, context.Out);
                 context.Out.Write("\n" + Messages.NetworkWritten(target) + "\n");
             }
             else
@@ -56,25 +97,38 @@ internal static class FitCommand
                 NetworkYamlWriter.Write(fitted.Network, context.Out, header);
             }
 
+            if (parse.GetValue(report) is string written)
+            {
+                context.Report(Messages.ReportWritten(written));
+            }
+
             return ExitCodes.Success;
         });
         return command;
     }
 
-    private static List<UnitVisit> ReadLog(string path)
+    /// <summary>
+    /// Streams the log (any size) under a progress bar when stderr is a terminal and the file is large enough for
+    /// one to help; warnings (an unknown column ignored) go to stderr, errors stop the command.
+    /// </summary>
+    private static MovementLog ReadLog(string path, MovementLogOptions options, CliContext context)
     {
-        if (InputFile.TryRead(path, "a movement log", InputFile.MaxMovementLogBytes, out var problem) is not string text)
-        {
-            throw new InputException(problem!.ToString());
-        }
-
-        var (visits, diagnostics) = MovementLogReader.Read(text, path);
-        if (diagnostics.Any(d => d.IsError))
+        using var stream = InputFile.TryOpen(path, "a movement log", out var problem) ?? throw new InputException(problem!.ToString());
+        long length = stream.CanSeek ? stream.Length : 0;
+        var (log, diagnostics) = context.IsTerminal && length >= ProgressBarFromBytes
+            ? ReadProgressBar.Run(Messages.ReadingLog(Path.GetFileName(path)), length, progress => MovementLogReader.Read(stream, path, options, progress), context.Error)
+            : MovementLogReader.Read(stream, path, options);
+        if (log is null)
         {
             throw new InputException(string.Join("\n", diagnostics.Where(d => d.IsError)));
         }
 
-        return [.. visits];
+        foreach (var warning in diagnostics)
+        {
+            context.Report(warning.ToString());
+        }
+
+        return log;
     }
 
     /// <summary>
@@ -97,5 +151,17 @@ internal static class FitCommand
         }
     }
 
-    private static void WriteSummary(FittedNetwork fitted, TextWriter output) => FittedUnitColumns.WriteTable(fitted, output);
+    /// <summary>The summary for people: the evidence per unit (with the waits the fitted network predicts), then the notes.</summary>
+    private static void WriteSummary(FittedNetwork fitted, IReadOnlyDictionary<string, double?> predicted, TextWriter output)
+    {
+        FitEvidenceTable.Write(fitted.Evidence, predicted, fitted.Network.TimeUnit, output);
+        output.Write("\n" + string.Join("\n", FitNotes.Lines(fitted, withRowOrder: true)) + "\n");
+    }
+
+    private static string Yaml(FittedNetwork fitted, IEnumerable<string> header)
+    {
+        using var text = new StringWriter(System.Globalization.CultureInfo.InvariantCulture);
+        NetworkYamlWriter.Write(fitted.Network, text, header);
+        return text.ToString();
+    }
 }

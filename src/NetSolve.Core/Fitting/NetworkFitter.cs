@@ -1,101 +1,107 @@
 using System.Collections.Immutable;
 using System.Globalization;
+using NetSolve.Fitting.Estimation;
 using NetSolve.Model;
 
 namespace NetSolve.Fitting;
 
 /// <summary>
-/// Estimates a network from observed stays: external arrival rates from each patient's first stay, routing
-/// fractions from consecutive stays of the same patient, mean service time and its variability per unit, and
-/// servers as the most patients seen in service at once.
+/// Estimates a network from a movement log: external arrival rates from the journeys entering inside the extract,
+/// routing fractions from each stay's next unit, the service distribution (exponential or lognormal, mean and cv)
+/// fitted with stays still running or already running taken into account, and servers as the most patients seen in
+/// service at once.
 /// </summary>
 /// <remarks>
-/// These are the maximum-likelihood estimates for a Jackson network observed over the window (counts over
-/// exposure for rates, transition frequencies for routing). Peak concurrency is a lower bound on staffed
-/// servers; the planner should check it against the roster.
+/// The stages, each replaceable: <see cref="UnitCounter"/> counts (whole numbers, so row order cannot
+/// change a result), then the evidence (<see cref="FitEvidence"/>: stay fits with censoring, intervals,
+/// profiles, warnings), then each unit's estimates (<see cref="FitUnit"/>), then the network with the arrival profile
+/// where the evidence supports one. Rates and routing are the maximum-likelihood estimates for a
+/// Jackson network observed over the extract. Peak concurrency is a lower bound on staffed servers where no patient
+/// waited; the summary flags those units.
 /// </remarks>
 public static class NetworkFitter
 {
-    /// <summary>Fits a network to <paramref name="visits"/>; times reported in <paramref name="timeUnit"/>.</summary>
-    /// <exception cref="ArgumentException">No visits, or the arrivals span no time.</exception>
-    public static FittedNetwork Fit(IReadOnlyList<UnitVisit> visits, string name, TimeUnit timeUnit)
+    /// <summary>
+    /// Fits a network to <paramref name="log"/>; times reported in <paramref name="timeUnit"/>. Servers come from
+    /// <paramref name="roster"/> (unit id to servers) where it names the unit, otherwise from the peak in service.
+    /// </summary>
+    /// <exception cref="ArgumentException">The extract spans no time for arrivals, or a unit has no stay that ended.</exception>
+    public static FittedNetwork Fit(MovementLog log, string name, TimeUnit timeUnit, IReadOnlyDictionary<string, int>? roster = null)
     {
-        ArgumentNullException.ThrowIfNull(visits);
-        if (visits.Count == 0)
+        ArgumentNullException.ThrowIfNull(log);
+        roster ??= new Dictionary<string, int>(StringComparer.Ordinal);
+        double windowHours = EntryWindowHours(log);
+        var (counts, moves) = UnitCounter.Count(log);
+        // The evidence's entry rates are counted over the same span as the network's arrival rates.
+        var evidence = FitEvidence.Summarise(UnitObservationsBuilder.FromLog(log, counts, roster), UnitObservationsBuilder.WindowOf(log, windowHours));
+        var fitted = log.Units.Select((unit, u) => FitUnit(unit.Id, unit.Label, counts[u], windowHours, evidence.Units[u]) with
         {
-            throw new ArgumentException("A movement log needs at least one stay.", nameof(visits));
-        }
-
-        var patients = visits.GroupBy(visit => visit.Patient, StringComparer.Ordinal)
-            .Select(patient => patient.OrderBy(visit => visit.ArrivedHours).ThenBy(visit => visit.Line).ToList())
-            .ToList();
-
-        // Rates are counted over the span of entries into the hospital, not of all stays: a backlog can
-        // stretch the last stays far past the last entry.
-        double first = patients.Min(path => path[0].ArrivedHours);
-        double last = patients.Max(path => path[0].ArrivedHours);
-        double window = last - first;
-        if (!(window > 0.0))
+            RosterServers = roster.TryGetValue(unit.Id, out int given) ? given : null,
+        }).ToImmutableArray();
+        var units = fitted.Select(unit => new Unit(unit.Id, unit.Label, Servers.Of(unit.RosterServers ?? Math.Max(1, unit.PeakInService)), unit.MeanServiceHours, unit.ServiceCv)
         {
-            throw new ArgumentException("All patients entered at the same moment, so no arrival rate can be measured.", nameof(visits));
-        }
+            Service = unit.Distribution == ServiceKind.Lognormal
+                ? ServiceDistribution.Lognormal(unit.MeanServiceHours, unit.ServiceCv)
+                : ServiceDistribution.Exponential(unit.MeanServiceHours),
+        }).ToImmutableArray();
+        var arrivals = fitted.Where(unit => unit.EntriesPerHour > 0.0).Select(unit => new Arrival(unit.Id, unit.EntriesPerHour)).ToImmutableArray();
+        var routes = moves
+            .OrderBy(move => move.Key.From).ThenBy(move => move.Key.To)
+            .Select(move => new Route(log.Units[move.Key.From].Id, log.Units[move.Key.To].Id, (double)move.Value / counts[move.Key.From].Routed))
+            .ToImmutableArray();
+        var network = new Network(name, timeUnit, units, arrivals, routes) { ArrivalProfile = evidence.Profile.Profile };
+        return new FittedNetwork(network, fitted, log.Patients, windowHours, log, evidence);
+    }
 
-        var unitIds = visits.Select(visit => visit.UnitId).Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal).ToList();
-        var entries = new Dictionary<string, int>(StringComparer.Ordinal);
-        var moves = new Dictionary<(string From, string To), int>();
-        foreach (var path in patients)
+    /// <summary>
+    /// Hours over which entries are counted: the extract's bounds where given, otherwise the first to the last entry
+    /// (not the span of all stays, which a backlog stretches past the last entry).
+    /// </summary>
+    private static double EntryWindowHours(MovementLog log)
+    {
+        long first = long.MaxValue;
+        long last = long.MinValue;
+        for (int p = 0; p < log.Order.Length; p++)
         {
-            entries[path[0].UnitId] = entries.GetValueOrDefault(path[0].UnitId) + 1;
-            for (int k = 0; k + 1 < path.Count; k++)
+            if (log.Enters[p])
             {
-                var key = (path[k].UnitId, path[k + 1].UnitId);
-                moves[key] = moves.GetValueOrDefault(key) + 1;
+                long arrived = log.Rows[log.Order[p]].ArrivedMs;
+                first = Math.Min(first, arrived);
+                last = Math.Max(last, arrived);
             }
         }
 
-        var byUnit = visits.GroupBy(visit => visit.UnitId, StringComparer.Ordinal).ToDictionary(group => group.Key, group => group.ToList(), StringComparer.Ordinal);
-        var fitted = unitIds.Select(id => FitUnit(id, byUnit[id], entries.GetValueOrDefault(id) / window)).ToImmutableArray();
-        var units = fitted.Select(unit => new Unit(unit.Id, unit.Id, Servers.Of(Math.Max(1, unit.PeakInService)), unit.MeanServiceHours, unit.ServiceCv)).ToImmutableArray();
-        var arrivals = fitted.Where(unit => unit.EntriesPerHour > 0.0).Select(unit => new Arrival(unit.Id, unit.EntriesPerHour)).ToImmutableArray();
-        var routes = moves
-            .OrderBy(move => move.Key.From, StringComparer.Ordinal).ThenBy(move => move.Key.To, StringComparer.Ordinal)
-            .Select(move => new Route(move.Key.From, move.Key.To, (double)move.Value / byUnit[move.Key.From].Count))
-            .ToImmutableArray();
-        var network = new Network(name, timeUnit, units, arrivals, routes);
-        return new FittedNetwork(network, fitted, patients.Count, window);
+        long from = log.Options.ExtractStart is null ? first : log.ExtractStartMs;
+        long to = log.Options.ExtractEnd is null ? last : log.ExtractEndMs;
+        double hours = (to - from) / CensoredStayMean.MillisecondsPerHour;
+        if (first == long.MaxValue || !(hours > 0.0))
+        {
+            throw new ArgumentException("All patients entered at the same moment, so no arrival rate can be measured.", nameof(log));
+        }
+
+        return hours;
     }
 
-    private static FittedUnit FitUnit(string id, List<UnitVisit> stays, double entriesPerHour)
+    /// <summary>
+    /// One unit's estimates: the mean stay, cv and distribution from the censoring-aware fit the evidence chose
+    /// (the lognormal where it fits clearly better, otherwise the exponential, whose maximum-likelihood mean is
+    /// <see cref="CensoredStayMean"/>); counts, waits and the peak in service from the counting stage.
+    /// </summary>
+    private static FittedUnit FitUnit(string id, string label, UnitCounts seen, double windowHours, UnitEvidence evidence)
     {
-        double mean = stays.Average(stay => stay.ServiceHours);
-        if (!(mean > 0.0))
+        if (evidence.Stay.Mean is not IntervalEstimate mean || !(mean.Value > 0.0))
         {
-            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"unit '{id}': every stay has zero length, so no service time can be measured"), nameof(stays));
+            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"unit '{id}': no stay ended inside the extract, so no service time can be measured"), nameof(seen));
         }
 
-        double variance = stays.Count > 1 ? stays.Sum(stay => Math.Pow(stay.ServiceHours - mean, 2)) / (stays.Count - 1) : 0.0;
-        return new FittedUnit(id, stays.Count, entriesPerHour, mean, Math.Sqrt(variance) / mean, stays.Average(stay => stay.WaitHours), PeakInService(stays));
+        double cv = evidence.Stay.Cv?.Value ?? 1.0;
+        return new FittedUnit(id, seen.Stays, seen.Entries / windowHours, mean.Value, cv, MeanWaitHours(seen), seen.PeakInService,
+            label, seen.Completed, seen.StillRunning, seen.Timed > 0, seen.Timed > 0 && seen.Waited == 0)
+        {
+            Distribution = evidence.Stay.Chosen,
+        };
     }
 
-    /// <summary>Most stays in service at once; a stay ending exactly when another starts does not overlap it.</summary>
-    private static int PeakInService(List<UnitVisit> stays)
-    {
-        var events = new List<(double Time, int Change)>(stays.Count * 2);
-        foreach (var stay in stays)
-        {
-            events.Add((stay.StartedHours ?? stay.ArrivedHours, +1));
-            events.Add((stay.LeftHours, -1));
-        }
-
-        events.Sort((a, b) => a.Time != b.Time ? a.Time.CompareTo(b.Time) : a.Change.CompareTo(b.Change));
-        int current = 0;
-        int peak = 0;
-        foreach (var (_, change) in events)
-        {
-            current += change;
-            peak = Math.Max(peak, current);
-        }
-
-        return peak;
-    }
+    private static double MeanWaitHours(UnitCounts seen) =>
+        seen.Timed > 0 ? seen.WaitMs / (double)seen.Timed / CensoredStayMean.MillisecondsPerHour : 0.0;
 }

@@ -15,12 +15,6 @@ public static class InputFile
     /// <summary>Largest network or scenario file read: 256 MiB, far above a 100,000-unit network (about 20 MB).</summary>
     public const long MaxNetworkBytes = 256L * 1024 * 1024;
 
-    /// <summary>
-    /// Largest movement log read: 1 GiB. A log is read as one text, and 1 GiB of UTF-8 is about the longest
-    /// text .NET can hold (a string has at most about 2^30 characters).
-    /// </summary>
-    public const long MaxMovementLogBytes = 1024L * 1024 * 1024;
-
     private static readonly byte[] ByteOrderMark = [0xEF, 0xBB, 0xBF];
 
     /// <summary>
@@ -36,22 +30,9 @@ public static class InputFile
         ArgumentNullException.ThrowIfNull(path);
         ArgumentOutOfRangeException.ThrowIfNegative(maxBytes);
         var location = new SourceLocation(path, 0, 0);
-        problem = null;
-        if (Directory.Exists(path))
+        problem = NotARegularFile(path, kind, location);
+        if (problem is not null)
         {
-            problem = Unreadable(location, $"is a directory, not {kind}");
-            return null;
-        }
-
-        if (!File.Exists(path))
-        {
-            problem = Unreadable(location, "no such file");
-            return null;
-        }
-
-        if (InputFileType.NotRegular(path) is string what)
-        {
-            problem = Unreadable(location, $"is {what}, not {kind}; only regular files are read");
             return null;
         }
 
@@ -70,6 +51,50 @@ public static class InputFile
             problem = Unreadable(location, "cannot be read: " + exception.Message);
             return null;
         }
+    }
+
+    /// <summary>
+    /// <paramref name="path"/> opened for one sequential read of any size (a movement log is streamed, never held as
+    /// one text), after the same refusals as <see cref="TryRead(string, string, out Diagnostic?)"/>; null with
+    /// <paramref name="problem"/> set otherwise. The caller disposes the stream.
+    /// </summary>
+    public static Stream? TryOpen(string path, string kind, out Diagnostic? problem)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        var location = new SourceLocation(path, 0, 0);
+        problem = NotARegularFile(path, kind, location);
+        if (problem is not null)
+        {
+            return null;
+        }
+
+        try
+        {
+            return new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 1 << 16, FileOptions.SequentialScan);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            problem = Unreadable(location, "cannot be read: " + exception.Message);
+            return null;
+        }
+    }
+
+    /// <summary>Why <paramref name="path"/> is not a regular file to read (a folder, missing, a device or pipe), or null.</summary>
+    private static Diagnostic? NotARegularFile(string path, string kind, SourceLocation location)
+    {
+        if (Directory.Exists(path))
+        {
+            return Unreadable(location, $"is a directory, not {kind}");
+        }
+
+        if (!File.Exists(path))
+        {
+            return Unreadable(location, "no such file");
+        }
+
+        return InputFileType.NotRegular(path) is string what
+            ? Unreadable(location, $"is {what}, not {kind}; only regular files are read")
+            : null;
     }
 
     /// <summary>The bytes of the file, or null when it holds more than <paramref name="maxBytes"/>.</summary>

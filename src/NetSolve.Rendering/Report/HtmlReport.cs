@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using System.Xml.Linq;
+using NetSolve.Fitting.Estimation;
 using NetSolve.Model;
 using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
@@ -50,12 +51,14 @@ public static class HtmlReport
     /// </param>
     /// <param name="provenance">Date, version and input files, shown under the title; none when null.</param>
     /// <param name="baselineChanges">What the baseline changes from its own base when FILE is a scenario file or has <c>--set</c> changes; none when null.</param>
+    /// <param name="fitEvidence">For a network fitted from a movement log: how sure the fit is (<see cref="FitEvidenceSection"/>), its predicted waits from <paramref name="baseline"/>; none when null.</param>
     public static string Write(
         NetworkSolution baseline,
         IReadOnlyList<ReportScenario>? scenarios = null,
         SimulationResult? simulation = null,
         ReportProvenance? provenance = null,
-        IReadOnlyList<string>? baselineChanges = null)
+        IReadOnlyList<string>? baselineChanges = null,
+        NetworkEvidence? fitEvidence = null)
     {
         ArgumentNullException.ThrowIfNull(baseline);
         if (simulation is not null && !simulation.Units.Select(u => u.Unit.Id).SequenceEqual(baseline.Units.Select(u => u.Unit.Id), StringComparer.Ordinal))
@@ -121,6 +124,11 @@ public static class HtmlReport
             TimeOfDaySection.Append(html, simulation);
             SimulationComparisonTable.Append(html, baseline, simulation);
             JourneySection.Append(html, baseline, simulation);
+        }
+
+        if (fitEvidence is not null)
+        {
+            FitEvidenceSection.Append(html, fitEvidence, baseline.Units.ToDictionary(u => u.Unit.Id, u => u.MeanWaitHours, StringComparer.Ordinal), timeUnit);
         }
 
         html.Append("<section id=\"assumptions\">\n<h2>Assumptions and caution</h2>\n<p>")

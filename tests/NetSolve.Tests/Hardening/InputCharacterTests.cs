@@ -114,9 +114,9 @@ public sealed class InputCharacterTests
     {
         string log = $"patient,unit,arrived,left\nP1,{unit},2026-03-02T08:00,2026-03-02T09:00\n";
 
-        var (visits, diagnostics) = MovementLogReader.Read(log, "log.csv");
+        var (read, diagnostics) = MovementLogReader.Read(log, "log.csv");
 
-        Assert.Empty(visits);
+        Assert.Null(read);
         var problem = Assert.Single(diagnostics);
         Assert.Equal(DiagnosticCodes.BadText, problem.Code);
         // Exact by hand: "P1," is three characters, so the unit cell starts at column 4 and its third character is column 6.

@@ -41,10 +41,16 @@ public static class FitEvidence
     {
         ArgumentNullException.ThrowIfNull(units);
         ArgumentNullException.ThrowIfNull(window);
-        var all = units.ToList();
-        var evidence = all.Select(unit => Estimate(unit, window)).ToImmutableArray();
-        var entryHours = all.SelectMany(unit => unit.EntryHours).ToList();
-        return new NetworkEvidence(window, evidence, RateEvidence.Of(evidence.Sum(unit => unit.Entries.Count), window.Hours),
+        // One pass, keeping only each unit's entry times: the units may be built one at a time from a large log.
+        var evidence = ImmutableArray.CreateBuilder<UnitEvidence>();
+        var entryHours = new List<double>();
+        foreach (var unit in units)
+        {
+            evidence.Add(Estimate(unit, window));
+            entryHours.AddRange(unit.EntryHours);
+        }
+
+        return new NetworkEvidence(window, evidence.ToImmutable(), RateEvidence.Of(evidence.Sum(unit => unit.Entries.Count), window.Hours),
             ArrivalProfileEstimate.Estimate(entryHours, window));
     }
 

@@ -1,108 +1,128 @@
 using System.Collections.Immutable;
+using NetSolve.Fitting.Reading;
 
 namespace NetSolve.Fitting.Estimation;
 
 /// <summary>
-/// Turns the stays read from a movement log into each unit's <see cref="UnitObservations"/> for an extract window:
-/// a stay still running at the window's end is censored there, one already running at its start is left-truncated.
+/// Turns the stays of a <see cref="MovementLog"/> into each unit's <see cref="UnitObservations"/>: a stay still
+/// running at the extract's end is censored there, one already running at its start is left-truncated.
 /// </summary>
 /// <remarks>
-/// Patients' journeys are their stays in order of arrival, ties broken by the time they left and then by unit id, so
-/// the observations do not depend on the order of the rows. Servers are the most patients seen in service at once
-/// (a lower bound), with the never-queued flag when every recorded wait is 0.
+/// The log's journeys are already ordered by the data (ties broken by time and unit, not by the line), so the
+/// observations do not depend on the order of the rows. One unit is built at a time, so a 10-million-row log holds
+/// only its largest unit's arrays at once. Servers are the peak in service that the counting stage found (a lower
+/// bound), flagged as never queued when start times are recorded and no patient waited.
 /// </remarks>
 public static class UnitObservationsBuilder
 {
-    /// <summary>The observations of every unit in <paramref name="visits"/>, in unit id order.</summary>
-    /// <param name="visits">The stays, times in hours on the log's clock.</param>
-    /// <param name="startHours">The extract's start on the log's clock; stays before it are truncated or dropped.</param>
-    /// <param name="window">The extract's length and its start's place in the week.</param>
-    public static ImmutableArray<UnitObservations> FromVisits(IReadOnlyList<UnitVisit> visits, double startHours, ExtractWindow window)
+    /// <summary>
+    /// The extract's window of <paramref name="log"/>: its length (or <paramref name="hours"/>, the span entries are
+    /// counted over, when given), and its start's place in the week on the log's local clock.
+    /// </summary>
+    public static ExtractWindow WindowOf(MovementLog log, double? hours = null)
     {
-        ArgumentNullException.ThrowIfNull(visits);
-        ArgumentNullException.ThrowIfNull(window);
-        double endHours = startHours + window.Hours;
-        var units = new SortedDictionary<string, Accumulator>(StringComparer.Ordinal);
-        Accumulator For(string id) => units.TryGetValue(id, out var found) ? found : units[id] = new Accumulator();
-
-        foreach (var journey in visits.GroupBy(visit => visit.Patient, StringComparer.Ordinal))
-        {
-            var stays = journey.OrderBy(visit => visit.ArrivedHours).ThenBy(visit => visit.LeftHours).ThenBy(visit => visit.UnitId, StringComparer.Ordinal).ToList();
-            if (stays[0].ArrivedHours >= startHours && stays[0].ArrivedHours <= endHours)
-            {
-                For(stays[0].UnitId).Entries.Add(stays[0].ArrivedHours - startHours);
-            }
-
-            for (int k = 0; k < stays.Count; k++)
-            {
-                var visit = stays[k];
-                double serviceStart = visit.StartedHours ?? visit.ArrivedHours;
-                if (serviceStart > endHours || visit.LeftHours < startHours)
-                {
-                    continue;
-                }
-
-                var unit = For(visit.UnitId);
-                bool censored = visit.LeftHours > endHours;
-                unit.StayHours.Add(Math.Min(visit.LeftHours, endHours) - serviceStart);
-                unit.Censored.Add(censored);
-                unit.Ages.Add(Math.Max(0.0, startHours - serviceStart));
-                unit.Busy.Add((serviceStart, Math.Min(visit.LeftHours, endHours)));
-                if (visit.StartedHours is not null && visit.ArrivedHours >= startHours)
-                {
-                    unit.Waits.Add(visit.WaitHours);
-                }
-
-                if (!censored && k + 1 < stays.Count)
-                {
-                    string to = stays[k + 1].UnitId;
-                    unit.Routes[to] = unit.Routes.GetValueOrDefault(to) + 1;
-                }
-            }
-        }
-
-        return [.. units.Select(pair => pair.Value.Build(pair.Key))];
+        ArgumentNullException.ThrowIfNull(log);
+        hours ??= (log.ExtractEndMs - log.ExtractStartMs) / CensoredStayMean.MillisecondsPerHour;
+        var local = log.ExtractStart.InZone(log.Options.TimeZone).LocalDateTime;
+        double startHourOfWeek = ((((int)local.DayOfWeek - 1) * 24.0) + local.TimeOfDay.TickOfDay / (double)NodaTime.NodaConstants.TicksPerHour) % ExtractWindow.HoursPerWeek;
+        return ExtractWindow.Of(Math.Max(hours.Value, double.Epsilon), startHourOfWeek);
     }
 
-    /// <summary>One unit's observations while they are gathered.</summary>
-    private sealed class Accumulator
+    /// <summary>The observations of every unit of <paramref name="log"/>, in the log's unit order, built one at a time as they are enumerated.</summary>
+    public static IEnumerable<UnitObservations> FromLog(MovementLog log)
     {
-        public List<double> StayHours { get; } = [];
+        ArgumentNullException.ThrowIfNull(log);
+        var (counts, _) = UnitCounter.Count(log);
+        return FromLog(log, counts, new Dictionary<string, int>(StringComparer.Ordinal));
+    }
 
-        public List<bool> Censored { get; } = [];
-
-        public List<double> Ages { get; } = [];
-
-        public List<double> Waits { get; } = [];
-
-        public List<double> Entries { get; } = [];
-
-        public List<(double From, double To)> Busy { get; } = [];
-
-        public SortedDictionary<string, int> Routes { get; } = new(StringComparer.Ordinal);
-
-        public UnitObservations Build(string id)
+    /// <summary>
+    /// As <see cref="FromLog(MovementLog)"/>, reusing counts already made: servers are the roster's where it names the
+    /// unit (then not a lower bound), otherwise the peak in service with the never-queued flag.
+    /// </summary>
+    internal static IEnumerable<UnitObservations> FromLog(MovementLog log, UnitCounts[] counts, IReadOnlyDictionary<string, int> roster)
+    {
+        int[] byUnit = PositionsByUnit(log, counts, out int[] firstOf);
+        for (int u = 0; u < counts.Length; u++)
         {
-            int? servers = Busy.Count == 0 ? null : Math.Max(1, PeakInService());
-            bool neverQueued = Waits.Count > 0 && Waits.All(wait => wait <= 0.0);
-            return new UnitObservations(id, [.. StayHours], [.. Censored], [.. Ages], [.. Waits], [.. Entries],
-                [.. Routes.Select(route => new RouteCount(route.Key, route.Value))], servers, neverQueued);
+            var seen = Build(log, u, counts[u], byUnit.AsSpan(firstOf[u], counts[u].Stays).ToArray());
+            yield return roster.TryGetValue(seen.UnitId, out int servers) ? seen with { Servers = servers, NeverQueued = false } : seen;
+        }
+    }
+
+    /// <summary>Positions in the log's journey order, grouped by unit (a counting sort: one array of the log's length).</summary>
+    private static int[] PositionsByUnit(MovementLog log, UnitCounts[] counts, out int[] firstOf)
+    {
+        firstOf = new int[counts.Length];
+        for (int u = 1; u < counts.Length; u++)
+        {
+            firstOf[u] = firstOf[u - 1] + counts[u - 1].Stays;
         }
 
-        /// <summary>Most stays in service at once; one ending exactly when another starts does not overlap it.</summary>
-        private int PeakInService()
+        int[] next = (int[])firstOf.Clone();
+        int[] byUnit = new int[log.Order.Length];
+        for (int p = 0; p < log.Order.Length; p++)
         {
-            var events = Busy.SelectMany(span => new[] { (Time: span.From, Change: 1), (Time: span.To, Change: -1) })
-                .OrderBy(change => change.Time).ThenBy(change => change.Change);
-            int current = 0;
-            int peak = 0;
-            foreach (var (_, change) in events)
+            byUnit[next[log.Rows[log.Order[p]].Unit]++] = p;
+        }
+
+        return byUnit;
+    }
+
+    /// <summary>One field of every stay, in an array made at its final size (a large unit's stays are not copied twice).</summary>
+    private static ImmutableArray<T> Column<T>((double Stay, double Age, bool Censored)[] seen, Func<(double Stay, double Age, bool Censored), T> field)
+    {
+        var column = ImmutableArray.CreateBuilder<T>(seen.Length);
+        foreach (var stay in seen)
+        {
+            column.Add(field(stay));
+        }
+
+        return column.MoveToImmutable();
+    }
+
+    private static UnitObservations Build(MovementLog log, int unit, UnitCounts counts, int[] positions)
+    {
+        const double PerHour = CensoredStayMean.MillisecondsPerHour;
+        long start = log.ExtractStartMs;
+        long end = log.ExtractEndMs;
+        var seen = new (double Stay, double Age, bool Censored)[positions.Length];
+        int n = 0;
+        var waits = ImmutableArray.CreateBuilder<double>(counts.Timed);
+        var entries = ImmutableArray.CreateBuilder<double>(counts.Entries);
+        var routes = new SortedDictionary<string, int>(StringComparer.Ordinal);
+        foreach (int p in positions)
+        {
+            ref readonly var row = ref log.Rows[log.Order[p]];
+            int next = log.Next[p];
+            bool stillRunning = next == StayOutcome.StillRunning || row.IsCensored || row.LeftMs > end;
+            long serviceStart = row.ServiceStartMs;
+            double stay = Math.Max(0L, (stillRunning ? end : row.LeftMs) - serviceStart) / PerHour;
+            seen[n++] = (stay, Math.Min(stay, Math.Max(0L, start - serviceStart) / PerHour), stillRunning);
+            if (row.StartedMs != StayRow.NotRecorded && row.ArrivedMs >= start)
             {
-                current += change;
-                peak = Math.Max(peak, current);
+                waits.Add(Math.Max(0L, row.StartedMs - row.ArrivedMs) / PerHour);
             }
 
-            return peak;
+            if (log.Enters[p])
+            {
+                entries.Add((row.ArrivedMs - start) / PerHour);
+            }
+
+            if (next >= 0 && !stillRunning)
+            {
+                string to = log.Units[next].Id;
+                routes[to] = routes.GetValueOrDefault(to) + 1;
+            }
         }
+
+        // The stays in an order set by their values, not by the patients' numbers (which follow the rows): sums of
+        // hours then come out the same to the last bit however the rows were ordered.
+        Array.Sort(seen);
+        waits.Sort();
+        entries.Sort();
+        return new UnitObservations(log.Units[unit].Id, Column(seen, stay => stay.Stay), Column(seen, stay => stay.Censored), Column(seen, stay => stay.Age),
+            waits.ToImmutable(), entries.ToImmutable(), [.. routes.Select(route => new RouteCount(route.Key, route.Value))],
+            counts.Stays == 0 ? null : Math.Max(1, counts.PeakInService), counts.Timed > 0 && counts.Waited == 0);
     }
 }

@@ -1,6 +1,9 @@
 using NetSolve.Fitting;
 using NetSolve.Fitting.Estimation;
+using NetSolve.Fitting.Reading;
 using NetSolve.Tests.Support;
+using NodaTime;
+using Interval = NetSolve.Fitting.Estimation.Interval;
 
 namespace NetSolve.Tests.Fitting.Estimation;
 
@@ -12,11 +15,14 @@ public sealed class RowanEvidenceTests
     [Fact]
     public void The_bundled_demo_log_cut_at_14_days_recovers_its_parameters_within_their_intervals()
     {
-        var (visits, diagnostics) = MovementLogReader.Read(File.ReadAllText(TestFiles.Log("rowan-urgent-care")), "log.csv");
-        Assert.Empty(diagnostics);
-        var window = ExtractWindow.Of(14 * 24.0, StartHourOfWeek);
+        var start = Instant.FromUtc(2026, 3, 2, 0, 12, 14);
+        var options = new MovementLogOptions { ExtractStart = start, ExtractEnd = start + Duration.FromDays(14) };
+        var (log, diagnostics) = MovementLogReader.Read(File.ReadAllText(TestFiles.Log("rowan-urgent-care")), "log.csv", options);
+        Assert.DoesNotContain(diagnostics, d => d.IsError);
+        var window = UnitObservationsBuilder.WindowOf(log!);
+        Assert.Equal(StartHourOfWeek, window.StartHourOfWeek, 9);
 
-        var evidence = FitEvidence.Summarise(UnitObservationsBuilder.FromVisits(visits, 0.0, window), window);
+        var evidence = FitEvidence.Summarise(UnitObservationsBuilder.FromLog(log!), window);
 
         var units = evidence.Units.ToDictionary(unit => unit.UnitId, StringComparer.Ordinal);
         double Route(string from, string to) => units[from].Routes.Single(route => route.ToUnitId == to).Fraction.Value;

@@ -1,53 +1,81 @@
 using NetSolve.Fitting;
 using NetSolve.Fitting.Estimation;
+using NetSolve.Fitting.Reading;
+using NodaTime;
 
 namespace NetSolve.Tests.Fitting.Estimation;
 
 public sealed class UnitObservationsBuilderTests
 {
-    // The extract runs from hour 10 to hour 34 on the log's clock.
-    private static readonly UnitVisit[] Visits =
+    // The extract runs from 10:00 on the first day to 10:00 on the next (hours 10 to 34 below).
+    private static readonly string[] Rows =
     [
-        new("P1", "ward", 4.0, null, 12.0, 2),          // already running at the start: age 6, ends at 12
-        new("P2", "emergency", 11.0, 11.5, 13.0, 3),    // entry, waited 0.5 h, then to the ward
-        new("P2", "ward", 13.0, null, 40.0, 4),         // still running at the end: censored at 34
-        new("P3", "emergency", 20.0, 20.0, 21.0, 5),    // entry, no wait, leaves
-        new("P4", "emergency", 40.0, 40.0, 41.0, 6),    // after the extract: not seen
+        "P1,ward,2026-03-02T04:00:00,,2026-03-02T12:00:00",                   // already running at the start: age 6, ends at 12
+        "P2,emergency,2026-03-02T11:00:00,2026-03-02T11:30:00,2026-03-02T13:00:00",   // entry, waited 0.5 h, then to the ward
+        "P2,ward,2026-03-02T13:00:00,,",                                       // still running at the end: censored at 34
+        "P3,emergency,2026-03-02T20:00:00,2026-03-02T20:00:00,2026-03-02T21:00:00",   // entry, no wait, leaves
     ];
+
+    private static readonly MovementLogOptions Window = new()
+    {
+        ExtractStart = Instant.FromUtc(2026, 3, 2, 10, 0),
+        ExtractEnd = Instant.FromUtc(2026, 3, 3, 10, 0),
+    };
 
     [Fact]
     public void Stays_are_censored_at_the_end_and_truncated_at_the_start_of_the_extract()
     {
-        var units = UnitObservationsBuilder.FromVisits(Visits, 10.0, ExtractWindow.Of(24.0)).ToDictionary(unit => unit.UnitId, StringComparer.Ordinal);
+        var units = Observations(Rows).ToDictionary(unit => unit.UnitId, StringComparer.Ordinal);
 
         // Exact by hand from the rows above.
         var ward = units["ward"];
-        Assert.Equal([8.0, 21.0], ward.StayHours);
-        Assert.Equal([false, true], ward.Censored);
-        Assert.Equal([6.0, 0.0], ward.AgeAtStartHours);
+        Assert.Equal([8.0, 21.0], ward.StayHours.Order());
+        Assert.Equal(1, ward.Censored.Count(flag => flag));
+        Assert.Equal([0.0, 6.0], ward.AgeAtStartHours.Order());
         Assert.Empty(ward.Routes);
         var emergency = units["emergency"];
-        Assert.Equal([1.5, 1.0], emergency.StayHours);
-        Assert.Equal([0.5, 0.0], emergency.WaitHours);
-        Assert.Equal([1.0, 10.0], emergency.EntryHours);
+        Assert.Equal([1.0, 1.5], emergency.StayHours.Order());
+        Assert.Equal([0.0, 0.5], emergency.WaitHours.Order());
+        Assert.Equal([1.0, 10.0], emergency.EntryHours.Order());
         Assert.Equal([new RouteCount("ward", 1)], emergency.Routes);
         Assert.False(emergency.NeverQueued);
         Assert.Equal(1, emergency.Servers);
     }
 
     [Fact]
+    public void The_extract_window_starts_at_its_place_in_the_week()
+    {
+        var (log, _) = MovementLogReader.Read(Csv(Rows), "log.csv", Window);
+
+        var window = UnitObservationsBuilder.WindowOf(log!);
+
+        // Exact by hand: 2026-03-02 is a Monday, so 10:00 is hour 10 of the week; the extract lasts 24 hours.
+        Assert.Equal(24.0, window.Hours, 9);
+        Assert.Equal(10.0, window.StartHourOfWeek, 9);
+    }
+
+    [Fact]
     public void The_order_of_the_rows_does_not_change_the_observations()
     {
-        var forward = UnitObservationsBuilder.FromVisits(Visits, 10.0, ExtractWindow.Of(24.0));
-        var backward = UnitObservationsBuilder.FromVisits([.. Visits.Reverse()], 10.0, ExtractWindow.Of(24.0));
+        var forward = Observations(Rows);
+        var backward = Observations([.. Rows.Reverse()]);
 
-        Assert.Equal(forward.Length, backward.Length);
-        for (int i = 0; i < forward.Length; i++)
+        Assert.Equal(forward.Count, backward.Count);
+        for (int i = 0; i < forward.Count; i++)
         {
             Assert.Equal(forward[i].UnitId, backward[i].UnitId);
-            Assert.Equal(forward[i].StayHours.OrderBy(x => x), backward[i].StayHours.OrderBy(x => x));
+            Assert.Equal(forward[i].StayHours, backward[i].StayHours);
             Assert.Equal(forward[i].Routes, backward[i].Routes);
-            Assert.Equal(forward[i].EntryHours.OrderBy(x => x), backward[i].EntryHours.OrderBy(x => x));
+            Assert.Equal(forward[i].EntryHours, backward[i].EntryHours);
         }
+    }
+
+    private static string Csv(IEnumerable<string> rows) => "patient,unit,arrived,started,left\n" + string.Join("\n", rows) + "\n";
+
+    private static List<UnitObservations> Observations(IEnumerable<string> rows)
+    {
+        var (log, diagnostics) = MovementLogReader.Read(Csv(rows), "log.csv", Window);
+        Assert.DoesNotContain(diagnostics, d => d.IsError);
+        return [.. UnitObservationsBuilder.FromLog(log!)];
     }
 }

@@ -53,6 +53,15 @@ internal static class OptionTable
         ["--precision"] = OptionKind.Fraction,
         ["--max-replications"] = OptionKind.WholeNumber,
         ["--allow-long"] = OptionKind.Flag,
+        ["--extract-start"] = OptionKind.Text,
+        ["--extract-end"] = OptionKind.Text,
+        ["--time-zone"] = OptionKind.Text,
+        ["--new-journey-after"] = OptionKind.Duration,
+        ["--ignore-case"] = OptionKind.Flag,
+        ["--strict"] = OptionKind.Flag,
+        ["--unit-map"] = OptionKind.Text,
+        ["fit --report"] = OptionKind.OutputPath,
+        ["fit --servers"] = OptionKind.Text,
     };
 
     /// <summary>Each command's options (help left out), as the command tree declares them.</summary>
