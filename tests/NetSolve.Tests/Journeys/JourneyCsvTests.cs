@@ -52,53 +52,41 @@ public sealed class JourneyCsvTests
     [Fact]
     public void A_journey_label_that_starts_a_formula_is_neutralised_in_the_csv()
     {
-        string file = Path.Combine(Path.GetTempPath(), "netsolve-journey-csv-" + Guid.NewGuid().ToString("N") + ".yaml");
-        File.WriteAllText(file, "units:\n  triage: { servers: 2, service: 20min }\narrivals:\n  triage: 3\njourneys:\n  stay: { label: \"=1+2\", units: [triage], over: [1h] }\n");
-        try
-        {
-            var (code, output, _) = CliRun.Run("solve", file, "--format", "csv");
+        var (code, output, _) = SolveFile("units:\n  triage: { servers: 2, service: 20min }\narrivals:\n  triage: 3\njourneys:\n  stay: { label: \"=1+2\", units: [triage], over: [1h] }\n", "--format", "csv");
 
-            Assert.Equal(0, code);
-            Assert.DoesNotContain(",=1+2,", output, StringComparison.Ordinal);
-            Assert.Contains("'=1+2", output, StringComparison.Ordinal);
-        }
-        finally
-        {
-            File.Delete(file);
-        }
+        Assert.Equal(0, code);
+        Assert.DoesNotContain(",=1+2,", output, StringComparison.Ordinal);
+        Assert.Contains("'=1+2", output, StringComparison.Ordinal);
     }
 
     [Fact]
     public void A_bare_number_in_a_journey_over_list_is_a_warning_at_the_value()
     {
-        string file = Path.Combine(Path.GetTempPath(), "netsolve-journey-bare-" + Guid.NewGuid().ToString("N") + ".yaml");
-        File.WriteAllText(file, "time_unit: minute\nunits:\n  triage: { servers: 2, service: 20min }\narrivals:\n  triage: 3/h\njourneys:\n  stay: { units: [triage], over: [1h, 240] }\n");
-        try
-        {
-            var (code, _, error) = CliRun.Run("solve", file);
+        var (code, _, error) = SolveFile("time_unit: minute\nunits:\n  triage: { servers: 2, service: 20min }\narrivals:\n  triage: 3/h\njourneys:\n  stay: { units: [triage], over: [1h, 240] }\n");
 
-            Assert.Equal(0, code);
-            Assert.Contains(":7:39: warning: journey 'stay': over '240' has no unit of time, so it was read as 240 minutes (the file's time_unit is minute); write e.g. 240min or 240h to say which", error, StringComparison.Ordinal);
-            Assert.DoesNotContain("'1h'", error, StringComparison.Ordinal);
-        }
-        finally
-        {
-            File.Delete(file);
-        }
+        Assert.Equal(0, code);
+        Assert.Contains(":7:39: warning: journey 'stay': over '240' has no unit of time, so it was read as 240 minutes (the file's time_unit is minute); write e.g. 240min or 240h to say which", error, StringComparison.Ordinal);
+        Assert.DoesNotContain("'1h'", error, StringComparison.Ordinal);
     }
 
     [Fact]
     public void A_group_route_to_an_unknown_unit_names_the_group()
     {
-        string file = Path.Combine(Path.GetTempPath(), "netsolve-group-route-" + Guid.NewGuid().ToString("N") + ".yaml");
-        File.WriteAllText(file, "units:\n  a: { servers: 2, service: 20min }\narrivals:\n  a: 1\ngroups:\n  walk_in:\n    arrivals:\n      a: 1\n    routes:\n      a:\n        zz: 50%\n");
+        var (code, _, error) = SolveFile("units:\n  a: { servers: 2, service: 20min }\narrivals:\n  a: 1\ngroups:\n  walk_in:\n    arrivals:\n      a: 1\n    routes:\n      a:\n        zz: 50%\n");
+
+        Assert.Equal(1, code);
+        Assert.Contains(":11:9: group 'walk_in': routes.a: unknown unit 'zz'", error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", error, StringComparison.Ordinal);
+    }
+
+    /// <summary>Runs <c>solve</c> on <paramref name="yaml"/> written to a file of its own, deleted afterwards.</summary>
+    private static CliResult SolveFile(string yaml, params string[] options)
+    {
+        string file = Path.Combine(Path.GetTempPath(), "netsolve-journey-csv-" + Guid.NewGuid().ToString("N") + ".yaml");
+        File.WriteAllText(file, yaml);
         try
         {
-            var (code, _, error) = CliRun.Run("solve", file);
-
-            Assert.Equal(1, code);
-            Assert.Contains(":11:9: group 'walk_in': routes.a: unknown unit 'zz'", error, StringComparison.Ordinal);
-            Assert.DoesNotContain("   at ", error, StringComparison.Ordinal);
+            return CliRun.Run(["solve", file, .. options]);
         }
         finally
         {
