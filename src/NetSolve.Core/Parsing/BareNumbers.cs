@@ -22,7 +22,10 @@ public static class BareNumbers
             && NumberText.IsNumber(number, out amount) && amount > 0.0;
     }
 
-    /// <summary>Adds one warning per bare service number under <c>units</c> and under each group's <c>services</c>.</summary>
+    /// <summary>
+    /// Adds one warning per bare service number under <c>units</c> and under each group's <c>services</c>, and per bare
+    /// time in a journey's <c>over</c> list (<c>over: [4]</c> in a file in minutes asks about 4 minutes, not 4 hours).
+    /// </summary>
     internal static void Check(YamlNode root, TimeUnit timeUnit, List<Diagnostic> diagnostics)
     {
         if (root is not YamlMapping top)
@@ -42,22 +45,38 @@ public static class BareNumbers
                 Warn(Child(service, "service"), unitKey.Value, groupKey.Value, timeUnit, diagnostics);
             }
         }
+
+        foreach (var (journeyId, journey) in Entries(Child(top, "journeys")))
+        {
+            var times = Child(journey, "over") is YamlSequence over ? over.Items : [];
+            foreach (var time in times.OfType<YamlScalar>().Where(time => IsBare(time.Value, out _)))
+            {
+                diagnostics.Add(new Diagnostic(DiagnosticSeverity.Warning, DiagnosticCodes.BareNumber, time.Location,
+                    string.Concat("journey '", journeyId, "'"), NoUnitOfTime("over", time.Value, timeUnit)));
+            }
+        }
     }
 
     private static void Warn(YamlNode? node, string unitId, string? groupId, TimeUnit timeUnit, List<Diagnostic> diagnostics)
     {
-        if (node is not YamlScalar scalar || !IsBare(scalar.Value, out double amount))
+        if (node is not YamlScalar scalar || !IsBare(scalar.Value, out _))
         {
             return;
         }
 
-        string number = scalar.Value.Trim();
-
-        string unitName = TimeConstants.Name(timeUnit);
         string where = groupId is null ? "service" : string.Concat("service of group '", groupId, "'");
-        diagnostics.Add(Diagnostic.Warning(DiagnosticCodes.BareNumber, scalar.Location, unitId, string.Create(
+        diagnostics.Add(Diagnostic.Warning(DiagnosticCodes.BareNumber, scalar.Location, unitId, NoUnitOfTime(where, scalar.Value, timeUnit)));
+    }
+
+    /// <summary>The warning's words: what was bare, how it was read and how to say which unit was meant.</summary>
+    private static string NoUnitOfTime(string where, string text, TimeUnit timeUnit)
+    {
+        IsBare(text, out double amount);
+        string number = text.Trim();
+        string unitName = TimeConstants.Name(timeUnit);
+        return string.Create(
             CultureInfo.InvariantCulture,
-            $"{where} '{scalar.Value}' has no unit of time, so it was read as {amount:0.###} {unitName}s (the file's time_unit is {unitName}); write e.g. {number}min or {number}h to say which")));
+            $"{where} '{text}' has no unit of time, so it was read as {amount:0.###} {unitName}s (the file's time_unit is {unitName}); write e.g. {number}min or {number}h to say which");
     }
 
     /// <summary>The first value under <paramref name="key"/>; a plain loop, as it runs once per unit.</summary>

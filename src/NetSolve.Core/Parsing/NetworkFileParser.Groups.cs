@@ -58,7 +58,7 @@ internal sealed partial class NetworkFileParser
         {
             // The top-level routes' locations serve later rules; a group's routes must not replace them.
             var topLevel = new Dictionary<string, SourceLocation>(_routeLocations, StringComparer.Ordinal);
-            routes = ParseRoutes(routesNode, known);
+            routes = ParseRoutes(routesNode, known, id);
             _routeLocations.Clear();
             foreach (var (unit, at) in topLevel)
             {

@@ -178,8 +178,12 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         return arrivals.ToImmutable();
     }
 
-    private ImmutableArray<Route> ParseRoutes(YamlNode node, HashSet<string> known)
+    /// <param name="node">The <c>routes</c> mapping.</param>
+    /// <param name="known">The unit ids.</param>
+    /// <param name="groupId">The patient group whose routes these are, named in an unknown unit's message; null for the top level.</param>
+    private ImmutableArray<Route> ParseRoutes(YamlNode node, HashSet<string> known, string? groupId = null)
     {
+        string where = groupId is null ? "routes" : string.Concat("group '", groupId, "': routes");
         var routes = ImmutableArray.CreateBuilder<Route>();
         if (node is YamlScalar { IsNull: true } || Mapping(node, null, "routes") is not YamlMapping mapping)
         {
@@ -189,7 +193,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         foreach (var (sourceKey, targets) in UniqueEntries(mapping, null))
         {
             string from = sourceKey.Value;
-            if (!KnownUnit(sourceKey, known, "routes"))
+            if (!KnownUnit(sourceKey, known, where))
             {
                 continue;
             }
@@ -204,7 +208,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             foreach (var (targetKey, value) in UniqueEntries(targetMap, from))
             {
                 // The names in messages are built only on error: a 100,000-unit file has hundreds of thousands of routes.
-                if (KnownUnit(targetKey, known, "routes", from, from)
+                if (KnownUnit(targetKey, known, where, groupId is null ? from : null, from)
                     && Value(value, from, FieldLabels.RouteTo, ProbabilityValue.Parse, targetKey.Value) is double probability)
                 {
                     routes.Add(new Route(from, targetKey.Value, probability));

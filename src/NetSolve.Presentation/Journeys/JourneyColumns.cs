@@ -45,6 +45,21 @@ public static class JourneyColumns
         return [Journey, Label, .. patients, Rate, MeanTime, .. percentiles, Over];
     }
 
+    /// <summary>
+    /// The journey figures of the per-unit CSV (<see cref="JourneyCsvRows"/>): <c>patients</c>, then the figures under
+    /// the <c>journey_</c> prefix, then one <c>journey_over_Th</c> share per time any journey gives (empty for a journey
+    /// without that time, or without figures).
+    /// </summary>
+    public static ImmutableArray<Column<JourneyEstimate>> ForCsv(IReadOnlyList<JourneyEstimate> rows)
+    {
+        ArgumentNullException.ThrowIfNull(rows);
+        var figures = For(rows).Where(column => column.Audience != Audience.People && column != Journey && column != Label);
+        var over = JourneyCsvRows.OverTimes(rows.Select(row => row.Over.Select(share => share.Hours))).Select(hours =>
+            Columns.Number<JourneyEstimate>(JourneyCsvRows.OverId(hours), JourneyCsvRows.OverId(hours), MetricDimension.Probability,
+                row => row.Over.FirstOrDefault(share => share.Hours.Equals(hours))?.Probability, Audience.Machines));
+        return [Patients with { Audience = Audience.Machines }, .. figures.Select(JourneyCsvRows.Prefixed), .. over];
+    }
+
     /// <summary>The journey table of <paramref name="rows"/>.</summary>
     public static ResultTable Table(IReadOnlyList<JourneyEstimate> rows, TimeUnit timeUnit) => ResultTable.Build(For(rows), rows, timeUnit);
 

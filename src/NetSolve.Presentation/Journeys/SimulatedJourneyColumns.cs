@@ -57,8 +57,30 @@ public static class SimulatedJourneyColumns
         return [Journey, .. patients, .. metrics.Select(metric => metric.ForPeople), Over];
     }
 
+    /// <summary>
+    /// The journey figures of the per-unit CSV (<see cref="JourneyCsvRows"/>): <c>patients</c>, then the figures under
+    /// the <c>journey_</c> prefix, each followed by its <c>_ci</c>, then per time any journey gives
+    /// <c>journey_over_Th</c>, <c>journey_over_Th_ci</c> and <c>journey_over_Th_upper_bound</c> (the rule-of-three
+    /// bound when no journey was longer), empty for a journey without that time.
+    /// </summary>
+    public static ImmutableArray<Column<SimulatedJourney>> ForCsv(IReadOnlyList<SimulatedJourney> rows)
+    {
+        ArgumentNullException.ThrowIfNull(rows);
+        var figures = For(rows, Audience.Machines).Where(column => column != Journey && column != Label);
+        var over = JourneyCsvRows.OverTimes(rows.Select(row => row.Over.Select(share => share.WaitHours))).SelectMany(hours => OverForCsv(hours));
+        return [Patients with { Audience = Audience.Machines }, .. figures.Select(JourneyCsvRows.Prefixed), .. over];
+    }
+
     /// <summary>The journey table of <paramref name="rows"/> for <paramref name="audience"/>.</summary>
     public static ResultTable Table(IReadOnlyList<SimulatedJourney> rows, TimeUnit timeUnit, Audience audience) => ResultTable.Build(For(rows, audience), rows, timeUnit);
+
+    private static IEnumerable<Column<SimulatedJourney>> OverForCsv(double hours)
+    {
+        string id = JourneyCsvRows.OverId(hours);
+        WaitOverEstimate? At(SimulatedJourney row) => row.Over.FirstOrDefault(share => share.WaitHours.Equals(hours));
+        var share = new EstimateMetric<SimulatedJourney>(id, id, MetricDimension.Probability, row => At(row)?.Probability);
+        return [.. share.ForMachines, Columns.Number<SimulatedJourney>(id + "_upper_bound", id, MetricDimension.Probability, row => At(row)?.UpperBound, Audience.Machines)];
+    }
 
     private static string OverWords(SimulatedJourney row) => row.MeanHours is null
         ? PeopleFormat.Missing

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using NetSolve.Model;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Presentation.Metrics;
 using NetSolve.Simulation;
 
@@ -13,13 +14,17 @@ public static class SimulationCsvWriter
     /// Writes the header and one row per unit, columns from <see cref="SimulatedUnitColumns.ForCsvOf"/> (the mean queue
     /// by hour of day, <c>mean_queue_h00</c> to <c>mean_queue_h23</c>), then how the run was made (<see cref="RunColumns"/>),
     /// the same on every row so each stands on its own; times in the network's time unit.
+    /// With journeys, their rows follow the units' (<see cref="JourneyCsvRows"/>).
     /// </summary>
     public static void Write(SimulationResult result, TextWriter output)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(output);
         var columns = SimulatedUnitColumns.ForCsvOf(result).AddRange(RunColumns(result));
-        CsvTableWriter.Write(ResultTable.Build(columns, SimulatedUnitRow.Of(result), result.Network.TimeUnit), output);
+        var units = ResultTable.Build(columns, SimulatedUnitRow.Of(result), result.Network.TimeUnit);
+        var journeys = result.Journeys.IsDefault ? [] : result.Journeys;
+        var table = JourneyCsvRows.Append(units, journeys, row => row.Journey.Id, row => row.Journey.Label, SimulatedJourneyColumns.ForCsv(journeys));
+        CsvTableWriter.Write(table, output);
     }
 
     /// <summary>

@@ -1,4 +1,6 @@
+using NetSolve.Analysis;
 using NetSolve.Presentation.Formats;
+using NetSolve.Presentation.Journeys;
 using NetSolve.Solving;
 
 namespace NetSolve.Presentation.Solution;
@@ -7,5 +9,12 @@ namespace NetSolve.Presentation.Solution;
 public static class SolutionCsvWriter
 {
     /// <summary>Writes <paramref name="solution"/> to <paramref name="output"/>; empty cells stand for null.</summary>
-    public static void Write(NetworkSolution solution, TextWriter output) => CsvTableWriter.Write(UnitColumns.Table(solution), output);
+    /// <remarks>With journeys, their rows follow the units' (<see cref="JourneyCsvRows"/>).</remarks>
+    public static void Write(NetworkSolution solution, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        var journeys = JourneyFormula.Estimate(solution);
+        var table = JourneyCsvRows.Append(UnitColumns.Table(solution), journeys, row => row.Journey.Id, row => row.Journey.Label, JourneyColumns.ForCsv(journeys));
+        CsvTableWriter.Write(table, output);
+    }
 }
