@@ -252,7 +252,7 @@ internal static class Messages
     /// <summary><c>fit</c>: the comment heading the network file written, one line each.</summary>
     public static string[] FittedHeader(string log, int patients, int stays, double window, string timeUnitName) =>
     [
-        Invariant($"Estimated by netsolve fit from {Q(log)}: {patients} patients, {stays} stays,"),
+        Invariant($"Estimated by netsolve fit from {Q(log)}: {patients} {(patients == 1 ? "patient" : "patients")}, {stays} {(stays == 1 ? "stay" : "stays")},"),
         Invariant($"arrivals over {window:0.##} {timeUnitName}s. Servers are the most patients seen in service at once:"),
         "check them against the roster before planning with this file.",
     ];

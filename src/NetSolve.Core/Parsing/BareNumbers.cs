@@ -52,7 +52,7 @@ public static class BareNumbers
             foreach (var time in times.OfType<YamlScalar>().Where(time => IsBare(time.Value, out _)))
             {
                 diagnostics.Add(new Diagnostic(DiagnosticSeverity.Warning, DiagnosticCodes.BareNumber, time.Location,
-                    string.Concat("journey '", journeyId, "'"), NoUnitOfTime("over", time.Value, timeUnit)));
+                    string.Concat("journey '", journeyId.Value, "'"), NoUnitOfTime("over", time.Value, timeUnit)));
             }
         }
     }

@@ -12,15 +12,15 @@ public sealed record FitWarning(FitWarningKind Kind, string UnitId, string Messa
 
     /// <summary>Fewer stays than <see cref="EvidenceThresholds.MinStays"/>.</summary>
     public static FitWarning FewStays(string unitId, int stays) => new(FitWarningKind.FewStays, unitId,
-        string.Create(Invariant, $"unit '{unitId}': only {stays} stays (fewer than {EvidenceThresholds.MinStays}); its mean stay and distribution are rough"));
+        string.Create(Invariant, $"unit '{unitId}': only {Counted(stays, "stay", "stays")} (fewer than {EvidenceThresholds.MinStays}); its mean stay and distribution are rough"));
 
     /// <summary>No stay ended inside the extract.</summary>
     public static FitWarning NoStayEnded(string unitId, int stays) => new(FitWarningKind.NoStayEnded, unitId,
-        string.Create(Invariant, $"unit '{unitId}': none of its {stays} stays ended inside the extract, so its mean stay cannot be estimated; use a longer extract"));
+        string.Create(Invariant, $"unit '{unitId}': {(stays == 1 ? "its only stay" : string.Create(Invariant, $"none of its {stays} stays"))} ended inside the extract, so its mean stay cannot be estimated; use a longer extract"));
 
     /// <summary>A route seen fewer than <see cref="EvidenceThresholds.MinRouteTransitions"/> times.</summary>
     public static FitWarning ThinRoute(string unitId, string toUnitId, int count) => new(FitWarningKind.ThinRoute, unitId,
-        string.Create(Invariant, $"unit '{unitId}': the route to '{toUnitId}' was seen only {count} times (fewer than {EvidenceThresholds.MinRouteTransitions}); its fraction is rough"));
+        string.Create(Invariant, $"unit '{unitId}': the route to '{toUnitId}' was seen only {Counted(count, "time", "times")} (fewer than {EvidenceThresholds.MinRouteTransitions}); its fraction is rough"));
 
     /// <summary>The load's interval reaches the servers.</summary>
     public static FitWarning LoadMayReachServers(string unitId, int servers, Interval load) => new(FitWarningKind.LoadMayReachServers, unitId,
@@ -29,4 +29,8 @@ public sealed record FitWarning(FitWarningKind Kind, string UnitId, string Messa
     /// <summary>No patient waited, so the servers are a lower bound.</summary>
     public static FitWarning NeverQueued(string unitId, int servers) => new(FitWarningKind.NeverQueued, unitId,
         string.Create(Invariant, $"unit '{unitId}': never queued: at least {servers} servers; the count seen in use is not its capacity, give the roster"));
+
+    /// <summary>A count with its noun in the right number: "1 stay", "2 stays".</summary>
+    private static string Counted(int count, string one, string many) =>
+        string.Create(Invariant, $"{count} {(count == 1 ? one : many)}");
 }
