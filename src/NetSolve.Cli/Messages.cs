@@ -115,7 +115,7 @@ internal static class Messages
 
     /// <summary><c>check</c>: the file is valid.</summary>
     public static string Valid(string path, int units, int arrivals, int routes) =>
-        Invariant($"{Q(path)}: valid: {units} units, {arrivals} arrival streams, {routes} routes");
+        Invariant($"{Q(path)}: valid: {Counted(units, "unit", "units")}, {Counted(arrivals, "arrival stream", "arrival streams")}, {Counted(routes, "route", "routes")}");
 
     /// <summary>The name of a network changed by <c>--set</c>: results say they are what-if numbers.</summary>
     public static string WhatIfName(string network, IEnumerable<string> changes) => $"{network} (what-if: {string.Join(", ", changes)})";
@@ -247,6 +247,9 @@ internal static class Messages
     public static string NetworkWritten(string target) => $"network file written to {Q(target)}";
 
     /// <summary><c>fit</c>: the movement log cannot be fitted.</summary>
+    /// <summary>A count with its noun in the right number: "1 route", "5 routes".</summary>
+    private static string Counted(int count, string one, string many) => Invariant($"{count} {(count == 1 ? one : many)}");
+
     public static string FitProblem(string path, string problem) => $"{Q(path)}: {Q(problem)}";
 
     /// <summary><c>fit</c>: the comment heading the network file written, one line each.</summary>

@@ -65,7 +65,7 @@ public sealed class PlausibilityWarningTests
             var (code, output, error) = Run("check", path);
 
             Assert.Equal(0, code);
-            Assert.Equal(string.Concat(path, ": valid: 3 units, 1 arrival streams, 3 routes\n"), output);
+            Assert.Equal(string.Concat(path, ": valid: 3 units, 1 arrival stream, 3 routes\n"), output);
             string line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries));
             Assert.StartsWith(string.Concat(path, ": warning: unit 'emergency': patients come back to this unit (emergency -> imaging -> emergency: 50% of those leaving it)"), line, StringComparison.Ordinal);
             Assert.Contains("visits it 2 times on average", line, StringComparison.Ordinal);

@@ -134,7 +134,7 @@ public partial class NetSolveAppTests
         var (exitCode, output, error) = Run("check", path);
 
         Assert.Equal(0, exitCode);
-        Assert.Equal($"{path}: valid: 4 units, 1 arrival streams, 2 routes\n", output);
+        Assert.Equal($"{path}: valid: 4 units, 1 arrival stream, 2 routes\n", output);
         Assert.Equal(3, error.Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
         Assert.Contains($"{path}:5:3: warning: unit 'archive': no patient reaches this unit", error, StringComparison.Ordinal);
     }
