@@ -1,11 +1,13 @@
 using System.Globalization;
+using NetSolve.Cli.Settings;
 using NetSolve.Fitting;
 
 namespace NetSolve.Cli.Commands;
 
 /// <summary>
 /// <c>fit --servers UNIT=N</c>: servers from the roster or bed count, by unit id or by the name the log uses. A unit
-/// the log does not have, or a count that is not a whole number of at least 1, is an <see cref="InputException"/>.
+/// the log does not have is an <see cref="InputException"/> (exit 1, as for <c>staff --only</c>); an entry that is not
+/// UNIT=N with a whole number of at least 1 is a <see cref="UsageException"/> (exit 2).
 /// </summary>
 internal static class FitRoster
 {
@@ -18,7 +20,7 @@ internal static class FitRoster
             string name = equals < 0 ? entry : entry[..equals].Trim();
             if (equals < 0 || !int.TryParse(entry.AsSpan(equals + 1), NumberStyles.None, CultureInfo.InvariantCulture, out int servers) || servers < 1)
             {
-                throw new InputException(Messages.FitServersNotCount(entry));
+                throw new UsageException(Messages.FitServersNotCount(entry));
             }
 
             var unit = log.Units.FirstOrDefault(unit => string.Equals(unit.Id, name, StringComparison.Ordinal) || string.Equals(unit.Label, name, StringComparison.Ordinal))
