@@ -8,4 +8,14 @@ public static class Caution
         "Caution: these are planning estimates under stated assumptions (steady state; each unit's method, exact for "
         + "Poisson arrivals and exponential service and approximate otherwise; independent routing; first come first served). Decisions on beds and staffing follow local clinical "
         + "governance and safe-staffing rules.";
+
+    /// <summary>
+    /// The caution under an hour-by-hour result (a roster): it claims no steady state, since each hour comes from the
+    /// time-varying queue over a repeating day.
+    /// </summary>
+    public const string HourByHour =
+        "Caution: these are planning estimates under stated assumptions (arrival rates varying by hour of day as the file's "
+        + "profile gives, the same every day; each hour from the time-varying queue, exact for Poisson arrivals and exponential "
+        + "service and approximate otherwise; independent routing; first come first served). Decisions on beds and staffing "
+        + "follow local clinical governance and safe-staffing rules.";
 }

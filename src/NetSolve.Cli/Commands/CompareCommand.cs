@@ -2,6 +2,7 @@ using System.CommandLine;
 using NetSolve.Analysis;
 using NetSolve.Cli.Output;
 using NetSolve.Cli.Settings;
+using NetSolve.Presentation;
 using NetSolve.Presentation.Scenarios;
 using NetSolve.Solving;
 
@@ -54,7 +55,7 @@ internal static class CompareCommand
             }
 
             var result = NetworkComparison.Compare(baseScenario.Name, NetworkSolver.Solve(baseScenario.Network, threshold), compared);
-            new ResultOutput(context.Out, CommonOptions.FormatOf(parse.GetValue(format)), withCaution: true).Write(
+            new ResultOutput(context.Out, CommonOptions.FormatOf(parse.GetValue(format)), Caution.Text).Write(
                 json => ComparisonOutput.WriteJson(result, json),
                 csv => ComparisonOutput.WriteCsv(result, csv),
                 table => ComparisonOutput.WriteTable(result, table));

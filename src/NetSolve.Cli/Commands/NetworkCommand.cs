@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.CommandLine.Parsing;
 using NetSolve.Cli.Output;
 using NetSolve.Cli.Settings;
+using NetSolve.Presentation;
 using NetSolve.Solving;
 
 namespace NetSolve.Cli.Commands;
@@ -55,7 +56,7 @@ internal abstract class NetworkCommand(string name, string description)
             string path = parse.GetValue(file)!;
             var warnings = new WarningLog(context);
             var loaded = NetworkLoader.Read(path, warnings, parse.GetValue(set), ForSimulation);
-            var output = new ResultOutput(context.Out, format is null ? OutputFormat.Table : CommonOptions.FormatOf(parse.GetValue(format)), TableCarriesCaution, loaded.Changes);
+            var output = new ResultOutput(context.Out, format is null ? OutputFormat.Table : CommonOptions.FormatOf(parse.GetValue(format)), TableCarriesCaution ? Caution.Text : null, loaded.Changes);
             double threshold = strain is null ? Defaults.StrainThreshold : parse.GetValue(strain);
             return Execute(new NetworkRequest(path, loaded.Network, threshold, output, context, warnings, parse) { Changes = loaded.Changes });
         });

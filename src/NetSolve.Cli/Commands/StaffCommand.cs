@@ -4,6 +4,7 @@ using System.Text;
 using NetSolve.Analysis;
 using NetSolve.Diagnostics;
 using NetSolve.Model;
+using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
 using NetSolve.Presentation.Staffing;
 using NetSolve.Cli.Settings;
@@ -274,7 +275,7 @@ internal sealed class StaffCommand() : NetworkCommand(
             AtomicFile.Write(chartPath, stream => stream.Write(chart));
         }
 
-        request.Output.Write(
+        request.Output.WithCaution(Caution.HourByHour).Write(
             json => HourlyStaffingOutput.WriteJson(plan, network.Name, network.TimeUnit, json),
             csv => HourlyStaffingOutput.WriteCsv(plan, network.TimeUnit, csv),
             table => HourlyStaffingOutput.WriteTable(plan, network.Name, network.TimeUnit, table));

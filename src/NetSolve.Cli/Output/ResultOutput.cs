@@ -11,15 +11,18 @@ namespace NetSolve.Cli.Output;
 /// </summary>
 /// <param name="output">Stdout.</param>
 /// <param name="format">The format asked for.</param>
-/// <param name="withCaution">True when the table ends with <see cref="Caution.Text"/>; JSON and CSV never carry it.</param>
+/// <param name="caution">The caution the table ends with (<see cref="Caution.Text"/> for advice from the steady-state formulas), or null; JSON and CSV never carry it.</param>
 /// <param name="changes">
 /// What a scenario file or <c>--set</c> changed, listed under the table's title and in the JSON's <c>changes</c>
 /// array (<see cref="ChangesHeader"/>); CSV rows stay plain data. Null or empty leaves every output as it was.
 /// </param>
-internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool withCaution, IReadOnlyList<string>? changes = null)
+internal sealed class ResultOutput(TextWriter output, OutputFormat format, string? caution, IReadOnlyList<string>? changes = null)
 {
     /// <summary>The format asked for.</summary>
     public OutputFormat Format => format;
+
+    /// <summary>The same output with another caution under the table, for a result that rests on other assumptions (an hour-by-hour roster).</summary>
+    public ResultOutput WithCaution(string otherCaution) => new(output, format, otherCaution, changes);
 
     /// <summary>Writes the result with the writer for <see cref="Format"/>.</summary>
     /// <param name="json">Writes the JSON document (UTF-8); a line break follows it.</param>
@@ -55,9 +58,9 @@ internal sealed class ResultOutput(TextWriter output, OutputFormat format, bool 
     {
         using var sink = new TableSink(output, changes is { Count: > 0 } ? ChangesHeader.Line(changes) : null) { NewLine = output.NewLine };
         table(sink);
-        if (withCaution)
+        if (caution is not null)
         {
-            sink.Write("\n" + Caution.Text + "\n");
+            sink.Write("\n" + caution + "\n");
         }
 
         sink.Finish();
