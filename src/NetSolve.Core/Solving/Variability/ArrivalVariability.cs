@@ -31,6 +31,10 @@ namespace NetSolve.Solving;
 /// taken as 1: departures are then the service completions, with SCV x_i. A unit with no inflow gets ca² = cd² = 1.
 /// Results are clamped to [0, <see cref="MaxScv"/>]; they are never NaN. Thread-safe: no shared state.
 /// </para>
+/// <para>
+/// <see cref="ArrivalVariabilityMethod.VariabilityFunctions"/> solves the same equations once more per unit, at that
+/// unit's time scale (<see cref="VariabilityFunctions"/>); an option, measured in docs/methods.md, not the default.
+/// </para>
 /// </remarks>
 public static class ArrivalVariability
 {
