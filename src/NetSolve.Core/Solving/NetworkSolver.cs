@@ -10,8 +10,9 @@ namespace NetSolve.Solving;
 /// </summary>
 public static class NetworkSolver
 {
-    /// <summary>Solves <paramref name="network"/> with the given strain threshold.</summary>
-    public static NetworkSolution Solve(Network network, double strainThreshold = Defaults.StrainThreshold)
+    /// <summary>Solves <paramref name="network"/> with the given strain threshold and method for the arrival variability.</summary>
+    public static NetworkSolution Solve(Network network, double strainThreshold = Defaults.StrainThreshold,
+        ArrivalVariabilityMethod variability = ArrivalVariabilityMethod.Decomposition)
     {
         ArgumentNullException.ThrowIfNull(network);
         var traffic = network.Groups.IsEmpty ? null : GroupTraffic.Solve(network);
@@ -20,7 +21,7 @@ public static class NetworkSolver
         double[] flows = capacity is not null
             ? [.. capacity.Units.Select(unit => unit.OfferedPerHour)]
             : traffic is null ? TrafficEquations.Solve(RoutingTable.Build(network)) : [.. traffic.FlowsPerHour];
-        var solution = Build(network, flows, inputs, strainThreshold, capacity);
+        var solution = Build(network, flows, inputs, strainThreshold, capacity, variability);
         return traffic is null ? solution : solution with { Groups = GroupResults.Build(traffic, solution.Units, capacity?.OfferedByGroup) };
     }
 
@@ -38,11 +39,11 @@ public static class NetworkSolver
     }
 
     private static NetworkSolution Build(Network network, IReadOnlyList<double> flowsPerHour, SolverInputs inputs, double strainThreshold,
-        CapacityFlowSolution? capacityFlows = null)
+        CapacityFlowSolution? capacityFlows = null, ArrivalVariabilityMethod variability = ArrivalVariabilityMethod.Decomposition)
     {
         int n = network.Units.Length;
         double external = network.AllExternalArrivalsPerHour;
-        double[] arrivalScv = ArrivalScv(network, flowsPerHour, inputs);
+        double[] arrivalScv = ArrivalScv(network, flowsPerHour, inputs, variability);
         var units = new UnitResult[n];
         for (int i = 0; i < n; i++)
         {
@@ -69,7 +70,7 @@ public static class NetworkSolver
     }
 
     /// <summary>Each unit's arrival SCV: exactly 1 for a Jackson network, else the two-moment system (docs/methods.md).</summary>
-    private static double[] ArrivalScv(Network network, IReadOnlyList<double> flowsPerHour, SolverInputs inputs)
+    private static double[] ArrivalScv(Network network, IReadOnlyList<double> flowsPerHour, SolverInputs inputs, ArrivalVariabilityMethod variability)
     {
         int n = network.Units.Length;
         if (inputs.IsJackson)
@@ -90,7 +91,7 @@ public static class NetworkSolver
             };
         }
 
-        return [.. ArrivalVariability.Solve(units, inputs.Routes).ArrivalScv];
+        return [.. ArrivalVariability.Solve(units, inputs.Routes, variability).ArrivalScv];
     }
 
     /// <summary>With unlimited servers every patient present is in service: a loss system of as many servers as beds.</summary>

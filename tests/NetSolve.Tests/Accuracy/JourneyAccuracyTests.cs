@@ -2,10 +2,8 @@ using System.Globalization;
 using System.Text;
 using NetSolve.Analysis;
 using NetSolve.Model;
-using NetSolve.Parsing;
 using NetSolve.Simulation;
 using NetSolve.Solving;
-using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Accuracy;
 
@@ -21,20 +19,14 @@ public sealed class JourneyAccuracyTests
     /// <summary>The share of journeys whose formula mean must be within 10% of the simulated mean: measured 25 of 25 (docs/methods.md, "Journeys").</summary>
     private const double MeanWithinTenPercent = 1.0;
 
-    private const int GeneratedNetworks = 20;
-
     private static readonly SimulationOptions Run = new() { Seed = 2026, Replications = 10, WarmupHours = 2_000, DurationHours = 20_000 };
-
-    private static readonly string[] Bundled = ["harbourside", "kestrel-general", "millbrook-clinic", "fenwick-winter-surge", "larkspur-simulation"];
 
     // Source: the project's simulator (seed 2026, 10 replications of 20,000 h after 2,000 h), which measures each
     // patient's journey exactly, against the phase-type formula.
     [Fact(Explicit = true)]
     public void The_journey_formula_is_close_to_the_simulated_journey_times()
     {
-        var networks = Bundled
-            .Select(name => (Name: name, Network: AccuracyNetworks.Steady(NetworkReader.ReadFile(TestFiles.Network(name)).Network!)))
-            .Concat(Enumerable.Range(1, GeneratedNetworks).Select(seed => (Name: "generated-" + seed.ToString(CultureInfo.InvariantCulture), Network: AccuracyNetworks.Generate(seed))))
+        var networks = AccuracyStudy.Networks()
             .Select(pair => (pair.Name, Network: WithJourney(pair.Network)))
             .Where(pair => pair.Network is not null)
             .ToList();
@@ -52,7 +44,7 @@ public sealed class JourneyAccuracyTests
                 double p90Error = (f.Percentiles[1].Hours / s.Percentiles[1].Hours!.Value.Mean) - 1.0;
                 counted++;
                 within += Math.Abs(meanError) <= 0.10 ? 1 : 0;
-                rows.Add(Invariant($"| {name} | {string.Join(", ", f.Journey.UnitIds)} | {s.MeanHours.Value.Mean:0.###} | {Percent(meanError)} | {s.Percentiles[1].Hours!.Value.Mean:0.###} | {Percent(p90Error)} | {Over(f, s)} |"));
+                rows.Add(AccuracyTable.Invariant($"| {name} | {string.Join(", ", f.Journey.UnitIds)} | {s.MeanHours.Value.Mean:0.###} | {Percent(meanError)} | {s.Percentiles[1].Hours!.Value.Mean:0.###} | {Percent(p90Error)} | {Over(f, s)} |"));
             }
         }
 
@@ -60,12 +52,12 @@ public sealed class JourneyAccuracyTests
             .Append("| network | journey units | simulated mean (h) | formula error | simulated p90 (h) | formula error | P(time > t): formula / simulated ± 95% |\n")
             .Append("|---|---|---|---|---|---|---|\n")
             .AppendJoin('\n', rows)
-            .Append(Invariant($"\n\n{within} of {counted} journeys have the formula mean within 10% of the simulated mean.\n"))
+            .Append(AccuracyTable.Invariant($"\n\n{within} of {counted} journeys have the formula mean within 10% of the simulated mean.\n"))
             .ToString();
         File.WriteAllText(Path.Combine(AppContext.BaseDirectory, "journey-accuracy-table.md"), table);
         TestContext.Current.TestOutputHelper?.WriteLine(table);
 
-        Assert.True(within >= MeanWithinTenPercent * counted, Invariant($"{within} of {counted} journey means within 10%"));
+        Assert.True(within >= MeanWithinTenPercent * counted, AccuracyTable.Invariant($"{within} of {counted} journey means within 10%"));
     }
 
     /// <summary>
@@ -92,9 +84,7 @@ public sealed class JourneyAccuracyTests
     }
 
     private static string Over(JourneyEstimate formula, SimulatedJourney simulated) => string.Join("; ", formula.Over.Select((over, t) =>
-        Invariant($"t = {over.Hours:0.##} h: {over.Probability:0.000} / {simulated.Over[t].Probability.Mean:0.000} ± {simulated.Over[t].Probability.HalfWidth ?? 0.0:0.000}")));
+        AccuracyTable.Invariant($"t = {over.Hours:0.##} h: {over.Probability:0.000} / {simulated.Over[t].Probability.Mean:0.000} ± {simulated.Over[t].Probability.HalfWidth ?? 0.0:0.000}")));
 
     private static string Percent(double error) => error.ToString("+0.0%;-0.0%;0.0%", CultureInfo.InvariantCulture);
-
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

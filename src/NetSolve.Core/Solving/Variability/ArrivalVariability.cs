@@ -31,6 +31,10 @@ namespace NetSolve.Solving;
 /// taken as 1: departures are then the service completions, with SCV x_i. A unit with no inflow gets ca² = cd² = 1.
 /// Results are clamped to [0, <see cref="MaxScv"/>]; they are never NaN. Thread-safe: no shared state.
 /// </para>
+/// <para>
+/// <see cref="ArrivalVariabilityMethod.VariabilityFunctions"/> solves the same equations once more per unit, at that
+/// unit's time scale (<see cref="VariabilityFunctions"/>); an option, measured in docs/methods.md, not the default.
+/// </para>
 /// </remarks>
 public static class ArrivalVariability
 {
@@ -107,13 +111,35 @@ public static class ArrivalVariability
         return Solve(units, routes);
     }
 
+    /// <summary>
+    /// As <see cref="Solve(IReadOnlyList{ArrivalVariabilityUnit}, IReadOnlyList{ArrivalVariabilityRoute})"/>, with the
+    /// arrival SCV of each unit from the chosen method (docs/methods.md, "Arrival variability through the network").
+    /// </summary>
+    /// <param name="units">One entry per unit, by position.</param>
+    /// <param name="routes">Routing fractions between units.</param>
+    /// <param name="method">The decomposition (the default) or its variability functions.</param>
+    public static ArrivalVariabilitySolution Solve(IReadOnlyList<ArrivalVariabilityUnit> units, IReadOnlyList<ArrivalVariabilityRoute> routes, ArrivalVariabilityMethod method) =>
+        Solve(units, routes, TrafficSolveMethod.Automatic, method);
+
     /// <summary>As <see cref="Solve(IReadOnlyList{ArrivalVariabilityUnit}, IReadOnlyList{ArrivalVariabilityRoute})"/> with the method forced, for tests.</summary>
-    internal static ArrivalVariabilitySolution Solve(IReadOnlyList<ArrivalVariabilityUnit> units, IReadOnlyList<ArrivalVariabilityRoute> routes, TrafficSolveMethod method)
+    internal static ArrivalVariabilitySolution Solve(IReadOnlyList<ArrivalVariabilityUnit> units, IReadOnlyList<ArrivalVariabilityRoute> routes, TrafficSolveMethod method,
+        ArrivalVariabilityMethod variability = ArrivalVariabilityMethod.Decomposition)
     {
         ArrivalVariabilityChecks.Check(units, routes);
         var system = ArrivalVariabilitySystem.Build(units, routes);
         int reached = system.IsReached.Count(value => value);
         bool dense = method == TrafficSolveMethod.Dense || (method == TrafficSolveMethod.Automatic && reached <= DenseLimit);
+        int[]? order = null;
+        int[] Order() => order ??= ArrivalVariabilityOrder.Upstream(units.Count, routes);
+        var decomposition = Results(system, Deviations(system, dense, Order), dense);
+        return variability == ArrivalVariabilityMethod.VariabilityFunctions
+            ? VariabilityFunctions.Solve(units, routes, decomposition, system => Deviations(system, dense, Order))
+            : decomposition;
+    }
+
+    /// <summary>The deviations y = ca² − 1 solving <paramref name="system"/>, its residual checked.</summary>
+    private static double[] Deviations(ArrivalVariabilitySystem system, bool dense, Func<int[]> order)
+    {
         double[] deviation;
         if (system.HasZeroConstant)
         {
@@ -126,11 +152,11 @@ public static class ArrivalVariability
         }
         else
         {
-            deviation = Sweep(system, ArrivalVariabilityOrder.Upstream(units.Count, routes)) ?? SolveSparse(system);
+            deviation = Sweep(system, order()) ?? SolveSparse(system);
         }
 
         CheckResidual(system, deviation);
-        return Results(system, deviation, dense);
+        return deviation;
     }
 
     private static ArrivalVariabilitySolution Results(ArrivalVariabilitySystem system, double[] deviation, bool dense)
@@ -140,7 +166,7 @@ public static class ArrivalVariability
         for (int i = 0; i < system.UnitCount; i++)
         {
             double y = system.IsReached[i] ? deviation[i] : 0.0;
-            double departed = system.IsReached[i] ? system.DepartureTerm[i] + ((1.0 - system.SquaredUtilisation[i]) * y) : 0.0;
+            double departed = system.IsReached[i] ? system.DepartureTerm[i] + ((1.0 - system.ServiceWeight[i]) * y) : 0.0;
             arrival.Add(Clamp(1.0 + y));
             departure.Add(Clamp(1.0 + departed));
         }
@@ -148,7 +174,8 @@ public static class ArrivalVariability
         return new ArrivalVariabilitySolution(arrival.MoveToImmutable(), departure.MoveToImmutable(), dense);
     }
 
-    private static double Clamp(double scv) => double.IsNaN(scv) ? 1.0 : Math.Clamp(scv, 0.0, MaxScv);
+    /// <summary>An SCV clamped to [0, <see cref="MaxScv"/>], 1 for NaN.</summary>
+    internal static double Clamp(double scv) => double.IsNaN(scv) ? 1.0 : Math.Clamp(scv, 0.0, MaxScv);
 
     private static double[] SolveDense(ArrivalVariabilitySystem system)
     {

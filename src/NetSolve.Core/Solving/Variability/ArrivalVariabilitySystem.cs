@@ -15,7 +15,7 @@ internal sealed class ArrivalVariabilitySystem
         Constant = new double[unitCount];
         SelfCoefficient = new double[unitCount];
         IsReached = new bool[unitCount];
-        SquaredUtilisation = new double[unitCount];
+        ServiceWeight = new double[unitCount];
         DepartureTerm = new double[unitCount];
         IncomingStart = new int[unitCount + 1];
     }
@@ -31,10 +31,13 @@ internal sealed class ArrivalVariabilitySystem
     /// <summary>True for units with a positive inflow; the others keep ca² = 1.</summary>
     public bool[] IsReached { get; }
 
-    /// <summary>ρ_i², with ρ taken as 0 for unlimited servers and capped at 1.</summary>
-    public double[] SquaredUtilisation { get; }
+    /// <summary>
+    /// The weight of a unit's service in its departures: ρ_i² (ρ taken as 0 for unlimited servers and capped at 1),
+    /// or as given by the caller (<see cref="VariabilityFunctions"/>).
+    /// </summary>
+    public double[] ServiceWeight { get; }
 
-    /// <summary>ρ_i²(x_i − 1): the service part of the departure deviation.</summary>
+    /// <summary>ω_i(x_i − 1), ω_i the <see cref="ServiceWeight"/>: the service part of the departure deviation.</summary>
     public double[] DepartureTerm { get; }
 
     /// <summary>Row starts of the incoming coefficients of each destination, length units + 1.</summary>
@@ -49,16 +52,21 @@ internal sealed class ArrivalVariabilitySystem
     public bool HasZeroConstant => Array.TrueForAll(Constant, value => value == 0.0);
 
     /// <summary>Builds the system from checked inputs (<see cref="ArrivalVariability.Solve(IReadOnlyList{ArrivalVariabilityUnit}, IReadOnlyList{ArrivalVariabilityRoute})"/> checks them).</summary>
-    public static ArrivalVariabilitySystem Build(IReadOnlyList<ArrivalVariabilityUnit> units, IReadOnlyList<ArrivalVariabilityRoute> routes)
+    /// <param name="units">The units.</param>
+    /// <param name="routes">The routes.</param>
+    /// <param name="serviceWeight">Each unit's weight of its service in its departures; null for ρ² (Whitt 1983).</param>
+    /// <param name="mergingLoad">The load at which every merged stream is weighed; null for each destination's own load (Whitt 1983).</param>
+    public static ArrivalVariabilitySystem Build(IReadOnlyList<ArrivalVariabilityUnit> units, IReadOnlyList<ArrivalVariabilityRoute> routes,
+        IReadOnlyList<double>? serviceWeight = null, double? mergingLoad = null)
     {
         int n = units.Count;
         var system = new ArrivalVariabilitySystem(n);
         for (int i = 0; i < n; i++)
         {
             var unit = units[i];
-            double rho = unit.Servers.IsUnlimited ? 0.0 : Math.Min(1.0, unit.Utilisation);
-            system.SquaredUtilisation[i] = rho * rho;
-            system.DepartureTerm[i] = rho * rho * ServiceDeviation(unit);
+            double rho = Load(unit);
+            system.ServiceWeight[i] = serviceWeight?[i] ?? rho * rho;
+            system.DepartureTerm[i] = system.ServiceWeight[i] * ServiceDeviation(unit);
         }
 
         // Inflow components of each destination: the external stream, then one stream per route into it.
@@ -102,7 +110,7 @@ internal sealed class ArrivalVariabilitySystem
         var weight = new double[n];
         for (int j = 0; j < n; j++)
         {
-            weight[j] = system.IsReached[j] ? SuperpositionWeight(units[j], sumOfSquares[j]) : 0.0;
+            weight[j] = system.IsReached[j] ? SuperpositionWeight(mergingLoad ?? Load(units[j]), sumOfSquares[j]) : 0.0;
             system.Constant[j] *= weight[j];
             system.IncomingStart[j + 1] += system.IncomingStart[j];
         }
@@ -111,15 +119,17 @@ internal sealed class ArrivalVariabilitySystem
         return system;
     }
 
+    /// <summary>ρ per server, 0 for unlimited servers, at most 1.</summary>
+    public static double Load(ArrivalVariabilityUnit unit) => unit.Servers.IsUnlimited ? 0.0 : Math.Min(1.0, unit.Utilisation);
+
     /// <summary>x_i − 1 = (cs²_i − 1)/√c_i, with cs² floored at <see cref="ArrivalVariability.MinimumDepartureServiceScv"/>; 0 for unlimited servers.</summary>
     private static double ServiceDeviation(ArrivalVariabilityUnit unit) => unit.Servers.IsUnlimited
         ? 0.0
         : (Math.Max(unit.ServiceScv, ArrivalVariability.MinimumDepartureServiceScv) - 1.0) / Math.Sqrt(unit.Servers.Count);
 
-    /// <summary>w_j = 1 / (1 + 4(1 − ρ_j)²(v_j − 1)) with v_j = 1 / Σ shares²; ρ_j = 0 for unlimited servers.</summary>
-    private static double SuperpositionWeight(ArrivalVariabilityUnit unit, double sumOfSquares)
+    /// <summary>w = 1 / (1 + 4(1 − ρ)²(v − 1)) with v = 1 / Σ shares², ρ the load the merged stream is weighed at.</summary>
+    private static double SuperpositionWeight(double rho, double sumOfSquares)
     {
-        double rho = unit.Servers.IsUnlimited ? 0.0 : Math.Min(1.0, unit.Utilisation);
         double v = 1.0 / sumOfSquares;
         double idle = 1.0 - rho;
         return 1.0 / (1.0 + (ArrivalVariability.SuperpositionFactor * idle * idle * (v - 1.0)));
@@ -139,7 +149,7 @@ internal sealed class ArrivalVariabilitySystem
                 continue;
             }
 
-            double coefficient = weight[to] * stream[r] * probability * (1.0 - SquaredUtilisation[from]);
+            double coefficient = weight[to] * stream[r] * probability * (1.0 - ServiceWeight[from]);
             if (from == to)
             {
                 SelfCoefficient[to] += coefficient;

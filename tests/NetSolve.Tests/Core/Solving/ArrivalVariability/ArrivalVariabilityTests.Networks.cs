@@ -72,6 +72,26 @@ public sealed partial class ArrivalVariabilityTests
         Assert.All(solution.ArrivalScv, scv => Assert.InRange(scv, Math.Min(low, 1.0), Math.Max(high, 1.0)));
     }
 
+    // Common practice: the variability functions solve one system per unit with the same solvers, so dense LU and
+    // sweeps agree to rounding; with weights ω and w in [0, 1] every ca² stays a weighted average of 1, the external
+    // SCVs and the service terms (docs/methods.md, "Variability functions").
+    [Fact]
+    public void Variability_functions_agree_between_dense_and_sweeps_and_stay_in_range()
+    {
+        var (units, routes) = Generated(60, seed: 13, loops: true);
+
+        var dense = ArrivalVariability.Solve(units, routes, TrafficSolveMethod.Dense, ArrivalVariabilityMethod.VariabilityFunctions);
+        var swept = ArrivalVariability.Solve(units, routes, TrafficSolveMethod.Sparse, ArrivalVariabilityMethod.VariabilityFunctions);
+
+        double low = units.Min(unit => Math.Min(unit.ExternalScv, Math.Max(unit.ServiceScv, ArrivalVariability.MinimumDepartureServiceScv)));
+        double high = units.Max(unit => Math.Max(unit.ExternalScv, unit.ServiceScv));
+        for (int i = 0; i < units.Length; i++)
+        {
+            Assert.Equal(dense.ArrivalScv[i], swept.ArrivalScv[i], 1e-10);
+            Assert.InRange(dense.ArrivalScv[i], Math.Min(low, 1.0), Math.Max(high, 1.0));
+        }
+    }
+
     // Exact by hand: Poisson and exponential everywhere gives exactly 1 on the sweep path too.
     [Fact]
     public void A_large_all_Poisson_network_has_arrival_scv_exactly_1()

@@ -1,0 +1,15 @@
+namespace NetSolve.Solving;
+
+/// <summary>How the arrival SCV of each unit is worked out from the flows of the network (docs/methods.md).</summary>
+public enum ArrivalVariabilityMethod
+{
+    /// <summary>One SCV per flow from the two-moment linear equations (W. Whitt, Bell System Technical Journal 62(9), 1983, pp. 2779–2815).</summary>
+    Decomposition,
+
+    /// <summary>
+    /// Each unit's arrival SCV from the same equations evaluated at the time scale of that unit's queue: variability
+    /// functions (W. Whitt, Management Science 41(10), 1995, pp. 1704–1715) with the heavy-traffic weight of a
+    /// unit's service in its departures (<see cref="VariabilityFunctions"/>).
+    /// </summary>
+    VariabilityFunctions,
+}
