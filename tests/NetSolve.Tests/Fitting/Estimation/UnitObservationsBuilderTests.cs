@@ -29,12 +29,14 @@ public sealed class UnitObservationsBuilderTests
 
         // Exact by hand from the rows above.
         var ward = units["ward"];
-        Assert.Equal([8.0, 21.0], ward.StayHours.Order());
-        Assert.Equal(1, ward.Censored.Count(flag => flag));
-        Assert.Equal([0.0, 6.0], ward.AgeAtStartHours.Order());
+        Assert.Equal([8.0, 21.0], ward.Stays.Hours);
+        Assert.Equal([0, 1], ward.Stays.Censored);
+        Assert.Equal([6.0, 0.0], ward.Stays.AgeHours);
         Assert.Empty(ward.Routes);
         var emergency = units["emergency"];
-        Assert.Equal([1.0, 1.5], emergency.StayHours.Order());
+        Assert.Equal([1.0, 1.5], emergency.Stays.Hours);
+        Assert.Equal([1, 1], emergency.Stays.Ended);
+        Assert.Equal(2, emergency.Departures);
         Assert.Equal([0.0, 0.5], emergency.WaitHours.Order());
         Assert.Equal([1.0, 10.0], emergency.EntryHours.Order());
         Assert.Equal([new RouteCount("ward", 1)], emergency.Routes);
@@ -64,7 +66,8 @@ public sealed class UnitObservationsBuilderTests
         for (int i = 0; i < forward.Count; i++)
         {
             Assert.Equal(forward[i].UnitId, backward[i].UnitId);
-            Assert.Equal(forward[i].StayHours, backward[i].StayHours);
+            Assert.Equal(forward[i].Stays.Hours, backward[i].Stays.Hours);
+            Assert.Equal(forward[i].Stays.Ended, backward[i].Stays.Ended);
             Assert.Equal(forward[i].Routes, backward[i].Routes);
             Assert.Equal(forward[i].EntryHours, backward[i].EntryHours);
         }
