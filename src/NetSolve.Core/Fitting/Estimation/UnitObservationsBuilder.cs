@@ -108,7 +108,8 @@ public static class UnitObservationsBuilder
         // sums of hours then come out the same to the last bit however the rows were ordered.
         waits.Sort();
         entries.Sort();
-        return new UnitObservations(log.Units[unit].Id, stays.Group(), waits.ToImmutable(), entries.ToImmutable(),
+        // The counting stage counted the same waits and entries, so the arrays are full and handed over without a copy.
+        return new UnitObservations(log.Units[unit].Id, stays.Group(), waits.MoveToImmutable(), entries.MoveToImmutable(),
             [.. routes.Select(route => new RouteCount(route.Key, route.Value))],
             counts.Stays == 0 ? null : Math.Max(1, counts.PeakInService), counts.Timed > 0 && counts.Waited == 0, counts.Routed);
     }

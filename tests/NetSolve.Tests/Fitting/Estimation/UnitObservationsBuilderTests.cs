@@ -73,6 +73,28 @@ public sealed class UnitObservationsBuilderTests
         }
     }
 
+    [Fact]
+    public void Stays_from_a_log_are_grouped_by_length_with_the_timestamps_step_as_their_resolution()
+    {
+        string[] rows =
+        [
+            "A,xray,2026-03-02T11:00:00,,2026-03-02T11:00:00",
+            "B,xray,2026-03-02T12:00:00,,2026-03-02T12:10:00",
+            "C,xray,2026-03-02T13:00:00,,2026-03-02T13:25:00",
+            "D,xray,2026-03-02T14:00:00,,2026-03-02T14:10:00",
+            "E,xray,2026-03-03T09:59:00,,",
+        ];
+
+        var xray = Observations(rows).Single();
+
+        // Exact by hand: ended stays of 0, 10, 10 and 25 minutes (step 5 minutes) and one of 1 minute still running at
+        // the extract's end (it ends at the extract's end, not at a timestamp, so it does not set the step).
+        Assert.Equal([0.0, 1.0 / 60.0, 10.0 / 60.0, 25.0 / 60.0], xray.Stays.Hours);
+        Assert.Equal([1, 0, 2, 1], xray.Stays.Ended);
+        Assert.Equal([0, 1, 0, 0], xray.Stays.Censored);
+        Assert.Equal(5.0 / 60.0, xray.Stays.ResolutionHours, 12);
+    }
+
     private static string Csv(IEnumerable<string> rows) => "patient,unit,arrived,started,left\n" + string.Join("\n", rows) + "\n";
 
     private static List<UnitObservations> Observations(IEnumerable<string> rows)
