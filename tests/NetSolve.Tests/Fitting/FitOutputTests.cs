@@ -112,8 +112,8 @@ public sealed class FitOutputTests : IDisposable
         Assert.Equal(1, fit.ExitCode);
         string[] lines = fit.Error.TrimEnd('\n').Split('\n');
         Assert.Equal(4, lines.Length);
-        Assert.StartsWith(roster + ":3:5: lab: servers 'none' is not a whole number of at least 1", lines[0], StringComparison.Ordinal);
-        Assert.StartsWith(roster + ":4:1: xray: unit 'xray' is already given on line 2", lines[1], StringComparison.Ordinal);
+        Assert.StartsWith(roster + ":3:5: unit 'lab': servers 'none' is not a whole number of at least 1", lines[0], StringComparison.Ordinal);
+        Assert.StartsWith(roster + ":4:1: unit 'xray': already given on line 2", lines[1], StringComparison.Ordinal);
         Assert.StartsWith(roster + ":5:1: the log has no unit 'xrya'; did you mean 'xray'?", lines[2], StringComparison.Ordinal);
         Assert.StartsWith(roster + ":6:1: expected 2 cells (unit,servers), found 1", lines[3], StringComparison.Ordinal);
     }

@@ -76,7 +76,7 @@ public static class RosterReader
             else if (givenOn.TryGetValue(unit.Id, out int first))
             {
                 diagnostics.Add(Diagnostic.Error(DiagnosticCodes.DuplicateKey, At(0), unit.Id,
-                    string.Create(CultureInfo.InvariantCulture, $"unit '{unit.Id}' is already given on line {first}")));
+                    string.Create(CultureInfo.InvariantCulture, $"already given on line {first}")));
             }
             else
             {
