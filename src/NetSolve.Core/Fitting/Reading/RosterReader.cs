@@ -1,8 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
-using System.Text;
 using NetSolve.Diagnostics;
-using nietras.SeparatedValues;
 
 namespace NetSolve.Fitting.Reading;
 
@@ -26,24 +24,11 @@ public static class RosterReader
         var diagnostics = new List<Diagnostic>();
         var roster = ImmutableDictionary.CreateBuilder<string, int>(StringComparer.Ordinal);
         var givenOn = new Dictionary<string, int>(StringComparer.Ordinal);
-        using var text = new StreamReader(stream, new UTF8Encoding(false, throwOnInvalidBytes: false), leaveOpen: true);
-        using var csv = Sep.New(',').Reader(o => o with { HasHeader = false, DisableColCountCheck = true, Unescape = true }).From(text);
         bool header = false;
-        int line = 1;
-        foreach (var row in csv)
+        foreach (var row in SmallCsvFile.Read(stream))
         {
-            // A row starts where the one before it ended (Sep's own start line is one too far for the first row).
-            int rowLine = line;
-            line = row.LineNumberToExcl;
-            var whole = row.Span.Trim();
-            if (whole.IsEmpty || whole[0] == '#')
-            {
-                continue;
-            }
-
-            string[] values = [.. row[0..row.ColCount].ToStringsArray().Select(value => value.Trim())];
-            int[] columns = CellColumns(row.Span);
-            SourceLocation At(int cell) => new(fileName, rowLine, columns[Math.Min(cell, columns.Length - 1)]);
+            string[] values = row.Cells;
+            SourceLocation At(int cell) => new(fileName, row.Line, row.ColumnOf(cell));
             if (!header)
             {
                 if (!values.SequenceEqual(Columns, StringComparer.Ordinal))
@@ -80,7 +65,7 @@ public static class RosterReader
             }
             else
             {
-                givenOn[unit.Id] = rowLine;
+                givenOn[unit.Id] = row.Line;
                 roster[unit.Id] = servers;
             }
         }
@@ -91,22 +76,5 @@ public static class RosterReader
         }
 
         return diagnostics.Count > 0 ? (null, [.. diagnostics]) : (roster.ToImmutable(), []);
-    }
-
-    /// <summary>The 1-based column where each cell of <paramref name="raw"/> begins; commas inside quotes do not split.</summary>
-    private static int[] CellColumns(ReadOnlySpan<char> raw)
-    {
-        var columns = new List<int> { 1 };
-        bool quoted = false;
-        for (int i = 0; i < raw.Length; i++)
-        {
-            quoted = raw[i] == '"' ? !quoted : quoted;
-            if (raw[i] == ',' && !quoted)
-            {
-                columns.Add(i + 2);
-            }
-        }
-
-        return [.. columns];
     }
 }
