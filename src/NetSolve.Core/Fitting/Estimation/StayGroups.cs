@@ -24,9 +24,6 @@ public sealed record StayGroups(
     ImmutableArray<int> Censored,
     double ResolutionHours)
 {
-    /// <summary>No stays.</summary>
-    public static StayGroups Empty { get; } = new([], [], [], [], 1.0);
-
     /// <summary>Groups held.</summary>
     public int Count => Hours.Length;
 
