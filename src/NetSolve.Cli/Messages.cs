@@ -306,7 +306,11 @@ internal static class Messages
 
     /// <summary><c>fit --servers</c>: not UNIT=N with N a whole number of at least 1.</summary>
     public static string FitServersNotCount(string entry) =>
-        $"--servers: '{Q(entry)}' is not UNIT=N with N a whole number of servers, at least 1 (write e.g. --servers ward=30)";
+        $"--servers: '{Q(entry)}' is not UNIT=N with N a whole number of servers, at least 1, nor a roster file (write e.g. --servers ward=30 or --servers roster.csv)";
+
+    /// <summary><c>fit --servers</c>: one unit's servers given twice.</summary>
+    public static string FitServersTwice(string unit, string first, string second) =>
+        $"--servers: unit '{Q(unit)}' is given twice ('{Q(first)}' and '{Q(second)}'); give each unit once";
 
     /// <summary><c>fit --servers</c>: the unit is not in the log.</summary>
     public static string FitServersUnknownUnit(string unit, IEnumerable<string> units) =>

@@ -35,8 +35,8 @@ internal static class FitCommand
         };
         var roster = new Option<string[]>("--servers")
         {
-            Description = "Servers of a unit from the roster or bed count (repeat per unit); units not given get the peak in service, flagged when they never queued.",
-            HelpName = "UNIT=N",
+            Description = "Servers from the roster or bed count: UNIT=N (repeat per unit) or a CSV file with the columns unit,servers; units not given get the peak in service, flagged when they never queued.",
+            HelpName = "UNIT=N|FILE",
         };
         var reading = new FitLogOptions();
         var command = new Command("fit", "Estimate a network from a log of patient movements: arrival rates, routing fractions, service times and servers.")

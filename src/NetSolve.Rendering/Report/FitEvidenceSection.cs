@@ -69,7 +69,7 @@ public static class FitEvidenceSection
             return;
         }
 
-        html.Append("<table id=\"fit-routes\">\n<thead><tr><th>From</th><th>To</th><th>Share of ended stays (95%)</th><th>Moves</th></tr></thead>\n<tbody>\n");
+        html.Append("<table id=\"fit-routes\">\n<thead><tr><th>From</th><th>To</th><th>Share of departures (95%)</th><th>Moves</th></tr></thead>\n<tbody>\n");
         foreach (var (from, route) in routes)
         {
             html.Append("<tr data-unit=\"").Append(HtmlEncode(from)).Append('"').Append(route.IsThin ? " class=\"thin\"" : string.Empty).Append("><td>")

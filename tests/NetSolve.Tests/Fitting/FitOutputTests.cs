@@ -85,5 +85,67 @@ public sealed class FitOutputTests : IDisposable
         Assert.Contains(string.Concat("--servers: '", entry, "' is not UNIT=N"), fit.Error, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void A_roster_file_sets_the_servers_of_the_units_it_names()
+    {
+        string roster = Roster("# beds and staffed rooms\nunit,servers\nxray,3\nobservation, 12\n");
+        string network = Path.Combine(folder.Path, "rowan.yaml");
+
+        var fit = CliRun.Run("fit", TestFiles.Log("rowan-urgent-care"), "-o", network, "--servers", roster, "--servers", "lab=2");
+
+        Assert.Equal(0, fit.ExitCode);
+        string written = File.ReadAllText(network);
+        Assert.Contains("servers: 3", written, StringComparison.Ordinal);
+        Assert.Contains("servers: 12", written, StringComparison.Ordinal);
+        Assert.Contains("servers: 2", written, StringComparison.Ordinal);
+        Assert.DoesNotContain("unit 'xray': never queued", fit.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Every_bad_row_of_a_roster_file_is_refused_on_its_own_located_line()
+    {
+        string roster = Roster("unit,servers\nxray,3\nlab,none\nxray,4\nxrya,2\nobservation\n");
+
+        var fit = CliRun.Run("fit", TestFiles.Log("rowan-urgent-care"), "--servers", roster);
+
+        // Exact by hand: line 3 column 5 holds 'none'; line 4 repeats xray; line 5 misspells it; line 6 lacks servers.
+        Assert.Equal(1, fit.ExitCode);
+        string[] lines = fit.Error.TrimEnd('\n').Split('\n');
+        Assert.Equal(4, lines.Length);
+        Assert.StartsWith(roster + ":3:5: unit 'lab': servers 'none' is not a whole number of at least 1", lines[0], StringComparison.Ordinal);
+        Assert.StartsWith(roster + ":4:1: unit 'xray': already given on line 2", lines[1], StringComparison.Ordinal);
+        Assert.StartsWith(roster + ":5:1: the log has no unit 'xrya'; did you mean 'xray'?", lines[2], StringComparison.Ordinal);
+        Assert.StartsWith(roster + ":6:1: expected 2 cells (unit,servers), found 1", lines[3], StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_unit_given_both_in_a_roster_file_and_as_an_entry_is_refused()
+    {
+        string roster = Roster("unit,servers\nxray,3\n");
+
+        var fit = CliRun.Run("fit", TestFiles.Log("rowan-urgent-care"), "--servers", roster, "--servers", "xray=4");
+
+        Assert.Equal(1, fit.ExitCode);
+        Assert.StartsWith("--servers: unit 'xray' is given twice", fit.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_roster_file_without_its_header_is_refused_at_line_one()
+    {
+        string roster = Roster("xray,3\n");
+
+        var fit = CliRun.Run("fit", TestFiles.Log("rowan-urgent-care"), "--servers", roster);
+
+        Assert.Equal(1, fit.ExitCode);
+        Assert.StartsWith(roster + ":1:1: a roster's header must be unit,servers", fit.Error, StringComparison.Ordinal);
+    }
+
+    private string Roster(string text)
+    {
+        string path = Path.Combine(folder.Path, "roster.csv");
+        File.WriteAllText(path, text);
+        return path;
+    }
+
     public void Dispose() => folder.Dispose();
 }

@@ -34,6 +34,24 @@ public sealed record ArrivalProfileEstimate(ProfileSlots HourOfDay, ProfileSlots
             dayCounts[hourOfWeek / ArrivalProfile.HoursPerDay]++;
         }
 
+        return FromCounts(hourCounts, dayCounts, window);
+    }
+
+    /// <summary>
+    /// The profiles of entries already counted per hour of day and per day of week (Monday first) over
+    /// <paramref name="window"/>: counts add up, so a network's profile is its units' counts summed.
+    /// </summary>
+    /// <exception cref="ArgumentException">Not 24 hour counts and 7 day counts.</exception>
+    public static ArrivalProfileEstimate FromCounts(int[] hourCounts, int[] dayCounts, ExtractWindow window)
+    {
+        ArgumentNullException.ThrowIfNull(hourCounts);
+        ArgumentNullException.ThrowIfNull(dayCounts);
+        ArgumentNullException.ThrowIfNull(window);
+        if (hourCounts.Length != ArrivalProfile.HoursPerDay || dayCounts.Length != ArrivalProfile.DaysPerWeek)
+        {
+            throw new ArgumentException("One count per hour of day and one per day of week.", nameof(hourCounts));
+        }
+
         var (hourExposure, dayExposure) = Exposure(window);
         double days = window.Hours / ArrivalProfile.HoursPerDay;
         var hours = Decide(hourCounts, hourExposure, days >= EvidenceThresholds.MinDaysForHourProfile);

@@ -1,3 +1,5 @@
+using MathNet.Numerics;
+
 namespace NetSolve.Fitting.Estimation;
 
 /// <summary>
@@ -19,14 +21,27 @@ public sealed record ExponentialStayFit(IntervalEstimate Mean, int Ended, double
     public double Survival(double hours) => Math.Exp(-hours / Mean.Value);
 
     /// <summary>The fit, or null when no stay ended or no time was observed (the mean has no estimate then).</summary>
-    public static ExponentialStayFit? Fit(ReadOnlySpan<double> stayHours, ReadOnlySpan<bool> censored, ReadOnlySpan<double> ageAtStartHours)
+    public static ExponentialStayFit? Fit(ReadOnlySpan<double> stayHours, ReadOnlySpan<bool> censored, ReadOnlySpan<double> ageAtStartHours) =>
+        Fit(StayGroups.Of(stayHours, censored, ageAtStartHours));
+
+    /// <summary>The fit of the grouped <paramref name="stays"/>, or null when no stay ended or no time was observed.</summary>
+    /// <remarks>
+    /// The log-likelihood, used only to compare fits, treats a stay recorded as 0 as the lognormal fit does: ended
+    /// somewhere below the recording's resolution δ, adding ln(1 − e^(−δ/mean)) rather than the density's ln(1/mean)
+    /// (see <see cref="LognormalStayFit"/>), so that the two likelihoods are of the same data. It is taken at d / T,
+    /// the maximum of the likelihood with exact times; each such stay moves the maximum by a relative O(δ/mean).
+    /// </remarks>
+    public static ExponentialStayFit? Fit(StayGroups stays)
     {
+        ArgumentNullException.ThrowIfNull(stays);
         int ended = 0;
+        int endedAtZero = 0;
         double exposure = 0.0;
-        for (int i = 0; i < stayHours.Length; i++)
+        for (int g = 0; g < stays.Count; g++)
         {
-            ended += censored[i] ? 0 : 1;
-            exposure += stayHours[i] - (ageAtStartHours.IsEmpty ? 0.0 : ageAtStartHours[i]);
+            ended += stays.Ended[g];
+            endedAtZero += stays.Hours[g] == 0.0 ? stays.Ended[g] : 0;
+            exposure += stays.StaysIn(g) * (stays.Hours[g] - stays.AgeHours[g]);
         }
 
         if (ended == 0 || !(exposure > 0.0))
@@ -37,6 +52,12 @@ public sealed record ExponentialStayFit(IntervalEstimate Mean, int Ended, double
         double mean = exposure / ended;
         double spread = Math.Exp(EvidenceThresholds.NormalQuantile / Math.Sqrt(ended));
         double logLikelihood = (ended * Math.Log(ended / exposure)) - ended;
+        if (endedAtZero > 0)
+        {
+            // Swap each zero stay's ln(1/mean) (its exposure is 0) for the log-probability of ending within δ.
+            logLikelihood += endedAtZero * (Math.Log(-SpecialFunctions.Expm1(-stays.ResolutionHours / mean)) + Math.Log(mean));
+        }
+
         return new ExponentialStayFit(new IntervalEstimate(mean, new Interval(mean / spread, mean * spread)), ended, exposure, logLikelihood);
     }
 }

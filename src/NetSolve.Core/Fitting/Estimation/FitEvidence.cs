@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using NetSolve.Model;
 
 namespace NetSolve.Fitting.Estimation;
 
@@ -22,13 +23,12 @@ public static class FitEvidence
 
         var stay = StayEvidence.Estimate(unit);
         var entries = RateEvidence.Of(unit.EntryHours.Count(entry => entry >= 0.0 && entry <= window.Hours), window.Hours);
-        var arrivals = RateEvidence.Of(Enumerable.Range(0, unit.Stays).Count(i => unit.AgeAtStart(i) == 0.0), window.Hours);
-        int ended = unit.Stays - stay.Censored;
-        var routes = ended == 0 ? [] : unit.Routes
+        var arrivals = RateEvidence.Of(stay.Stays - stay.Truncated, window.Hours);
+        int departures = unit.RoutedStays;
+        var routes = departures == 0 ? [] : unit.Routes
             .Where(route => route.Count > 0)
             .OrderBy(route => route.ToUnitId, StringComparer.Ordinal)
-            .Select(route => new RouteEvidence(route.ToUnitId, route.Count, ended,
-                new IntervalEstimate((double)route.Count / ended, ConfidenceIntervals.Wilson(Math.Min(route.Count, ended), ended))))
+            .Select(route => RouteEvidence.Of(route.ToUnitId, Math.Min(route.Count, departures), departures))
             .ToImmutableArray();
         var load = unit.Servers is int servers && stay.Mean is IntervalEstimate mean ? LoadEvidence.Of(arrivals, mean, servers) : null;
         var evidence = new UnitEvidence(unit.UnitId, stay, entries, arrivals, routes, WaitEvidence.Of(unit.WaitHours), unit.Servers, unit.NeverQueued,
@@ -41,17 +41,28 @@ public static class FitEvidence
     {
         ArgumentNullException.ThrowIfNull(units);
         ArgumentNullException.ThrowIfNull(window);
-        // One pass, keeping only each unit's entry times: the units may be built one at a time from a large log.
+        // One pass, keeping each unit's entries only as counts per slot: the units may be built one at a time from a large log.
         var evidence = ImmutableArray.CreateBuilder<UnitEvidence>();
-        var entryHours = new List<double>();
+        var hourCounts = new int[ArrivalProfile.HoursPerDay];
+        var dayCounts = new int[ArrivalProfile.DaysPerWeek];
         foreach (var unit in units)
         {
-            evidence.Add(Estimate(unit, window));
-            entryHours.AddRange(unit.EntryHours);
+            var unitEvidence = Estimate(unit, window);
+            evidence.Add(unitEvidence);
+            Add(hourCounts, unitEvidence.Profile.HourOfDay.Entries);
+            Add(dayCounts, unitEvidence.Profile.DayOfWeek.Entries);
         }
 
         return new NetworkEvidence(window, evidence.ToImmutable(), RateEvidence.Of(evidence.Sum(unit => unit.Entries.Count), window.Hours),
-            ArrivalProfileEstimate.Estimate(entryHours, window));
+            ArrivalProfileEstimate.FromCounts(hourCounts, dayCounts, window));
+    }
+
+    private static void Add(int[] sums, ImmutableArray<int> counts)
+    {
+        for (int slot = 0; slot < sums.Length; slot++)
+        {
+            sums[slot] += counts[slot];
+        }
     }
 
     private static ImmutableArray<FitWarning> Warn(UnitEvidence unit)

@@ -15,43 +15,25 @@ public static class KaplanMeier
 {
     /// <summary>The curve of <paramref name="stayHours"/>; <paramref name="ageAtStartHours"/> empty means no truncation.</summary>
     /// <exception cref="ArgumentException">The spans differ in length.</exception>
-    public static KaplanMeierCurve Estimate(ReadOnlySpan<double> stayHours, ReadOnlySpan<bool> censored, ReadOnlySpan<double> ageAtStartHours)
+    public static KaplanMeierCurve Estimate(ReadOnlySpan<double> stayHours, ReadOnlySpan<bool> censored, ReadOnlySpan<double> ageAtStartHours) =>
+        Estimate(StayGroups.Of(stayHours, censored, ageAtStartHours));
+
+    /// <summary>The curve of the grouped <paramref name="stays"/>: one step per distinct length at which a stay ended.</summary>
+    public static KaplanMeierCurve Estimate(StayGroups stays)
     {
-        if (censored.Length != stayHours.Length || (!ageAtStartHours.IsEmpty && ageAtStartHours.Length != stayHours.Length))
+        ArgumentNullException.ThrowIfNull(stays);
+        int count = stays.Stays;
+        var entries = new List<(double Age, int Stays)>();
+        for (int g = 0; g < stays.Count; g++)
         {
-            throw new ArgumentException("One censoring flag and one age per stay.", nameof(censored));
-        }
-
-        int count = stayHours.Length;
-        var ends = new List<double>(count);
-        var exits = new double[count];
-        var entries = new List<double>();
-        double last = 0.0;
-        bool lastCensored = false;
-        for (int i = 0; i < count; i++)
-        {
-            double age = ageAtStartHours.IsEmpty ? 0.0 : ageAtStartHours[i];
-            exits[i] = stayHours[i];
-            if (age > 0.0)
+            if (stays.AgeHours[g] > 0.0)
             {
-                entries.Add(age);
-            }
-
-            if (!censored[i] && (age == 0.0 || age < stayHours[i]))
-            {
-                ends.Add(stayHours[i]);
-            }
-
-            if (stayHours[i] > last || (stayHours[i] == last && censored[i]))
-            {
-                last = stayHours[i];
-                lastCensored = censored[i];
+                entries.Add((stays.AgeHours[g], stays.StaysIn(g)));
             }
         }
 
-        ends.Sort();
-        Array.Sort(exits);
         entries.Sort();
+        int entering = entries.Sum(entry => entry.Stays);
         var times = ImmutableArray.CreateBuilder<double>();
         var atRisk = ImmutableArray.CreateBuilder<int>();
         var events = ImmutableArray.CreateBuilder<int>();
@@ -59,19 +41,29 @@ public static class KaplanMeier
         var errors = ImmutableArray.CreateBuilder<double>();
         double s = 1.0;
         double greenwoodSum = 0.0;
-        for (int k = 0; k < ends.Count;)
+        int exitedBefore = 0;
+        int enteredBefore = 0;
+        int nextEntry = 0;
+        for (int g = 0; g < stays.Count;)
         {
-            double t = ends[k];
+            double t = stays.Hours[g];
             int d = 0;
-            while (k < ends.Count && ends[k] == t)
+            int exiting = 0;
+            for (; g < stays.Count && stays.Hours[g] == t; g++)
             {
-                d++;
-                k++;
+                d += stays.AgeHours[g] == 0.0 || stays.AgeHours[g] < t ? stays.Ended[g] : 0;
+                exiting += stays.StaysIn(g);
             }
 
-            // At risk: exits at or after t, less those entering observation at or after t.
-            int n = (count - LowerBound(exits, t)) - (entries.Count - LowerBound(entries, t));
-            if (n <= 0)
+            for (; nextEntry < entries.Count && entries[nextEntry].Age < t; nextEntry++)
+            {
+                enteredBefore += entries[nextEntry].Stays;
+            }
+
+            // At risk: stays leaving at or after t, less those entering observation at or after t.
+            int n = (count - exitedBefore) - (entering - enteredBefore);
+            exitedBefore += exiting;
+            if (d == 0 || n <= 0)
             {
                 continue;
             }
@@ -85,27 +77,13 @@ public static class KaplanMeier
             errors.Add(s > 0.0 ? s * Math.Sqrt(greenwoodSum) : 0.0);
         }
 
-        return new KaplanMeierCurve(times.ToImmutable(), atRisk.ToImmutable(), events.ToImmutable(), survival.ToImmutable(), errors.ToImmutable(), last, lastCensored);
-    }
-
-    /// <summary>The first index whose value is at least <paramref name="value"/>.</summary>
-    private static int LowerBound(IReadOnlyList<double> sorted, double value)
-    {
-        int low = 0;
-        int high = sorted.Count;
-        while (low < high)
+        double last = stays.Count == 0 ? 0.0 : stays.Hours[^1];
+        bool lastCensored = false;
+        for (int g = stays.Count - 1; g >= 0 && stays.Hours[g] == last; g--)
         {
-            int middle = low + ((high - low) / 2);
-            if (sorted[middle] < value)
-            {
-                low = middle + 1;
-            }
-            else
-            {
-                high = middle;
-            }
+            lastCensored |= stays.Censored[g] > 0;
         }
 
-        return low;
+        return new KaplanMeierCurve(times.ToImmutable(), atRisk.ToImmutable(), events.ToImmutable(), survival.ToImmutable(), errors.ToImmutable(), last, lastCensored);
     }
 }

@@ -7,6 +7,7 @@ namespace NetSolve.Fitting.Estimation;
 /// The lognormal stay distribution (ln stay ~ Normal(μ, σ²)) fitted by maximum likelihood to right-censored and
 /// left-truncated stays (Klein and Moeschberger, Survival Analysis, 2nd ed., 2003, sections 3.5 and 12.4): an ended
 /// stay adds ln f(x), a censored one ln S(x), and a stay already running at the extract's start subtracts ln S(a).
+/// A stay recorded as 0 (shorter than the timestamps' resolution δ) is interval-censored in (0, δ] and adds ln F(δ).
 /// </summary>
 /// <param name="Mu">μ, the mean of ln(hours).</param>
 /// <param name="Sigma">σ, the standard deviation of ln(hours).</param>
@@ -34,25 +35,51 @@ public sealed record LognormalStayFit(double Mu, double Sigma, IntervalEstimate 
     /// <summary>Step in μ and ln σ for the central differences of the Hessian (both are on a log scale, so an absolute step).</summary>
     private const double HessianStep = 1e-4;
 
+    /// <summary>Floor of the starting variance of the logs, so that rounding cannot start the search at σ = 0.</summary>
+    private const double SmallestStartVariance = 1e-6;
+
     /// <summary>The chance a stay lasts beyond <paramref name="hours"/> under this fit.</summary>
     public double Survival(double hours) => hours <= 0.0 ? 1.0 : Math.Exp(NormalTail.LogUpper((Math.Log(hours) - Mu) / Sigma));
 
     /// <summary>
-    /// The fit, or null when it cannot be made: fewer than 2 ended stays, an ended stay of length 0 (its log is −∞),
-    /// every ended stay of one length, or a likelihood with no clear maximum.
+    /// The fit, or null when it cannot be made: fewer than 2 ended stays, fewer than 2 distinct ended lengths, no
+    /// ended stay longer than 0, or a likelihood with no clear maximum.
     /// </summary>
-    public static LognormalStayFit? Fit(ReadOnlySpan<double> stayHours, ReadOnlySpan<bool> censored, ReadOnlySpan<double> ageAtStartHours)
+    public static LognormalStayFit? Fit(ReadOnlySpan<double> stayHours, ReadOnlySpan<bool> censored, ReadOnlySpan<double> ageAtStartHours) =>
+        Fit(StayGroups.Of(stayHours, censored, ageAtStartHours));
+
+    /// <summary>The fit of the grouped <paramref name="groups"/>, or null when it cannot be made (as above).</summary>
+    public static LognormalStayFit? Fit(StayGroups groups)
     {
-        var stays = new Stays(stayHours.ToArray(), censored.ToArray(), ageAtStartHours.IsEmpty ? new double[stayHours.Length] : ageAtStartHours.ToArray());
-        var endedLogs = Enumerable.Range(0, stays.Hours.Length).Where(i => !stays.Censored[i]).Select(i => stays.Hours[i]).ToList();
-        if (endedLogs.Count < 2 || endedLogs.Any(hours => hours <= 0.0) || endedLogs.Distinct().Count() < 2)
+        ArgumentNullException.ThrowIfNull(groups);
+        var stays = new Stays(groups);
+        // Starting values: the mean and spread of the ended stays' logs, a stay of 0 taken at half the resolution.
+        double count = 0.0;
+        double sum = 0.0;
+        double squares = 0.0;
+        var lengths = new HashSet<double>();
+        bool anyPositive = false;
+        for (int g = 0; g < groups.Count; g++)
+        {
+            int ended = groups.Ended[g];
+            if (ended > 0)
+            {
+                double log = groups.Hours[g] > 0.0 ? stays.LogHours[g] : Math.Log(groups.ResolutionHours / 2.0);
+                count += ended;
+                sum += ended * log;
+                squares += ended * log * log;
+                lengths.Add(groups.Hours[g]);
+                anyPositive |= groups.Hours[g] > 0.0;
+            }
+        }
+
+        if (count < 2 || lengths.Count < 2 || !anyPositive)
         {
             return null;
         }
 
-        var logs = endedLogs.Select(hours => Math.Log(hours)).ToArray();
-        double startMu = logs.Average();
-        double startSd = Math.Sqrt(logs.Sum(x => (x - startMu) * (x - startMu)) / (logs.Length - 1));
+        double startMu = sum / count;
+        double startSd = Math.Sqrt(Math.Max((squares - (sum * startMu)) / (count - 1), SmallestStartVariance));
         var objective = ObjectiveFunction.Value(point => -stays.LogLikelihood(point[0], point[1]));
         MinimizationResult result;
         try
@@ -134,29 +161,54 @@ public sealed record LognormalStayFit(double Mu, double Sigma, IntervalEstimate 
         return (bb / determinant, -ab / determinant, aa / determinant);
     }
 
-    /// <summary>The stays as arrays, so the search's objective can read them.</summary>
-    private sealed record Stays(double[] Hours, bool[] Censored, double[] Ages)
+    /// <summary>
+    /// The grouped stays with each length's log worked out once, so the search's objective can read them. A stay that
+    /// ended at length 0 is interval-censored: it ended somewhere in (0, δ], δ the recording's resolution, and adds
+    /// ln F(δ) = ln Φ((ln δ − μ)/σ) (Klein and Moeschberger, Survival Analysis, 2nd ed., 2003, section 3.5, the
+    /// likelihood of an interval-censored observation, F(R) − F(L) with L = 0).
+    /// </summary>
+    private sealed class Stays
     {
+        public Stays(StayGroups groups)
+        {
+            Groups = groups;
+            LogHours = [.. groups.Hours.Select(hours => hours > 0.0 ? Math.Log(hours) : double.NegativeInfinity)];
+            LogAges = [.. groups.AgeHours.Select(age => age > 0.0 ? Math.Log(age) : double.NegativeInfinity)];
+            LogResolution = Math.Log(groups.ResolutionHours);
+        }
+
+        public StayGroups Groups { get; }
+
+        public double[] LogHours { get; }
+
+        private double[] LogAges { get; }
+
+        private double LogResolution { get; }
+
         public double LogLikelihood(double mu, double logSigma)
         {
             double sigma = Math.Exp(logSigma);
             double sum = 0.0;
-            for (int i = 0; i < Hours.Length; i++)
+            for (int g = 0; g < LogHours.Length; g++)
             {
-                double hours = Hours[i];
-                if (Censored[i])
+                double logHours = LogHours[g];
+                int ended = Groups.Ended[g];
+                int censored = Groups.Censored[g];
+                if (ended > 0)
                 {
-                    sum += hours > 0.0 ? NormalTail.LogUpper((Math.Log(hours) - mu) / sigma) : 0.0;
-                }
-                else
-                {
-                    double logHours = Math.Log(hours);
-                    sum += NormalTail.LogDensity((logHours - mu) / sigma) - logSigma - logHours;
+                    sum += ended * (Groups.Hours[g] > 0.0
+                        ? NormalTail.LogDensity((logHours - mu) / sigma) - logSigma - logHours
+                        : NormalTail.LogUpper((mu - LogResolution) / sigma));
                 }
 
-                if (Ages[i] > 0.0)
+                if (censored > 0 && Groups.Hours[g] > 0.0)
                 {
-                    sum -= NormalTail.LogUpper((Math.Log(Ages[i]) - mu) / sigma);
+                    sum += censored * NormalTail.LogUpper((logHours - mu) / sigma);
+                }
+
+                if (Groups.AgeHours[g] > 0.0)
+                {
+                    sum -= (ended + censored) * NormalTail.LogUpper((LogAges[g] - mu) / sigma);
                 }
             }
 

@@ -9,7 +9,7 @@ namespace NetSolve.Fitting.Estimation;
 /// <param name="Curve">The Kaplan–Meier curve.</param>
 /// <param name="CurveMeanHours">The curve's mean, with the exponential tail when the longest stay was still running; null when no stay ended.</param>
 /// <param name="Exponential">The exponential fit; null when no stay ended.</param>
-/// <param name="Lognormal">The lognormal fit; null when it cannot be made (see <see cref="LognormalStayFit.Fit"/>).</param>
+/// <param name="Lognormal">The lognormal fit; null when it cannot be made (see <see cref="LognormalStayFit.Fit(StayGroups)"/>).</param>
 /// <param name="AicDifference">AIC of the exponential minus AIC of the lognormal: positive favours the lognormal; null without both fits.</param>
 /// <param name="LargestGap">
 /// The largest distance between the Kaplan–Meier curve and the chosen fit's survival, checked on both sides of every
@@ -37,12 +37,10 @@ public sealed record StayEvidence(
     public static StayEvidence Estimate(UnitObservations unit)
     {
         ArgumentNullException.ThrowIfNull(unit);
-        var hours = unit.StayHours.AsSpan();
-        var censored = unit.Censored.AsSpan();
-        var ages = unit.AgeAtStartHours.IsDefaultOrEmpty ? ReadOnlySpan<double>.Empty : unit.AgeAtStartHours.AsSpan();
-        var curve = KaplanMeier.Estimate(hours, censored, ages);
-        var exponential = ExponentialStayFit.Fit(hours, censored, ages);
-        var lognormal = LognormalStayFit.Fit(hours, censored, ages);
+        var stays = unit.Stays;
+        var curve = KaplanMeier.Estimate(stays);
+        var exponential = ExponentialStayFit.Fit(stays);
+        var lognormal = LognormalStayFit.Fit(stays);
         double? aicDifference = exponential is not null && lognormal is not null
             ? Aic(exponential.LogLikelihood, ExponentialStayFit.Parameters) - Aic(lognormal.LogLikelihood, LognormalStayFit.Parameters)
             : null;
@@ -50,8 +48,7 @@ public sealed record StayEvidence(
         IntervalEstimate? mean = lognormalChosen ? lognormal!.Mean : exponential?.Mean;
         IntervalEstimate? cv = lognormalChosen ? lognormal!.Cv : exponential is null ? null : new IntervalEstimate(1.0, new Interval(1.0, 1.0));
         Func<double, double>? survival = lognormalChosen ? lognormal!.Survival : exponential is null ? null : exponential.Survival;
-        int truncated = unit.AgeAtStartHours.IsDefaultOrEmpty ? 0 : unit.AgeAtStartHours.Count(age => age > 0.0);
-        return new StayEvidence(unit.Stays, unit.Censored.Count(flag => flag), truncated, curve, curve.MeanWithTail(),
+        return new StayEvidence(stays.Stays, stays.CensoredStays, stays.TruncatedStays, curve, curve.MeanWithTail(),
             exponential, lognormal, aicDifference, survival is null ? null : GapToCurve(curve, survival),
             lognormalChosen ? ServiceKind.Lognormal : ServiceKind.Exponential, mean, cv);
     }

@@ -9,8 +9,9 @@ namespace NetSolve.Fitting.Estimation;
 /// </summary>
 /// <remarks>
 /// The log's journeys are already ordered by the data (ties broken by time and unit, not by the line), so the
-/// observations do not depend on the order of the rows. One unit is built at a time, so a 10-million-row log holds
-/// only its largest unit's arrays at once. Servers are the peak in service that the counting stage found (a lower
+/// observations do not depend on the order of the rows. One unit is built at a time, and its stays are grouped by
+/// length (<see cref="StayGroups"/>), so a 10-million-row log holds its largest unit's stays once, as 8 bytes a stay,
+/// only while they are sorted. Servers are the peak in service that the counting stage found (a lower
 /// bound), flagged as never queued when start times are recorded and no patient waited.
 /// </remarks>
 public static class UnitObservationsBuilder
@@ -45,7 +46,7 @@ public static class UnitObservationsBuilder
         int[] byUnit = PositionsByUnit(log, counts, out int[] firstOf);
         for (int u = 0; u < counts.Length; u++)
         {
-            var seen = Build(log, u, counts[u], byUnit.AsSpan(firstOf[u], counts[u].Stays).ToArray());
+            var seen = Build(log, u, counts[u], new ArraySegment<int>(byUnit, firstOf[u], counts[u].Stays));
             yield return roster.TryGetValue(seen.UnitId, out int servers) ? seen with { Servers = servers, NeverQueued = false } : seen;
         }
     }
@@ -69,25 +70,12 @@ public static class UnitObservationsBuilder
         return byUnit;
     }
 
-    /// <summary>One field of every stay, in an array made at its final size (a large unit's stays are not copied twice).</summary>
-    private static ImmutableArray<T> Column<T>((double Stay, double Age, bool Censored)[] seen, Func<(double Stay, double Age, bool Censored), T> field)
-    {
-        var column = ImmutableArray.CreateBuilder<T>(seen.Length);
-        foreach (var stay in seen)
-        {
-            column.Add(field(stay));
-        }
-
-        return column.MoveToImmutable();
-    }
-
-    private static UnitObservations Build(MovementLog log, int unit, UnitCounts counts, int[] positions)
+    private static UnitObservations Build(MovementLog log, int unit, UnitCounts counts, ArraySegment<int> positions)
     {
         const double PerHour = CensoredStayMean.MillisecondsPerHour;
         long start = log.ExtractStartMs;
         long end = log.ExtractEndMs;
-        var seen = new (double Stay, double Age, bool Censored)[positions.Length];
-        int n = 0;
+        var stays = new MillisecondStays(positions.Count);
         var waits = ImmutableArray.CreateBuilder<double>(counts.Timed);
         var entries = ImmutableArray.CreateBuilder<double>(counts.Entries);
         var routes = new SortedDictionary<string, int>(StringComparer.Ordinal);
@@ -97,8 +85,8 @@ public static class UnitObservationsBuilder
             int next = log.Next[p];
             bool stillRunning = next == StayOutcome.StillRunning || row.IsCensored || row.LeftMs > end;
             long serviceStart = row.ServiceStartMs;
-            double stay = Math.Max(0L, (stillRunning ? end : row.LeftMs) - serviceStart) / PerHour;
-            seen[n++] = (stay, Math.Min(stay, Math.Max(0L, start - serviceStart) / PerHour), stillRunning);
+            long stay = Math.Max(0L, (stillRunning ? end : row.LeftMs) - serviceStart);
+            stays.Add(stay, Math.Min(stay, Math.Max(0L, start - serviceStart)), stillRunning);
             if (row.StartedMs != StayRow.NotRecorded && row.ArrivedMs >= start)
             {
                 waits.Add(Math.Max(0L, row.StartedMs - row.ArrivedMs) / PerHour);
@@ -116,13 +104,13 @@ public static class UnitObservationsBuilder
             }
         }
 
-        // The stays in an order set by their values, not by the patients' numbers (which follow the rows): sums of
-        // hours then come out the same to the last bit however the rows were ordered.
-        Array.Sort(seen);
+        // Waits and entries in an order set by their values, not by the patients' numbers (which follow the rows):
+        // sums of hours then come out the same to the last bit however the rows were ordered.
         waits.Sort();
         entries.Sort();
-        return new UnitObservations(log.Units[unit].Id, Column(seen, stay => stay.Stay), Column(seen, stay => stay.Censored), Column(seen, stay => stay.Age),
-            waits.ToImmutable(), entries.ToImmutable(), [.. routes.Select(route => new RouteCount(route.Key, route.Value))],
-            counts.Stays == 0 ? null : Math.Max(1, counts.PeakInService), counts.Timed > 0 && counts.Waited == 0);
+        // The counting stage counted the same waits and entries, so the arrays are full and handed over without a copy.
+        return new UnitObservations(log.Units[unit].Id, stays.Group(), waits.MoveToImmutable(), entries.MoveToImmutable(),
+            [.. routes.Select(route => new RouteCount(route.Key, route.Value))],
+            counts.Stays == 0 ? null : Math.Max(1, counts.PeakInService), counts.Timed > 0 && counts.Waited == 0, counts.Routed);
     }
 }

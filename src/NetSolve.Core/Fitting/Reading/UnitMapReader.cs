@@ -1,9 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
-using System.Text;
 using NetSolve.Diagnostics;
 using NetSolve.Parsing;
-using nietras.SeparatedValues;
 
 namespace NetSolve.Fitting.Reading;
 
@@ -19,22 +17,11 @@ public static class UnitMapReader
         ArgumentNullException.ThrowIfNull(stream);
         var diagnostics = new List<Diagnostic>();
         var map = ImmutableDictionary.CreateBuilder<string, UnitMapEntry>(ignoreCase ? StringComparer.OrdinalIgnoreCase : StringComparer.Ordinal);
-        using var text = new StreamReader(stream, new UTF8Encoding(false, throwOnInvalidBytes: false), leaveOpen: true);
-        using var csv = Sep.New(',').Reader(o => o with { HasHeader = false, DisableColCountCheck = true, Unescape = true }).From(text);
         int cells = 0;
-        int line = 1;
-        foreach (var row in csv)
+        foreach (var row in SmallCsvFile.Read(stream))
         {
-            // A row starts where the one before it ended (Sep's own start line is one too far for the first row).
-            var location = new SourceLocation(fileName, line, 1);
-            line = row.LineNumberToExcl;
-            var whole = row.Span.Trim();
-            if (whole.IsEmpty || whole[0] == '#')
-            {
-                continue;
-            }
-
-            string[] values = [.. row[0..row.ColCount].ToStringsArray().Select(value => value.Trim())];
+            var location = new SourceLocation(fileName, row.Line, 1);
+            string[] values = row.Cells;
             if (cells == 0)
             {
                 cells = Header(values, location, diagnostics);

@@ -23,7 +23,7 @@ public static class FitEvidenceTable
             + EvidenceWords.Count(evidence.Stays) + " stays, " + EvidenceWords.Count(evidence.Censored) + " still running at its end. " + IntervalNote);
         PeopleTableWriter.Write(Table(FitEvidenceRow.For(evidence, predictedWaitHours), timeUnit), output);
         output.WriteLine();
-        output.WriteLine("Routes (share of the stays that ended, 95%):");
+        output.WriteLine("Routes (share of the departures: stays that ended, side visits left out; 95%):");
         foreach (var unit in evidence.Units)
         {
             foreach (var route in unit.Routes)

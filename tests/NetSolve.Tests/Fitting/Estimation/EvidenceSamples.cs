@@ -14,8 +14,8 @@ internal static class EvidenceSamples
             [.. Enumerable.Range(0, 40).Select(i => i % 5 == 0 ? 0.25 : 0.0)],
             [.. Enumerable.Range(0, 40).Select(i => i * 0.6)],
             [new RouteCount(wardId, 6)],
-            Servers: 3);
-        var ward = new UnitObservations(wardId, [30.0, 50.0, 70.0, 90.0], [false, false, true, true], [0.0, 10.0, 0.0, 0.0], [0.0, 0.0], [], [], Servers: 12, NeverQueued: true);
+            servers: 3);
+        var ward = new UnitObservations(wardId, [30.0, 50.0, 70.0, 90.0], [false, false, true, true], [0.0, 10.0, 0.0, 0.0], [0.0, 0.0], [], [], servers: 12, neverQueued: true);
         return FitEvidence.Summarise([assessment, ward], ExtractWindow.Of(24.0));
     }
 }

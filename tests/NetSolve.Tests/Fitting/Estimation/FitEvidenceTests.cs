@@ -86,9 +86,13 @@ public sealed class FitEvidenceTests
     [Fact]
     public void Inconsistent_observations_are_refused()
     {
-        var unit = Unit("ward", stays: 3, censored: 0, routes: []) with { Censored = [false] };
+        var unit = Unit("ward", stays: 3, censored: 0, routes: []);
+        var shortCounts = unit with { Stays = unit.Stays with { Censored = [0] } };
+        var outOfOrder = unit with { Stays = unit.Stays with { Hours = [.. unit.Stays.Hours.Reverse()] } };
 
-        Assert.Throws<ArgumentException>(() => FitEvidence.Estimate(unit, Day));
+        Assert.Throws<ArgumentException>(() => FitEvidence.Estimate(shortCounts, Day));
+        Assert.Throws<ArgumentException>(() => FitEvidence.Estimate(outOfOrder, Day));
+        Assert.Throws<ArgumentException>(() => FitEvidence.Estimate(unit with { Departures = 4 }, Day));
         Assert.Throws<ArgumentOutOfRangeException>(() => ExtractWindow.Of(0.0));
         Assert.Throws<ArgumentOutOfRangeException>(() => ExtractWindow.Of(24.0, 168.0));
     }

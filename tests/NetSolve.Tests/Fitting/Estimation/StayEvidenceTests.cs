@@ -1,3 +1,4 @@
+using MathNet.Numerics.Distributions;
 using NetSolve.Fitting.Estimation;
 using NetSolve.Model;
 
@@ -97,10 +98,59 @@ public sealed class StayEvidenceTests
     }
 
     [Fact]
-    public void A_lognormal_cannot_be_fitted_to_a_zero_stay_or_to_stays_of_one_length()
+    public void A_lognormal_cannot_be_fitted_to_stays_of_one_length_or_to_stays_of_no_length_only()
     {
-        Assert.Null(LognormalStayFit.Fit([0.0, 2.0, 3.0], [false, false, false], []));
         Assert.Null(LognormalStayFit.Fit([2.0, 2.0, 5.0], [false, false, true], []));
+        Assert.Null(LognormalStayFit.Fit([0.0, 0.0, 5.0], [false, false, true], []));
         Assert.Null(ExponentialStayFit.Fit([2.0, 5.0], [true, true], []));
+    }
+
+    [Fact]
+    public void A_stay_of_no_length_counts_as_ended_below_the_resolution()
+    {
+        var stays = StayGroups.Of([0.0, 1.0, 2.0, 4.0], [false, false, false, false], [], resolutionHours: 0.5);
+
+        var fit = LognormalStayFit.Fit(stays)!;
+
+        // Exact by hand: the log-likelihood is ln Φ((ln 0.5 − μ)/σ) for the stay of 0 (interval-censored in (0, 0.5],
+        // Klein and Moeschberger 2003, section 3.5) plus ln φ((ln x − μ)/σ) − ln σ − ln x for the others.
+        double expected = Math.Log(Normal.CDF(0.0, 1.0, (Math.Log(0.5) - fit.Mu) / fit.Sigma));
+        foreach (double x in new[] { 1.0, 2.0, 4.0 })
+        {
+            expected += Math.Log(Normal.PDF(0.0, 1.0, (Math.Log(x) - fit.Mu) / fit.Sigma)) - Math.Log(fit.Sigma) - Math.Log(x);
+        }
+
+        Assert.Equal(expected, fit.LogLikelihood, 1e-9);
+        // The stay of 0 pulls μ below the mean of the other three logs (ln 2).
+        Assert.True(fit.Mu < Math.Log(2.0));
+    }
+
+    [Fact]
+    public void Lognormal_stays_cut_to_zero_below_the_resolution_are_recovered_within_their_intervals()
+    {
+        // Drawn lognormal with mean 0.5 h and cv 1.5 (about 8% of stays below 3 minutes), recorded as 0 when shorter
+        // than 3 minutes: left out, or taken as exact zeros, they would bias μ; interval-censored, the truth is covered.
+        const double Resolution = 0.05;
+        var draw = CensoredExtract.Lognormal(0.5, 1.5);
+        var random = new Random(23);
+        double[] hours = [.. Enumerable.Range(0, 2_000).Select(_ => draw(random)).Select(x => x < Resolution ? 0.0 : x)];
+
+        var evidence = StayEvidence.Estimate(new UnitObservations("xray", StayGroups.Of(hours, new bool[hours.Length], [], Resolution), [], [], []));
+
+        // Exact by hand: the stays were drawn with mean 0.5 h and cv 1.5.
+        Assert.True(hours.Count(x => x == 0.0) > 50);
+        Assert.NotNull(evidence.AicDifference);
+        Assert.Equal(ServiceKind.Lognormal, evidence.Chosen);
+        Assert.True(evidence.Lognormal!.Mean.Interval.Contains(0.5));
+        Assert.True(evidence.Lognormal.Cv.Interval.Contains(1.5));
+    }
+
+    [Fact]
+    public void Stays_given_one_by_one_take_the_shortest_ended_stay_as_their_resolution()
+    {
+        // Exact by hand: the shortest ended stay longer than 0 is 0.5 h (the censored 0.25 h does not count).
+        var stays = StayGroups.Of([0.0, 0.25, 0.5, 2.0], [false, true, false, false], []);
+
+        Assert.Equal(0.5, stays.ResolutionHours);
     }
 }

@@ -29,12 +29,14 @@ public sealed class UnitObservationsBuilderTests
 
         // Exact by hand from the rows above.
         var ward = units["ward"];
-        Assert.Equal([8.0, 21.0], ward.StayHours.Order());
-        Assert.Equal(1, ward.Censored.Count(flag => flag));
-        Assert.Equal([0.0, 6.0], ward.AgeAtStartHours.Order());
+        Assert.Equal([8.0, 21.0], ward.Stays.Hours);
+        Assert.Equal([0, 1], ward.Stays.Censored);
+        Assert.Equal([6.0, 0.0], ward.Stays.AgeHours);
         Assert.Empty(ward.Routes);
         var emergency = units["emergency"];
-        Assert.Equal([1.0, 1.5], emergency.StayHours.Order());
+        Assert.Equal([1.0, 1.5], emergency.Stays.Hours);
+        Assert.Equal([1, 1], emergency.Stays.Ended);
+        Assert.Equal(2, emergency.Departures);
         Assert.Equal([0.0, 0.5], emergency.WaitHours.Order());
         Assert.Equal([1.0, 10.0], emergency.EntryHours.Order());
         Assert.Equal([new RouteCount("ward", 1)], emergency.Routes);
@@ -64,10 +66,33 @@ public sealed class UnitObservationsBuilderTests
         for (int i = 0; i < forward.Count; i++)
         {
             Assert.Equal(forward[i].UnitId, backward[i].UnitId);
-            Assert.Equal(forward[i].StayHours, backward[i].StayHours);
+            Assert.Equal(forward[i].Stays.Hours, backward[i].Stays.Hours);
+            Assert.Equal(forward[i].Stays.Ended, backward[i].Stays.Ended);
             Assert.Equal(forward[i].Routes, backward[i].Routes);
             Assert.Equal(forward[i].EntryHours, backward[i].EntryHours);
         }
+    }
+
+    [Fact]
+    public void Stays_from_a_log_are_grouped_by_length_with_the_timestamps_step_as_their_resolution()
+    {
+        string[] rows =
+        [
+            "A,xray,2026-03-02T11:00:00,,2026-03-02T11:00:00",
+            "B,xray,2026-03-02T12:00:00,,2026-03-02T12:10:00",
+            "C,xray,2026-03-02T13:00:00,,2026-03-02T13:25:00",
+            "D,xray,2026-03-02T14:00:00,,2026-03-02T14:10:00",
+            "E,xray,2026-03-03T09:59:00,,",
+        ];
+
+        var xray = Observations(rows).Single();
+
+        // Exact by hand: ended stays of 0, 10, 10 and 25 minutes (step 5 minutes) and one of 1 minute still running at
+        // the extract's end (it ends at the extract's end, not at a timestamp, so it does not set the step).
+        Assert.Equal([0.0, 1.0 / 60.0, 10.0 / 60.0, 25.0 / 60.0], xray.Stays.Hours);
+        Assert.Equal([1, 0, 2, 1], xray.Stays.Ended);
+        Assert.Equal([0, 1, 0, 0], xray.Stays.Censored);
+        Assert.Equal(5.0 / 60.0, xray.Stays.ResolutionHours, 12);
     }
 
     private static string Csv(IEnumerable<string> rows) => "patient,unit,arrived,started,left\n" + string.Join("\n", rows) + "\n";
