@@ -88,6 +88,7 @@ public static class SolutionJsonWriter
             }
 
             json.WriteEndObject();
+            JsonTableWriter.PassOnWhenFull(json);
         }
 
         json.WriteEndArray();
