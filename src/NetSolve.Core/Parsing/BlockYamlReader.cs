@@ -248,7 +248,8 @@ internal static class BlockYamlReader
 
         int comment = rest.IndexOf(" #");
         var body = (comment >= 0 ? rest[..comment] : rest).TrimEnd(' ');
-        if (body.Contains(": ", StringComparison.Ordinal) || body.EndsWith(":") || body.Contains(" #", StringComparison.Ordinal))
+        // The body ends before the first " #", so it holds none.
+        if (body.Contains(": ", StringComparison.Ordinal) || body.EndsWith(":"))
         {
             return false;
         }
