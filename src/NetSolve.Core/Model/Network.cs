@@ -38,7 +38,7 @@ public sealed record Network(
     public double AllExternalArrivalsPerHour => ExternalArrivalsPerHour + Groups.Sum(group => group.ExternalArrivalsPerHour);
 
     // One index per list of units, shared by every caller that reads the same list: a 100,000-unit solve asked for
-    // it five times (rules, routing, inputs, loops, journeys). Keyed by the units' array, so a network made with
+    // it four times or more (rules, routing, inputs, loops, journeys). Keyed by the units' array, so a network made with
     // `with { Units = ... }` gets its own, and no field is added to the record's equality.
     private static readonly ConditionalWeakTable<Unit[], IReadOnlyDictionary<string, int>> Indexes = new();
 

@@ -70,8 +70,18 @@ public static class JsonTableWriter
     }
 
     /// <summary>Writes one named value: a string for text, a number, or null when absent.</summary>
-    public static void WriteCell(Utf8JsonWriter json, string name, Cell cell, TimeUnit timeUnit) =>
-        WriteCell(json, JsonEncodedText.Encode(name), cell, timeUnit);
+    public static void WriteCell(Utf8JsonWriter json, string name, Cell cell, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(json);
+        if (cell.Text is string text)
+        {
+            json.WriteString(name, text);
+        }
+        else
+        {
+            WriteNumber(json, name, MachineFormat.Value(cell, timeUnit));
+        }
+    }
 
     /// <summary>As the other overload, with the name encoded once for many rows.</summary>
     public static void WriteCell(Utf8JsonWriter json, JsonEncodedText name, Cell cell, TimeUnit timeUnit)
