@@ -33,7 +33,7 @@ internal static class NetworkLoader
             throw new InputException(problem!.ToString());
         }
 
-        var (network, scenarioChanges, diagnostics) = IsScenario(text, path) ? ReadScenario(text, path) : ReadNetwork(text, path);
+        var (network, scenarioChanges, diagnostics) = ReadNetworkOrScenario(text, path);
         var errors = diagnostics.Where(d => d.IsError).ToList();
         if (errors.Count > 0)
         {
@@ -96,25 +96,30 @@ internal static class NetworkLoader
         throw new InputException(string.Join("\n", problems.Select(d => d.ToString())));
     }
 
-    /// <summary>True for a scenario file: a mapping with a <c>base</c> key (a network file never has one).</summary>
-    private static bool IsScenario(string text, string path)
+    /// <summary>
+    /// Reads the YAML once: a mapping with a <c>base</c> key (a network file never has one) is a scenario file,
+    /// anything else is read as a network file from the same tree.
+    /// </summary>
+    private static (Network? Network, ImmutableArray<string> Changes, IReadOnlyList<Diagnostic> Diagnostics) ReadNetworkOrScenario(string text, string path)
     {
+        YamlNode? root;
         try
         {
-            return LocatedYamlReader.Read(text, path) is YamlMapping mapping && mapping.Entries.Any(entry => entry.Key.Value == "base");
+            root = LocatedYamlReader.Read(text, path);
         }
         catch (YamlReadException)
         {
             // Not YAML: the network reader says where, as for any network file.
-            return false;
+            return FromNetworkFile(NetworkReader.ReadText(text, path));
         }
+
+        return root is YamlMapping mapping && mapping.Entries.Any(entry => entry.Key.Value == "base")
+            ? ReadScenario(text, path)
+            : FromNetworkFile(NetworkReader.ReadTree(root, path));
     }
 
-    private static (Network? Network, ImmutableArray<string> Changes, IReadOnlyList<Diagnostic> Diagnostics) ReadNetwork(string text, string path)
-    {
-        var result = NetworkReader.ReadText(text, path);
-        return (result.Network, [], result.Diagnostics);
-    }
+    private static (Network? Network, ImmutableArray<string> Changes, IReadOnlyList<Diagnostic> Diagnostics) FromNetworkFile(ReadResult result) =>
+        (result.Network, [], result.Diagnostics);
 
     private static (Network? Network, ImmutableArray<string> Changes, IReadOnlyList<Diagnostic> Diagnostics) ReadScenario(string text, string path)
     {

@@ -46,6 +46,17 @@ internal static class ReadMeasurement
         });
         output.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"stages  file rules: cpu {parseCpu,6:F0} ms, {parseBytes / 1e6,6:F1} MB  structure: cpu {structureCpu,6:F0} ms, {structureBytes / 1e6,6:F1} MB  bare numbers: cpu {bareCpu,6:F0} ms, {bareBytes / 1e6,6:F1} MB ({diagnostics.Count} diagnostics)"));
+
+        // What `solve --format json` does after reading: the solution, then the document (written to nowhere).
+        NetSolve.Solving.NetworkSolution? solution = null;
+        var (solveCpu, solveBytes) = Measure(() => solution = NetSolve.Solving.NetworkSolver.Solve(parsed!.Value.Network));
+        var (jsonCpu, jsonBytes) = Measure(() =>
+        {
+            NetSolve.Presentation.Solution.SolutionJsonWriter.Write(solution!, Stream.Null);
+            return null;
+        });
+        output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+            $"after   solve: cpu {solveCpu,6:F0} ms, {solveBytes / 1e6,6:F1} MB  JSON document: cpu {jsonCpu,6:F0} ms, {jsonBytes / 1e6,6:F1} MB"));
     }
 
     private static (double CpuMs, long Bytes) Measure(Func<object?> stage)

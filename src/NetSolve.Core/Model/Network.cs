@@ -1,4 +1,6 @@
 using System.Collections.Immutable;
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 
 namespace NetSolve.Model;
 
@@ -35,13 +37,24 @@ public sealed record Network(
     /// <summary>Total external arrivals per hour of the default group and every patient group.</summary>
     public double AllExternalArrivalsPerHour => ExternalArrivalsPerHour + Groups.Sum(group => group.ExternalArrivalsPerHour);
 
-    /// <summary>Maps each unit id to its position in <see cref="Units"/>. Builds a new dictionary on each call.</summary>
+    // One index per list of units, shared by every caller that reads the same list: a 100,000-unit solve asked for
+    // it four times or more (rules, routing, inputs, loops, journeys). Keyed by the units' array, so a network made with
+    // `with { Units = ... }` gets its own, and no field is added to the record's equality.
+    private static readonly ConditionalWeakTable<Unit[], IReadOnlyDictionary<string, int>> Indexes = new();
+
+    /// <summary>Maps each unit id to its position in <see cref="Units"/>; built once per list of units and shared (read only).</summary>
     public IReadOnlyDictionary<string, int> BuildIndex()
     {
-        var index = new Dictionary<string, int>(Units.Length, StringComparer.Ordinal);
-        for (int i = 0; i < Units.Length; i++)
+        var units = ImmutableCollectionsMarshal.AsArray(Units);
+        return units is null ? Index([]) : Indexes.GetValue(units, Index);
+    }
+
+    private static Dictionary<string, int> Index(Unit[] units)
+    {
+        var index = new Dictionary<string, int>(units.Length, StringComparer.Ordinal);
+        for (int i = 0; i < units.Length; i++)
         {
-            index[Units[i].Id] = i;
+            index[units[i].Id] = i;
         }
 
         return index;

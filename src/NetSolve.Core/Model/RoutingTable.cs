@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace NetSolve.Model;
 
 /// <summary>
@@ -30,10 +32,19 @@ public sealed class RoutingTable
     /// <summary>External arrivals per hour at each unit.</summary>
     public IReadOnlyList<double> ExternalPerHour { get; }
 
-    /// <summary>Builds the table from a validated network.</summary>
+    // The rules check and the solver both need the table of the same network: built once per network object
+    // (a network is immutable; a what-if is a new object with a table of its own).
+    private static readonly ConditionalWeakTable<Network, RoutingTable> Tables = new();
+
+    /// <summary>Builds the table from a validated network (once per network object; the table is immutable).</summary>
     public static RoutingTable Build(Network network)
     {
         ArgumentNullException.ThrowIfNull(network);
+        return Tables.GetValue(network, Create);
+    }
+
+    private static RoutingTable Create(Network network)
+    {
         var index = network.BuildIndex();
         int n = network.Units.Length;
         var external = new double[n];

@@ -103,8 +103,9 @@ internal static class BlockYamlReader
     /// <summary>The next line with a key on it, read when asked for; blank and comment lines are passed over.</summary>
     private sealed class LineCursor(string text)
     {
-        // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each.
-        private readonly StringPool _pool = new Dictionary<string, string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
+        // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each. Sized
+        // for about one distinct string per two lines of a generated network, so the pool is not regrown as it fills.
+        private readonly StringPool _pool = new Dictionary<string, string>(text.Length / 64, StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
         private int _position;
         private int _lineNumber;
 
@@ -154,7 +155,8 @@ internal static class BlockYamlReader
     private static bool ReadLine(ReadOnlySpan<char> span, int number, StringPool pool, out Line? line)
     {
         line = null;
-        foreach (char c in span)
+        // Most lines are printable ASCII throughout: one vectorised search, and the character loop only for the rest.
+        foreach (char c in span.ContainsAnyExceptInRange(' ', '~') ? span : [])
         {
             // Control characters, YAML's other line breaks (NEL, LS, PS), byte order marks and surrogates: let YamlDotNet decide.
             if (c < ' ' || c is (>= '\u007f' and <= '\u009f') or '\u2028' or '\u2029' or '\uFEFF' or '\uFFFE' or '\uFFFF' || char.IsSurrogate(c))
@@ -246,7 +248,8 @@ internal static class BlockYamlReader
 
         int comment = rest.IndexOf(" #");
         var body = (comment >= 0 ? rest[..comment] : rest).TrimEnd(' ');
-        if (body.Contains(": ", StringComparison.Ordinal) || body.EndsWith(":") || body.Contains(" #", StringComparison.Ordinal))
+        // The body ends before the first " #", so it holds none.
+        if (body.Contains(": ", StringComparison.Ordinal) || body.EndsWith(":"))
         {
             return false;
         }

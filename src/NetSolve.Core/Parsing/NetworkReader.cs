@@ -34,6 +34,16 @@ public static class NetworkReader
             return Failed(exception.Location, DiagnosticCodes.NotYaml, exception.Message);
         }
 
+        return ReadTree(root, fileName);
+    }
+
+    /// <summary>
+    /// Reads a network from the YAML tree of a file already read with <see cref="LocatedYamlReader.Read"/>: a caller that
+    /// looked at the tree first (is it a scenario?) need not read a 100,000-unit file twice.
+    /// </summary>
+    public static ReadResult ReadTree(YamlNode? root, string fileName)
+    {
+        ArgumentNullException.ThrowIfNull(fileName);
         if (root is null || root is YamlScalar { IsNull: true })
         {
             return Failed(new SourceLocation(fileName, 1, 1), DiagnosticCodes.Empty, "the file is empty; a network file needs 'units' and 'arrivals'");

@@ -12,7 +12,8 @@ internal static class StructureRules
     public static void Check(Network network, NetworkLocations locations, List<Diagnostic> diagnostics)
     {
         var routing = RoutingTable.Build(network);
-        bool[] reached = routing.ReachedUnits();
+        bool[] defaultReached = routing.ReachedUnits();
+        bool[] reached = (bool[])defaultReached.Clone();
         var groupRoutings = network.Groups
             .Select(group => (Group: group, Routing: RoutingTable.Build(network with { Arrivals = group.Arrivals, Routes = group.Routes ?? network.Routes })))
             .ToList();
@@ -36,7 +37,7 @@ internal static class StructureRules
         }
 
         var reported = new HashSet<string>(StringComparer.Ordinal);
-        ReportClosedSets(network, routing, routing.ReachedUnits(), null, locations.For, reported, diagnostics);
+        ReportClosedSets(network, routing, defaultReached, null, locations.For, reported, diagnostics);
         foreach (var (group, groupRouting) in groupRoutings)
         {
             // A group with its own routes is pointed at by its key; one that follows the network's routes, by those routes.

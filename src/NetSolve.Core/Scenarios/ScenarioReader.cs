@@ -46,7 +46,7 @@ public static class ScenarioReader
 
         if (root is YamlMapping mapping && !mapping.Entries.Any(entry => entry.Key.Value == "base"))
         {
-            var network = NetworkReader.ReadText(text, fileName);
+            var network = NetworkReader.ReadTree(root, fileName);
             return network.Network is null
                 ? new ScenarioReadResult(null, network.Diagnostics)
                 : new ScenarioReadResult(

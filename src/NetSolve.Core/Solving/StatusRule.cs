@@ -29,7 +29,10 @@ public static class StatusRule
         foreach (var unit in units)
         {
             var ranked = unit with { Status = StatusOf(unit, smallest, strainThreshold) };
-            builder.Add(ranked with { TargetsBreached = TargetCheck.Breached(ranked) });
+            var breached = TargetCheck.Breached(ranked);
+
+            // Most units have no targets: no second copy of a 200-byte result to say so (100,000 of them at a time).
+            builder.Add(ranked.TargetsBreached == breached ? ranked : ranked with { TargetsBreached = breached });
         }
 
         return builder.MoveToImmutable();

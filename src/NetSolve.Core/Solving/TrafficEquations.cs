@@ -49,17 +49,17 @@ public static class TrafficEquations
         }
 
         int n = members.Count;
-        var external = Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
+        Vector<double> External() => Vector<double>.Build.Dense(n, k => routing.ExternalPerHour[members[k]]);
         double[] result;
         bool dense = method == TrafficSolveMethod.Dense || (method == TrafficSolveMethod.Automatic && n <= DenseLimit);
         if (dense)
         {
-            result = Scatter(SolveDense(routing, members, position, external), members, routing.UnitCount);
+            result = Scatter(SolveDense(routing, members, position, External()), members, routing.UnitCount);
         }
         else
         {
             result = Sweep(routing, reached)
-                ?? Scatter(SolveSparse(routing, members, position, external), members, routing.UnitCount);
+                ?? Scatter(SolveSparse(routing, members, position, External()), members, routing.UnitCount);
         }
 
         CheckResidual(routing, result);

@@ -33,6 +33,9 @@ public sealed record ResultTable(ImmutableArray<ResultColumn> Columns, Immutable
         _ => [.. Enumerable.Range(0, Columns.Length)],
     };
 
+    /// <summary>True when a column for <paramref name="columnAudience"/> is shown to <paramref name="audience"/>.</summary>
+    public static bool Shows(Audience columnAudience, Audience audience) => columnAudience == Audience.All || columnAudience == audience;
+
     private static ImmutableArray<int> Shown(ImmutableArray<ResultColumn> columns, Audience audience) =>
-        [.. Enumerable.Range(0, columns.Length).Where(i => columns[i].Audience == Audience.All || columns[i].Audience == audience)];
+        [.. Enumerable.Range(0, columns.Length).Where(i => Shows(columns[i].Audience, audience))];
 }

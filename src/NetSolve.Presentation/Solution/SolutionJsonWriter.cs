@@ -48,27 +48,28 @@ public static class SolutionJsonWriter
     /// The units array; <c>targets_breached</c>, present only when some unit has a target, is an array of keys; <c>by_hour</c>,
     /// present only with an hour-by-hour solution, is an object of arrays.
     /// </summary>
+    /// <remarks>
+    /// Each unit's values are read and written as it comes, not built into a table first: a table of 100,000 units
+    /// held about 100 MB of cells only to be written once. The field names are encoded once.
+    /// </remarks>
     private static void WriteUnits(NetworkSolution solution, Utf8JsonWriter json)
     {
-        var table = UnitColumns.Table(solution);
+        var columns = UnitColumns.For(solution).Where(column => ResultTable.Shows(column.Audience, Audience.Machines)).ToArray();
+        var names = columns.Select(column => JsonEncodedText.Encode(column.Id)).ToArray();
+        int targets = Array.FindIndex(columns, column => column.Id == UnitColumns.TargetsBreached.Id);
         var byHour = ByHourUnit.All(solution);
-        if (!TargetWords.AnyTargets(solution) && byHour.Count == 0)
-        {
-            JsonTableWriter.WriteArray(table, "units", json);
-            return;
-        }
-
+        var timeUnit = solution.Network.TimeUnit;
         json.WriteStartArray("units");
-        for (int row = 0; row < table.Rows.Length; row++)
+        for (int row = 0; row < solution.Units.Length; row++)
         {
+            var unit = solution.Units[row];
             json.WriteStartObject();
-            foreach (int i in table.ColumnsFor(Audience.Machines))
+            for (int i = 0; i < columns.Length; i++)
             {
-                string id = table.Columns[i].Id;
-                if (id == UnitColumns.TargetsBreached.Id)
+                if (i == targets)
                 {
-                    json.WriteStartArray(id);
-                    foreach (var kind in solution.Units[row].TargetsBreached)
+                    json.WriteStartArray(names[i]);
+                    foreach (var kind in unit.TargetsBreached)
                     {
                         json.WriteStringValue(TargetKeys.Of(kind));
                     }
@@ -77,16 +78,17 @@ public static class SolutionJsonWriter
                 }
                 else
                 {
-                    JsonTableWriter.WriteCell(json, id, table.Rows[row][i], table.TimeUnit);
+                    JsonTableWriter.WriteCell(json, names[i], columns[i].Read(unit), timeUnit);
                 }
             }
 
             if (byHour.Count > 0)
             {
-                ByHourJsonWriter.Write(byHour[row], table.TimeUnit, json);
+                ByHourJsonWriter.Write(byHour[row], timeUnit, json);
             }
 
             json.WriteEndObject();
+            JsonTableWriter.PassOnWhenFull(json);
         }
 
         json.WriteEndArray();

@@ -91,6 +91,16 @@ public static class UnitColumns
     public static ResultTable Table(NetworkSolution solution)
     {
         ArgumentNullException.ThrowIfNull(solution);
+        return ResultTable.Build(For(solution), solution.Units, solution.Network.TimeUnit);
+    }
+
+    /// <summary>
+    /// The columns of <paramref name="solution"/>'s unit table: the capacity columns for machines only when no unit has
+    /// a capacity, the missed targets beside the status when some unit has a target.
+    /// </summary>
+    public static ImmutableArray<Column<UnitResult>> For(NetworkSolution solution)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
         bool anyCapacity = solution.Network.Units.Any(unit => unit.Capacity is not null);
         var columns = anyCapacity ? All : All.Select(column => CapacityColumns.Contains(column) ? column with { Audience = Audience.Machines } : column);
         if (TargetWords.AnyTargets(solution))
@@ -98,6 +108,6 @@ public static class UnitColumns
             columns = columns.SelectMany(column => column == Status ? [column, TargetsBreached] : new[] { column });
         }
 
-        return ResultTable.Build(columns, solution.Units, solution.Network.TimeUnit);
+        return [.. columns];
     }
 }
