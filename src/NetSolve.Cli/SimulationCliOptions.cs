@@ -148,7 +148,7 @@ internal static class SimulationCliOptions
     /// <summary>
     /// As <see cref="Read"/>, but a warm-up or run length not given is chosen from the slowest unit's relaxation time
     /// (<see cref="RunLengthPlanner"/>), and each unit whose relaxation time is long against the run is warned about
-    /// on stderr, one line each.
+    /// on stderr, one line each for the slowest units and one line counting the rest.
     /// </summary>
     public static SimulationOptions ReadPlanned(NetworkRequest request, Option<ulong> seed, Option<int> replications,
         (Option<string> Option, DurationRule Rule) warmup, (Option<string> Option, DurationRule Rule) duration, Option<string[]>? waitOver = null)
@@ -159,9 +159,16 @@ internal static class SimulationCliOptions
         bool durationGiven = parse.GetResult(duration.Option) is { Implicit: false };
         var read = ReadGiven(parse, request.Network.TimeUnit, seed, replications, warmupGiven ? warmup : null, durationGiven ? duration : null, waitOver);
         var plan = RunLengthPlanner.Plan(request.Solve(), warmupGiven ? read.WarmupHours : null, durationGiven ? read.DurationHours : null);
-        foreach (var slow in plan.SlowUnits)
+        // Slowest first, and at most as many as the warnings of one kind from a file (WarningLog): a generated network
+        // run with no warm-up can have a slow unit in every one of its 100,000 units.
+        foreach (var slow in plan.SlowUnits.Take(WarningLog.ShownPerKind))
         {
             request.Warnings.Report(Messages.SlowUnit(slow.Unit.Id, slow.Hours, plan.WarmupHours, plan.DurationHours));
+        }
+
+        if (plan.SlowUnits.Length > WarningLog.ShownPerKind)
+        {
+            request.Warnings.Report(Messages.MoreSlowUnits(plan.SlowUnits.Length - WarningLog.ShownPerKind));
         }
 
         // More replications where the run length met its bound before the slowest unit's relaxation times: in the
