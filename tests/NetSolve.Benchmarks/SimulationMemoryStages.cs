@@ -53,7 +53,9 @@ internal static class SimulationMemoryStages
         var engine = new SimulationEngine(compiled, layout, [], options.WarmupHours, options.DurationHours, options.Seed, 0);
         engine.Run(null, CancellationToken.None);
         stage("replication");
-        pool.Finish(0, new ReplicationOutput(engine.ResultRow(), engine.EventCount, engine.Tallies(), engine.InNetworkSeries));
+        var tallies = engine.Tallies();
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  histograms of time in unit hold {tallies.UnitTimes.Sum(histogram => histogram.Bytes) / 1e6:F0} MB of counts"));
+        pool.Finish(0, new ReplicationOutput(engine.ResultRow(), engine.EventCount, tallies, engine.InNetworkSeries));
         stage("pool add");
     }
 }
