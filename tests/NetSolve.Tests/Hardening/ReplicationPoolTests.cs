@@ -98,6 +98,43 @@ public sealed class ReplicationPoolTests
         Assert.Equal(20, pool.UnitTimes[0].Percentiles()[0].Hours!.Value.Replications);
     }
 
+    [Fact]
+    public void A_pool_that_stops_keeping_after_one_replication_gives_the_very_intervals_of_moments_made_at_once()
+    {
+        // Exact by hand: the moments are made when the second replication comes, from the first and then the second,
+        // so every sum sees the same additions in the same order as moments fed each replication as it came.
+        var random = new Random(8);
+        var replications = Enumerable.Range(0, 6).Select(r => Histogram(random, 80 + random.Next(200), zeros: r % 2)).ToList();
+        long firstCount = replications[0].Count;
+        double firstMedian = replications[0].Quantile(0.5);
+        var late = new PercentilePool();
+        var moments = new ShareMoments();
+        for (int r = 0; r < replications.Count; r++)
+        {
+            late.Add(replications[r]);
+            moments.Add(replications[r]);
+            if (r == 0)
+            {
+                late.StopKeeping();
+
+                // One replication: no half-width either way, and the point is its own percentile.
+                var lone = late.Percentiles();
+                Assert.All(lone, percentile => Assert.Null(percentile.Hours!.Value.HalfWidth));
+                Assert.Equal(replications[0].Quantile(0.5), lone[0].Hours!.Value.Mean);
+            }
+        }
+
+        var pooled = ReplicationTallies.Pool(replications);
+        var fromPool = late.Percentiles();
+        for (int i = 0; i < MetricLayout.Percentiles.Length; i++)
+        {
+            Assert.Equal(QuantileInterval.Of(MetricLayout.Percentiles[i], pooled, moments), fromPool[i].Hours);
+        }
+
+        // The first replication's histogram was the pooled one until the second came: pooling must not have changed it.
+        Assert.Equal((firstCount, firstMedian), (replications[0].Count, replications[0].Quantile(0.5)));
+    }
+
     private static ReplicationOutput Output(double marker)
     {
         var random = new Random((int)marker);
