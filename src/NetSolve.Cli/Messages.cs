@@ -218,6 +218,11 @@ internal static class Messages
         + $"and a run of {PeopleFormat.Time(durationHours)} (aim for 5 and 10 times it): its simulated means may be biased; "
         + "try a longer --warmup and --duration, or more replications";
 
+    /// <summary><c>simulate</c>: the slow units beyond those listed by <see cref="SlowUnit"/>, counted in one line.</summary>
+    public static string MoreSlowUnits(int count) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"{Program}warning: {count:N0} more units relax slowly against this warm-up and run (the {WarningLog.ShownPerKind} slowest are listed above); their simulated means may be biased too");
+
     /// <summary><c>simulate</c>: MSER-5 on the number in the network says the start-up transient outlasted the warm-up.</summary>
     public static string WarmupShortByMser(double cutHours, double warmupHours) =>
         $"{Program}warning: the number of patients in the network settled only after about {PeopleFormat.Time(cutHours)} (MSER-5), "

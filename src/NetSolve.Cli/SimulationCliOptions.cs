@@ -148,9 +148,16 @@ internal static class SimulationCliOptions
     /// <summary>
     /// As <see cref="Read"/>, but a warm-up or run length not given is chosen from the slowest unit's relaxation time
     /// (<see cref="RunLengthPlanner"/>), and each unit whose relaxation time is long against the run is warned about
-    /// on stderr, one line each.
+    /// on stderr, one line each for the slowest units and one line counting the rest.
     /// </summary>
-    public static SimulationOptions ReadPlanned(NetworkRequest request, Option<ulong> seed, Option<int> replications,
+    /// <param name="request">The command's request.</param>
+    /// <param name="formula">The request's network solved: the relaxation times come from it (the caller solves once for this and the work estimate).</param>
+    /// <param name="seed">The seed option.</param>
+    /// <param name="replications">The replications option.</param>
+    /// <param name="warmup">The warm-up option and its rule.</param>
+    /// <param name="duration">The run length option and its rule.</param>
+    /// <param name="waitOver">The wait thresholds option, when the command takes it.</param>
+    public static SimulationOptions ReadPlanned(NetworkRequest request, NetworkSolution formula, Option<ulong> seed, Option<int> replications,
         (Option<string> Option, DurationRule Rule) warmup, (Option<string> Option, DurationRule Rule) duration, Option<string[]>? waitOver = null)
     {
         ArgumentNullException.ThrowIfNull(request);
@@ -158,10 +165,17 @@ internal static class SimulationCliOptions
         bool warmupGiven = parse.GetResult(warmup.Option) is { Implicit: false };
         bool durationGiven = parse.GetResult(duration.Option) is { Implicit: false };
         var read = ReadGiven(parse, request.Network.TimeUnit, seed, replications, warmupGiven ? warmup : null, durationGiven ? duration : null, waitOver);
-        var plan = RunLengthPlanner.Plan(request.Solve(), warmupGiven ? read.WarmupHours : null, durationGiven ? read.DurationHours : null);
-        foreach (var slow in plan.SlowUnits)
+        var plan = RunLengthPlanner.Plan(formula, warmupGiven ? read.WarmupHours : null, durationGiven ? read.DurationHours : null);
+        // Slowest first, and at most as many as the warnings of one kind from a file (WarningLog): a generated network
+        // run with no warm-up can have a slow unit in every one of its 100,000 units.
+        foreach (var slow in plan.SlowUnits.Take(WarningLog.ShownPerKind))
         {
             request.Warnings.Report(Messages.SlowUnit(slow.Unit.Id, slow.Hours, plan.WarmupHours, plan.DurationHours));
+        }
+
+        if (plan.SlowUnits.Length > WarningLog.ShownPerKind)
+        {
+            request.Warnings.Report(Messages.MoreSlowUnits(plan.SlowUnits.Length - WarningLog.ShownPerKind));
         }
 
         // More replications where the run length met its bound before the slowest unit's relaxation times: in the

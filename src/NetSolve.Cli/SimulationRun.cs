@@ -18,6 +18,7 @@ internal static class SimulationRun
             stop.Cancel();
         };
         Console.CancelKeyPress += onCancel;
+        CollectBeforeLargeRun();
         try
         {
             return context.IsTerminal
@@ -27,6 +28,22 @@ internal static class SimulationRun
         finally
         {
             Console.CancelKeyPress -= onCancel;
+        }
+    }
+
+    /// <summary>Heap above which the garbage left before a run is worth collecting at once.</summary>
+    private const long LargeHeapBytes = 64L * 1024 * 1024;
+
+    /// <summary>
+    /// Collects what reading the file and planning the run left behind, when that is much: on a 100,000-unit network
+    /// a few hundred MB of garbage from the reader and the formulas, which the replication's own growth would otherwise
+    /// be added to at the peak of the command (docs/performance.md, "Memory of simulate --format json").
+    /// </summary>
+    private static void CollectBeforeLargeRun()
+    {
+        if (GC.GetTotalMemory(forceFullCollection: false) > LargeHeapBytes)
+        {
+            GC.Collect(GC.MaxGeneration, GCCollectionMode.Aggressive, blocking: true, compacting: true);
         }
     }
 }

@@ -13,6 +13,12 @@ if (args is ["cpu-time-file", var path, var hours, .. var rest])
     return;
 }
 
+if (args is ["memory-stages", var stagesPath, var stagesHours])
+{
+    SimulationMemoryStages.Run(Console.Out, stagesPath, double.Parse(stagesHours, System.Globalization.CultureInfo.InvariantCulture));
+    return;
+}
+
 if (args is ["read-file", var networkPath, .. var readRuns])
 {
     ReadMeasurement.Run(Console.Out, networkPath, readRuns.Length == 0 ? 5 : int.Parse(readRuns[0], System.Globalization.CultureInfo.InvariantCulture));

@@ -93,7 +93,7 @@ internal sealed class ReportCommand() : NetworkCommand(
         SimulationResult? simulation = null;
         if (request.GetValue(_simulate))
         {
-            var options = SimulationCliOptions.ReadPlanned(request, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
+            var options = SimulationCliOptions.ReadPlanned(request, request.Solve(), _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
             SimulationCliOptions.CheckWork(baseline, options, request.GetValue(_allowLong));
             simulation = SimulationRun.Run(baseline.Network, options, request.Context);
             if (simulation.ReplicationsFinished == 0)

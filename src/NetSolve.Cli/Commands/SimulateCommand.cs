@@ -51,17 +51,7 @@ internal sealed class SimulateCommand() : NetworkCommand(
     protected override int Execute(NetworkRequest request)
     {
         var network = request.Network;
-        var options = SimulationCliOptions.ReadPlanned(
-            request, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, SimulationCliOptions.Duration), _waitOver)
-            with { MaxDegreeOfParallelism = request.GetValue(_threads), Precision = request.GetValue(_precision) };
-        if (options.Precision is not null)
-        {
-            options = options with { MaxReplications = Math.Max(request.GetValue(_maxReplications), options.Replications) };
-        }
-
-        // With --precision the run may grow to --max-replications: the work estimate counts that bound.
-        SimulationCliOptions.CheckWork(request.Solve(), options with { Replications = options.Precision is null ? options.Replications : options.MaxReplications }, request.GetValue(_allowLong));
-
+        var options = PlannedOptions(request);
         var result = SimulationRun.Run(network, options, request.Context);
         if (result.ReplicationsFinished == 0)
         {
@@ -86,6 +76,26 @@ internal sealed class SimulateCommand() : NetworkCommand(
             csv => WriteCsv(result, formula, csv),
             table => WriteTable(result, formula, threshold, table, network));
         return ExitCodes.Success;
+    }
+
+    /// <summary>
+    /// The run's options, planned and checked against the bound on work with one formula solve. In a method of its
+    /// own so that the solution is let go before the run: at 100,000 units it is tens of MB the replication can use.
+    /// </summary>
+    private SimulationOptions PlannedOptions(NetworkRequest request)
+    {
+        var formula = request.Solve();
+        var options = SimulationCliOptions.ReadPlanned(
+            request, formula, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, SimulationCliOptions.Duration), _waitOver)
+            with { MaxDegreeOfParallelism = request.GetValue(_threads), Precision = request.GetValue(_precision) };
+        if (options.Precision is not null)
+        {
+            options = options with { MaxReplications = Math.Max(request.GetValue(_maxReplications), options.Replications) };
+        }
+
+        // With --precision the run may grow to --max-replications: the work estimate counts that bound.
+        SimulationCliOptions.CheckWork(formula, options with { Replications = options.Precision is null ? options.Replications : options.MaxReplications }, request.GetValue(_allowLong));
+        return options;
     }
 
     private static void WriteCsv(SimulationResult result, NetworkSolution? formula, TextWriter writer)

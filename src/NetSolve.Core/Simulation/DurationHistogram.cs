@@ -8,10 +8,10 @@ namespace NetSolve.Simulation;
 /// A bucket is the double's exponent and the top <see cref="SubBucketBits"/> bits of its mantissa, read straight from
 /// its bits: 128 buckets per octave, each at most 2^−7 (0.78%) of its lower edge wide, so a quantile read from the
 /// buckets (interpolated linearly inside its bucket) is within 0.78% of a value of the sample that has the same rank.
-/// A histogram starts sparse: the buckets it has counted, as sorted (bucket, count) pairs of 8 bytes each, so a unit
-/// that sees a few hundred patients in a replication costs about 8 bytes per patient, not 1 KB per octave touched
-/// (a network of 100,000 units would otherwise need gigabytes). Past <see cref="SparseBuckets"/> buckets, or a count
-/// too large for 32 bits, it turns dense: buckets kept per octave, an array of 128 counts (1 KB) made the first time
+/// A histogram starts sparse: the buckets it has counted, as sorted (bucket, count) pairs packed in 4 bytes each (a
+/// bucket key has 18 bits, leaving 14 for its count), so a unit that sees a few hundred patients in a replication
+/// costs at most 4 bytes per patient, not 1 KB per octave touched (a network of 100,000 units would otherwise need
+/// gigabytes). Past <see cref="SparseBuckets"/> buckets, or a count above 16,383 in one bucket, it turns dense: buckets kept per octave, an array of 128 counts (1 KB) made the first time
 /// the octave is touched, the octaves a window from the lowest to the highest touched: memory grows only with the
 /// range of scales seen, 1 KB per octave, at most 2,047 octaves (2 MB) for durations spanning every double,
 /// typically 20-40 KB. Both forms hold the same buckets and give the same quantiles. Mutable, not thread-safe: one
@@ -28,17 +28,18 @@ internal sealed class DurationHistogram
     private const int MantissaShift = 52 - SubBucketBits;
     private const int BucketsPerOctave = 1 << SubBucketBits;
 
-    /// <summary>Most buckets held sparse (4 KB): past them the dense form is smaller or about as small, and quicker.</summary>
+    /// <summary>Most buckets held sparse (2 KB): past them the dense form is about as small, and quicker.</summary>
     public const int SparseBuckets = 512;
 
-    private const int CountBits = 32;
-    private const long SparseCountMask = (1L << CountBits) - 1;
+    // A bucket key of a positive finite double is below 2^18 (11 exponent bits and SubBucketBits), so a pair fits 32 bits.
+    private const int CountBits = 14;
+    private const uint SparseCountMask = (1u << CountBits) - 1;
 
     private long[]?[] _octaves = [];
     private int _firstOctave;
 
-    // While sparse (_octaves empty): bucket key << 32 | count, sorted by key, in the first _sparseCount entries.
-    private long[] _sparse = [];
+    // While sparse (_octaves empty): bucket key << CountBits | count, sorted by key, in the first _sparseCount entries.
+    private uint[] _sparse = [];
     private int _sparseCount;
     private bool _isDense;
 
@@ -164,7 +165,7 @@ internal sealed class DurationHistogram
     /// Bytes held by the counts (to bound what a run keeps): the sparse pairs' array while sparse, else 1 KB per touched
     /// octave and the window over them. Sparse histograms count too: a run of many small replications keeps mostly those.
     /// </summary>
-    public long Bytes => (_sparse.Length * (long)sizeof(long)) + (_octaves.Length * (long)sizeof(long)) + (_octaves.Count(octave => octave is not null) * (long)BucketsPerOctave * sizeof(long));
+    public long Bytes => (_sparse.Length * (long)sizeof(uint)) + (_octaves.Length * (long)sizeof(long)) + (_octaves.Count(octave => octave is not null) * (long)BucketsPerOctave * sizeof(long));
 
     /// <summary>The bucket holding <paramref name="duration"/> (positive and finite): keys order the buckets, and key + 1 is the next one.</summary>
     public static long BucketOf(double duration) => BitConverter.DoubleToInt64Bits(duration) >> MantissaShift;
@@ -239,7 +240,7 @@ internal sealed class DurationHistogram
         while (low < high)
         {
             int middle = (int)((uint)(low + high) >> 1);
-            if (_sparse[middle] >> CountBits < key)
+            if ((_sparse[middle] >> CountBits) < key)
             {
                 low = middle + 1;
             }
@@ -256,7 +257,7 @@ internal sealed class DurationHistogram
                 return false;
             }
 
-            _sparse[low] += count;
+            _sparse[low] += (uint)count;
             return true;
         }
 
@@ -267,11 +268,13 @@ internal sealed class DurationHistogram
 
         if (_sparseCount == _sparse.Length)
         {
-            Array.Resize(ref _sparse, Math.Max(4, _sparse.Length * 2));
+            // Half as much again rather than twice: a network of 100,000 units holds 100,000 of these arrays, and
+            // doubling left a third of them unused on average.
+            Array.Resize(ref _sparse, Math.Min(SparseBuckets, Math.Max(4, _sparse.Length + (_sparse.Length >> 1))));
         }
 
         Array.Copy(_sparse, low, _sparse, low + 1, _sparseCount - low);
-        _sparse[low] = (key << CountBits) | count;
+        _sparse[low] = ((uint)key << CountBits) | (uint)count;
         _sparseCount++;
         return true;
     }

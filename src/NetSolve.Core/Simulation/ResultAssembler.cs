@@ -7,7 +7,7 @@ namespace NetSolve.Simulation;
 internal sealed class ResultAssembler
 {
     private readonly MetricLayout _layout;
-    private readonly IReadOnlyList<double[]> _rows;
+    private readonly double[][] _rows;
     private readonly ReplicationPool _pool;
 
     /// <param name="layout">Where each metric sits in a row.</param>
@@ -16,13 +16,13 @@ internal sealed class ResultAssembler
     {
         ArgumentNullException.ThrowIfNull(pool);
         _layout = layout;
-        _rows = pool.Rows;
+        _rows = [.. pool.Rows];
         _pool = pool;
     }
 
     public SimulationResult Assemble(Network network, SimulationOptions options, long events)
     {
-        if (_rows.Count == 0)
+        if (_rows.Length == 0)
         {
             return new SimulationResult
             {
@@ -58,7 +58,7 @@ internal sealed class ResultAssembler
         {
             Network = network,
             Options = options,
-            ReplicationsFinished = _rows.Count,
+            ReplicationsFinished = _rows.Length,
             Events = events,
             Units = units.MoveToImmutable(),
             Totals = new SimulatedTotals
@@ -83,12 +83,6 @@ internal sealed class ResultAssembler
             waitOver.Add(WaitOver(u, t, options.WaitThresholdsHours[t]));
         }
 
-        var byHour = ImmutableArray.CreateBuilder<Estimate?>(24);
-        for (int h = 0; h < 24; h++)
-        {
-            byHour.Add(At(_layout.Unit(u, _layout.QueueByHourOffset + h)));
-        }
-
         return new SimulatedUnit
         {
             Unit = unit,
@@ -104,7 +98,7 @@ internal sealed class ResultAssembler
             DivertedPerHour = Required(_layout.Unit(u, MetricLayout.DivertedPerHour), 0.0),
             TimeInUnitPercentiles = _pool.UnitTimes[u].Percentiles(),
             WaitOver = waitOver.MoveToImmutable(),
-            MeanQueueByHour = byHour.MoveToImmutable(),
+            MeanQueueByHour = new HourlyQueueEstimates(_rows, _layout.Unit(u, _layout.QueueByHourOffset)),
         };
     }
 
@@ -125,7 +119,7 @@ internal sealed class ResultAssembler
         if (over == 0)
         {
             double bound = WaitOverEstimate.RuleOfThree / starts;
-            return new WaitOverEstimate(thresholdHours, new Estimate(0.0, _rows.Count > 1 ? bound : null, _rows.Count), bound);
+            return new WaitOverEstimate(thresholdHours, new Estimate(0.0, _rows.Length > 1 ? bound : null, _rows.Length), bound);
         }
 
         var estimate = Estimate.Sectioned((double)over / starts, _rows.Select(row => row[slot]));

@@ -46,6 +46,6 @@ public sealed record SimulatedUnit
     /// <summary>P(wait &gt; t) for each requested t, in the order given.</summary>
     public required ImmutableArray<WaitOverEstimate> WaitOver { get; init; }
 
-    /// <summary>Mean number waiting in each hour of the day, 00-01 first; null for an hour the run never covered.</summary>
-    public required ImmutableArray<Estimate?> MeanQueueByHour { get; init; }
+    /// <summary>Mean number waiting in each hour of the day, 00-01 first (24 estimates); null for an hour the run never covered.</summary>
+    public required IReadOnlyList<Estimate?> MeanQueueByHour { get; init; }
 }

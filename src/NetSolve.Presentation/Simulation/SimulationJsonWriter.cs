@@ -21,6 +21,9 @@ namespace NetSolve.Presentation.Simulation;
 /// </remarks>
 public static class SimulationJsonWriter
 {
+    /// <summary>Bytes of the document held before they are handed to the output stream.</summary>
+    private const int FlushBytes = 64 * 1024;
+
     /// <summary>Writes <paramref name="result"/> (and the comparison when <paramref name="formula"/> is given), indented, UTF-8.</summary>
     public static void Write(SimulationResult result, Stream output, NetworkSolution? formula = null, double strainThreshold = Defaults.StrainThreshold)
     {
@@ -33,12 +36,20 @@ public static class SimulationJsonWriter
         json.WriteString("time_unit", TimeConstants.Name(timeUnit));
         json.WriteBoolean("stable", rows.All(row => row.Status != UnitStatus.Unstable));
         WriteRun(json, result);
-        var units = ResultTable.Build(SimulatedUnitColumns.ForJson, rows, timeUnit);
+        // Each unit's cells are read as it is written and the document is handed on every FlushBytes, so memory does not
+        // grow with the units: at 100,000 units a table of every cell and the whole document held for one final flush
+        // were about 700 MB.
+        var columns = SimulatedUnitColumns.ForJson;
+        var described = ResultTable.Build(columns, [], timeUnit);
         json.WriteStartArray("units");
         for (int i = 0; i < rows.Length; i++)
         {
             json.WriteStartObject();
-            WriteFields(json, units, units.Rows[i]);
+            foreach (int c in described.ColumnsFor(Audience.Machines))
+            {
+                JsonTableWriter.WriteCell(json, columns[c].Id, columns[c].Read(rows[i]), timeUnit);
+            }
+
             WriteUnitDetails(json, rows[i].Simulated, timeUnit);
             if (formula is not null)
             {
@@ -46,6 +57,10 @@ public static class SimulationJsonWriter
             }
 
             json.WriteEndObject();
+            if (json.BytesPending >= FlushBytes)
+            {
+                json.Flush();
+            }
         }
 
         json.WriteEndArray();
@@ -158,7 +173,7 @@ public static class SimulationJsonWriter
     }
 
     /// <summary>An array of one number per hour of day; null for an hour not measured (or without a half-width).</summary>
-    private static void WriteHourly(Utf8JsonWriter json, string name, ImmutableArray<Estimate?> byHour, Func<Estimate?, MetricDimension, Cell> cell, TimeUnit timeUnit)
+    private static void WriteHourly(Utf8JsonWriter json, string name, IReadOnlyList<Estimate?> byHour, Func<Estimate?, MetricDimension, Cell> cell, TimeUnit timeUnit)
     {
         json.WriteStartArray(name);
         foreach (var hour in byHour)

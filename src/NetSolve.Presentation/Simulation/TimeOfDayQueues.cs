@@ -37,7 +37,7 @@ public static class TimeOfDayQueues
     {
         ArgumentNullException.ThrowIfNull(unit);
         int? best = null;
-        for (int hour = 0; hour < unit.MeanQueueByHour.Length; hour++)
+        for (int hour = 0; hour < unit.MeanQueueByHour.Count; hour++)
         {
             if (unit.MeanQueueByHour[hour] is Estimate estimate && (best is null || estimate.Mean > unit.MeanQueueByHour[best.Value]!.Value.Mean))
             {

@@ -168,6 +168,38 @@ public sealed class SimulateCommandTests
     private const string SlowSingleServer = "name: Slow single server  # invented\nunits:\n  ward:\n    servers: 1\n    service: 1d\narrivals:\n  ward: 0.9/d\n";
 
     [Fact]
+    public void Slow_units_are_listed_slowest_first_at_most_twenty_and_the_rest_counted_in_one_line()
+    {
+        // 25 one-server wards at 0.9 with service of 1 to 25 days: each relaxes in about 380 days times its service
+        // in days (Abate and Whitt, Queueing Systems 2, 1987, from memory), all long against a 1-day run.
+        var text = new System.Text.StringBuilder("name: Many slow wards  # invented\nunits:\n");
+        var arrivals = new System.Text.StringBuilder("arrivals:\n");
+        for (int w = 1; w <= 25; w++)
+        {
+            text.Append(System.Globalization.CultureInfo.InvariantCulture, $"  ward{w}:\n    servers: 1\n    service: {w}d\n");
+            arrivals.Append(System.Globalization.CultureInfo.InvariantCulture, $"  ward{w}: {0.9 / w:R}/d\n");
+        }
+
+        string path = Path.Combine(Path.GetTempPath(), $"netsolve-simulate-{Guid.NewGuid():N}.yaml");
+        File.WriteAllText(path, text.Append(arrivals).ToString());
+        try
+        {
+            var run = Run(["simulate", path, "--replications", "2", "--warmup", "0", "--duration", "1d", "--format", "csv"]);
+
+            Assert.Equal(0, run.ExitCode);
+            var lines = run.Error.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+            var listed = lines.Where(line => line.StartsWith("netsolve: warning: unit '", StringComparison.Ordinal)).ToList();
+            Assert.Equal(global::NetSolve.Cli.WarningLog.ShownPerKind, listed.Count);
+            Assert.StartsWith("netsolve: warning: unit 'ward25' relaxes", listed[0], StringComparison.Ordinal);
+            Assert.Contains("netsolve: warning: 5 more units relax slowly", run.Error, StringComparison.Ordinal);
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Fact]
     public void Compare_on_a_deliberately_short_run_of_an_exact_unit_blames_the_run_not_the_formula()
     {
         string path = Path.Combine(Path.GetTempPath(), $"netsolve-simulate-{Guid.NewGuid():N}.yaml");

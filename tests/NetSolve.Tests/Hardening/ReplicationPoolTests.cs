@@ -81,8 +81,9 @@ public sealed class ReplicationPoolTests
     [Fact]
     public void Past_the_budget_the_replications_histograms_are_let_go()
     {
-        // Exact by hand: each replication keeps three sparse histograms of about 100 buckets (arrays of 128 pairs,
-        // 1 KB each), so 3 KB a replication: past 20,000 bytes within the 20 replications, not at the first.
+        // Exact by hand: each replication keeps three sparse histograms of about 100 buckets (arrays of 141 pairs of
+        // 4 bytes, about 0.6 KB each), so about 1.7 KB a replication: past 20,000 bytes within the 20 replications,
+        // not at the first.
         var pool = new ReplicationPool(units: 1, namedGroups: 0, thresholds: 0, keptBytesLimit: 20_000);
 
         pool.Finish(0, Output(0.0));
@@ -95,6 +96,43 @@ public sealed class ReplicationPoolTests
         Assert.False(pool.KeepsReplications);
         Assert.All(pool.UnitTimes, unit => Assert.False(unit.KeepsReplications));
         Assert.Equal(20, pool.UnitTimes[0].Percentiles()[0].Hours!.Value.Replications);
+    }
+
+    [Fact]
+    public void A_pool_that_stops_keeping_after_one_replication_gives_the_very_intervals_of_moments_made_at_once()
+    {
+        // Exact by hand: the moments are made when the second replication comes, from the first and then the second,
+        // so every sum sees the same additions in the same order as moments fed each replication as it came.
+        var random = new Random(8);
+        var replications = Enumerable.Range(0, 6).Select(r => Histogram(random, 80 + random.Next(200), zeros: r % 2)).ToList();
+        long firstCount = replications[0].Count;
+        double firstMedian = replications[0].Quantile(0.5);
+        var late = new PercentilePool();
+        var moments = new ShareMoments();
+        for (int r = 0; r < replications.Count; r++)
+        {
+            late.Add(replications[r]);
+            moments.Add(replications[r]);
+            if (r == 0)
+            {
+                late.StopKeeping();
+
+                // One replication: no half-width either way, and the point is its own percentile.
+                var lone = late.Percentiles();
+                Assert.All(lone, percentile => Assert.Null(percentile.Hours!.Value.HalfWidth));
+                Assert.Equal(replications[0].Quantile(0.5), lone[0].Hours!.Value.Mean);
+            }
+        }
+
+        var pooled = ReplicationTallies.Pool(replications);
+        var fromPool = late.Percentiles();
+        for (int i = 0; i < MetricLayout.Percentiles.Length; i++)
+        {
+            Assert.Equal(QuantileInterval.Of(MetricLayout.Percentiles[i], pooled, moments), fromPool[i].Hours);
+        }
+
+        // The first replication's histogram was the pooled one until the second came: pooling must not have changed it.
+        Assert.Equal((firstCount, firstMedian), (replications[0].Count, replications[0].Quantile(0.5)));
     }
 
     private static ReplicationOutput Output(double marker)
