@@ -63,5 +63,20 @@ internal static class CommandShapes
         return at >= 0 && at + 1 < line.Count && line[at + 1].StartsWith(prefix, StringComparison.Ordinal) ? line[at + 1][prefix.Length..] : null;
     }
 
+    /// <summary>
+    /// Every other file the line names for writing (an earlier <c>--output</c>, the HTML of <c>fit --report</c>),
+    /// relative to the run's folder: written files, not strays, and checked for completeness when they are there.
+    /// </summary>
+    public static IReadOnlyList<string> OtherOutputFiles(IReadOnlyList<string> line)
+    {
+        string prefix = FuzzInput.Folder + "/";
+        string? main = OutputFile(line);
+        return [.. line.Skip(1).Select((argument, at) => (argument, at: at + 1))
+            .Where(entry => entry.argument is "--output" or "-o" or "--chart" or "--report" && entry.at + 1 < line.Count && line[entry.at + 1].StartsWith(prefix, StringComparison.Ordinal))
+            .Select(entry => line[entry.at + 1][prefix.Length..])
+            .Where(path => !string.Equals(path, main, StringComparison.Ordinal))
+            .Distinct(StringComparer.Ordinal)];
+    }
+
     private static string Pick(string[] values, Random random) => values[random.Next(values.Length)];
 }

@@ -66,11 +66,17 @@ internal static class FuzzRunner
                     // first is still the output (untouched or complete), never a stray.
                     bool help = arguments.Any(argument => argument is "--help" or "-h" or "-?");
                     string? output = input.OutputFile is null ? null : Path.Combine(folder.FullName, input.OutputFile);
+                    var others = CommandShapes.OtherOutputFiles(input.Arguments).Select(path => Path.Combine(folder.FullName, path)).ToList();
                     var strays = Directory.EnumerateFiles(folder.FullName, "*", SearchOption.AllDirectories)
-                        .Where(path => !written.Contains(path) && !string.Equals(path, output, StringComparison.Ordinal));
+                        .Where(path => !written.Contains(path) && !string.Equals(path, output, StringComparison.Ordinal) && !others.Contains(path, StringComparer.Ordinal));
                     string? expected = help && !File.Exists(output) ? null : output;
-                    findings.AddRange(CliInvariant.CheckOutput(exitCode, expected, input.OldOutput, strays, string.Join('\n', arguments) + "\n" + given,
-                        isText: string.Equals(arguments[0], "fit", StringComparison.Ordinal)));
+                    string said = string.Join('\n', arguments) + "\n" + given;
+                    bool isText = string.Equals(arguments[0], "fit", StringComparison.Ordinal);
+                    findings.AddRange(CliInvariant.CheckOutput(exitCode, expected, input.OldOutput, strays, said, isText));
+                    foreach (string other in others.Where(path => !help || File.Exists(path)))
+                    {
+                        findings.AddRange(CliInvariant.CheckOutput(exitCode, other, oldOutput: null, [], said, isText));
+                    }
                     if (used > HangLimit)
                     {
                         findings.Add(new FuzzFinding(FuzzFailureKind.Hang, string.Create(CultureInfo.InvariantCulture,
