@@ -326,6 +326,9 @@ internal static class Messages
     /// <summary>An output file cannot be written.</summary>
     public static string CannotWrite(string path, string reason) => $"{Q(path)}: cannot write: {Q(reason)}";
 
+    /// <summary>A file option given an empty value.</summary>
+    public static string EmptyPath(string option) => $"{option}: an empty value names no file; give a file name";
+
     /// <summary>An output path that cannot name a file: a NUL or another character the system refuses in a path.</summary>
     public static string NotPath(string option, string text) =>
         $"{option}: '{Q(text)}' is not a usable file name (it holds a character such as NUL that no file name may hold)";

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using NetSolve.Fitting.Estimation;
 using NetSolve.Model;
+using NetSolve.Solving;
 
 namespace NetSolve.Fitting;
 
@@ -95,6 +96,13 @@ public static class NetworkFitter
         }
 
         double cv = evidence.Stay.Cv?.Value ?? 1.0;
+        if (!(cv * cv <= GgcFormulas.MaximumScv))
+        {
+            // A stay years long among minutes-long ones (a mistyped date) gives a spread no queueing formula takes.
+            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture,
+                $"unit '{id}': stays vary too much to model (cv {cv:G3}, at most {Math.Sqrt(GgcFormulas.MaximumScv):0}, around a mean of {mean.Value:G3} hours): check the log's times for one far off"), nameof(seen));
+        }
+
         return new FittedUnit(id, seen.Stays, seen.Entries / windowHours, mean.Value, cv, MeanWaitHours(seen), seen.PeakInService,
             label, seen.Completed, seen.StillRunning, seen.Timed > 0, seen.Timed > 0 && seen.Waited == 0)
         {
