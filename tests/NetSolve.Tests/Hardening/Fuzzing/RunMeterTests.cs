@@ -10,62 +10,48 @@ public sealed class RunMeterTests
     [Fact]
     public void A_run_on_one_thread_is_not_charged_for_work_on_another_thread()
     {
-        Assert.SkipWhen(ThreadClock.OfCurrentThread() is null, "no per-thread clock on this system");
-        var meter = new RunMeter(singleThreaded: true);
-        var run = new Thread(() =>
-        {
-            meter.Enter();
-            // The run itself waits while another thread (another worker's run) works.
-            var other = new Thread(() => Spin(Busy));
-            other.Start();
-            other.Join();
-            meter.Leave();
-        });
+        // The run itself waits while another thread (another worker's run) works.
+        var (used, counted) = Measure(singleThreaded: true, () => OnAnotherThread(() => Spin(Busy)));
 
-        run.Start();
-        run.Join();
-
-        var (used, counted) = meter.Used();
         Assert.True(used < Busy / 4, string.Create(CultureInfo.InvariantCulture, $"charged {used.TotalMilliseconds} ms ({counted}) for {Busy.TotalMilliseconds} ms of another thread's work"));
     }
 
     [Fact]
     public void A_run_that_works_on_its_own_thread_is_charged_for_it()
     {
-        Assert.SkipWhen(ThreadClock.OfCurrentThread() is null, "no per-thread clock on this system");
-        var meter = new RunMeter(singleThreaded: true);
-        var run = new Thread(() =>
-        {
-            meter.Enter();
-            Spin(Busy);
-            meter.Leave();
-        });
-
-        run.Start();
-        run.Join();
+        var (used, _) = Measure(singleThreaded: true, () => Spin(Busy));
 
         // The processor time spun, less the scheduler's accounting granularity (a few milliseconds).
-        Assert.True(meter.Used().Time >= Busy * 0.9, string.Create(CultureInfo.InvariantCulture, $"charged {meter.Used().Time.TotalMilliseconds} ms for {Busy.TotalMilliseconds} ms of its own work"));
+        Assert.True(used >= Busy * 0.9, string.Create(CultureInfo.InvariantCulture, $"charged {used.TotalMilliseconds} ms for {Busy.TotalMilliseconds} ms of its own work"));
     }
 
     [Fact]
     public void A_parallel_run_is_charged_for_the_threads_it_starts()
     {
+        var (used, _) = Measure(singleThreaded: false, () => OnAnotherThread(() => Spin(Busy)));
+
+        Assert.True(used >= Busy * 0.9, string.Create(CultureInfo.InvariantCulture, $"charged {used.TotalMilliseconds} ms for {Busy.TotalMilliseconds} ms of its helper's work"));
+    }
+
+    /// <summary>Runs <paramref name="work"/> on a thread of its own, as the fuzzer runs an input, and reads its meter.</summary>
+    private static (TimeSpan Time, string Counted) Measure(bool singleThreaded, Action work)
+    {
         Assert.SkipWhen(ThreadClock.OfCurrentThread() is null, "no per-thread clock on this system");
-        var meter = new RunMeter(singleThreaded: false);
-        var run = new Thread(() =>
+        var meter = new RunMeter(singleThreaded);
+        OnAnotherThread(() =>
         {
             meter.Enter();
-            var helper = new Thread(() => Spin(Busy));
-            helper.Start();
-            helper.Join();
+            work();
             meter.Leave();
         });
+        return meter.Used();
+    }
 
-        run.Start();
-        run.Join();
-
-        Assert.True(meter.Used().Time >= Busy * 0.9, string.Create(CultureInfo.InvariantCulture, $"charged {meter.Used().Time.TotalMilliseconds} ms for {Busy.TotalMilliseconds} ms of its helper's work"));
+    private static void OnAnotherThread(Action work)
+    {
+        var thread = new Thread(() => work());
+        thread.Start();
+        thread.Join();
     }
 
     /// <summary>Uses <paramref name="work"/> of this thread's processor time (not wall time: the machine may be shared).</summary>
