@@ -14,7 +14,11 @@ internal static class CommonOptions
     private static readonly string[] Formats = ["table", "json", "csv"];
 
     /// <summary>Show the stack trace of an internal error.</summary>
-    public static readonly Option<bool> Verbose = new("--verbose")
+    /// <remarks>
+    /// A new option for each command tree: an option remembers every command it is added to, so one shared instance
+    /// kept every tree ever built alive (about 50 KB a run) in a process that runs the command line many times.
+    /// </remarks>
+    public static Option<bool> Verbose() => new("--verbose")
     {
         Description = "Show full details of an internal error.",
         Recursive = true,

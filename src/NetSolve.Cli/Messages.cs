@@ -186,7 +186,7 @@ internal static class Messages
     public static string NotShifts(string text) => $"--shifts: '{text}' is not a list of shift start hours; write whole hours from 0 to 23 in rising order, e.g. 07,15,23";
 
     /// <summary><c>staff --by-hour</c>: a target no roster can meet.</summary>
-    public static string RosterImpossible(string unitId, string reason) => $"unit '{unitId}': no roster meets the targets: {reason}";
+    public static string RosterImpossible(string unitId, string reason) => $"{Program}staff --by-hour: unit '{Q(unitId)}': no roster meets the targets: {Q(reason)}";
 
     /// <summary><c>staff</c>: the two halves of the wait-tail target.</summary>
     public const string StaffWaitTailPair = "staff: --wait-over and --at-most go together (e.g. --wait-over 4h --at-most 5%)";
@@ -334,6 +334,9 @@ internal static class Messages
 
     /// <summary>An output file cannot be written.</summary>
     public static string CannotWrite(string path, string reason) => $"{Q(path)}: cannot write: {Q(reason)}";
+
+    /// <summary>A file option given an empty value.</summary>
+    public static string EmptyPath(string option) => $"{option}: an empty value names no file; give a file name";
 
     /// <summary>An output path that cannot name a file: a NUL or another character the system refuses in a path.</summary>
     public static string NotPath(string option, string text) =>

@@ -64,7 +64,7 @@ internal static class NetSolveApp
     {
         var root = new RootCommand("NetSolve: queueing-network planning for hospital units. Finds where patient pathways saturate, "
             + "what-if and staffing answers, from Jackson-network formulas and simulation.");
-        root.Options.Add(CommonOptions.Verbose);
+        root.Options.Add(CommonOptions.Verbose());
         root.Subcommands.Add(new CheckCommand().Create(context));
         root.Subcommands.Add(new SolveCommand().Create(context));
         root.Subcommands.Add(FitCommand.Create(context));

@@ -17,7 +17,7 @@ internal static class OutputFileOption
         option.Validators.Add(result =>
         {
             string? value = result.GetValueOrDefault<string>();
-            if (!IsUsablePath(result, value))
+            if (!IsUsablePath(result, "--output", value))
             {
                 return;
             }
@@ -32,25 +32,27 @@ internal static class OutputFileOption
     }
 
     /// <summary>An optional <c>--output/-o</c> of any extension (<c>fit</c> writes a network file under any name).</summary>
-    public static Option<string?> Optional(string description)
+    public static Option<string?> Optional(string description) => Named(new Option<string?>("--output", "-o") { Description = description });
+
+    /// <summary><paramref name="option"/>, a file to write, refused as a usage error when its value cannot name a file.</summary>
+    public static Option<string?> Named(Option<string?> option)
     {
-        var option = new Option<string?>("--output", "-o") { Description = description };
-        option.Validators.Add(result => IsUsablePath(result, result.GetValueOrDefault<string?>()));
+        option.Validators.Add(result => IsUsablePath(result, option.Name, result.GetValueOrDefault<string?>()));
         return option;
     }
 
     /// <summary>
-    /// False, with a usage error naming the option, when <paramref name="value"/> holds a character no path may hold
-    /// (NUL on every system): the file system would otherwise refuse it with an exception after the work was done.
+    /// False, with a usage error naming the option, when <paramref name="value"/> is empty or holds a character no path
+    /// may hold (NUL on every system): the file system would otherwise refuse it with an exception after the work was done.
     /// </summary>
-    private static bool IsUsablePath(OptionResult result, string? value)
+    private static bool IsUsablePath(OptionResult result, string name, string? value)
     {
-        if (value is null || value.IndexOfAny(Path.GetInvalidPathChars()) < 0)
+        if (value is null || (value.Length > 0 && value.IndexOfAny(Path.GetInvalidPathChars()) < 0))
         {
             return true;
         }
 
-        result.AddError(Messages.NotPath("--output", value));
+        result.AddError(value.Length == 0 ? Messages.EmptyPath(name) : Messages.NotPath(name, value));
         return false;
     }
 }

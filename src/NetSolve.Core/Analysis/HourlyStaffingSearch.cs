@@ -79,6 +79,14 @@ public static class HourlyStaffingSearch
         double meanServiceHours = meanArrivals > 0.0 ? loads.Average() / meanArrivals : unit.EffectiveService.MeanHours;
         var blocks = ShiftBlocks.Of(options.ShiftStarts, hours);
         var servers = new int[hours];
+        // Refused before the search, as the steady state refuses it: otherwise the search adds servers one evaluation
+        // at a time towards a count no unit may have (a cap of 0 never met; a tiny cap past the most servers).
+        impossible = CapUnreachable(loads, targets.MaxUtilisation);
+        if (impossible is not null)
+        {
+            return null;
+        }
+
         var waitTargets = targets with { MaxTurnedAway = null, MaxUtilisation = null };
         for (int h = 0; h < hours; h++)
         {
@@ -149,6 +157,23 @@ public static class HourlyStaffingSearch
             FlatServers = flat,
             Evaluations = evaluator.Solves,
         };
+    }
+
+    /// <summary>Why no servers keep every hour under <paramref name="cap"/>, or null when some do (or there is no cap or no load).</summary>
+    private static string? CapUnreachable(ImmutableArray<double> loads, double? cap)
+    {
+        if (cap is not double most || !loads.Any(load => load > 0.0))
+        {
+            return null;
+        }
+
+        if (!(most > 0.0))
+        {
+            return StaffingSearch.ZeroUtilisation;
+        }
+
+        double needed = Math.Ceiling((loads.Max() / most) - StaffingSearch.TargetTolerance);
+        return needed > Servers.MaxCount ? StaffingSearch.TooMany((long)Math.Min(needed, 1e15)) : null;
     }
 
     /// <summary>Servers that keep an hour's utilisation at or under the cap: ceil(load ÷ cap); 0 without a cap.</summary>

@@ -347,7 +347,7 @@ public static class StaffingSearch
 
         if (targets.MaxUtilisation is double utilisation && !(utilisation > 0.0))
         {
-            return "a maximum utilisation of 0 cannot be met while patients arrive";
+            return ZeroUtilisation;
         }
 
         if (targets.MaxMeanWaitHours is double wait && !(wait > 0.0) && !neverWaits)
@@ -374,6 +374,10 @@ public static class StaffingSearch
         return Unreachable(meanServiceHours, targets, unlimited: false, neverWaits: waitingPlaces == 0, timeUnit);
     }
 
-    private static string TooMany(long servers) => string.Create(CultureInfo.InvariantCulture,
+    /// <summary>Why a utilisation cap of 0 is refused where patients arrive.</summary>
+    internal const string ZeroUtilisation = "a maximum utilisation of 0 cannot be met while patients arrive";
+
+    /// <summary>Why a target needing at least <paramref name="servers"/> servers is refused.</summary>
+    internal static string TooMany(long servers) => string.Create(CultureInfo.InvariantCulture,
         $"would need {servers} servers or more, beyond the {Servers.MaxCount} a unit may have");
 }

@@ -22,6 +22,12 @@ namespace NetSolve.Fitting;
 public static class NetworkFitter
 {
     /// <summary>
+    /// Largest service cv a fitted unit may have: the square root of the largest squared cv the solver's formulas take
+    /// (1e6, <c>GgcFormulas.MaximumScv</c>, which this layer may not name).
+    /// </summary>
+    private const double MostServiceCv = 1_000.0;
+
+    /// <summary>
     /// Fits a network to <paramref name="log"/>; times reported in <paramref name="timeUnit"/>. Servers come from
     /// <paramref name="roster"/> (unit id to servers) where it names the unit, otherwise from the peak in service.
     /// </summary>
@@ -95,6 +101,13 @@ public static class NetworkFitter
         }
 
         double cv = evidence.Stay.Cv?.Value ?? 1.0;
+        if (!(cv <= MostServiceCv))
+        {
+            // A stay years long among minutes-long ones (a mistyped date) gives a spread no queueing formula takes.
+            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture,
+                $"unit '{id}': stays vary too much to model (cv {cv:G3}, at most {MostServiceCv:0}, around a mean of {mean.Value:G3} hours): check the log's times for one far off"), nameof(seen));
+        }
+
         return new FittedUnit(id, seen.Stays, seen.Entries / windowHours, mean.Value, cv, MeanWaitHours(seen), seen.PeakInService,
             label, seen.Completed, seen.StillRunning, seen.Timed > 0, seen.Timed > 0 && seen.Waited == 0)
         {

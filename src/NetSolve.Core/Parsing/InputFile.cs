@@ -82,6 +82,11 @@ public static class InputFile
     /// <summary>Why <paramref name="path"/> is not a regular file to read (a folder, missing, a device or pipe), or null.</summary>
     private static Diagnostic? NotARegularFile(string path, string kind, SourceLocation location)
     {
+        if (path.Length == 0)
+        {
+            return Unreadable(location, "an empty path names no file");
+        }
+
         if (Directory.Exists(path))
         {
             return Unreadable(location, $"is a directory, not {kind}");

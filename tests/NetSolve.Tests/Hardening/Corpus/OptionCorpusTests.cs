@@ -57,6 +57,21 @@ public sealed class OptionCorpusTests
         Assert.DoesNotContain("Response file", result.Error, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("0%", "a maximum utilisation of 0 cannot be met while patients arrive")]
+    [InlineData("1e-7", "beyond the 1000000 a unit may have")]
+    public void A_roster_search_under_a_utilisation_cap_no_servers_can_meet_is_refused_at_once(string cap, string reason)
+    {
+        // Found by the fuzzer: "--max-util 0%" with --by-hour searched for minutes, adding servers one trial at a time,
+        // and a cap needing over a million servers ended in exit 70; the steady-state search refuses both at once. The
+        // line now starts as every located line does (it lacked the program and command).
+        var result = CorpusCase.Run(["staff", TestFiles.Network("millbrook-clinic"), "--by-hour", "--no-check", "--max-util", cap]);
+
+        Assert.Equal(1, result.ExitCode);
+        Assert.StartsWith("netsolve: staff --by-hour: unit 'reception': ", result.Error, StringComparison.Ordinal);
+        Assert.Contains(reason, result.Error, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void An_exact_roster_search_estimated_at_hours_of_work_is_refused_with_the_way_round()
     {

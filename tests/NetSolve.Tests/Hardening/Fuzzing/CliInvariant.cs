@@ -147,7 +147,9 @@ internal static partial class CliInvariant
         string[] shown = [.. arguments.Where(argument => argument.Length > 0).Select(TerminalText.Quote)];
         int colon = line.IndexOf(": ", StringComparison.Ordinal);
         string head = colon < 0 ? line : line[..colon];
-        if (colon > 0 && (head.Contains('/', StringComparison.Ordinal) || shown.Contains(head, StringComparer.Ordinal)))
+        // An empty path, typed as '', is shown as '' (the only way to point at it).
+        bool emptyPath = string.Equals(head, "''", StringComparison.Ordinal) && arguments.Any(argument => argument.Length == 0);
+        if (colon > 0 && (head.Contains('/', StringComparison.Ordinal) || shown.Contains(head, StringComparer.Ordinal) || emptyPath))
         {
             return true;
         }

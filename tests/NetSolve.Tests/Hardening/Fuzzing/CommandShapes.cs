@@ -2,7 +2,8 @@ namespace NetSolve.Tests.Hardening.Fuzzing;
 
 /// <summary>
 /// A valid, quick command line for each command, as a starting point the fuzzer changes: simulations are kept to two
-/// short replications so that a long run means the fuzzed value asked for it.
+/// short replications on one thread (<c>report --simulate</c>, which has no thread option, to two short replications)
+/// so that a long run means the fuzzed value asked for it.
 /// </summary>
 internal static class CommandShapes
 {
@@ -22,6 +23,20 @@ internal static class CommandShapes
         "fit" => random.Next(2) == 0 ? [("--output", FuzzInput.Folder + "/fitted.yaml")] : [],
         _ => [],
     };
+
+    /// <summary>The quick run of <c>report --simulate</c>, the same length as <c>simulate</c>'s; valid only beside <c>--simulate</c>.</summary>
+    public static readonly (string Option, string? Value)[] ReportSimulation = [("--replications", "2"), ("--warmup", "1d"), ("--duration", "2d")];
+
+    /// <summary>
+    /// True when <paramref name="line"/> runs on the calling thread only: every command but a simulation, and a
+    /// simulation held to one thread (its replications then run in turn on the caller).
+    /// </summary>
+    public static bool RunsOnOneThread(IReadOnlyList<string> line)
+    {
+        bool simulates = line[0] is "simulate" || (line[0] is "report" && line.Contains("--simulate", StringComparer.Ordinal));
+        int threads = line.ToList().FindLastIndex(argument => argument is "--threads");
+        return !simulates || (threads >= 0 && threads + 1 < line.Count && line[threads + 1] is "1");
+    }
 
     /// <summary>The command line: the command, its files, then each option and its value.</summary>
     public static List<string> Line(string command, IEnumerable<string> files, IEnumerable<(string Option, string? Value)> options)
@@ -46,6 +61,21 @@ internal static class CommandShapes
         int at = line.ToList().FindLastIndex(argument => argument is "--output" or "-o" or "--chart");
         string prefix = FuzzInput.Folder + "/";
         return at >= 0 && at + 1 < line.Count && line[at + 1].StartsWith(prefix, StringComparison.Ordinal) ? line[at + 1][prefix.Length..] : null;
+    }
+
+    /// <summary>
+    /// Every other file the line names for writing (an earlier <c>--output</c>, the HTML of <c>fit --report</c>),
+    /// relative to the run's folder: written files, not strays, and checked for completeness when they are there.
+    /// </summary>
+    public static IReadOnlyList<string> OtherOutputFiles(IReadOnlyList<string> line)
+    {
+        string prefix = FuzzInput.Folder + "/";
+        string? main = OutputFile(line);
+        return [.. line.Skip(1).Select((argument, at) => (argument, at: at + 1))
+            .Where(entry => entry.argument is "--output" or "-o" or "--chart" or "--report" && entry.at + 1 < line.Count && line[entry.at + 1].StartsWith(prefix, StringComparison.Ordinal))
+            .Select(entry => line[entry.at + 1][prefix.Length..])
+            .Where(path => !string.Equals(path, main, StringComparison.Ordinal))
+            .Distinct(StringComparer.Ordinal)];
     }
 
     private static string Pick(string[] values, Random random) => values[random.Next(values.Length)];

@@ -47,7 +47,9 @@ internal static class FuzzCampaign
                     }
 
                     i = taken++;
+                    long before = Stopwatch.GetTimestamp();
                     input = generator.Next(InputGenerator.Surfaces[i % InputGenerator.Surfaces.Length]);
+                    report.Generating += Stopwatch.GetElapsedTime(before);
                 }
 
                 var outcome = FuzzRunner.Run(input);

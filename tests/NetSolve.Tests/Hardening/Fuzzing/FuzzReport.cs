@@ -33,6 +33,12 @@ internal sealed class FuzzReport
     /// <summary>Per command, the inputs run and their summed run time: where a campaign's time goes.</summary>
     public Dictionary<string, (int Inputs, TimeSpan Time)> ByCommand { get; } = new(StringComparer.Ordinal);
 
+    /// <summary>Wall time spent drawing inputs from the generator (one at a time, under the campaign's lock).</summary>
+    public TimeSpan Generating { get; set; }
+
+    /// <summary>Wall time around the runs, summed over the workers: writing files, checking outputs, removing folders.</summary>
+    public TimeSpan Harness { get; private set; }
+
     /// <summary>Parallel workers the campaign ran inputs on.</summary>
     public int Workers { get; set; } = 1;
 
@@ -45,6 +51,7 @@ internal sealed class FuzzReport
         Increment(Inputs, input.Surface);
         Increment(ExitCodes, (input.Surface, outcome.ExitCode));
         PeakWorkingSet = Math.Max(PeakWorkingSet, outcome.PeakWorkingSet);
+        Harness += outcome.Harness;
         var (inputs, time) = ByCommand.GetValueOrDefault(input.Arguments[0]);
         ByCommand[input.Arguments[0]] = (inputs + 1, time + outcome.Elapsed);
         if (outcome.Elapsed > Slowest)

@@ -11,14 +11,14 @@ namespace NetSolve.Tests.Hardening.Fuzzing;
 /// </summary>
 internal static class FuzzRunner
 {
-    /// <summary>A run that takes longer than this, in processor time, is a hang.</summary>
+    /// <summary>A run that takes longer than this, in processor time (see <see cref="RunMeter"/>), is a hang.</summary>
     public static readonly TimeSpan HangLimit = TimeSpan.FromSeconds(20);
 
-    /// <summary>A run still going after this long, in wall time, is a hang whatever its processor time.</summary>
+    /// <summary>
+    /// A run still going after this long, in wall time, is a hang whatever its processor time; until then a run is
+    /// waited for, since a run in this process cannot be stopped from outside and one that ends frees its worker.
+    /// </summary>
     public static readonly TimeSpan GiveUpLimit = TimeSpan.FromSeconds(600);
-
-    /// <summary>A run that passes <see cref="HangLimit"/> in wall time is asked about its processor time this often.</summary>
-    private static readonly TimeSpan Poll = TimeSpan.FromSeconds(1);
 
     /// <summary>A process larger than this during a run is a memory failure: 2 GB.</summary>
     public const long MemoryLimit = 2L * 1024 * 1024 * 1024;
@@ -26,8 +26,10 @@ internal static class FuzzRunner
     /// <summary>Runs <paramref name="input"/> and checks it.</summary>
     public static FuzzOutcome Run(FuzzInput input)
     {
+        var total = Stopwatch.StartNew();
         var folder = Directory.CreateTempSubdirectory("netsolve-fuzz-");
         bool finished = false;
+        var runTime = TimeSpan.Zero;
         try
         {
             var written = WriteFiles(input, folder.FullName);
@@ -35,23 +37,27 @@ internal static class FuzzRunner
             string given = string.Join('\n', input.Files.Select(file => Encoding.UTF8.GetString(file.Content)));
             using var watch = new MemoryWatch();
             var clock = Stopwatch.StartNew();
-            var processorAtStart = Process.GetCurrentProcess().TotalProcessorTime;
-            var run = Task.Factory.StartNew(() => CliRun.Run(arguments), CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
+            var meter = new RunMeter(CommandShapes.RunsOnOneThread(arguments));
+            var run = Task.Factory.StartNew(() =>
+            {
+                meter.Enter();
+                try
+                {
+                    return CliRun.Run(arguments);
+                }
+                finally
+                {
+                    meter.Leave();
+                }
+            }, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
             var findings = new List<FuzzFinding>();
             int exitCode = -1;
             try
             {
-                // On a shared machine wall time is not work: past the limit in wall time, the run goes on while the
-                // process (every worker's runs together, so at least this run's) has used less processor time than
-                // the limit, up to the give-up time.
-                TimeSpan Processor() => Process.GetCurrentProcess().TotalProcessorTime - processorAtStart;
-                finished = run.Wait(HangLimit);
-                while (!finished && clock.Elapsed < GiveUpLimit && Processor() <= HangLimit)
-                {
-                    finished = run.Wait(Poll);
-                }
-
-                if (finished && Processor() <= HangLimit)
+                finished = run.Wait(GiveUpLimit);
+                runTime = clock.Elapsed;
+                var (used, counted) = meter.Used();
+                if (finished)
                 {
                     var result = run.Result;
                     exitCode = result.ExitCode;
@@ -60,23 +66,33 @@ internal static class FuzzRunner
                     // first is still the output (untouched or complete), never a stray.
                     bool help = arguments.Any(argument => argument is "--help" or "-h" or "-?");
                     string? output = input.OutputFile is null ? null : Path.Combine(folder.FullName, input.OutputFile);
+                    var others = CommandShapes.OtherOutputFiles(input.Arguments).Select(path => Path.Combine(folder.FullName, path)).ToList();
                     var strays = Directory.EnumerateFiles(folder.FullName, "*", SearchOption.AllDirectories)
-                        .Where(path => !written.Contains(path) && !string.Equals(path, output, StringComparison.Ordinal));
+                        .Where(path => !written.Contains(path) && !string.Equals(path, output, StringComparison.Ordinal) && !others.Contains(path, StringComparer.Ordinal));
                     string? expected = help && !File.Exists(output) ? null : output;
-                    findings.AddRange(CliInvariant.CheckOutput(exitCode, expected, input.OldOutput, strays, string.Join('\n', arguments) + "\n" + given,
-                        isText: string.Equals(arguments[0], "fit", StringComparison.Ordinal)));
+                    string said = string.Join('\n', arguments) + "\n" + given;
+                    bool isText = string.Equals(arguments[0], "fit", StringComparison.Ordinal);
+                    findings.AddRange(CliInvariant.CheckOutput(exitCode, expected, input.OldOutput, strays, said, isText));
+                    foreach (string other in others.Where(path => !help || File.Exists(path)))
+                    {
+                        findings.AddRange(CliInvariant.CheckOutput(exitCode, other, oldOutput: null, [], said, isText));
+                    }
+                    if (used > HangLimit)
+                    {
+                        findings.Add(new FuzzFinding(FuzzFailureKind.Hang, string.Create(CultureInfo.InvariantCulture,
+                            $"took {used.TotalSeconds:0} s of processor time ({counted}), over {HangLimit.TotalSeconds:0} s")));
+                    }
                 }
                 else
                 {
-                    exitCode = finished ? run.Result.ExitCode : -1;
-                    findings.Add(new FuzzFinding(FuzzFailureKind.Hang, finished
-                        ? string.Create(CultureInfo.InvariantCulture, $"took {Processor().TotalSeconds:0} s of processor time (every worker's), over {HangLimit.TotalSeconds:0} s")
-                        : string.Create(CultureInfo.InvariantCulture, $"still running after {clock.Elapsed.TotalSeconds:0} s, {Processor().TotalSeconds:0} s of processor time (every worker's)")));
+                    findings.Add(new FuzzFinding(FuzzFailureKind.Hang, string.Create(CultureInfo.InvariantCulture,
+                        $"still running after {clock.Elapsed.TotalSeconds:0} s, {used.TotalSeconds:0} s of processor time ({counted})")));
                 }
             }
             catch (AggregateException exception)
             {
                 finished = true;
+                runTime = clock.Elapsed;
                 var inner = exception.InnerException ?? exception;
                 findings.Add(new FuzzFinding(FuzzFailureKind.Crash, "escaped " + inner.GetType().Name + ": " + CliInvariant.Shorten(inner.Message)));
             }
@@ -87,15 +103,22 @@ internal static class FuzzRunner
                 findings.Add(new FuzzFinding(FuzzFailureKind.Memory, string.Create(CultureInfo.InvariantCulture, $"working set {watch.PeakWorkingSet / (1024 * 1024)} MB")));
             }
 
-            return new FuzzOutcome(exitCode, findings, watch.PeakWorkingSet, clock.Elapsed);
-        }
-        finally
-        {
-            // A run that has not finished may still be using its folder; it is left for the system's temporary cleanup.
             if (finished)
             {
                 TryDelete(folder);
             }
+
+            // A run that has not finished may still be using its folder; it is left for the system's temporary cleanup.
+            return new FuzzOutcome(exitCode, findings, watch.PeakWorkingSet, runTime, total.Elapsed - runTime);
+        }
+        catch
+        {
+            if (finished)
+            {
+                TryDelete(folder);
+            }
+
+            throw;
         }
     }
 

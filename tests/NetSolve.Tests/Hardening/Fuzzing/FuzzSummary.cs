@@ -34,6 +34,8 @@ internal static class FuzzSummary
 
         text.Append(invariant, $"- largest working set of the test process during a run: {report.PeakWorkingSet / (1024.0 * 1024.0):0} MB (limit {FuzzRunner.MemoryLimit / (1024 * 1024)} MB)\n");
         text.Append(invariant, $"- slowest input in wall time: {report.Slowest.TotalSeconds:0.00} s ({report.SlowestCommand}; a hang is over {FuzzRunner.HangLimit.TotalSeconds:0} s of processor time, or still running after {FuzzRunner.GiveUpLimit.TotalSeconds:0} s)\n");
+        int total = Math.Max(report.Total, 1);
+        text.Append(invariant, $"- harness time per input, beside the runs: {report.Generating.TotalMilliseconds / total:0.0} ms drawing it, {report.Harness.TotalMilliseconds / total:0.0} ms writing its files, checking what it gave and removing its folder\n");
         text.Append("\nWhere the time went (run time summed over the workers):\n\n| command | inputs | mean run time |\n|---|---:|---:|\n");
         foreach (var (name, (inputs, time)) in report.ByCommand.OrderByDescending(entry => entry.Value.Time))
         {

@@ -107,6 +107,12 @@ internal sealed class InputGenerator
             options.Add((option, kind == OptionKind.Flag ? null : _values.Value(kind, units)));
         }
 
+        // A report asked to simulate starts from a quick run too; options the fuzzer chose stay as it chose them.
+        if (command is "report" && options.Exists(entry => entry.Option is "--simulate"))
+        {
+            options.AddRange(CommandShapes.ReportSimulation.Where(quick => !options.Exists(entry => string.Equals(entry.Option, quick.Option, StringComparison.Ordinal))).ToList());
+        }
+
         var files = new List<FuzzFile> { new(NetworkName, Encoding.UTF8.GetBytes(network)), new("log.csv", Encoding.UTF8.GetBytes(_seeds.Log)) };
         string[] arguments = command switch
         {
