@@ -14,8 +14,8 @@ public static class Caution
     /// time-varying queue over a repeating day.
     /// </summary>
     public const string HourByHour =
-        "Caution: these are planning estimates under stated assumptions (arrival rates varying by hour of day as the file's "
-        + "profile gives, the same every day; each hour from the time-varying queue, exact for Poisson arrivals and exponential "
+        "Caution: these are planning estimates under stated assumptions (arrival rates varying by hour of day, and by day of "
+        + "week where the file's profile gives it, the same every cycle; each hour from the time-varying queue, exact for Poisson arrivals and exponential "
         + "service and approximate otherwise; independent routing; first come first served). Decisions on beds and staffing "
         + "follow local clinical governance and safe-staffing rules.";
 }

@@ -28,6 +28,15 @@ internal sealed class CycleEvaluator(Unit unit, UnitLoadOverCycle load, Staffing
         }
 
         Solves++;
+        if (unit.Capacity is null && CycleSettling.Hours(load.OfferedLoadByHour, servers, meanServiceHours) > CycleSettling.MostHours)
+        {
+            // Judged as missing every target without a solve: a roster whose queue settles only after years is not one
+            // a planner could run, and the chain would take minutes to find its pattern.
+            var never = Enumerable.Repeat(double.PositiveInfinity, servers.Length).ToArray();
+            _solved[key] = (HourlyWaits.Unstable, never);
+            return (HourlyWaits.Unstable, [.. never]);
+        }
+
         var waits = TimeVaryingSolver.SolveUnit(unit, load, ServerRoster.ByHour(servers), exactChain ? ExactWhereSmall : TimeVaryingOptions.Default, ExactChainOptions.Default);
         var ratios = HourlyTargetCheck.Ratios(waits, load.OfferedLoadByHour, servers, meanServiceHours, targets);
         _solved[key] = (waits, ratios);

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using NetSolve.Model;
 using NetSolve.Solving;
 
@@ -106,6 +107,12 @@ public static class HourlyStaffingSearch
         }
 
         ShiftBlocks.Level(blocks, servers);
+        impossible = unit.Capacity is null ? NeverSettles(loads, servers, meanServiceHours) : null;
+        if (impossible is not null)
+        {
+            return null;
+        }
+
         var evaluator = new CycleEvaluator(unit, load, targets, meanServiceHours, options.ExactChain);
         int budget = options.MaxEvaluations;
         bool Spend() => evaluator.Solves < budget;
@@ -174,6 +181,25 @@ public static class HourlyStaffingSearch
 
         double needed = Math.Ceiling((loads.Max() / most) - StaffingSearch.TargetTolerance);
         return needed > Servers.MaxCount ? StaffingSearch.TooMany((long)Math.Min(needed, 1e15)) : null;
+    }
+
+    /// <summary>
+    /// Why the starting roster cannot be judged hour by hour, or null: its queue would take longer than
+    /// <see cref="CycleSettling.MostHours"/> to settle into its daily pattern (a cap near 100% with no waiting target).
+    /// Refused at once: the chain would take minutes to find a pattern the unit never reaches in practice. A unit with a
+    /// capacity is held within its places and settles however busy it is (it turns patients away instead).
+    /// </summary>
+    private static string? NeverSettles(ImmutableArray<double> loads, int[] servers, double meanServiceHours)
+    {
+        double hours = CycleSettling.Hours(loads, servers, meanServiceHours);
+        if (hours <= CycleSettling.MostHours)
+        {
+            return null;
+        }
+
+        double busy = loads.Average() / servers.Average();
+        return string.Create(CultureInfo.InvariantCulture,
+            $"its servers would be busy {busy * 100.0:0.#}% of the time over the cycle, and a queue that busy takes {(double.IsFinite(hours) ? $"about {hours / CycleSettling.HoursPerYear:0.#} years" : "for ever")} to settle into a daily pattern (past the year a roster is judged over): set a lower --max-util (0.85 is the common planning rule of thumb) or a waiting target");
     }
 
     /// <summary>Servers that keep an hour's utilisation at or under the cap: ceil(load ÷ cap); 0 without a cap.</summary>

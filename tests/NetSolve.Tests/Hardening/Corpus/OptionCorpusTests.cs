@@ -73,6 +73,21 @@ public sealed class OptionCorpusTests
     }
 
     [Fact]
+    public void A_roster_search_under_a_cap_of_one_hundred_percent_is_refused_at_once_with_the_way_round()
+    {
+        // Found by the 100,000-input fuzzing run: "--max-util 1" with --by-hour put the assessment unit (64 beds, stays
+        // near a day) at 99% busy over the week, and the exact chain worked 58 s to find a pattern that takes years to
+        // settle (relaxation time 1/(cμ(1 − √ρ)²), Abate and Whitt, Queueing Systems 2, 1987). It is refused in one line.
+        var result = CorpusCase.Run(["staff", TestFiles.Network("larkspur-simulation"), "--by-hour", "--no-check", "--max-util", "1"]);
+
+        Assert.Equal(1, result.ExitCode);
+        Assert.StartsWith("netsolve: staff --by-hour: unit 'assessment': ", result.Error, StringComparison.Ordinal);
+        Assert.Contains("years to settle into a daily pattern", result.Error, StringComparison.Ordinal);
+        Assert.Contains("set a lower --max-util", result.Error, StringComparison.Ordinal);
+        Assert.Single(result.Error.TrimEnd('\n').Split('\n'));
+    }
+
+    [Fact]
     public void An_exact_roster_search_estimated_at_hours_of_work_is_refused_with_the_way_round()
     {
         // A desk whose busiest hour needs fifty one-minute servers: thousands of chain steps per hour over thousands of states, for each trial roster.
