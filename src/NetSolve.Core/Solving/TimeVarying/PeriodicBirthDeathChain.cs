@@ -153,8 +153,11 @@ public static class PeriodicBirthDeathChain
 
             double ratio = change / lastChange;
             double remaining = ratio < 1.0 ? change * ratio / (1.0 - ratio) : double.PositiveInfinity;
-            // No change at all (a constant load started from its own stationary distribution) has no ratio to go by.
-            if (change <= options.Tolerance && (remaining <= options.Tolerance || change == 0.0))
+            // No change at all (a constant load started from its own stationary distribution) has no ratio to go by. A
+            // cycle of the chain is a stochastic map, and such a map never moves two distributions apart in total
+            // variation, so a change under the tolerance that stops shrinking (ratio 1 or more) is rounding, not a
+            // pattern still forming: settled. Without this, a unit at the rounding floor ran all the cycles allowed.
+            if (change <= options.Tolerance && (remaining <= options.Tolerance || change == 0.0 || ratio >= 1.0))
             {
                 return p;
             }

@@ -28,6 +28,18 @@ public sealed class NumberCorpusTests
         CorpusCase.Run(["solve", CorpusCase.File(file), "--format", format]);
 
     [Fact]
+    public void A_time_varying_chain_at_the_rounding_floor_settles_instead_of_running_every_cycle()
+    {
+        // A cycle of the chain is a stochastic map, which never moves two distributions apart in total variation
+        // (a contraction in the L1 norm; e.g. Seneta, Non-negative Matrices and Markov Chains, 2nd ed., 1981, §3.1,
+        // from memory), so a change under the tolerance that stops shrinking is rounding: the chain has settled.
+        var result = CorpusCase.Run(["solve", CorpusCase.File("chain-at-rounding-floor.yaml"), "--format", "csv"]);
+
+        Assert.Equal(0, result.ExitCode);
+        Assert.DoesNotContain("did not settle", result.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Service_samples_near_the_largest_double_do_not_break_a_short_simulation() =>
         CorpusCase.Run(["simulate", CorpusCase.File("service-samples-near-max.yaml"), "--replications", "2", "--warmup", "1h", "--duration", "4h", "--format", "json"]);
 
