@@ -28,6 +28,6 @@ internal static class CycleSettling
             return 0.0;
         }
 
-        return rho < 1.0 ? meanServiceHours / (meanServers * Math.Pow(1.0 - Math.Sqrt(rho), 2.0)) : double.PositiveInfinity;
+        return RelaxationTime.OfQueue(meanServers, meanServiceHours, rho);
     }
 }

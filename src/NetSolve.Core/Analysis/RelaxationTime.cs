@@ -19,6 +19,10 @@ namespace NetSolve.Analysis;
 /// </remarks>
 public static class RelaxationTime
 {
+    /// <summary>1 / (c·μ·(1 − √ρ)²) in hours for <paramref name="servers"/> c (a mean over a cycle may be fractional) at utilisation ρ; +∞ from ρ = 1.</summary>
+    public static double OfQueue(double servers, double serviceHours, double rho) =>
+        rho < 1.0 ? serviceHours / (servers * Math.Pow(1.0 - Math.Sqrt(rho), 2.0)) : double.PositiveInfinity;
+
     /// <summary>The unit's relaxation time in hours (+∞ for an unstable unit without a capacity; 0 for a unit no patient reaches).</summary>
     public static double Hours(UnitResult formula)
     {
@@ -38,7 +42,7 @@ public static class RelaxationTime
         int servers = unit.Servers.Count;
         double serviceRatePerHour = servers / serviceHours;
         double rho = formula.ArrivalsPerHour * serviceHours / servers;
-        double queueing = rho < 1.0 ? 1.0 / (serviceRatePerHour * Math.Pow(1.0 - Math.Sqrt(rho), 2.0)) : double.PositiveInfinity;
+        double queueing = OfQueue(servers, serviceHours, rho);
         if (unit.Capacity is int capacity)
         {
             double places = Math.Max(1, capacity - servers);
