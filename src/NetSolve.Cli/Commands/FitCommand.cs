@@ -28,11 +28,13 @@ internal static class FitCommand
         var name = new Option<string?>("--name") { Description = "Network name (default: the log's file name)." };
         name.Validators.Add(result => RefuseUnsafeName(result, result.GetValueOrDefault<string?>()));
         var format = SettingOptions.Choice("--format", "Summary: table (for people) or json (the fit evidence as one document).", "table", ["table", "json"], "-f");
-        var report = OutputFileOption.Named(new Option<string?>("--report")
-        {
-            Description = "Also write an HTML report of the fitted network with a section on how sure the fit is.",
-            HelpName = "FILE",
-        });
+        var report = OutputFileOption.Named(
+            new Option<string?>("--report")
+            {
+                Description = "Also write an HTML report (.html) of the fitted network with a section on how sure the fit is.",
+                HelpName = "FILE",
+            },
+            ReportCommand.Extensions);
         var roster = new Option<string[]>("--servers")
         {
             Description = "Servers from the roster or bed count: UNIT=N (repeat per unit) or a CSV file with the columns unit,servers; units not given get the peak in service, flagged when they never queued.",

@@ -28,7 +28,8 @@ internal sealed class ReportCommand() : NetworkCommand(
         TooShort = "the time-of-day section needs every hour measured",
     };
 
-    private static readonly string[] Extensions = [".html", ".htm"];
+    /// <summary>The extensions a report file may have: the report is HTML whatever its name says.</summary>
+    public static readonly IReadOnlyList<string> Extensions = [".html", ".htm"];
 
     private readonly Argument<string[]> _scenarios = new("SCENARIO")
     {

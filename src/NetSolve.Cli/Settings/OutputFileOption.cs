@@ -14,18 +14,19 @@ internal static class OutputFileOption
             Description = description,
             Required = true,
         };
+        option.Validators.Add(result => RequireExtension(result, option.Name, result.GetValueOrDefault<string>(), extensions));
+        return option;
+    }
+
+    /// <summary>An optional file option whose extension, when given, must be one of <paramref name="extensions"/> (a usage error otherwise).</summary>
+    public static Option<string?> Named(Option<string?> option, IReadOnlyCollection<string> extensions)
+    {
         option.Validators.Add(result =>
         {
-            string? value = result.GetValueOrDefault<string>();
-            if (!IsUsablePath(result, "--output", value))
+            string? value = result.GetValueOrDefault<string?>();
+            if (value is not null)
             {
-                return;
-            }
-
-            string extension = Path.GetExtension(value ?? string.Empty).ToLowerInvariant();
-            if (!extensions.Contains(extension, StringComparer.Ordinal))
-            {
-                result.AddError(Messages.WrongExtension("--output", value, extensions));
+                RequireExtension(result, option.Name, value, extensions);
             }
         });
         return option;
@@ -39,6 +40,21 @@ internal static class OutputFileOption
     {
         option.Validators.Add(result => IsUsablePath(result, option.Name, result.GetValueOrDefault<string?>()));
         return option;
+    }
+
+    /// <summary>A usage error naming the option when <paramref name="value"/> cannot name a file or its extension names another format.</summary>
+    private static void RequireExtension(OptionResult result, string name, string? value, IReadOnlyCollection<string> extensions)
+    {
+        if (!IsUsablePath(result, name, value))
+        {
+            return;
+        }
+
+        string extension = Path.GetExtension(value ?? string.Empty).ToLowerInvariant();
+        if (!extensions.Contains(extension, StringComparer.Ordinal))
+        {
+            result.AddError(Messages.WrongExtension(name, value, extensions));
+        }
     }
 
     /// <summary>

@@ -50,6 +50,20 @@ public sealed class FitOutputTests : IDisposable
     }
 
     [Fact]
+    public void A_report_name_that_is_not_html_is_a_usage_error_before_anything_is_written()
+    {
+        string network = Path.Combine(folder.Path, "rowan.yaml");
+
+        // The report is HTML: a name ending in .yaml would have put HTML where a network file was expected.
+        var fit = CliRun.Run("fit", TestFiles.Log("rowan-urgent-care"), "-o", network, "--report", Path.Combine(folder.Path, "rowan-report.yaml"));
+
+        Assert.Equal(2, fit.ExitCode);
+        Assert.Contains("--report '", fit.Error, StringComparison.Ordinal);
+        Assert.Contains("': the file name must end in .html, .htm", fit.Error, StringComparison.Ordinal);
+        Assert.Empty(Directory.EnumerateFileSystemEntries(folder.Path));
+    }
+
+    [Fact]
     public void Servers_from_the_roster_replace_the_peak_and_lift_the_never_queued_flag()
     {
         string log = Path.Combine(folder.Path, "timed.csv");
