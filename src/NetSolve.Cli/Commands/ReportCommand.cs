@@ -94,7 +94,7 @@ internal sealed class ReportCommand() : NetworkCommand(
         SimulationResult? simulation = null;
         if (request.GetValue(_simulate))
         {
-            var options = SimulationCliOptions.ReadPlanned(request, request.Solve(), _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
+            var options = SimulationCliOptions.ReadPlanned(request, baseline, _seed, _replications, (_warmup, SimulationCliOptions.Warmup), (_duration, ReportDuration));
             SimulationCliOptions.CheckWork(baseline, options, request.GetValue(_allowLong));
             simulation = SimulationRun.Run(baseline.Network, options, request.Context);
             if (simulation.ReplicationsFinished == 0)
