@@ -3,9 +3,9 @@ using System.Collections.Immutable;
 namespace NetSolve.Solving;
 
 /// <summary>
-/// A phase-type distribution with the two-moment fits of H. C. Tijms, A First Course in Stochastic Models (Wiley,
-/// 2003), Appendix B (from memory): a mixture of two Erlangs of the same rate when the SCV is below 1, the exponential
-/// at 1, a hyperexponential of two phases with balanced means above 1.
+/// A phase-type distribution in matrix form (initial probabilities α, generator T), made by the two-moment fits of
+/// <see cref="ServiceStages"/> (H. C. Tijms, A First Course in Stochastic Models, Wiley, 2003, section 5.9): a mixture
+/// of two Erlangs of the same rate when the SCV is below 1, the exponential at 1, two balanced exponential phases above.
 /// </summary>
 /// <remarks>Immutable. Phases are absorbed from at <see cref="ExitPerHour"/>; phase changes follow <see cref="Generator"/>'s off-diagonal part.</remarks>
 public sealed class PhaseTypeDistribution
@@ -47,7 +47,7 @@ public sealed class PhaseTypeDistribution
     /// <summary>Number of phases.</summary>
     public int Phases => Initial.Length;
 
-    /// <summary>The two-moment fit to a mean and an SCV (floored at <see cref="MinimumScv"/>).</summary>
+    /// <summary>The two-moment fit to a mean and an SCV (floored at <see cref="MinimumScv"/>): the stages of <see cref="ServiceStages.Fit"/>.</summary>
     /// <param name="meanHours">The mean, positive and finite.</param>
     /// <param name="scv">The squared coefficient of variation, finite and not negative.</param>
     public static PhaseTypeDistribution FitTwoMoments(double meanHours, double scv)
@@ -62,47 +62,18 @@ public sealed class PhaseTypeDistribution
             throw new ArgumentOutOfRangeException(nameof(scv), scv, "An SCV is finite and not negative.");
         }
 
-        scv = Math.Max(scv, MinimumScv);
-        return scv > 1.0 ? BalancedHyperexponential(meanHours, scv) : ErlangMixture(meanHours, scv);
-    }
-
-    /// <summary>p₁ = ½(1 + √((c² − 1)/(c² + 1))), rates 2p₁/m and 2p₂/m: each phase carries half the mean.</summary>
-    private static PhaseTypeDistribution BalancedHyperexponential(double meanHours, double scv)
-    {
-        double first = 0.5 * (1.0 + Math.Sqrt((scv - 1.0) / (scv + 1.0)));
-        double second = 1.0 - first;
-        var generator = new double[2, 2];
-        generator[0, 0] = -2.0 * first / meanHours;
-        generator[1, 1] = -2.0 * second / meanHours;
-        return new PhaseTypeDistribution([first, second], generator);
-    }
-
-    /// <summary>
-    /// For 1/k ≤ c² ≤ 1/(k − 1): Erlang(k − 1) with probability p = (k c² − √(k(1 + c²) − k²c²))/(1 + c²), else
-    /// Erlang(k), both at rate μ = (k − p)/m; as k phases in series, entered at the second with probability p.
-    /// </summary>
-    private static PhaseTypeDistribution ErlangMixture(double meanHours, double scv)
-    {
-        int k = Math.Max(1, (int)Math.Ceiling((1.0 / scv) - 1e-12));
-        double shorter = k == 1 ? 0.0 : Math.Clamp(((k * scv) - Math.Sqrt((k * (1.0 + scv)) - (k * k * scv))) / (1.0 + scv), 0.0, 1.0);
-        double rate = (k - shorter) / meanHours;
-        var generator = new double[k, k];
-        var initial = new double[k];
-        initial[0] = 1.0 - shorter;
-        if (k > 1)
+        // Stage i is left at its rate, to stage i + 1 with its continue probability, else out of the distribution.
+        var stages = ServiceStages.Fit(meanHours, Math.Sqrt(Math.Max(scv, MinimumScv)));
+        var generator = new double[stages.Count, stages.Count];
+        for (int i = 0; i < stages.Count; i++)
         {
-            initial[1] = shorter;
-        }
-
-        for (int i = 0; i < k; i++)
-        {
-            generator[i, i] = -rate;
-            if (i + 1 < k)
+            generator[i, i] = -stages.RatesPerHour[i];
+            if (i + 1 < stages.Count)
             {
-                generator[i, i + 1] = rate;
+                generator[i, i + 1] = stages.RatesPerHour[i] * stages.ContinueProbabilities[i];
             }
         }
 
-        return new PhaseTypeDistribution([.. initial], generator);
+        return new PhaseTypeDistribution([.. stages.EntryProbabilities], generator);
     }
 }

@@ -3,7 +3,7 @@ using NetSolve.Solving;
 
 namespace NetSolve.Tests.Core.Solving.Variability;
 
-/// <summary>The two-moment phase-type fits (H. C. Tijms, A First Course in Stochastic Models, Wiley, 2003, Appendix B, from memory).</summary>
+/// <summary>The two-moment phase-type fits in matrix form (H. C. Tijms, A First Course in Stochastic Models, Wiley, 2003, section 5.9).</summary>
 public sealed class PhaseTypeDistributionTests
 {
     // A phase-type distribution (α, T) has mean α(−T)⁻¹1 and second moment 2α T⁻² 1 (M. F. Neuts, Matrix-Geometric
