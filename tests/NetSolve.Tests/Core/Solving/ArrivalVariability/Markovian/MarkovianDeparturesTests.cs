@@ -36,21 +36,6 @@ public sealed class MarkovianDeparturesTests
         Assert.Equal(decomposition.DepartureScv, markovian.DepartureScv);
     }
 
-    // Unlimited servers keep no queue: their departures keep the decomposition's SCV (their arrivals', 0.25 here).
-    [Fact]
-    public void A_unit_with_unlimited_servers_passes_its_arrivals_on()
-    {
-        ArrivalVariabilityUnit[] units =
-        [
-            new ArrivalVariabilityUnit(1.0, Servers.Unlimited, 0.0, 4.0) { ExternalPerHour = 1.0, ExternalScv = 0.25 },
-            Unit(0.7, 1.0),
-        ];
-
-        var solution = ArrivalVariability.Solve(units, [new(0, 1, 1.0)], ArrivalVariabilityMethod.MarkovianDepartures);
-
-        Assert.Equal(0.25, solution.ArrivalScv[1], 1e-12);
-    }
-
     private static ArrivalVariabilityUnit Unit(double utilisation, double serviceScv, int servers = 1) =>
         new(1.0, Servers.Of(servers), utilisation, serviceScv);
 }
