@@ -132,9 +132,12 @@ public static class ArrivalVariability
         int[]? order = null;
         int[] Order() => order ??= ArrivalVariabilityOrder.Upstream(units.Count, routes);
         var decomposition = Results(system, Deviations(system, dense, Order), dense);
-        return variability == ArrivalVariabilityMethod.VariabilityFunctions
-            ? VariabilityFunctions.Solve(units, routes, decomposition, system => Deviations(system, dense, Order))
-            : decomposition;
+        return variability switch
+        {
+            ArrivalVariabilityMethod.VariabilityFunctions => VariabilityFunctions.Solve(units, routes, decomposition, system => Deviations(system, dense, Order)),
+            ArrivalVariabilityMethod.MarkovianDepartures => MarkovianDepartures.Solve(units, routes, decomposition),
+            _ => decomposition,
+        };
     }
 
     /// <summary>The deviations y = ca² − 1 solving <paramref name="system"/>, its residual checked.</summary>

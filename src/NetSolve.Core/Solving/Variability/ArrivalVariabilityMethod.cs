@@ -12,4 +12,11 @@ public enum ArrivalVariabilityMethod
     /// unit's service in its departures (<see cref="VariabilityFunctions"/>).
     /// </summary>
     VariabilityFunctions,
+
+    /// <summary>
+    /// The flows from queueing units as their departure processes, Markovian arrival processes (M. F. Neuts, 1989),
+    /// read at the time scale of each destination's queue by their index of dispersion for counts
+    /// (<see cref="MarkovianDepartures"/>); measured in docs/methods.md, not the default.
+    /// </summary>
+    MarkovianDepartures,
 }

@@ -128,7 +128,7 @@ internal sealed class ArrivalVariabilitySystem
         : (Math.Max(unit.ServiceScv, ArrivalVariability.MinimumDepartureServiceScv) - 1.0) / Math.Sqrt(unit.Servers.Count);
 
     /// <summary>w = 1 / (1 + 4(1 − ρ)²(v − 1)) with v = 1 / Σ shares², ρ the load the merged stream is weighed at.</summary>
-    private static double SuperpositionWeight(double rho, double sumOfSquares)
+    internal static double SuperpositionWeight(double rho, double sumOfSquares)
     {
         double v = 1.0 / sumOfSquares;
         double idle = 1.0 - rho;

@@ -84,7 +84,7 @@ internal static class VariabilityFunctions
     }
 
     /// <summary>x = ρ²(ca² + cs²) / (2λ(1 − ρ)²) hours; 0 for unlimited servers, ∞ at a load of 1 or more.</summary>
-    private static double WindowHours(ArrivalVariabilityUnit unit, double arrivalScv) => 0.5 * RelaxationHours(unit, arrivalScv);
+    internal static double WindowHours(ArrivalVariabilityUnit unit, double arrivalScv) => 0.5 * RelaxationHours(unit, arrivalScv);
 
     /// <summary>τ = ρ²(ca² + cs²) / (λ(1 − ρ)²) hours: 0 with unlimited servers or no flow, ∞ at a load of 1 or more.</summary>
     private static double RelaxationHours(ArrivalVariabilityUnit unit, double arrivalScv)

@@ -72,10 +72,13 @@ public sealed class VariabilityFunctionsTests
         Assert.All(functions.ArrivalScv, scv => Assert.Equal(1.0, scv));
     }
 
-    // Unlimited servers keep no queue, so their departures carry their arrivals (ω = 0): regular arrivals (c0² = 0.25)
-    // through an unlimited unit reach the next unit unchanged, as in the decomposition.
-    [Fact]
-    public void A_unit_with_unlimited_servers_passes_its_arrivals_on()
+    // Unlimited servers keep no queue, so their departures carry their arrivals (ω = 0; with the Markovian-departures
+    // option no chain is built for them): regular arrivals (c0² = 0.25) through an unlimited unit reach the next unit
+    // unchanged, as in the decomposition.
+    [Theory]
+    [InlineData(ArrivalVariabilityMethod.VariabilityFunctions)]
+    [InlineData(ArrivalVariabilityMethod.MarkovianDepartures)]
+    public void A_unit_with_unlimited_servers_passes_its_arrivals_on(ArrivalVariabilityMethod method)
     {
         ArrivalVariabilityUnit[] units =
         [
@@ -83,9 +86,9 @@ public sealed class VariabilityFunctionsTests
             Unit(0.7, 1.0),
         ];
 
-        var functions = ArrivalVariability.Solve(units, [new(0, 1, 1.0)], ArrivalVariabilityMethod.VariabilityFunctions);
+        var solution = ArrivalVariability.Solve(units, [new(0, 1, 1.0)], method);
 
-        Assert.Equal(0.25, functions.ArrivalScv[1], 1e-12);
+        Assert.Equal(0.25, solution.ArrivalScv[1], 1e-12);
     }
 
     private static ArrivalVariabilityUnit Unit(double utilisation, double serviceScv, int servers = 1) =>
