@@ -95,7 +95,7 @@ public static class HtmlReport
 
         if (baseline.Units.Length > MapLayoutBuilder.MaxUnits)
         {
-            // The layout of a network this large would take minutes (MapLayoutBuilder.MaxUnits); the table still lists every unit.
+            // A map of a network this large would be too big to open or print legibly (MapLayoutBuilder.MaxUnits); the table still lists every unit.
             html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<p class=\"map-left-out\" id=\"map-left-out\">The network has ")
                 .Append(baseline.Units.Length.ToString(CultureInfo.InvariantCulture)).Append(" units; a map is drawn for at most ")
                 .Append(MapLayoutBuilder.MaxUnits.ToString(CultureInfo.InvariantCulture))
@@ -177,7 +177,8 @@ public static class HtmlReport
     /// <summary>The bottleneck map, as inline SVG with its caption.</summary>
     private static void AppendMap(StringBuilder html, NetworkSolution baseline, string unit)
     {
-        var map = SvgMapWriter.Write(MapLayoutBuilder.Build(baseline)).Root!;
+        var layout = MapLayoutBuilder.Build(baseline);
+        var map = SvgMapWriter.Write(layout).Root!;
         // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
         double mapWidth = double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture);
         double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
@@ -187,7 +188,13 @@ public static class HtmlReport
             .Append(map.ToString()).Append("\n</div>\n")
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
-            .Append(".</figcaption>\n</figure>\n</section>\n");
+            .Append('.');
+        if (layout.Edges.Any(edge => edge.Faint))
+        {
+            html.Append(" On a map this large each box shows the label, status, utilisation and mean wait, pale lines carry under a fifth of the largest flow, and rates are written on the heavier lines only; the table below gives every number.");
+        }
+
+        html.Append("</figcaption>\n</figure>\n</section>\n");
     }
 
     private static void AppendGrowth(StringBuilder html, NetworkSolution baseline)
