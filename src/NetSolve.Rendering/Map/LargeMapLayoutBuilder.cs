@@ -14,8 +14,8 @@ namespace NetSolve.Rendering.Map;
 /// connected group of units laid out on its own and the groups packed in rows.
 /// </summary>
 /// <remarks>
-/// A group with more layers than fit the map's height is folded into bands side by side, like newspaper columns,
-/// so the map stays about as wide as it is tall. Boxes are the shorter ones of <see cref="UnitBoxText.Compact"/>.
+/// A group with many layers is folded into bands side by side, like newspaper columns, so the map keeps the shape
+/// of a landscape screen or slide. Boxes are the shorter ones of <see cref="UnitBoxText.Compact"/>.
 /// Lines are one smooth curve each: forward lines leave a box's far side along the main direction and enter the
 /// next box's near side; return routes leave and enter boxes on the side across the main direction, bowing out,
 /// dashed as on every map. Lines carrying less than <see cref="FaintShare"/> of the largest flow are drawn pale,
@@ -30,6 +30,9 @@ internal static class LargeMapLayoutBuilder
     /// <summary>Gap between the bands of a folded group: room for return routes bowing out of the band before.</summary>
     private const double BandGap = 90.0;
 
+    /// <summary>Width to height a folded group and the whole map aim at: a landscape screen or slide.</summary>
+    private const double TargetAspect = 1.4;
+
     /// <summary>Gap between connected groups.</summary>
     private const double GroupGap = 60.0;
 
@@ -38,6 +41,12 @@ internal static class LargeMapLayoutBuilder
 
     /// <summary>How far a return route bows out at most, less than the gap between bands.</summary>
     private const double MaxBow = 70.0;
+
+    /// <summary>Longest handle of a forward line's curve: two layer gaps.</summary>
+    private const double MaxReach = 2.0 * MapLayoutBuilder.LayerSeparation;
+
+    /// <summary>Points taken along each curve to find the map's bounds.</summary>
+    private const int BoundSamples = 16;
 
     /// <summary>How far a return route bows out at least, and a repeat visit's loop.</summary>
     private const double MinBow = 24.0;
@@ -88,10 +97,14 @@ internal static class LargeMapLayoutBuilder
 
         foreach (var curve in curves)
         {
-            foreach (var point in new[] { curve.Start, curve.First, curve.Second, curve.Base, curve.Tip })
+            // The curve itself, not its control points, which can lie far outside it.
+            for (int step = 0; step <= BoundSamples; step++)
             {
+                var point = curve.At((double)step / BoundSamples);
                 Cover(point.X, point.Y);
             }
+
+            Cover(curve.Tip.X, curve.Tip.Y);
         }
 
         double shiftX = pad - minX;
@@ -163,8 +176,8 @@ internal static class LargeMapLayoutBuilder
 
     /// <summary>
     /// The centre of every box. Within a group, layers follow the main direction one pitch apart and boxes of a layer
-    /// sit side by side, centred on the band; a group taller than the map's target side is folded into bands; groups
-    /// are packed in rows (largest first) no wider than that side or the widest group.
+    /// sit side by side, centred on the band; a group with many layers is folded into bands (<see cref="LayersPerBand"/>);
+    /// groups are packed in rows (largest first) no longer than the target map's side or the longest group.
     /// </summary>
     private static MapPoint[] Place(MapNode[] boxes, MapLayering layering, bool down)
     {
@@ -172,7 +185,9 @@ internal static class LargeMapLayoutBuilder
         double Across(MapNode box) => down ? box.Width : box.Height;
         double deepest = boxes.Max(Along);
         double pitch = deepest + MapLayoutBuilder.LayerSeparation;
-        double side = Math.Sqrt(boxes.Sum(box => (box.Width + MapLayoutBuilder.NodeSeparation) * (box.Height + MapLayoutBuilder.LayerSeparation)));
+        double area = boxes.Sum(box => (box.Width + MapLayoutBuilder.NodeSeparation) * (box.Height + MapLayoutBuilder.LayerSeparation));
+        // The row of groups runs across the main direction: as wide as the target map, or as tall when it flows right.
+        double side = Math.Sqrt(down ? TargetAspect * area : area / TargetAspect);
 
         var along = new double[boxes.Length];
         var across = new double[boxes.Length];
@@ -180,13 +195,13 @@ internal static class LargeMapLayoutBuilder
         for (int group = 0; group < layering.Layers.Count; group++)
         {
             var layers = layering.Layers[group];
-            int bands = Math.Max(1, (int)Math.Ceiling(layers.Count * pitch / Math.Max(side, MinLayersPerBand * pitch)));
-            int perBand = (layers.Count + bands - 1) / bands;
+            var layerWidths = layers.Select(units => units.Sum(unit => Across(boxes[unit])) + (MapLayoutBuilder.NodeSeparation * (units.Count - 1))).ToList();
+            int perBand = LayersPerBand(layerWidths, pitch, down);
             double bandStart = 0.0;
             for (int first = 0; first < layers.Count; first += perBand)
             {
                 var band = layers.Skip(first).Take(perBand).ToList();
-                var widths = band.Select(units => units.Sum(unit => Across(boxes[unit])) + (MapLayoutBuilder.NodeSeparation * (units.Count - 1))).ToList();
+                var widths = layerWidths.Skip(first).Take(perBand).ToList();
                 double bandWidth = widths.Max();
                 for (int l = 0; l < band.Count; l++)
                 {
@@ -232,6 +247,36 @@ internal static class LargeMapLayoutBuilder
         return centres;
     }
 
+    /// <summary>
+    /// How many layers a band of the group holds: the number, from all of them down to <see cref="MinLayersPerBand"/>,
+    /// whose folded group comes closest to <see cref="TargetAspect"/> (width to height), so a long pathway becomes
+    /// side-by-side bands and a wide, short group stays one.
+    /// </summary>
+    private static int LayersPerBand(List<double> layerWidths, double pitch, bool down)
+    {
+        int best = layerWidths.Count;
+        double bestMiss = double.PositiveInfinity;
+        for (int bands = 1; bands == 1 || (layerWidths.Count + bands - 1) / bands >= MinLayersPerBand; bands++)
+        {
+            int perBand = (layerWidths.Count + bands - 1) / bands;
+            double across = -BandGap;
+            for (int first = 0; first < layerWidths.Count; first += perBand)
+            {
+                across += layerWidths.Skip(first).Take(perBand).Max() + BandGap;
+            }
+
+            double along = (perBand * pitch) - MapLayoutBuilder.LayerSeparation;
+            double aspect = down ? across / along : along / across;
+            double miss = Math.Abs(Math.Log(aspect / TargetAspect));
+            if (miss < bestMiss)
+            {
+                (best, bestMiss) = (perBand, miss);
+            }
+        }
+
+        return best;
+    }
+
     private static Rect Box(MapNode box, MapPoint centre) => new(centre, box.Width / 2.0, box.Height / 2.0);
 
     /// <summary>From the middle of the source's far side to the middle of the target's near side, leaving and arriving along the main direction.</summary>
@@ -240,8 +285,9 @@ internal static class LargeMapLayoutBuilder
         var start = down ? new MapPoint(from.Centre.X, from.Centre.Y + from.HalfHeight) : new MapPoint(from.Centre.X + from.HalfWidth, from.Centre.Y);
         var tip = down ? new MapPoint(to.Centre.X, to.Centre.Y - to.HalfHeight) : new MapPoint(to.Centre.X - to.HalfWidth, to.Centre.Y);
         var arrowBase = down ? new MapPoint(tip.X, tip.Y - arrow) : new MapPoint(tip.X - arrow, tip.Y);
-        // A line to a later band runs back up (or left): a longer handle turns it round in the gap, not through the boxes.
-        double reach = Math.Max(MapLayoutBuilder.LayerSeparation / 2.0, Math.Abs(down ? arrowBase.Y - start.Y : arrowBase.X - start.X) / 2.0);
+        // Half the distance along the main direction, so a line between neighbouring layers is a gentle S; capped, so
+        // a line up to a later band turns round in the gaps next to its boxes instead of swinging far past the map.
+        double reach = Math.Clamp(Math.Abs(down ? arrowBase.Y - start.Y : arrowBase.X - start.X) / 2.0, MapLayoutBuilder.LayerSeparation / 2.0, MaxReach);
         var first = down ? new MapPoint(start.X, start.Y + reach) : new MapPoint(start.X + reach, start.Y);
         var second = down ? new MapPoint(arrowBase.X, arrowBase.Y - reach) : new MapPoint(arrowBase.X - reach, arrowBase.Y);
         return new Curve(start, first, second, arrowBase, tip);
@@ -320,8 +366,16 @@ internal static class LargeMapLayoutBuilder
     private readonly record struct Curve(MapPoint Start, MapPoint First, MapPoint Second, MapPoint Base, MapPoint Tip)
     {
         /// <summary>The curve's point halfway along its parameter: (P0 + 3 P1 + 3 P2 + P3) / 8.</summary>
-        public MapPoint Middle => new(
-            (Start.X + (3.0 * First.X) + (3.0 * Second.X) + Base.X) / 8.0,
-            (Start.Y + (3.0 * First.Y) + (3.0 * Second.Y) + Base.Y) / 8.0);
+        public MapPoint Middle => At(0.5);
+
+        /// <summary>The point at parameter <paramref name="t"/> in [0, 1] (Bernstein form).</summary>
+        public MapPoint At(double t)
+        {
+            double u = 1.0 - t;
+            double a = u * u * u, b = 3.0 * u * u * t, c = 3.0 * u * t * t, d = t * t * t;
+            return new MapPoint(
+                (a * Start.X) + (b * First.X) + (c * Second.X) + (d * Base.X),
+                (a * Start.Y) + (b * First.Y) + (c * Second.Y) + (d * Base.Y));
+        }
     }
 }
