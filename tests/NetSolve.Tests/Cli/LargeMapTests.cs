@@ -65,17 +65,22 @@ public sealed class LargeMapTests : IDisposable
         Assert.Equal(0, code);
         string html = File.ReadAllText(target);
         Assert.Contains("id=\"map-figure\"", html, StringComparison.Ordinal);
-        Assert.Equal(units, html.Split("data-unit=\"").Length - 1);
+        Assert.Equal(units, html.Split("<g class=\"unit status-").Length - 1);
         // A chain losing a tenth of its patients at every unit: the far end's lines carry under a fifth of the first's.
         Assert.Contains("pale lines carry under a fifth of the largest flow", html, StringComparison.Ordinal);
     }
 
+    // About 1 s each in Debug for SVG and DOT; the PNG's rasterising takes about 8 s, so it runs with the long tests.
     [Theory]
-    [Trait("Category", "Long")]
     [InlineData(".svg")]
-    [InlineData(".png")]
     [InlineData(".dot")]
-    public void Map_draws_a_generated_network_of_1000_units(string extension)
+    public void Map_draws_a_generated_network_of_1000_units(string extension) => Draw1000(extension);
+
+    [Fact]
+    [Trait("Category", "Long")]
+    public void Map_draws_a_generated_network_of_1000_units_as_png() => Draw1000(".png");
+
+    private void Draw1000(string extension)
     {
         string network = Path.Combine(_folder, "generated-1000.yaml");
         using (var writer = new StreamWriter(network))
@@ -87,7 +92,7 @@ public sealed class LargeMapTests : IDisposable
         var (code, output, _) = Run("map", network, "-o", target);
 
         Assert.Equal(0, code);
-        Assert.Equal(string.Create(CultureInfo.InvariantCulture, $"map of 1000 units written to '{target}'\n"), output);
+        Assert.Equal(string.Create(CultureInfo.InvariantCulture, $"map of 1000 units written to {target}\n"), output);
         if (extension == ".svg")
         {
             Assert.Equal(1000, File.ReadAllText(target).Split("data-unit=\"").Length - 1);
