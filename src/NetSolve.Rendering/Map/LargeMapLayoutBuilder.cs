@@ -248,9 +248,9 @@ internal static class LargeMapLayoutBuilder
     }
 
     /// <summary>
-    /// How many layers a band of the group holds: the number, from all of them down to <see cref="MinLayersPerBand"/>,
-    /// whose folded group comes closest to <see cref="TargetAspect"/> (width to height), so a long pathway becomes
-    /// side-by-side bands and a wide, short group stays one.
+    /// How many layers a band of the group holds: one band, then two, and so on (never under
+    /// <see cref="MinLayersPerBand"/> layers a band) while the folded group comes closer to <see cref="TargetAspect"/>
+    /// (width to height), so a long pathway becomes side-by-side bands and a wide, short group stays one.
     /// </summary>
     private static int LayersPerBand(List<double> layerWidths, double pitch, bool down)
     {
@@ -268,10 +268,13 @@ internal static class LargeMapLayoutBuilder
             double along = (perBand * pitch) - MapLayoutBuilder.LayerSeparation;
             double aspect = down ? across / along : along / across;
             double miss = Math.Abs(Math.Log(aspect / TargetAspect));
-            if (miss < bestMiss)
+            if (miss >= bestMiss)
             {
-                (best, bestMiss) = (perBand, miss);
+                // More bands only widen the map further: stop here, so a pathway of 2,000 layers tries some tens of foldings, not hundreds.
+                break;
             }
+
+            (best, bestMiss) = (perBand, miss);
         }
 
         return best;
