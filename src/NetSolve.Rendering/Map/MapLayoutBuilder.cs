@@ -32,9 +32,9 @@ public static class MapLayoutBuilder
     public const int MaxLayeredUnits = 250;
 
     /// <summary>
-    /// Most units a map is drawn for. Above it <c>map</c> refuses at once and the report leaves its map out: the PNG's
-    /// pixel budget (<see cref="PngMapRenderer.MaxPixels"/>) would draw box text under 8 pixels high, and the SVG
-    /// passes 10 MB, more than a browser or slide shows smoothly (docs/map-and-report.md, "Size").
+    /// Most units a map is drawn for. Above it <c>map</c> refuses at once and the report leaves its map out: already
+    /// at 2,000 units the PNG's pixel budget (<see cref="PngMapRenderer.MaxPixels"/>) draws box text under 5 pixels
+    /// high and the SVG is about 5 MB, more than a browser or slide shows smoothly (docs/map-and-report.md, "Size").
     /// </summary>
     public const int MaxUnits = 2000;
 
