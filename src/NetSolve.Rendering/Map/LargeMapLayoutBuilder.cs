@@ -2,7 +2,6 @@ using System.Collections.Immutable;
 using System.Runtime.InteropServices;
 using System.Text;
 using NetSolve.Model;
-using NetSolve.Presentation;
 using NetSolve.Presentation.Formats;
 using NetSolve.Solving;
 
@@ -164,14 +163,8 @@ internal static class LargeMapLayoutBuilder
     private static MapNode Template(UnitResult result, TimeUnit timeUnit)
     {
         var lines = UnitBoxText.Compact(result, timeUnit);
-        double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
-        double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
         string label = SafeText.ForDisplay(result.Unit.Label);
-        string? fullLabel = string.Equals(lines[0].Text, label, StringComparison.Ordinal) ? null : label;
-        return new MapNode(SafeText.ForDisplay(result.Unit.Id), 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null, null, fullLabel)
-        {
-            TargetsMissed = result.TargetsBreached.IsEmpty ? null : TargetWords.Breached(result),
-        };
+        return MapLayoutBuilder.UnitBox(result, lines, string.Equals(lines[0].Text, label, StringComparison.Ordinal) ? null : label);
     }
 
     /// <summary>

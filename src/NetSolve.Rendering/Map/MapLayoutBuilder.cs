@@ -246,9 +246,14 @@ public static class MapLayoutBuilder
     private static MapNode UnitTemplate(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
     {
         var lines = UnitBoxText.For(result, timeUnit, arrivalPerHour, exitPerHour);
+        return UnitBox(result, lines, UnitBoxText.IsShortened(result.Unit.Label) ? SafeText.ForDisplay(result.Unit.Label) : null);
+    }
+
+    /// <summary>A unit's box, not yet placed, as large as its <paramref name="lines"/> need and never narrower than <see cref="MapTypography.MinUnitWidth"/>.</summary>
+    internal static MapNode UnitBox(UnitResult result, ImmutableArray<MapTextLine> lines, string? fullLabel)
+    {
         double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
         double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
-        string? fullLabel = UnitBoxText.IsShortened(result.Unit.Label) ? SafeText.ForDisplay(result.Unit.Label) : null;
         return new MapNode(SafeText.ForDisplay(result.Unit.Id), 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null, null, fullLabel)
         {
             TargetsMissed = result.TargetsBreached.IsEmpty ? null : TargetWords.Breached(result),
