@@ -75,7 +75,13 @@ public static class HtmlReport
             .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
             .Append("<title>Capacity report: ").Append(Short(network.Name, MaxHeadingLength)).Append("</title>\n")
-            .Append("<style>\n").Append(ReportStyles.Css).Append("</style>\n</head>\n<body>\n");
+            .Append("<style>\n").Append(ReportStyles.Css);
+        if (HasLargeMap(baseline))
+        {
+            html.Append(ReportStyles.LargeMapCss);
+        }
+
+        html.Append("</style>\n</head>\n<body>\n");
 
         html.Append("<header>\n<h1").Append(Heading(network.Name, MaxHeadingLength)).Append("</h1>\n")
             .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Rates per ").Append(unit)
@@ -189,13 +195,17 @@ public static class HtmlReport
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
             .Append('.');
-        if (layout.Edges.Any(edge => edge.Faint))
+        if (HasLargeMap(baseline))
         {
-            html.Append(" On a map this large each box shows the label, status, utilisation and mean wait, pale lines carry under a fifth of the largest flow, and rates are written on the heavier lines only; the table below gives every number.");
+            html.Append(" On screen the map is shown at its own size in a frame that scrolls; on a map this large each box shows the label, status, utilisation and mean wait, pale lines carry under a fifth of the largest flow, and rates are written on the heavier lines only; the table below gives every number.");
         }
 
         html.Append("</figcaption>\n</figure>\n</section>\n");
     }
+
+    /// <summary>Whether the report draws its map with the large layout (more units than MSAGL lays out, no more than a map is drawn for).</summary>
+    private static bool HasLargeMap(NetworkSolution baseline) =>
+        baseline.Units.Length > MapLayoutBuilder.MaxLayeredUnits && baseline.Units.Length <= MapLayoutBuilder.MaxUnits;
 
     private static void AppendGrowth(StringBuilder html, NetworkSolution baseline)
     {

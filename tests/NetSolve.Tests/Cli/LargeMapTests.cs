@@ -68,6 +68,8 @@ public sealed class LargeMapTests : IDisposable
         Assert.Equal(units, html.Split("<g class=\"unit status-").Length - 1);
         // A chain losing a tenth of its patients at every unit: the far end's lines carry under a fifth of the first's.
         Assert.Contains("pale lines carry under a fifth of the largest flow", html, StringComparison.Ordinal);
+        // Shrunk to the column, 300 boxes would have unreadable text: on screen the map keeps its size and scrolls.
+        Assert.Contains("#map-figure .map-frame { max-width: none !important; max-height: 85vh; overflow: auto;", html, StringComparison.Ordinal);
     }
 
     // About 1 s each in Debug for SVG and DOT; the PNG's rasterising takes about 8 s, so it runs with the long tests.
