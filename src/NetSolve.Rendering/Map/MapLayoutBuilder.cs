@@ -14,7 +14,10 @@ using MsaglPoint = Microsoft.Msagl.Core.Geometry.Point;
 
 namespace NetSolve.Rendering.Map;
 
-/// <summary>Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way.</summary>
+/// <summary>
+/// Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way; a network of more
+/// than <see cref="MaxLayeredUnits"/> units with <see cref="LargeMapLayoutBuilder"/>.
+/// </summary>
 /// <remarks>
 /// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
 /// at the unit's box with their rate written in the box; so are patients turned away by a full unit. Patients
