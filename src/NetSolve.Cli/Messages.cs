@@ -236,7 +236,7 @@ internal static class Messages
 
     /// <summary><c>map</c> refused: the network is larger than a map is drawn for.</summary>
     public static string MapTooLarge(int units, int most) =>
-        Invariant($"{Program}the network has {units} units and a map is drawn for at most {most}, because its layout time grows faster than the units: map one part of the network at a time (a file with one hospital's units), or use 'report', whose unit table lists every unit");
+        Invariant($"{Program}the network has {units} units and a map is drawn for at most {most}, because a larger map is too big to open or print legibly: map one part of the network at a time (a file with one hospital's units), or use 'report', whose unit table lists every unit");
 
     /// <summary><c>map</c> written.</summary>
     public static string MapWritten(int units, string target) => Invariant($"map of {units} units written to {Q(target)}");

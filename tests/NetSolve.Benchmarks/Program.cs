@@ -37,4 +37,10 @@ if (args is ["movement-log", var rows, var logPath, .. var seed])
     return;
 }
 
+if (args is ["map-layout", .. var mapFiles])
+{
+    MapLayoutMeasurement.Run(Console.Out, mapFiles);
+    return;
+}
+
 BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);

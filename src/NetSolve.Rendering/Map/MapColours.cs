@@ -26,4 +26,7 @@ public static class MapColours
 
     /// <summary>Dash pattern of diversion lines, shorter than a return route's so the two read apart.</summary>
     public const string DiversionDash = "4 3";
+
+    /// <summary>Opacity of a light flow's line on a large map: pale grey or lilac on white, still visible, never hiding a heavy flow.</summary>
+    public const string FaintOpacity = "0.3";
 }

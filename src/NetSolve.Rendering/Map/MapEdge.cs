@@ -23,4 +23,11 @@ public sealed record MapEdge(
     MapPoint Start,
     MapPoint ArrowBase,
     MapPoint ArrowTip,
-    MapPoint LabelCentre);
+    MapPoint LabelCentre)
+{
+    /// <summary>True for a light flow on a large map, drawn pale so the heavy flows stand out.</summary>
+    public bool Faint { get; init; }
+
+    /// <summary>Whether the rate is written on the line; on a large map only where it clears the boxes and other rates.</summary>
+    public bool ShowsRate { get; init; } = true;
+}

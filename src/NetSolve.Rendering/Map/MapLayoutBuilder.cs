@@ -14,7 +14,10 @@ using MsaglPoint = Microsoft.Msagl.Core.Geometry.Point;
 
 namespace NetSolve.Rendering.Map;
 
-/// <summary>Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way.</summary>
+/// <summary>
+/// Lays a solved network out with MSAGL's layered (Sugiyama) layout, patients flowing one main way; a network of more
+/// than <see cref="MaxLayeredUnits"/> units with <see cref="LargeMapLayoutBuilder"/>.
+/// </summary>
 /// <remarks>
 /// Every unit and every route with a positive probability appears; external arrivals and exits are short arrows
 /// at the unit's box with their rate written in the box; so are patients turned away by a full unit. Patients
@@ -24,18 +27,25 @@ namespace NetSolve.Rendering.Map;
 public static class MapLayoutBuilder
 {
     /// <summary>
-    /// Most units a map is drawn for. The layered layout's time grows faster than n log n on networks with many long
-    /// routes (measured: 2.8 s at 200 units, 33 s at 1,000; with the layout's quicker settings for large graphs still
-    /// 12 s of CPU at 1,000), so <c>map</c> refuses a larger network at once with a suggestion, and the report leaves
-    /// its map out, rather than either running for minutes (docs/performance.md, "Map and report at scale").
+    /// Most units laid out with MSAGL. Its layered layout's time grows faster than n log n on networks with many long
+    /// routes (measured: 2.8 s at 200 units, 33 s at 1,000; with its quicker settings for large graphs still 12 s of
+    /// CPU at 1,000), so a larger network is laid out by <see cref="LargeMapLayoutBuilder"/>, in close to linear time
+    /// (docs/performance.md, "Map and report at scale").
     /// </summary>
-    public const int MaxUnits = 250;
+    public const int MaxLayeredUnits = 250;
+
+    /// <summary>
+    /// Most units a map is drawn for. Above it <c>map</c> refuses at once and the report leaves its map out: already
+    /// at 2,000 units the PNG's pixel budget (<see cref="PngMapRenderer.MaxPixels"/>) draws box text under 5 pixels
+    /// high and the SVG is about 5 MB, more than a browser or slide shows smoothly (docs/map-and-report.md, "Size").
+    /// </summary>
+    public const int MaxUnits = 2000;
 
     /// <summary>Gap between boxes in one layer: room for an exit arrow and a little air, no more, so 40 units fit A4 width.</summary>
-    private const double NodeSeparation = 24.0;
+    internal const double NodeSeparation = 24.0;
 
     /// <summary>Gap between layers: two arrival or exit arrows and a rate label.</summary>
-    private const double LayerSeparation = 50.0;
+    internal const double LayerSeparation = 50.0;
 
     /// <summary>Length of the arrival and exit arrows; shorter than both gaps, between layers and between boxes.</summary>
     internal const double StubLength = 18.0;
@@ -44,43 +54,27 @@ public static class MapLayoutBuilder
     private const double StubInset = 14.0;
 
     /// <summary>Arrowheads grow with the line so a wide line still ends in a visible point.</summary>
-    private const double ArrowLengthPerStroke = 1.6;
+    internal const double ArrowLengthPerStroke = 1.6;
 
     /// <summary>Shortest arrowhead, for thin lines.</summary>
-    private const double MinArrowLength = 9.0;
+    internal const double MinArrowLength = 9.0;
 
     /// <summary>Lays out <paramref name="solution"/> with the given main direction.</summary>
     public static MapLayout Build(NetworkSolution solution, MapDirection direction = MapDirection.TopToBottom)
     {
         ArgumentNullException.ThrowIfNull(solution);
         var network = solution.Network;
-        var routing = RoutingTable.Build(network);
-        var index = network.BuildIndex();
+        if (network.Units.Length > MaxLayeredUnits)
+        {
+            return LargeMapLayoutBuilder.Build(solution, direction);
+        }
+
+        var flows = MapFlows.Of(solution);
+        var index = flows.Index;
         var timeUnit = network.TimeUnit;
-
-        var arrivalPerHour = new double[network.Units.Length];
-        foreach (var arrival in network.Arrivals)
-        {
-            arrivalPerHour[index[arrival.UnitId]] += arrival.PerHour;
-        }
-
-        var exitPerHour = new double[network.Units.Length];
-        for (int i = 0; i < exitPerHour.Length; i++)
-        {
-            exitPerHour[i] = solution.Units[i].ArrivalsPerHour * routing.ExitProbability(i);
-        }
-
-        var routes = network.Routes
-            .Where(route => route.Probability > 0.0)
-            .Select(route => (Route: route, PerHour: solution.Units[index[route.From]].ArrivalsPerHour * route.Probability))
-            .ToList();
-        // Patients diverted from a full unit to its target: a dashed line of their own, laid out with the routes.
-        var diversions = solution.Units
-            .Where(result => result.DivertedPerHour > 0.0 && result.Unit.WhenFull.DivertToUnitId is not null)
-            .Select(result => (From: result.Unit.Id, To: result.Unit.WhenFull.DivertToUnitId!, result.DivertedPerHour, Text: UnitBoxText.Diverted(result, timeUnit)))
-            .ToList();
-        double maxPerHour = routes.Select(r => r.PerHour).Concat(arrivalPerHour).Concat(exitPerHour)
-            .Concat(diversions.Select(d => d.DivertedPerHour)).DefaultIfEmpty(0.0).Max();
+        var arrivalPerHour = flows.ArrivalPerHour;
+        var exitPerHour = flows.ExitPerHour;
+        double maxPerHour = flows.MaxPerHour;
 
         var graph = new GeometryGraph();
         var templates = new MapNode[network.Units.Length];
@@ -92,12 +86,10 @@ public static class MapLayoutBuilder
             graph.Nodes.Add(graphNodes[i]);
         }
 
-        var lines = routes.Select(r => (r.Route.From, r.Route.To, IsDiversion: false, r.PerHour, Text: PeopleFormat.Rate(r.PerHour, timeUnit)))
-            .Concat(diversions.Select(d => (d.From, d.To, IsDiversion: true, PerHour: d.DivertedPerHour, d.Text)))
-            .ToList();
+        var lines = flows.Lines.Select(line => (line.From, line.To, line.IsDiversion, line.PerHour, Text: line.RateText)).ToList();
         // Return routes are chosen from the flows before layout and handed to the layout reversed, so the layers
         // follow the heaviest flow rather than the layout engine's own count of lines.
-        var isReturn = ReturnRoutes.Choose(network.Units.Length, lines.Select(line => (index[line.From], index[line.To], line.PerHour)).ToList());
+        var isReturn = ReturnRoutes.Choose(network.Units.Length, flows.Weighted());
         var edges = new List<(MsaglEdge Edge, string From, string To, bool IsDiversion, bool IsReturn, double PerHour, double Stroke, string RateText)>(lines.Count);
         for (int k = 0; k < lines.Count; k++)
         {
@@ -203,7 +195,7 @@ public static class MapLayoutBuilder
     /// The arrival arrow enters the box near its first corner along the main direction (top-left), the exit arrow
     /// leaves sideways near the opposite corner (bottom-right), each <see cref="StubLength"/> long.
     /// </summary>
-    private static MapStub? Stub(double perHour, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction, bool isArrival)
+    internal static MapStub? Stub(double perHour, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction, bool isArrival)
     {
         if (!(perHour > 0.0))
         {
@@ -232,7 +224,7 @@ public static class MapLayoutBuilder
     /// The turned-away arrow leaves a full unit sideways near its first corner (top-right, or top-left across the
     /// main direction when it runs left to right), into the gap between boxes of one layer, clear of the exit arrow.
     /// </summary>
-    private static MapStub? TurnedAwayStub(UnitResult result, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction)
+    internal static MapStub? TurnedAwayStub(UnitResult result, double maxPerHour, TimeUnit timeUnit, MapNode node, MapDirection direction)
     {
         double perHour = result.TurnedAwayPerHour;
         if (!(perHour > 0.0))
@@ -257,9 +249,14 @@ public static class MapLayoutBuilder
     private static MapNode UnitTemplate(UnitResult result, TimeUnit timeUnit, double arrivalPerHour, double exitPerHour)
     {
         var lines = UnitBoxText.For(result, timeUnit, arrivalPerHour, exitPerHour);
+        return UnitBox(result, lines, UnitBoxText.IsShortened(result.Unit.Label) ? SafeText.ForDisplay(result.Unit.Label) : null);
+    }
+
+    /// <summary>A unit's box, not yet placed, as large as its <paramref name="lines"/> need and never narrower than <see cref="MapTypography.MinUnitWidth"/>.</summary>
+    internal static MapNode UnitBox(UnitResult result, ImmutableArray<MapTextLine> lines, string? fullLabel)
+    {
         double width = lines.Max(line => TextWidth.Of(line.Text, line.FontSize, line.IsBold)) + (2.0 * MapTypography.Padding);
         double height = lines.Sum(line => line.FontSize * MapTypography.LineSpacing) + (2.0 * MapTypography.Padding);
-        string? fullLabel = UnitBoxText.IsShortened(result.Unit.Label) ? SafeText.ForDisplay(result.Unit.Label) : null;
         return new MapNode(SafeText.ForDisplay(result.Unit.Id), 0.0, 0.0, Math.Ceiling(Math.Max(MapTypography.MinUnitWidth, width)), Math.Ceiling(height), lines, result.Status, null, null, null, fullLabel)
         {
             TargetsMissed = result.TargetsBreached.IsEmpty ? null : TargetWords.Breached(result),

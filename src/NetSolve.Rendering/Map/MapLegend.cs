@@ -21,6 +21,11 @@ internal static class MapLegend
             items.Add(TextItem(TargetWords.BreachMarker + " missed: a unit target not met"));
         }
 
+        if (layout.Edges.Any(edge => edge.Faint))
+        {
+            items.Add(TextItem("pale line: under a fifth of the largest flow; every rate in the line's tooltip"));
+        }
+
         double widestItem = items.Max(item => item.Width);
         string? subtitle = ShownSubtitle(layout);
         double subtitleWidth = subtitle is null ? 0.0 : TextWidth.Of(subtitle, MapTypography.DetailSize, bold: false);

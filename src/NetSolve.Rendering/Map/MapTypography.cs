@@ -30,6 +30,9 @@ public static class MapTypography
     /// <summary>A single word wider than <see cref="MaxLabelWidth"/> keeps its own line up to this width, then is cut with an ellipsis.</summary>
     public const double MaxLabelWordWidth = 2.0 * MaxLabelWidth;
 
+    /// <summary>On a large map a label takes one line, cut with an ellipsis beyond this width (full text in the tooltip).</summary>
+    public const double MaxCompactLabelWidth = 1.5 * MaxLabelWidth;
+
     /// <summary>The map's title is cut with an ellipsis beyond this width or the graph's, whichever is wider.</summary>
     public const double MaxTitleWidth = 960.0;
 

@@ -51,7 +51,7 @@ public static class SvgMapWriter
                 new XAttribute("transform", FormattableString.Invariant($"translate({Coordinates.Format(offsetX)} {Coordinates.Format(headerHeight)})")),
                 new XElement(Svg + "g", new XAttribute("class", "flows"), layout.Edges.Select(Flow)),
                 new XElement(Svg + "g", new XAttribute("class", "nodes"), layout.Nodes.Select(Node)),
-                new XElement(Svg + "g", new XAttribute("class", "rates"), layout.Edges.Select(Rate))));
+                new XElement(Svg + "g", new XAttribute("class", "rates"), layout.Edges.Where(edge => edge.ShowsRate).Select(Rate))));
         return new XDocument(root);
     }
 
@@ -86,16 +86,23 @@ public static class SvgMapWriter
             path.Add(new XAttribute("stroke-dasharray", edge.Kind == MapEdgeKind.Diversion ? MapColours.DiversionDash : MapColours.FeedbackDash));
         }
 
+        var arrow = Arrow(edge, stroke);
+        if (edge.Faint)
+        {
+            path.Add(new XAttribute("stroke-opacity", MapColours.FaintOpacity));
+            arrow.Add(new XAttribute("fill-opacity", MapColours.FaintOpacity));
+        }
+
         return new XElement(
             Svg + "g",
-            new XAttribute("class", "flow " + KindName(edge.Kind)),
+            new XAttribute("class", "flow " + KindName(edge.Kind) + (edge.Faint ? " faint" : string.Empty)),
             new XAttribute("data-from", edge.From),
             new XAttribute("data-to", edge.To),
             new XAttribute("data-kind", KindName(edge.Kind)),
             new XAttribute("data-rate", edge.RateText),
             new XElement(Svg + "title", FormattableString.Invariant($"{edge.From} to {edge.To}: {edge.RateText}")),
             path,
-            Arrow(edge, stroke));
+            arrow);
     }
 
     private static XElement Arrow(MapEdge edge, string fill)

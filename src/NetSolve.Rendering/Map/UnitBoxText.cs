@@ -58,6 +58,34 @@ internal static class UnitBoxText
         return lines.ToImmutable();
     }
 
+    /// <summary>
+    /// The shorter box of a large map: the label on one line (cut with an ellipsis at
+    /// <see cref="MapTypography.MaxCompactLabelWidth"/>), the status, a missed target, utilisation and mean wait; the
+    /// rates in and out are left to the arrows and the unit table.
+    /// </summary>
+    public static ImmutableArray<MapTextLine> Compact(UnitResult result, TimeUnit timeUnit)
+    {
+        var lines = ImmutableArray.CreateBuilder<MapTextLine>();
+        lines.Add(new MapTextLine(CompactLabel(result.Unit.Label), MapTypography.LabelSize, IsBold: true));
+        lines.Add(Detail(HarbourLightsPalette.Text(result.Status), bold: true));
+        if (!result.TargetsBreached.IsEmpty)
+        {
+            lines.Add(Detail(TargetMissed(result), bold: true));
+        }
+
+        if (!result.Unit.Servers.IsUnlimited)
+        {
+            lines.Add(Detail(ShownValue.Of(UnitColumns.Utilisation, result, timeUnit) + " busy", bold: false));
+        }
+
+        lines.Add(Detail(Wait(result, timeUnit), bold: false));
+        return lines.ToImmutable();
+    }
+
+    /// <summary>The label as a large map's box shows it: one line, cut with an ellipsis where too wide.</summary>
+    public static string CompactLabel(string label) =>
+        Ellipsis.Fit(SafeText.ForDisplay(label), MapTypography.MaxCompactLabelWidth, MapTypography.LabelSize, bold: true);
+
     /// <summary>The mark beside the status of a unit that misses a target, naming the targets: <c>x missed: mean_wait</c>.</summary>
     public static string TargetMissed(UnitResult result) => TargetWords.BreachMarker + " missed: " + TargetWords.Breached(result);
 

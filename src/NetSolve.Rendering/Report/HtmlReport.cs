@@ -75,7 +75,13 @@ public static class HtmlReport
             .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
             .Append("<title>Capacity report: ").Append(Short(network.Name, MaxHeadingLength)).Append("</title>\n")
-            .Append("<style>\n").Append(ReportStyles.Css).Append("</style>\n</head>\n<body>\n");
+            .Append("<style>\n").Append(ReportStyles.Css);
+        if (HasLargeMap(baseline))
+        {
+            html.Append(ReportStyles.LargeMapCss);
+        }
+
+        html.Append("</style>\n</head>\n<body>\n");
 
         html.Append("<header>\n<h1").Append(Heading(network.Name, MaxHeadingLength)).Append("</h1>\n")
             .Append("<p class=\"subtitle\">Capacity report from a queueing-network model. Rates per ").Append(unit)
@@ -95,7 +101,7 @@ public static class HtmlReport
 
         if (baseline.Units.Length > MapLayoutBuilder.MaxUnits)
         {
-            // The layout of a network this large would take minutes (MapLayoutBuilder.MaxUnits); the table still lists every unit.
+            // A map of a network this large would be too big to open or print legibly (MapLayoutBuilder.MaxUnits); the table still lists every unit.
             html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<p class=\"map-left-out\" id=\"map-left-out\">The network has ")
                 .Append(baseline.Units.Length.ToString(CultureInfo.InvariantCulture)).Append(" units; a map is drawn for at most ")
                 .Append(MapLayoutBuilder.MaxUnits.ToString(CultureInfo.InvariantCulture))
@@ -177,7 +183,8 @@ public static class HtmlReport
     /// <summary>The bottleneck map, as inline SVG with its caption.</summary>
     private static void AppendMap(StringBuilder html, NetworkSolution baseline, string unit)
     {
-        var map = SvgMapWriter.Write(MapLayoutBuilder.Build(baseline)).Root!;
+        var layout = MapLayoutBuilder.Build(baseline);
+        var map = SvgMapWriter.Write(layout).Root!;
         // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
         double mapWidth = double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture);
         double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
@@ -187,8 +194,18 @@ public static class HtmlReport
             .Append(map.ToString()).Append("\n</div>\n")
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
-            .Append(".</figcaption>\n</figure>\n</section>\n");
+            .Append('.');
+        if (HasLargeMap(baseline))
+        {
+            html.Append(" On screen the map is shown at its own size in a frame that scrolls; on a map this large each box shows the label, status, utilisation and mean wait, pale lines carry under a fifth of the largest flow, and rates are written on the heavier lines only; the table below gives every number.");
+        }
+
+        html.Append("</figcaption>\n</figure>\n</section>\n");
     }
+
+    /// <summary>Whether the report draws its map with the large layout (more units than MSAGL lays out, no more than a map is drawn for).</summary>
+    private static bool HasLargeMap(NetworkSolution baseline) =>
+        baseline.Units.Length > MapLayoutBuilder.MaxLayeredUnits && baseline.Units.Length <= MapLayoutBuilder.MaxUnits;
 
     private static void AppendGrowth(StringBuilder html, NetworkSolution baseline)
     {

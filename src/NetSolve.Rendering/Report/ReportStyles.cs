@@ -48,4 +48,17 @@ internal static class ReportStyles
           .map-print-note { display: block; font-size: 9pt; border-left: 4px solid #22313F; padding: 0.1rem 0.5rem; margin: 0 0 0.4rem; }
         }
         """);
+
+    /// <summary>
+    /// Added after <see cref="Css"/> when the report draws a large map (<see cref="Map.MapLayoutBuilder.MaxLayeredUnits"/>):
+    /// on screen the map keeps its own size, one map unit to a CSS pixel, in a frame that scrolls both ways, because
+    /// shrunk to the column its box text would be a pixel high; in print it is reduced to the page as any map.
+    /// </summary>
+    public const string LargeMapCss = """
+        @media screen {
+          #map-figure .map-frame { max-width: none !important; max-height: 85vh; overflow: auto; border: 1px solid #B8BEC4; }
+          #map-figure svg { width: auto; max-width: none; }
+        }
+
+        """;
 }

@@ -1,11 +1,13 @@
 using System.Globalization;
 using System.Text;
+using NetSolve.Presentation;
 using NetSolve.Rendering.Map;
+using NetSolve.Tests.Rendering;
 using static NetSolve.Tests.Support.CliRun;
 
 namespace NetSolve.Tests.Cli;
 
-/// <summary>Networks larger than a map is drawn for: <c>map</c> refuses at once, <c>report</c> leaves the map out.</summary>
+/// <summary>Networks larger than a map is drawn for (<see cref="MapLayoutBuilder.MaxUnits"/>): <c>map</c> refuses at once, <c>report</c> leaves the map out.</summary>
 public sealed class LargeMapTests : IDisposable
 {
     private readonly string _folder = Path.Combine(Path.GetTempPath(), "netsolve-large-map-" + Guid.NewGuid().ToString("N"));
@@ -24,7 +26,7 @@ public sealed class LargeMapTests : IDisposable
         Assert.Equal(1, code);
         Assert.Equal(string.Empty, output);
         Assert.Equal(
-            string.Create(CultureInfo.InvariantCulture, $"netsolve: the network has {MapLayoutBuilder.MaxUnits + 1} units and a map is drawn for at most {MapLayoutBuilder.MaxUnits}, because its layout time grows faster than the units: map one part of the network at a time (a file with one hospital's units), or use 'report', whose unit table lists every unit\n"),
+            string.Create(CultureInfo.InvariantCulture, $"netsolve: the network has {MapLayoutBuilder.MaxUnits + 1} units and a map is drawn for at most {MapLayoutBuilder.MaxUnits}, because a larger map is too big to open or print legibly: map one part of the network at a time (a file with one hospital's units), or use 'report', whose unit table lists every unit\n"),
             error);
         Assert.False(File.Exists(target));
     }
@@ -50,7 +52,53 @@ public sealed class LargeMapTests : IDisposable
         string html = File.ReadAllText(target);
         Assert.Contains(string.Create(CultureInfo.InvariantCulture, $"The network has {units} units; a map is drawn for at most {MapLayoutBuilder.MaxUnits}, so it is left out here."), html, StringComparison.Ordinal);
         Assert.DoesNotContain("id=\"map-figure\"", html, StringComparison.Ordinal);
-        Assert.Contains("w" + (units - 1).ToString("D3", CultureInfo.InvariantCulture), html, StringComparison.Ordinal);
+        Assert.Contains("w" + (units - 1).ToString("D4", CultureInfo.InvariantCulture), html, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Report_on_a_network_above_the_layered_layouts_limit_draws_the_large_map()
+    {
+        int units = MapLayoutBuilder.MaxLayeredUnits + 50;
+        string target = Path.Combine(_folder, "report.html");
+        var (code, _, _) = Run("report", Chain(units), "-o", target);
+
+        Assert.Equal(0, code);
+        string html = File.ReadAllText(target);
+        Assert.Contains("id=\"map-figure\"", html, StringComparison.Ordinal);
+        Assert.Equal(units, html.Split("<g class=\"unit status-").Length - 1);
+        // A chain losing a tenth of its patients at every unit: the far end's lines carry under a fifth of the first's.
+        Assert.Contains("pale lines carry under a fifth of the largest flow", html, StringComparison.Ordinal);
+        // Shrunk to the column, 300 boxes would have unreadable text: on screen the map keeps its size and scrolls.
+        Assert.Contains("#map-figure .map-frame { max-width: none !important; max-height: 85vh; overflow: auto;", html, StringComparison.Ordinal);
+    }
+
+    // About 1 s each in Debug for SVG and DOT; the PNG's rasterising takes about 8 s, so it runs with the long tests.
+    [Theory]
+    [InlineData(".svg")]
+    [InlineData(".dot")]
+    public void Map_draws_a_generated_network_of_1000_units(string extension) => Draw1000(extension);
+
+    [Fact]
+    [Trait("Category", "Long")]
+    public void Map_draws_a_generated_network_of_1000_units_as_png() => Draw1000(".png");
+
+    private void Draw1000(string extension)
+    {
+        string network = Path.Combine(_folder, "generated-1000.yaml");
+        using (var writer = new StreamWriter(network))
+        {
+            NetworkYamlWriter.Write(GeneratedHospital.Create(1000, seed: 1), writer);
+        }
+
+        string target = Path.Combine(_folder, "map" + extension);
+        var (code, output, _) = Run("map", network, "-o", target);
+
+        Assert.Equal(0, code);
+        Assert.Equal(string.Create(CultureInfo.InvariantCulture, $"map of 1000 units written to {target}\n"), output);
+        if (extension == ".svg")
+        {
+            Assert.Equal(1000, File.ReadAllText(target).Split("data-unit=\"").Length - 1);
+        }
     }
 
     /// <summary>A network file of <paramref name="units"/> units in a line, patients arriving at the first.</summary>
@@ -59,13 +107,13 @@ public sealed class LargeMapTests : IDisposable
         var yaml = new StringBuilder("name: Long corridor of invented wards\ntime_unit: hour\n\nunits:\n");
         for (int i = 0; i < units; i++)
         {
-            yaml.Append(CultureInfo.InvariantCulture, $"  w{i:D3}:\n    servers: 2\n    service: 1h\n");
+            yaml.Append(CultureInfo.InvariantCulture, $"  w{i:D4}:\n    servers: 2\n    service: 1h\n");
         }
 
-        yaml.Append("\narrivals:\n  w000: 1/h\n\nroutes:\n");
+        yaml.Append("\narrivals:\n  w0000: 1/h\n\nroutes:\n");
         for (int i = 0; i + 1 < units; i++)
         {
-            yaml.Append(CultureInfo.InvariantCulture, $"  w{i:D3}:\n    w{i + 1:D3}: 0.9\n");
+            yaml.Append(CultureInfo.InvariantCulture, $"  w{i:D4}:\n    w{i + 1:D4}: 0.9\n");
         }
 
         string path = Path.Combine(_folder, string.Create(CultureInfo.InvariantCulture, $"chain-{units}.yaml"));

@@ -1,0 +1,377 @@
+using System.Collections.Immutable;
+using System.Runtime.InteropServices;
+using System.Text;
+using NetSolve.Model;
+using NetSolve.Presentation.Formats;
+using NetSolve.Solving;
+
+namespace NetSolve.Rendering.Map;
+
+/// <summary>
+/// Lays out a network too large for MSAGL's layered layout (<see cref="MapLayoutBuilder.MaxLayeredUnits"/>) in time
+/// close to linear: layers and order from <see cref="LargeMapLayering"/>, boxes packed in their layers, each
+/// connected group of units laid out on its own and the groups packed in rows.
+/// </summary>
+/// <remarks>
+/// A group with many layers is folded into bands side by side, like newspaper columns, so the map keeps the shape
+/// of a landscape screen or slide. Boxes are the shorter ones of <see cref="UnitBoxText.Compact"/>.
+/// Lines are one smooth curve each: forward lines leave a box's far side along the main direction and enter the
+/// next box's near side; return routes leave and enter boxes on the side across the main direction, bowing out,
+/// dashed as on every map. Lines carrying less than <see cref="FaintShare"/> of the largest flow are drawn pale,
+/// and rates are written only on the heavier lines, where they clear every box and other rate; every line's rate
+/// stays in its tooltip. Deterministic: the same solution gives the same layout.
+/// </remarks>
+internal static class LargeMapLayoutBuilder
+{
+    /// <summary>Lines under this share of the largest flow are drawn pale, so a planner sees the heavy flows first.</summary>
+    public const double FaintShare = 0.2;
+
+    /// <summary>Gap between the bands of a folded group: room for return routes bowing out of the band before.</summary>
+    private const double BandGap = 90.0;
+
+    /// <summary>Width to height a folded group and the whole map aim at: a landscape screen or slide.</summary>
+    private const double TargetAspect = 1.4;
+
+    /// <summary>Gap between connected groups.</summary>
+    private const double GroupGap = 60.0;
+
+    /// <summary>A band holds at least this many layers, so a short group is never folded.</summary>
+    private const int MinLayersPerBand = 4;
+
+    /// <summary>How far a return route bows out at most, less than the gap between bands.</summary>
+    private const double MaxBow = 70.0;
+
+    /// <summary>Longest handle of a forward line's curve: two layer gaps.</summary>
+    private const double MaxReach = 2.0 * MapLayoutBuilder.LayerSeparation;
+
+    /// <summary>Points taken along each curve to find the map's bounds.</summary>
+    private const int BoundSamples = 16;
+
+    /// <summary>How far a return route bows out at least, and a repeat visit's loop.</summary>
+    private const double MinBow = 24.0;
+
+    public static MapLayout Build(NetworkSolution solution, MapDirection direction)
+    {
+        var network = solution.Network;
+        var timeUnit = network.TimeUnit;
+        var flows = MapFlows.Of(solution);
+        int count = network.Units.Length;
+        var templates = new MapNode[count];
+        for (int i = 0; i < count; i++)
+        {
+            templates[i] = Template(solution.Units[i], timeUnit);
+        }
+
+        var layering = LargeMapLayering.Compute(count, flows.Weighted(), flows.ArrivalPerHour);
+        bool down = direction == MapDirection.TopToBottom;
+        var centres = Place(templates, layering, down);
+
+        // Each line's curve in unplaced coordinates; then everything is moved so the map starts at its margin.
+        var curves = new Curve[flows.Lines.Count];
+        for (int k = 0; k < curves.Length; k++)
+        {
+            var line = flows.Lines[k];
+            double stroke = MapLayoutBuilder.StrokeWidth(line.PerHour, flows.MaxPerHour);
+            double arrow = Math.Max(MapLayoutBuilder.MinArrowLength, MapLayoutBuilder.ArrowLengthPerStroke * stroke);
+            var from = Box(templates[line.FromIndex], centres[line.FromIndex]);
+            var to = Box(templates[line.ToIndex], centres[line.ToIndex]);
+            curves[k] = line.FromIndex == line.ToIndex ? Loop(from, arrow, down)
+                : layering.IsReturn[k] ? Return(from, to, arrow, down)
+                : Forward(from, to, arrow, down);
+        }
+
+        double pad = MapLayoutBuilder.StubLength + MapTypography.Margin;
+        double minX = double.PositiveInfinity, minY = double.PositiveInfinity, maxX = double.NegativeInfinity, maxY = double.NegativeInfinity;
+        void Cover(double x, double y)
+        {
+            (minX, maxX) = (Math.Min(minX, x), Math.Max(maxX, x));
+            (minY, maxY) = (Math.Min(minY, y), Math.Max(maxY, y));
+        }
+
+        for (int i = 0; i < count; i++)
+        {
+            Cover(centres[i].X - (templates[i].Width / 2.0), centres[i].Y - (templates[i].Height / 2.0));
+            Cover(centres[i].X + (templates[i].Width / 2.0), centres[i].Y + (templates[i].Height / 2.0));
+        }
+
+        foreach (var curve in curves)
+        {
+            // The curve itself, not its control points, which can lie far outside it.
+            for (int step = 0; step <= BoundSamples; step++)
+            {
+                var point = curve.At((double)step / BoundSamples);
+                Cover(point.X, point.Y);
+            }
+
+            Cover(curve.Tip.X, curve.Tip.Y);
+        }
+
+        double shiftX = pad - minX;
+        double shiftY = pad - minY;
+        MapPoint Shift(MapPoint point) => new(point.X + shiftX, point.Y + shiftY);
+
+        var nodes = ImmutableArray.CreateBuilder<MapNode>(count);
+        var occupied = new OccupancyGrid();
+        for (int i = 0; i < count; i++)
+        {
+            var template = templates[i];
+            var node = template with { Left = centres[i].X - (template.Width / 2.0) + shiftX, Top = centres[i].Y - (template.Height / 2.0) + shiftY };
+            occupied.Add(node.Left, node.Top, node.Right, node.Bottom);
+            nodes.Add(node with
+            {
+                Arrival = MapLayoutBuilder.Stub(flows.ArrivalPerHour[i], flows.MaxPerHour, timeUnit, node, direction, isArrival: true),
+                Exit = MapLayoutBuilder.Stub(flows.ExitPerHour[i], flows.MaxPerHour, timeUnit, node, direction, isArrival: false),
+                TurnedAway = MapLayoutBuilder.TurnedAwayStub(solution.Units[i], flows.MaxPerHour, timeUnit, node, direction),
+            });
+        }
+
+        var labelled = Labelled(flows, curves, occupied, Shift);
+        var edges = ImmutableArray.CreateBuilder<MapEdge>(curves.Length);
+        for (int k = 0; k < curves.Length; k++)
+        {
+            var line = flows.Lines[k];
+            var curve = curves[k];
+            var kind = line.IsDiversion ? MapEdgeKind.Diversion : layering.IsReturn[k] ? MapEdgeKind.Feedback : MapEdgeKind.Forward;
+            edges.Add(new MapEdge(
+                SafeText.ForDisplay(line.From),
+                SafeText.ForDisplay(line.To),
+                kind,
+                line.PerHour,
+                line.RateText,
+                MapLayoutBuilder.StrokeWidth(line.PerHour, flows.MaxPerHour),
+                PathData(curve, Shift),
+                Shift(curve.Start),
+                Shift(curve.Base),
+                Shift(curve.Tip),
+                Shift(curve.Middle))
+            {
+                Faint = line.PerHour < FaintShare * flows.MaxPerHour,
+                ShowsRate = labelled[k],
+            });
+        }
+
+        return new MapLayout(
+            SafeText.ForDisplay(network.Name),
+            timeUnit,
+            direction,
+            maxX - minX + (2.0 * pad),
+            maxY - minY + (2.0 * pad),
+            nodes.MoveToImmutable(),
+            edges.MoveToImmutable());
+    }
+
+    private static MapNode Template(UnitResult result, TimeUnit timeUnit)
+    {
+        var lines = UnitBoxText.Compact(result, timeUnit);
+        string label = SafeText.ForDisplay(result.Unit.Label);
+        return MapLayoutBuilder.UnitBox(result, lines, string.Equals(lines[0].Text, label, StringComparison.Ordinal) ? null : label);
+    }
+
+    /// <summary>
+    /// The centre of every box. Within a group, layers follow the main direction one pitch apart and boxes of a layer
+    /// sit side by side, centred on the band; a group with many layers is folded into bands (<see cref="LayersPerBand"/>);
+    /// groups are packed in rows (largest first) no longer than the target map's side or the longest group.
+    /// </summary>
+    private static MapPoint[] Place(MapNode[] boxes, MapLayering layering, bool down)
+    {
+        double Along(MapNode box) => down ? box.Height : box.Width;
+        double Across(MapNode box) => down ? box.Width : box.Height;
+        double deepest = boxes.Max(Along);
+        double pitch = deepest + MapLayoutBuilder.LayerSeparation;
+        double area = boxes.Sum(box => (box.Width + MapLayoutBuilder.NodeSeparation) * (box.Height + MapLayoutBuilder.LayerSeparation));
+        // The row of groups runs across the main direction: as wide as the target map, or as tall when it flows right.
+        double side = Math.Sqrt(down ? TargetAspect * area : area / TargetAspect);
+
+        var along = new double[boxes.Length];
+        var across = new double[boxes.Length];
+        var extents = new List<(int Group, double Along, double Across)>();
+        for (int group = 0; group < layering.Layers.Count; group++)
+        {
+            var layers = layering.Layers[group];
+            var layerWidths = layers.Select(units => units.Sum(unit => Across(boxes[unit])) + (MapLayoutBuilder.NodeSeparation * (units.Count - 1))).ToList();
+            int perBand = LayersPerBand(layerWidths, pitch, down);
+            double bandStart = 0.0;
+            for (int first = 0; first < layers.Count; first += perBand)
+            {
+                var band = layers.Skip(first).Take(perBand).ToList();
+                var widths = layerWidths.Skip(first).Take(perBand).ToList();
+                double bandWidth = widths.Max();
+                for (int l = 0; l < band.Count; l++)
+                {
+                    double at = bandStart + ((bandWidth - widths[l]) / 2.0);
+                    foreach (int unit in band[l])
+                    {
+                        across[unit] = at + (Across(boxes[unit]) / 2.0);
+                        along[unit] = (l * pitch) + (deepest / 2.0);
+                        at += Across(boxes[unit]) + MapLayoutBuilder.NodeSeparation;
+                    }
+                }
+
+                bandStart += bandWidth + BandGap;
+            }
+
+            extents.Add((group, (Math.Min(perBand, layers.Count) * pitch) - MapLayoutBuilder.LayerSeparation, bandStart - BandGap));
+        }
+
+        // Rows of groups, tallest first (ties in the order the groups were reached).
+        double rowLimit = Math.Max(side, extents.Max(extent => extent.Across));
+        var offset = new (double Along, double Across)[extents.Count];
+        double rowStart = 0.0, rowDepth = 0.0, x = 0.0;
+        foreach (var extent in extents.OrderByDescending(extent => extent.Along).ThenBy(extent => extent.Group))
+        {
+            if (x > 0.0 && x + extent.Across > rowLimit)
+            {
+                rowStart += rowDepth + GroupGap;
+                (x, rowDepth) = (0.0, 0.0);
+            }
+
+            offset[extent.Group] = (rowStart, x);
+            x += extent.Across + GroupGap;
+            rowDepth = Math.Max(rowDepth, extent.Along);
+        }
+
+        var centres = new MapPoint[boxes.Length];
+        for (int unit = 0; unit < boxes.Length; unit++)
+        {
+            var (a, c) = offset[layering.Component[unit]];
+            centres[unit] = down ? new MapPoint(across[unit] + c, along[unit] + a) : new MapPoint(along[unit] + a, across[unit] + c);
+        }
+
+        return centres;
+    }
+
+    /// <summary>
+    /// How many layers a band of the group holds: one band, then two, and so on (never under
+    /// <see cref="MinLayersPerBand"/> layers a band) while the folded group comes closer to <see cref="TargetAspect"/>
+    /// (width to height), so a long pathway becomes side-by-side bands and a wide, short group stays one.
+    /// </summary>
+    private static int LayersPerBand(List<double> layerWidths, double pitch, bool down)
+    {
+        int best = layerWidths.Count;
+        double bestMiss = double.PositiveInfinity;
+        for (int bands = 1; bands == 1 || (layerWidths.Count + bands - 1) / bands >= MinLayersPerBand; bands++)
+        {
+            int perBand = (layerWidths.Count + bands - 1) / bands;
+            double across = -BandGap;
+            for (int first = 0; first < layerWidths.Count; first += perBand)
+            {
+                across += layerWidths.Skip(first).Take(perBand).Max() + BandGap;
+            }
+
+            double along = (perBand * pitch) - MapLayoutBuilder.LayerSeparation;
+            double aspect = down ? across / along : along / across;
+            double miss = Math.Abs(Math.Log(aspect / TargetAspect));
+            if (miss >= bestMiss)
+            {
+                // More bands only widen the map further: stop here, so a pathway of 2,000 layers tries some tens of foldings, not hundreds.
+                break;
+            }
+
+            (best, bestMiss) = (perBand, miss);
+        }
+
+        return best;
+    }
+
+    private static Rect Box(MapNode box, MapPoint centre) => new(centre, box.Width / 2.0, box.Height / 2.0);
+
+    /// <summary>From the middle of the source's far side to the middle of the target's near side, leaving and arriving along the main direction.</summary>
+    private static Curve Forward(Rect from, Rect to, double arrow, bool down)
+    {
+        var start = down ? new MapPoint(from.Centre.X, from.Centre.Y + from.HalfHeight) : new MapPoint(from.Centre.X + from.HalfWidth, from.Centre.Y);
+        var tip = down ? new MapPoint(to.Centre.X, to.Centre.Y - to.HalfHeight) : new MapPoint(to.Centre.X - to.HalfWidth, to.Centre.Y);
+        var arrowBase = down ? new MapPoint(tip.X, tip.Y - arrow) : new MapPoint(tip.X - arrow, tip.Y);
+        // Half the distance along the main direction, so a line between neighbouring layers is a gentle S; capped, so
+        // a line up to a later band turns round in the gaps next to its boxes instead of swinging far past the map.
+        double reach = Math.Clamp(Math.Abs(down ? arrowBase.Y - start.Y : arrowBase.X - start.X) / 2.0, MapLayoutBuilder.LayerSeparation / 2.0, MaxReach);
+        var first = down ? new MapPoint(start.X, start.Y + reach) : new MapPoint(start.X + reach, start.Y);
+        var second = down ? new MapPoint(arrowBase.X, arrowBase.Y - reach) : new MapPoint(arrowBase.X - reach, arrowBase.Y);
+        return new Curve(start, first, second, arrowBase, tip);
+    }
+
+    /// <summary>From the middle of the source's side across the main direction to the same side of the target, bowing out.</summary>
+    private static Curve Return(Rect from, Rect to, double arrow, bool down)
+    {
+        var start = down ? new MapPoint(from.Centre.X + from.HalfWidth, from.Centre.Y) : new MapPoint(from.Centre.X, from.Centre.Y + from.HalfHeight);
+        var tip = down ? new MapPoint(to.Centre.X + to.HalfWidth, to.Centre.Y) : new MapPoint(to.Centre.X, to.Centre.Y + to.HalfHeight);
+        var arrowBase = down ? new MapPoint(tip.X + arrow, tip.Y) : new MapPoint(tip.X, tip.Y + arrow);
+        double distance = Math.Sqrt(Math.Pow(arrowBase.X - start.X, 2) + Math.Pow(arrowBase.Y - start.Y, 2));
+        double bow = Math.Clamp(0.15 * distance, MinBow, MaxBow);
+        var first = down ? new MapPoint(start.X + bow, start.Y) : new MapPoint(start.X, start.Y + bow);
+        var second = down ? new MapPoint(arrowBase.X + bow, arrowBase.Y) : new MapPoint(arrowBase.X, arrowBase.Y + bow);
+        return new Curve(start, first, second, arrowBase, tip);
+    }
+
+    /// <summary>A repeat visit: a small loop out of the box's side across the main direction and back into it.</summary>
+    private static Curve Loop(Rect box, double arrow, bool down)
+    {
+        var start = down ? new MapPoint(box.Centre.X + box.HalfWidth, box.Centre.Y - (box.HalfHeight / 2.0)) : new MapPoint(box.Centre.X - (box.HalfWidth / 2.0), box.Centre.Y + box.HalfHeight);
+        var tip = down ? new MapPoint(start.X, box.Centre.Y + (box.HalfHeight / 2.0)) : new MapPoint(box.Centre.X + (box.HalfWidth / 2.0), start.Y);
+        var arrowBase = down ? new MapPoint(tip.X + arrow, tip.Y) : new MapPoint(tip.X, tip.Y + arrow);
+        double bow = MinBow + arrow;
+        var first = down ? new MapPoint(start.X + bow, start.Y) : new MapPoint(start.X, start.Y + bow);
+        var second = down ? new MapPoint(arrowBase.X + bow, arrowBase.Y) : new MapPoint(arrowBase.X, arrowBase.Y + bow);
+        return new Curve(start, first, second, arrowBase, tip);
+    }
+
+    /// <summary>
+    /// Which lines carry their rate: those that are not pale, heaviest first, where the label at the middle of the
+    /// curve clears every box and every rate already placed.
+    /// </summary>
+    private static bool[] Labelled(MapFlows flows, Curve[] curves, OccupancyGrid occupied, Func<MapPoint, MapPoint> shift)
+    {
+        var labelled = new bool[curves.Length];
+        double halfHeight = MapTypography.RateSize * MapTypography.LineSpacing / 2.0;
+        var heaviestFirst = Enumerable.Range(0, curves.Length)
+            .Where(k => flows.Lines[k].PerHour >= FaintShare * flows.MaxPerHour)
+            .OrderByDescending(k => flows.Lines[k].PerHour)
+            .ThenBy(k => k);
+        foreach (int k in heaviestFirst)
+        {
+            var centre = shift(curves[k].Middle);
+            double halfWidth = (TextWidth.Of(flows.Lines[k].RateText, MapTypography.RateSize) / 2.0) + 2.0;
+            if (!occupied.Overlaps(centre.X - halfWidth, centre.Y - halfHeight, centre.X + halfWidth, centre.Y + halfHeight))
+            {
+                occupied.Add(centre.X - halfWidth, centre.Y - halfHeight, centre.X + halfWidth, centre.Y + halfHeight);
+                labelled[k] = true;
+            }
+        }
+
+        return labelled;
+    }
+
+    private static string PathData(Curve curve, Func<MapPoint, MapPoint> shift)
+    {
+        var path = new StringBuilder("M ");
+        Pair(path, shift(curve.Start)).Append("C ");
+        Pair(path, shift(curve.First));
+        Pair(path, shift(curve.Second));
+        Pair(path, shift(curve.Base));
+        return path.ToString().TrimEnd();
+    }
+
+    private static StringBuilder Pair(StringBuilder path, MapPoint point) =>
+        path.Append(Coordinates.Format(point.X)).Append(' ').Append(Coordinates.Format(point.Y)).Append(' ');
+
+    /// <summary>A box as its centre and half sizes.</summary>
+    [StructLayout(LayoutKind.Auto)]
+    private readonly record struct Rect(MapPoint Centre, double HalfWidth, double HalfHeight);
+
+    /// <summary>One cubic Bézier from <paramref name="Start"/> to the arrow's <paramref name="Base"/>, then the arrowhead to <paramref name="Tip"/>.</summary>
+    [StructLayout(LayoutKind.Auto)]
+    private readonly record struct Curve(MapPoint Start, MapPoint First, MapPoint Second, MapPoint Base, MapPoint Tip)
+    {
+        /// <summary>The curve's point halfway along its parameter: (P0 + 3 P1 + 3 P2 + P3) / 8.</summary>
+        public MapPoint Middle => At(0.5);
+
+        /// <summary>The point at parameter <paramref name="t"/> in [0, 1] (Bernstein form).</summary>
+        public MapPoint At(double t)
+        {
+            double u = 1.0 - t;
+            double a = u * u * u, b = 3.0 * u * u * t, c = 3.0 * u * t * t, d = t * t * t;
+            return new MapPoint(
+                (a * Start.X) + (b * First.X) + (c * Second.X) + (d * Base.X),
+                (a * Start.Y) + (b * First.Y) + (c * Second.Y) + (d * Base.Y));
+        }
+    }
+}
