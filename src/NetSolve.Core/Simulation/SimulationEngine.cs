@@ -10,6 +10,9 @@ internal sealed partial class SimulationEngine
     private const int ChunkEvents = 4096;
     private const int ChunksPerProgress = 16;
 
+    // Units from which route rows and samplers are hinted ahead: below it they stay in cache, and a hint only costs.
+    private const int HintMemoryFrom = 1024;
+
     private readonly CompiledNetwork _network;
     private readonly MetricLayout _layout;
     private readonly double[] _waitThresholdsHours;
@@ -31,6 +34,9 @@ internal sealed partial class SimulationEngine
     private readonly DeferredDurations _unitTimes;
     private readonly GroupPlan[] _groups;
     private readonly ServiceSampler[] _samplers;
+
+    // Whether to hint the route row and the sampler of a unit ahead (CachePrefetch): only where they miss the cache.
+    private readonly bool _hintMemory;
 
     private readonly long[] _groupExits;
     private readonly double[] _groupTimeSum;
@@ -67,6 +73,7 @@ internal sealed partial class SimulationEngine
         _unitTimes = new DeferredDurations(_unitHistograms);
         _groups = network.Groups;
         _samplers = network.Samplers;
+        _hintMemory = n >= HintMemoryFrom;
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
         _groupHistograms = NewHistograms(groups);
@@ -205,7 +212,10 @@ internal sealed partial class SimulationEngine
         // The route is chosen after the statistics and any service start: its row is hinted now, so that at 100,000
         // units its cache miss overlaps the unit's instead of following it (see CachePrefetch).
         var plan = _groups[group];
-        CachePrefetch.Element(plan.RouteOffsets, unit);
+        if (_hintMemory)
+        {
+            CachePrefetch.Element(plan.RouteOffsets, unit);
+        }
 
         // Times are recorded when they end, for every patient ending after the warm-up: in steady state the patient
         // leaving at any moment has the steady-state time, whereas keeping only those who also arrived after the
@@ -243,7 +253,10 @@ internal sealed partial class SimulationEngine
     private void ArriveAtUnit(double now, int unit, int patient, int group)
     {
         // Hinted beside the unit's state, which decides whether a service starts: the two misses then overlap.
-        CachePrefetch.Element(_samplers, (group * _units.Length) + unit);
+        if (_hintMemory)
+        {
+            CachePrefetch.Element(_samplers, (group * _units.Length) + unit);
+        }
         bool counted = now >= _warmupEnd;
         for (int hops = 0; ; hops++)
         {
