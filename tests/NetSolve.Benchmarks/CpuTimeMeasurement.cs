@@ -40,8 +40,36 @@ internal static class CpuTimeMeasurement
             var cpu = Process.GetCurrentProcess().TotalProcessorTime - cpuBefore;
             long events = engine.EventCount;
             output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"units {network.Units.Length,6}  run {run}  events {events,9}  wall {wall.Elapsed.TotalMilliseconds,8:F0} ms  cpu {cpu.TotalMilliseconds,8:F0} ms  {events / cpu.TotalSeconds / 1e6,6:F2} M events/cpu-s  managed heap {GC.GetTotalMemory(false) / 1e6,6:F0} MB"));
+                $"units {network.Units.Length,6}  run {run}  events {events,9}  wall {wall.Elapsed.TotalMilliseconds,8:F0} ms  cpu {cpu.TotalMilliseconds,8:F0} ms  {events / cpu.TotalSeconds / 1e6,6:F2} M events/cpu-s  managed heap {GC.GetTotalMemory(false) / 1e6,6:F0} MB  results {Fingerprint(engine):X16}"));
         }
+    }
+
+    /// <summary>
+    /// A hash of the replication's metrics (their bits) and of every histogram bucket's count: equal before and after
+    /// a change to the engine means the change left every simulated number as it was, to the last bit.
+    /// </summary>
+    private static ulong Fingerprint(SimulationEngine engine)
+    {
+        const ulong Prime = 1099511628211;
+        ulong hash = 14695981039346656037;
+        void Add(ulong value) => hash = (hash ^ value) * Prime;
+        foreach (double value in engine.ResultRow())
+        {
+            Add((ulong)BitConverter.DoubleToInt64Bits(value));
+        }
+
+        var tallies = engine.Tallies();
+        foreach (var histogram in tallies.UnitTimes.Concat(tallies.GroupTimes))
+        {
+            Add((ulong)histogram.Zeros);
+            foreach (var (low, _, count) in histogram.NonEmptyBuckets())
+            {
+                Add((ulong)BitConverter.DoubleToInt64Bits(low));
+                Add((ulong)count);
+            }
+        }
+
+        return hash;
     }
 
     public static void Run(TextWriter output, int[] sizes)

@@ -17,6 +17,12 @@ internal sealed class DeferredDurations
     /// <summary>Durations held before they are counted: 4,096 × 12 bytes stay within the processor's second-level cache.</summary>
     public const int Capacity = 4096;
 
+    // How many durations ahead each step of Flush hints the memory of the next.
+    private const int Ahead = 8;
+
+    // Below this many histograms they stay in cache, and the hints would cost more than the misses they hide.
+    private const int HintFrom = 256;
+
     private readonly DurationHistogram[] _histograms;
     private readonly int[] _owners = new int[Capacity];
     private readonly double[] _durations = new double[Capacity];
@@ -42,13 +48,47 @@ internal sealed class DeferredDurations
     }
 
     /// <summary>Counts every recorded duration in its histogram. Call before the histograms are read.</summary>
+    /// <remarks>
+    /// Each count waits on up to three cache misses in turn (the histogram's place in the array, the histogram, its
+    /// counts), and a sparse histogram's binary search mispredicts branches, which throws away reads the processor
+    /// had started ahead. So the three are hinted <see cref="Ahead"/>, 2 × and 3 × <see cref="Ahead"/> durations
+    /// before they are counted (<see cref="CachePrefetch"/>), each step reading only what the step before brought in;
+    /// with fewer than <see cref="HintFrom"/> histograms there are no misses to hide, and nothing is hinted.
+    /// </remarks>
     public void Flush()
     {
         var histograms = _histograms;
         var owners = _owners;
         var durations = _durations;
-        for (int k = 0; k < _count; k++)
+        int count = _count;
+        if (histograms.Length < HintFrom)
         {
+            for (int k = 0; k < count; k++)
+            {
+                histograms[owners[k]].Record(durations[k]);
+            }
+
+            _count = 0;
+            return;
+        }
+
+        for (int k = 0; k < count; k++)
+        {
+            if (k + (3 * Ahead) < count)
+            {
+                CachePrefetch.Element(histograms, owners[k + (3 * Ahead)]);
+            }
+
+            if (k + (2 * Ahead) < count)
+            {
+                CachePrefetch.Object(histograms[owners[k + (2 * Ahead)]]);
+            }
+
+            if (k + Ahead < count)
+            {
+                histograms[owners[k + Ahead]].Prefetch(durations[k + Ahead]);
+            }
+
             histograms[owners[k]].Record(durations[k]);
         }
 

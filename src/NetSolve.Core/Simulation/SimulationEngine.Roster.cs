@@ -30,7 +30,7 @@ internal sealed partial class SimulationEngine
         while (state.Queued > 0 && state.Busy < state.Servers)
         {
             state.Busy++;
-            StartService(now, unit, Dequeue(unit));
+            StartQueued(now, unit);
         }
     }
 }

@@ -10,6 +10,9 @@ internal sealed partial class SimulationEngine
     private const int ChunkEvents = 4096;
     private const int ChunksPerProgress = 16;
 
+    // Units from which route rows and samplers are hinted ahead: below it they stay in cache, and a hint only costs.
+    private const int HintMemoryFrom = 1024;
+
     private readonly CompiledNetwork _network;
     private readonly MetricLayout _layout;
     private readonly double[] _waitThresholdsHours;
@@ -31,6 +34,9 @@ internal sealed partial class SimulationEngine
     private readonly DeferredDurations _unitTimes;
     private readonly GroupPlan[] _groups;
     private readonly ServiceSampler[] _samplers;
+
+    // Whether to hint the route row and the sampler of a unit ahead (CachePrefetch): only where they miss the cache.
+    private readonly bool _hintMemory;
 
     private readonly long[] _groupExits;
     private readonly double[] _groupTimeSum;
@@ -67,6 +73,7 @@ internal sealed partial class SimulationEngine
         _unitTimes = new DeferredDurations(_unitHistograms);
         _groups = network.Groups;
         _samplers = network.Samplers;
+        _hintMemory = n >= HintMemoryFrom;
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
         _groupHistograms = NewHistograms(groups);
@@ -105,7 +112,7 @@ internal sealed partial class SimulationEngine
             }
             else
             {
-                OnServiceEnd(next.Time, next.Unit, next.Patient);
+                OnServiceEnd(next);
             }
 
             if (_handledStillQueued)
@@ -191,21 +198,32 @@ internal sealed partial class SimulationEngine
             _entered++;
         }
 
-        ArriveAtUnit(now, entry, patient);
+        ArriveAtUnit(now, entry, patient, group);
     }
 
-    private void OnServiceEnd(double now, int unit, int patient)
+    private void OnServiceEnd(in SimulationEvent end)
     {
+        double now = end.Time;
+        int unit = end.Unit;
+        int patient = end.Patient;
+        int group = end.Group;
         ref var state = ref _units[unit];
-        ref var record = ref _patients[patient];
+
+        // The route is chosen after the statistics and any service start: its row is hinted now, so that at 100,000
+        // units its cache miss overlaps the unit's instead of following it (see CachePrefetch).
+        var plan = _groups[group];
+        if (_hintMemory)
+        {
+            CachePrefetch.Element(plan.RouteOffsets, unit);
+        }
 
         // Times are recorded when they end, for every patient ending after the warm-up: in steady state the patient
         // leaving at any moment has the steady-state time, whereas keeping only those who also arrived after the
         // warm-up would leave out long stays that straddle the end of the run.
         if (now >= _warmupEnd)
         {
-            state.BusyArea += now - InWindow(record.ServiceStart);
-            double sojourn = now - record.UnitArrival;
+            state.BusyArea += now - InWindow(end.ServiceStart);
+            double sojourn = now - end.UnitArrival;
             state.Completions++;
             state.SojournSum += sojourn;
             _unitTimes.Record(unit, sojourn);
@@ -214,18 +232,17 @@ internal sealed partial class SimulationEngine
         // Busy above Servers only after a roster took servers off: the server who finishes then leaves (docs/network-file.md, "Servers by hour").
         if (state.Queued > 0 && state.Busy <= state.Servers)
         {
-            StartService(now, unit, Dequeue(unit));
+            StartQueued(now, unit);
         }
         else
         {
             state.Busy--;
         }
 
-        int group = record.Group;
-        int next = Route(_groups[group], unit);
+        int next = Route(plan, unit);
         if (next >= 0)
         {
-            ArriveAtUnit(now, next, patient);
+            ArriveAtUnit(now, next, patient, group);
         }
         else
         {
@@ -233,8 +250,13 @@ internal sealed partial class SimulationEngine
         }
     }
 
-    private void ArriveAtUnit(double now, int unit, int patient)
+    private void ArriveAtUnit(double now, int unit, int patient, int group)
     {
+        // Hinted beside the unit's state, which decides whether a service starts: the two misses then overlap.
+        if (_hintMemory)
+        {
+            CachePrefetch.Element(_samplers, (group * _units.Length) + unit);
+        }
         bool counted = now >= _warmupEnd;
         for (int hops = 0; ; hops++)
         {
@@ -262,7 +284,7 @@ internal sealed partial class SimulationEngine
 
             if (turnAway)
             {
-                _journeys?.Leave(now, patient, _patients[patient].Group);
+                _journeys?.Leave(now, patient, group);
                 ReleasePatient(patient);
                 return;
             }
@@ -276,33 +298,39 @@ internal sealed partial class SimulationEngine
             state.Accepted++;
         }
 
-        _patients[patient].UnitArrival = now;
-        _journeys?.Arrive(now, unit, patient, _patients[patient].Group);
+        _journeys?.Arrive(now, unit, patient, group);
         if (state.Busy < state.Servers)
         {
             state.Busy++;
-            StartService(now, unit, patient);
+            StartService(now, unit, patient, group, now);
         }
         else
         {
+            _patients[patient].UnitArrival = now;
             Enqueue(unit, patient);
         }
     }
 
-    private void StartService(double now, int unit, int patient)
+    /// <summary>Starts the service of the patient at the head of <paramref name="unit"/>'s queue.</summary>
+    private void StartQueued(double now, int unit)
     {
-        ref var record = ref _patients[patient];
-        record.ServiceStart = now;
+        int patient = Dequeue(unit);
+        ref readonly var record = ref _patients[patient];
+        StartService(now, unit, patient, record.Group, record.UnitArrival);
+    }
+
+    private void StartService(double now, int unit, int patient, int group, double unitArrival)
+    {
         if (now >= _warmupEnd)
         {
             ref var state = ref _units[unit];
-            double wait = now - record.UnitArrival;
+            double wait = now - unitArrival;
             state.Starts++;
             if (wait > 0.0)
             {
                 state.Waited++;
                 state.WaitSum += wait;
-                AddQueueSpan(unit, InWindow(record.UnitArrival), now);
+                AddQueueSpan(unit, InWindow(unitArrival), now);
                 var thresholds = _waitThresholdsHours;
                 for (int t = 0; t < thresholds.Length; t++)
                 {
@@ -314,9 +342,9 @@ internal sealed partial class SimulationEngine
             }
         }
 
-        ref readonly var sampler = ref _samplers[(record.Group * _units.Length) + unit];
+        ref readonly var sampler = ref _samplers[(group * _units.Length) + unit];
         double service = sampler.IsExponential ? sampler.ExponentialMeanHours * _random.NextExponential() : sampler.Sample(ref _random);
-        Schedule(new SimulationEvent(now + service, unit, patient));
+        Schedule(new SimulationEvent(now + service, unit, patient) { Group = group, UnitArrival = unitArrival, ServiceStart = now });
     }
 
     /// <summary>Adds an event: in place of the event being handled if it is still queued, else as a new one.</summary>
@@ -449,7 +477,7 @@ internal sealed partial class SimulationEngine
         {
             if (pending.IsServiceEnd)
             {
-                _units[pending.Unit].BusyArea += _end - InWindow(_patients[pending.Patient].ServiceStart);
+                _units[pending.Unit].BusyArea += _end - InWindow(pending.ServiceStart);
             }
         }
     }
