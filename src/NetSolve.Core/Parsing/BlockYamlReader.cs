@@ -160,8 +160,9 @@ internal static class BlockYamlReader
     private sealed class LineCursor(string text, int start, int end, int linesBefore)
     {
         // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each. Sized
-        // for about one distinct string per two lines of a generated network, so the pool is not regrown as it fills.
-        private readonly StringPool _pool = new Dictionary<string, string>((end - start) / 64, StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
+        // for about one distinct string per two lines of a generated network, so the pool is not regrown as it fills;
+        // sized for the whole text in each half too, as a half's strings are mostly distinct (its units' ids and times).
+        private readonly StringPool _pool = new Dictionary<string, string>(text.Length / 64, StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
         private int _position = start;
         private int _lineNumber = linesBefore;
 

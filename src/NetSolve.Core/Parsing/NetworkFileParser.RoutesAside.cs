@@ -33,19 +33,23 @@ internal sealed partial class NetworkFileParser
             }
         }
 
+        // The routes' places go straight into this parser's table, which nothing here touches before TakeRoutes.
         reading = Task.Run(() =>
         {
             var found = new List<Diagnostic>();
-            var aside = new NetworkFileParser(fileName, found);
-            foreach (var (id, location) in ids)
-            {
-                aside._unitLocations.Add(id, location);
-            }
-
-            var routes = aside.ParseRoutes(routesNode, []);
-            return new RoutesRead(routes, found, aside._routeLocations);
+            var routes = new NetworkFileParser(fileName, found, ids, _routeLocations).ParseRoutes(routesNode, []);
+            return new RoutesRead(routes, found);
         });
         return true;
+    }
+
+    /// <summary>A parser for the routes alone, with the unit ids known beforehand and the table their places go into.</summary>
+    private NetworkFileParser(string fileName, List<Diagnostic> diagnostics, Dictionary<string, SourceLocation> unitLocations,
+        Dictionary<string, SourceLocation> routeLocations)
+        : this(fileName, diagnostics)
+    {
+        _unitLocations = unitLocations;
+        _routeLocations = routeLocations;
     }
 
     /// <summary>Takes in what <see cref="TryStartRoutesAside"/> read, as if the routes had been read here at this point.</summary>
@@ -53,14 +57,9 @@ internal sealed partial class NetworkFileParser
     {
         var read = reading.GetAwaiter().GetResult();
         Diagnostics.AddRange(read.Diagnostics);
-        foreach (var (from, location) in read.Locations)
-        {
-            _routeLocations[from] = location;
-        }
-
         return read.Routes;
     }
 
-    /// <summary>The routes read aside, the problems found in them in the order found, and where each unit's routes start.</summary>
-    private sealed record RoutesRead(ImmutableArray<Route> Routes, List<Diagnostic> Diagnostics, Dictionary<string, SourceLocation> Locations);
+    /// <summary>The routes read aside and the problems found in them, in the order found.</summary>
+    private sealed record RoutesRead(ImmutableArray<Route> Routes, List<Diagnostic> Diagnostics);
 }
