@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using NetSolve.Diagnostics;
 using NetSolve.Parsing;
+using NetSolve.Tests.Hardening;
 
 namespace NetSolve.Tests.Core.Parsing;
 
@@ -74,6 +75,22 @@ public sealed class LargeFileReadTests
     public void A_large_file_has_the_same_bare_number_warnings_as_a_small_one()
     {
         AssertSameProblems(BareNumbers, expectedErrors: 0);
+    }
+
+    /// <summary>Reference: YamlDotNet's parser (an outside implementation of YAML), run on the same large text.</summary>
+    [Fact]
+    public void A_large_file_read_in_two_halves_gives_the_nodes_and_places_YamlDotNet_gives()
+    {
+        string text = "# a comment line first\n" + Fill(Mistakes, FillerUnits) + "# and one last\n";
+        Assert.True(BlockYamlReader.TryRead(text, "n.yaml", out var halves));
+        Assert.Equal(YamlTreeText.Of(LocatedYamlReader.ReadWithYamlDotNet(text, "n.yaml")), YamlTreeText.Of(halves));
+    }
+
+    [Fact]
+    public void A_large_file_with_a_line_outside_the_block_subset_in_its_second_half_is_declined_as_a_whole()
+    {
+        string text = Fill(Mistakes, FillerUnits) + "journeys:\n  - a1\n";
+        Assert.False(BlockYamlReader.TryRead(text, "n.yaml", out _));
     }
 
     private static void AssertSameProblems(string template, int expectedErrors)
