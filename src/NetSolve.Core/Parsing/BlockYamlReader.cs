@@ -18,65 +18,13 @@ internal static class BlockYamlReader
 {
     private const int MaxImplicitKeyLength = 1024;
 
-    /// <summary>
-    /// Texts from this size on are read in two halves at once, split at a top-level key: the machine's second core
-    /// builds the second half's nodes while the first builds the first's (a 100,000-unit file: units, then routes).
-    /// </summary>
-    private const int ReadInHalvesFrom = 1 << 20;
-
     /// <summary>True when the text is in the accepted subset; <paramref name="root"/> is null for a file of comments only.</summary>
     public static bool TryRead(string text, string fileName, out YamlNode? root)
     {
         root = null;
-        int split = text.Length >= ReadInHalvesFrom ? TopLevelLineAfter(text, text.Length / 2) : -1;
-        if (split < 0)
-        {
-            return TryReadTopLevel(text, 0, text.Length, 0, fileName, out root);
-        }
-
-        // A line at column 0 that holds a key is an entry of the root mapping wherever it stands, and the lines above
-        // it end there: so the two halves read as the whole does, and either declines exactly when the whole would.
-        int linesBefore = text.AsSpan(0, split).Count('\n');
-        var second = Task.Run(() => (TryReadTopLevel(text, split, text.Length, linesBefore, fileName, out var node), node));
-        bool firstRead = TryReadTopLevel(text, 0, split, 0, fileName, out var first);
-        var (secondRead, last) = second.GetAwaiter().GetResult();
-        if (!firstRead || !secondRead)
-        {
-            return false;
-        }
-
-        var lastMapping = (YamlMapping)last!;
-        root = first is YamlMapping firstMapping
-            ? new YamlMapping(firstMapping.Location, [.. firstMapping.Entries, .. lastMapping.Entries])
-            : lastMapping;
-        return true;
-    }
-
-    /// <summary>The start of the first line after <paramref name="from"/> that begins with a key at column 0; -1 when none.</summary>
-    private static int TopLevelLineAfter(string text, int from)
-    {
-        for (int end = text.IndexOf('\n', from); end >= 0 && end + 1 < text.Length; end = text.IndexOf('\n', end + 1))
-        {
-            char first = text[end + 1];
-            if (IsKeyChar(first) && first != '-')
-            {
-                return end + 1;
-            }
-        }
-
-        return -1;
-    }
-
-    /// <summary>
-    /// Reads the root mapping's entries from the lines of <c>text[start..end)</c>, the first of which is line
-    /// <paramref name="linesBefore"/> + 1 of the file; <paramref name="root"/> is null when those lines hold no key.
-    /// </summary>
-    private static bool TryReadTopLevel(string text, int start, int end, int linesBefore, string fileName, out YamlNode? root)
-    {
-        root = null;
         // Lines are read one ahead as the mappings are built, not listed first: for a 100,000-unit file the list
         // was a 25 MB array held through the whole read.
-        var lines = new LineCursor(text, start, end, linesBefore);
+        var lines = new LineCursor(text);
         lines.Advance();
         if (!lines.HasCurrent)
         {
@@ -153,18 +101,13 @@ internal static class BlockYamlReader
     }
 
     /// <summary>The next line with a key on it, read when asked for; blank and comment lines are passed over.</summary>
-    /// <param name="text">The file's text.</param>
-    /// <param name="start">Where the lines to read start.</param>
-    /// <param name="end">Where they end (a line break or the end of the text).</param>
-    /// <param name="linesBefore">How many lines of the file come before <paramref name="start"/>.</param>
-    private sealed class LineCursor(string text, int start, int end, int linesBefore)
+    private sealed class LineCursor(string text)
     {
         // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each. Sized
-        // for about one distinct string per two lines of a generated network, so the pool is not regrown as it fills;
-        // sized for the whole text in each half too, as a half's strings are mostly distinct (its units' ids and times).
+        // for about one distinct string per two lines of a generated network, so the pool is not regrown as it fills.
         private readonly StringPool _pool = new Dictionary<string, string>(text.Length / 64, StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
-        private int _position = start;
-        private int _lineNumber = linesBefore;
+        private int _position;
+        private int _lineNumber;
 
         public Line Current { get; private set; }
 
@@ -176,22 +119,22 @@ internal static class BlockYamlReader
         public void Advance()
         {
             HasCurrent = false;
-            while (!Failed && _position <= end)
+            while (!Failed && _position <= text.Length)
             {
-                int lineEnd = text.IndexOf('\n', _position, end - _position);
-                if (lineEnd < 0)
+                int end = text.IndexOf('\n', _position);
+                if (end < 0)
                 {
-                    lineEnd = end;
+                    end = text.Length;
                 }
 
                 _lineNumber++;
-                var span = text.AsSpan(_position, lineEnd - _position);
+                var span = text.AsSpan(_position, end - _position);
                 if (span.EndsWith("\r"))
                 {
                     span = span[..^1];
                 }
 
-                _position = lineEnd + 1;
+                _position = end + 1;
                 if (!ReadLine(span, _lineNumber, _pool, out var line))
                 {
                     Failed = true;

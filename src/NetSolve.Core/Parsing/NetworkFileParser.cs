@@ -40,7 +40,6 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             Error(top.Location, null, DiagnosticCodes.MissingKey, "missing 'arrivals': at least one unit needs a positive external arrival rate");
         }
 
-        bool routesAside = TryStartRoutesAside(unitsNode, fields.GetValueOrDefault("routes"), out var routesReading);
         var units = unitsNode is null ? [] : ParseUnits(unitsNode, timeUnit);
         var known = units.Select(unit => unit.Id).ToHashSet(StringComparer.Ordinal);
         var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
@@ -49,8 +48,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             arrivals = ParseArrivalCv(arrivalCvNode, arrivals, arrivalsNode, known);
         }
 
-        var routes = routesAside ? TakeRoutes(routesReading!)
-            : fields.TryGetValue("routes", out var routesNode) ? ParseRoutes(routesNode, known) : [];
+        var routes = fields.TryGetValue("routes", out var routesNode) ? ParseRoutes(routesNode, known) : [];
         CheckDiversions(known);
         var profile = fields.TryGetValue("arrival_profile", out var profileNode) ? ParseProfile(profileNode, null) : null;
         var groups = fields.TryGetValue("groups", out var groupsNode) ? ParseGroups(groupsNode, timeUnit, known) : [];
