@@ -23,17 +23,9 @@ public static class BareNumbers
     }
 
     /// <summary>
-    /// One warning per bare service number under <c>units</c> and under each group's <c>services</c>, and per bare
+    /// Adds one warning per bare service number under <c>units</c> and under each group's <c>services</c>, and per bare
     /// time in a journey's <c>over</c> list (<c>over: [4]</c> in a file in minutes asks about 4 minutes, not 4 hours).
     /// </summary>
-    internal static List<Diagnostic> Found(YamlNode root, TimeUnit timeUnit)
-    {
-        var found = new List<Diagnostic>();
-        Check(root, timeUnit, found);
-        return found;
-    }
-
-    /// <summary>As <see cref="Found"/>, adding the warnings to <paramref name="diagnostics"/>.</summary>
     internal static void Check(YamlNode root, TimeUnit timeUnit, List<Diagnostic> diagnostics)
     {
         if (root is not YamlMapping top)

@@ -7,9 +7,6 @@ namespace NetSolve.Parsing;
 /// <remarks>Never throws for bad input: every problem is a <see cref="Diagnostic"/>. Thread-safe.</remarks>
 public static class NetworkReader
 {
-    /// <summary>Units from which the bare-number warnings are looked for on another thread.</summary>
-    private const int BareNumbersAsideFromUnits = 10_000;
-
     /// <summary>Reads the file at <paramref name="path"/>; the path is shown in diagnostics as given.</summary>
     public static ReadResult ReadFile(string path)
     {
@@ -56,14 +53,8 @@ public static class NetworkReader
         var network = new NetworkFileParser(fileName, diagnostics).Parse(root);
         if (network is not null && !diagnostics.Any(d => d.IsError))
         {
-            // The bare-number warnings look at the tree alone: for a large file they are found on the second core
-            // while the structure is checked, and put after its diagnostics as when found in turn.
-            var timeUnit = network.Value.Network.TimeUnit;
-            var bare = network.Value.Network.Units.Length >= BareNumbersAsideFromUnits
-                ? Task.Run(() => BareNumbers.Found(root, timeUnit))
-                : null;
             StructureRules.Check(network.Value.Network, network.Value.Locations, diagnostics);
-            diagnostics.AddRange(bare is null ? BareNumbers.Found(root, timeUnit) : bare.GetAwaiter().GetResult());
+            BareNumbers.Check(root, network.Value.Network.TimeUnit, diagnostics);
         }
 
         var sorted = diagnostics

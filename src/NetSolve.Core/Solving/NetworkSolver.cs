@@ -10,9 +10,6 @@ namespace NetSolve.Solving;
 /// </summary>
 public static class NetworkSolver
 {
-    /// <summary>Units from which the units' formulas are worked in two halves at once.</summary>
-    private const int UnitsInHalvesFrom = 10_000;
-
     /// <summary>Solves <paramref name="network"/> with the given strain threshold and method for the arrival variability.</summary>
     public static NetworkSolution Solve(Network network, double strainThreshold = Defaults.StrainThreshold,
         ArrivalVariabilityMethod variability = ArrivalVariabilityMethod.Decomposition)
@@ -48,34 +45,19 @@ public static class NetworkSolver
         double external = network.AllExternalArrivalsPerHour;
         double[] arrivalScv = ArrivalScv(network, flowsPerHour, inputs, variability);
         var units = new UnitResult[n];
-        void SolveUnits(int first, int end)
+        for (int i = 0; i < n; i++)
         {
-            for (int i = first; i < end; i++)
-            {
-                var unit = network.Units[i];
-                // A unit with a capacity takes the service mixture of the patients offered to it in the bed-limit fixed point.
-                var offeredService = capacityFlows?.Units[i];
-                double mean = unit.Capacity is not null && offeredService is not null ? offeredService.MeanServiceHours : inputs.MeanServiceHours[i];
-                double serviceScv = unit.Capacity is not null && offeredService is not null ? offeredService.ServiceScv : inputs.ServiceScv[i];
-                // A full unit is solved at its offered rate with the service of the patients who come (the groups' mixture).
-                units[i] = unit.Capacity is int limit
-                    ? UnitMetrics.ComputeFinite(unit, flowsPerHour[i], external, mean,
-                        FiniteCapacityFormulas.Solve(LimitedServers(unit, limit), limit, flowsPerHour[i], mean, serviceScv, unit.EffectiveService),
-                        arrivalScv[i], serviceScv)
-                    : UnitMetrics.Compute(unit, flowsPerHour[i], external, mean, arrivalScv[i], serviceScv);
-            }
-        }
-
-        // Each unit's formulas stand alone: a large network's second half is solved on the machine's second core.
-        if (n >= UnitsInHalvesFrom)
-        {
-            var secondHalf = Task.Run(() => SolveUnits(n / 2, n));
-            SolveUnits(0, n / 2);
-            secondHalf.GetAwaiter().GetResult();
-        }
-        else
-        {
-            SolveUnits(0, n);
+            var unit = network.Units[i];
+            // A unit with a capacity takes the service mixture of the patients offered to it in the bed-limit fixed point.
+            var offeredService = capacityFlows?.Units[i];
+            double mean = unit.Capacity is not null && offeredService is not null ? offeredService.MeanServiceHours : inputs.MeanServiceHours[i];
+            double serviceScv = unit.Capacity is not null && offeredService is not null ? offeredService.ServiceScv : inputs.ServiceScv[i];
+            // A full unit is solved at its offered rate with the service of the patients who come (the groups' mixture).
+            units[i] = unit.Capacity is int limit
+                ? UnitMetrics.ComputeFinite(unit, flowsPerHour[i], external, mean,
+                    FiniteCapacityFormulas.Solve(LimitedServers(unit, limit), limit, flowsPerHour[i], mean, serviceScv, unit.EffectiveService),
+                    arrivalScv[i], serviceScv)
+                : UnitMetrics.Compute(unit, flowsPerHour[i], external, mean, arrivalScv[i], serviceScv);
         }
 
         if (capacityFlows is not null)

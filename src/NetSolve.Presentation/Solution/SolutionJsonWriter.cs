@@ -1,4 +1,3 @@
-using System.Buffers;
 using System.Text.Json;
 using NetSolve.Analysis;
 using NetSolve.Model;
@@ -13,9 +12,6 @@ namespace NetSolve.Presentation.Solution;
 /// <summary>Writes a solution as the contract's JSON document (one document, units in file order).</summary>
 public static class SolutionJsonWriter
 {
-    /// <summary>Units a block of the units array holds (about 700 KB of JSON).</summary>
-    private const int UnitsPerBlock = 1024;
-
     /// <summary>Writes <paramref name="solution"/> to <paramref name="output"/>, indented, UTF-8.</summary>
     public static void Write(NetworkSolution solution, Stream output)
     {
@@ -54,125 +50,47 @@ public static class SolutionJsonWriter
     /// </summary>
     /// <remarks>
     /// Each unit's values are read and written as it comes, not built into a table first: a table of 100,000 units
-    /// held about 100 MB of cells only to be written once. The field names are encoded once. A long array is written
-    /// in blocks of <see cref="UnitsPerBlock"/> units, every other block formatted on the machine's second core while
-    /// this thread writes the one before (number formatting is most of the document's work); the bytes are the same.
+    /// held about 100 MB of cells only to be written once. The field names are encoded once.
     /// </remarks>
     private static void WriteUnits(NetworkSolution solution, Utf8JsonWriter json)
     {
-        var units = new UnitFields(solution);
+        var columns = UnitColumns.For(solution).Where(column => ResultTable.Shows(column.Audience, Audience.Machines)).ToArray();
+        var names = columns.Select(column => JsonEncodedText.Encode(column.Id)).ToArray();
+        int targets = Array.FindIndex(columns, column => column.Id == UnitColumns.TargetsBreached.Id);
+        var byHour = ByHourUnit.All(solution);
+        var timeUnit = solution.Network.TimeUnit;
         json.WriteStartArray("units");
-        int blocks = (solution.Units.Length + UnitsPerBlock - 1) / UnitsPerBlock;
-        if (blocks < 2)
+        for (int row = 0; row < solution.Units.Length; row++)
         {
-            units.Write(0, solution.Units.Length, json);
-            json.WriteEndArray();
-            return;
-        }
-
-        // Two buffers in turn: the second core fills one while this thread copies the other into the document.
-        int depth = json.CurrentDepth;
-        var buffers = new[] { new ArrayBufferWriter<byte>(), new ArrayBufferWriter<byte>() };
-        var formatted = Task.Run(() => units.Format(1, buffers[0], json.Options, depth));
-        for (int block = 0; block < blocks; block += 2)
-        {
-            units.Write(block * UnitsPerBlock, UnitsPerBlock, json);
-            if (block + 1 >= blocks)
+            var unit = solution.Units[row];
+            json.WriteStartObject();
+            for (int i = 0; i < columns.Length; i++)
             {
-                break;
+                if (i == targets)
+                {
+                    json.WriteStartArray(names[i]);
+                    foreach (var kind in unit.TargetsBreached)
+                    {
+                        json.WriteStringValue(TargetKeys.Of(kind));
+                    }
+
+                    json.WriteEndArray();
+                }
+                else
+                {
+                    JsonTableWriter.WriteCell(json, names[i], columns[i].Read(unit), timeUnit);
+                }
             }
 
-            int from = formatted.GetAwaiter().GetResult();
-            var ready = buffers[(block / 2) % 2];
-            if (block + 3 < blocks)
+            if (byHour.Count > 0)
             {
-                int nextBlock = block + 3;
-                var next = buffers[(nextBlock / 2) % 2];
-                formatted = Task.Run(() => units.Format(nextBlock, next, json.Options, depth));
+                ByHourJsonWriter.Write(byHour[row], timeUnit, json);
             }
 
-            // The block's units, each after its line break and indentation; the writer puts the comma before them.
-            json.WriteRawValue(ready.WrittenSpan[from..], skipInputValidation: true);
+            json.WriteEndObject();
             JsonTableWriter.PassOnWhenFull(json);
         }
 
         json.WriteEndArray();
-    }
-
-    /// <summary>What writing a unit's object needs, worked out once for the whole array.</summary>
-    private sealed class UnitFields
-    {
-        private readonly NetworkSolution _solution;
-        private readonly Column<UnitResult>[] _columns;
-        private readonly JsonEncodedText[] _names;
-        private readonly int _targets;
-        private readonly IReadOnlyList<ByHourUnit> _byHour;
-
-        public UnitFields(NetworkSolution solution)
-        {
-            _solution = solution;
-            _columns = UnitColumns.For(solution).Where(column => ResultTable.Shows(column.Audience, Audience.Machines)).ToArray();
-            _names = _columns.Select(column => JsonEncodedText.Encode(column.Id)).ToArray();
-            _targets = Array.FindIndex(_columns, column => column.Id == UnitColumns.TargetsBreached.Id);
-            _byHour = ByHourUnit.All(solution);
-        }
-
-        /// <summary>
-        /// Writes block <paramref name="block"/>'s units into <paramref name="buffer"/> (emptied first) as they would
-        /// stand in the document, at <paramref name="depth"/>; the answer is where they start, after the arrays that
-        /// nest them that deep (the indentation is the depth's).
-        /// </summary>
-        public int Format(int block, ArrayBufferWriter<byte> buffer, JsonWriterOptions options, int depth)
-        {
-            buffer.ResetWrittenCount();
-            using var json = new Utf8JsonWriter(buffer, options);
-            for (int level = 0; level < depth; level++)
-            {
-                json.WriteStartArray();
-            }
-
-            json.Flush();
-            int from = buffer.WrittenCount;
-            Write(block * UnitsPerBlock, UnitsPerBlock, json);
-            json.Flush();
-            return from;
-        }
-
-        /// <summary>Writes up to <paramref name="count"/> units' objects from row <paramref name="first"/>.</summary>
-        public void Write(int first, int count, Utf8JsonWriter json)
-        {
-            var timeUnit = _solution.Network.TimeUnit;
-            int end = Math.Min(_solution.Units.Length, first + count);
-            for (int row = first; row < end; row++)
-            {
-                var unit = _solution.Units[row];
-                json.WriteStartObject();
-                for (int i = 0; i < _columns.Length; i++)
-                {
-                    if (i == _targets)
-                    {
-                        json.WriteStartArray(_names[i]);
-                        foreach (var kind in unit.TargetsBreached)
-                        {
-                            json.WriteStringValue(TargetKeys.Of(kind));
-                        }
-
-                        json.WriteEndArray();
-                    }
-                    else
-                    {
-                        JsonTableWriter.WriteCell(json, _names[i], _columns[i].Read(unit), timeUnit);
-                    }
-                }
-
-                if (_byHour.Count > 0)
-                {
-                    ByHourJsonWriter.Write(_byHour[row], timeUnit, json);
-                }
-
-                json.WriteEndObject();
-                JsonTableWriter.PassOnWhenFull(json);
-            }
-        }
     }
 }
