@@ -136,6 +136,7 @@ public static class ArrivalVariability
         {
             ArrivalVariabilityMethod.VariabilityFunctions => VariabilityFunctions.Solve(units, routes, decomposition, system => Deviations(system, dense, Order)),
             ArrivalVariabilityMethod.MarkovianDepartures => MarkovianDepartures.Solve(units, routes, decomposition),
+            ArrivalVariabilityMethod.IndicesOfDispersion => DispersionNetwork.Solve(units, routes, decomposition),
             _ => decomposition,
         };
     }

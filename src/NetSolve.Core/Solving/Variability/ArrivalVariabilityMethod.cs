@@ -19,4 +19,12 @@ public enum ArrivalVariabilityMethod
     /// (<see cref="MarkovianDepartures"/>); measured in docs/methods.md, not the default.
     /// </summary>
     MarkovianDepartures,
+
+    /// <summary>
+    /// Indices of dispersion through the network: every flow's index of dispersion for counts as a function of the
+    /// window, one linear system per window (covariances between flows carried, so loops amplify), each unit's SCV
+    /// from the robust-queueing supremum over windows (W. Whitt and W. You, Naval Research Logistics 69(1), 2022,
+    /// pp. 36–56, from memory; <see cref="DispersionNetwork"/>); measured in docs/methods.md.
+    /// </summary>
+    IndicesOfDispersion,
 }
