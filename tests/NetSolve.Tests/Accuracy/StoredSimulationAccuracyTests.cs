@@ -22,13 +22,14 @@ public sealed class StoredSimulationAccuracyTests
     // (119 of 124 within 15%, the two looped units not closer): a check that the stored waits stand for the run.
     // Variability functions, measured here: 121 of 124 within 15%, the same two units not closer (docs/methods.md,
     // "Published refinements tried on the two units not closer"). Markovian departures, measured here: 116 of 124, the
-    // same two units not closer (same section).
+    // same two units not closer (same section). Indices of dispersion, measured here: 119 of 124, the same two units
+    // and Harbourside's lab not closer (its arrival cv rises to 1.13 in a loop of exponential units; same section).
     [Theory(Explicit = true)]
-    [InlineData(ArrivalVariabilityMethod.Decomposition, 119)]
-    [InlineData(ArrivalVariabilityMethod.VariabilityFunctions, 121)]
-    [InlineData(ArrivalVariabilityMethod.MarkovianDepartures, 116)]
-    [InlineData(ArrivalVariabilityMethod.IndicesOfDispersion, 0)]
-    public void Formula_waits_against_the_stored_simulated_waits_give_the_measured_counts(ArrivalVariabilityMethod method, int measuredWithin)
+    [InlineData(ArrivalVariabilityMethod.Decomposition, 119, LoopedUnits)]
+    [InlineData(ArrivalVariabilityMethod.VariabilityFunctions, 121, LoopedUnits)]
+    [InlineData(ArrivalVariabilityMethod.MarkovianDepartures, 116, LoopedUnits)]
+    [InlineData(ArrivalVariabilityMethod.IndicesOfDispersion, 119, "harbourside/lab, " + LoopedUnits)]
+    public void Formula_waits_against_the_stored_simulated_waits_give_the_measured_counts(ArrivalVariabilityMethod method, int measuredWithin, string notCloser)
     {
         var stored = StoredWaits();
         var rows = AccuracyStudy.Networks()
@@ -40,7 +41,7 @@ public sealed class StoredSimulationAccuracyTests
 
         Assert.Equal(124, counted);
         Assert.Equal(measuredWithin, within);
-        Assert.Equal(LoopedUnits, string.Join(", ", notBetter.Select(row => row.Network + "/" + row.UnitId)));
+        Assert.Equal(notCloser, string.Join(", ", notBetter.Select(row => row.Network + "/" + row.UnitId)));
     }
 
     /// <summary>The simulated mean wait and half-width of every row of the table in docs/methods.md, by network and unit.</summary>
