@@ -52,8 +52,14 @@ internal static class DispersionNetwork
     public static ArrivalVariabilitySolution Solve(IReadOnlyList<ArrivalVariabilityUnit> units, IReadOnlyList<ArrivalVariabilityRoute> routes,
         ArrivalVariabilitySolution decomposition)
     {
+        int reached = units.Count(unit => unit.ArrivalsPerHour > 0.0);
+        if (reached == 0 || reached > ArrivalVariability.DenseLimit)
+        {
+            return decomposition;
+        }
+
         var flows = DispersionFlows.Build(units, routes);
-        if (flows.IsJackson || flows.Members.Length > ArrivalVariability.DenseLimit)
+        if (flows.IsJackson)
         {
             return decomposition;
         }

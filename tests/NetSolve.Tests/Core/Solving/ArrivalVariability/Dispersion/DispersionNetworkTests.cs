@@ -165,6 +165,24 @@ public sealed class DispersionNetworkTests
         Assert.Equal(1.0, solution.ArrivalScv[1], 0.06);
     }
 
+    // Dense algebra is meant for networks of up to ArrivalVariability.DenseLimit (100) reached units; beyond, and with
+    // no flow at all, the decomposition's SCVs are returned unchanged (docs/methods.md). A chain of 101 units fed by a
+    // bursty stream (SCV 3) is past the limit; the same chain with no arrivals has no flows.
+    [Fact]
+    public void Networks_past_the_dense_limit_or_without_flow_keep_the_decomposition()
+    {
+        var chain = Enumerable.Range(0, ArrivalVariability.DenseLimit + 1)
+            .Select(i => new ArrivalVariabilityUnit(1.0, Servers.Of(1), 0.6, 0.5) { ExternalPerHour = i == 0 ? 1.0 : 0.0, ExternalScv = 3.0 })
+            .ToArray();
+        var routes = Enumerable.Range(0, ArrivalVariability.DenseLimit).Select(i => new ArrivalVariabilityRoute(i, i + 1, 1.0)).ToArray();
+        var empty = chain.Select(unit => unit with { ArrivalsPerHour = 0.0, ExternalPerHour = 0.0 }).ToArray();
+
+        Assert.Equal(
+            ArrivalVariability.Solve(chain, routes).ArrivalScv,
+            ArrivalVariability.Solve(chain, routes, ArrivalVariabilityMethod.IndicesOfDispersion).ArrivalScv);
+        Assert.All(ArrivalVariability.Solve(empty, routes, ArrivalVariabilityMethod.IndicesOfDispersion).ArrivalScv, scv => Assert.Equal(1.0, scv));
+    }
+
     private static ArrivalVariabilityUnit Unlimited(double arrivalsPerHour) => new(arrivalsPerHour, Servers.Unlimited, 0.0, 1.0);
 
     private static Matrix<double> KroneckerSum(Matrix<double> a, Matrix<double> b) =>
