@@ -139,7 +139,8 @@ public sealed class DispersionNetworkTests
 
     // Heavy traffic: a renewal flow of SCV c0² at one server near saturation is seen over a window of thousands of
     // gaps, where its index is c0² (D. R. Cox, Renewal Theory, Methuen, 1962, from memory), so the equivalent SCV is
-    // c0² and the G/G/1 formula tends to Kingman's (ca² + cs²)/2 factor (J. F. C. Kingman, 1961, from memory).
+    // c0² and the wait is within 1% of Kingman's heavy-traffic mean ρm(ca² + cs²)/(2(1 − ρ)) (J. F. C. Kingman, 1961,
+    // from memory), here with m = 0.99 h and λ = 1/h.
     [Theory]
     [InlineData(2.0)]
     [InlineData(0.5)]
@@ -148,8 +149,11 @@ public sealed class DispersionNetworkTests
         ArrivalVariabilityUnit[] units = [new(1.0, Servers.Of(1), 0.99, 0.5) { ExternalPerHour = 1.0, ExternalScv = externalScv }];
 
         var solution = ArrivalVariability.Solve(units, [], ArrivalVariabilityMethod.IndicesOfDispersion);
+        double wait = GgcFormulas.Estimate(1, 1.0, 0.99, solution.ArrivalScv[0], 0.5).MeanWaitHours!.Value;
+        double kingman = 0.99 * 0.99 * (externalScv + 0.5) / (2.0 * 0.01);
 
         Assert.Equal(externalScv, solution.ArrivalScv[0], 0.01);
+        Assert.Equal(1.0, wait / kingman, 0.01);
     }
 
     // The asymptotic method's limit (W. Whitt, Operations Research 30(1), 1982, from memory): a unit far busier than
