@@ -26,7 +26,7 @@ internal sealed partial class SimulationEngine
     private int _freeCount;
     private int _patientsAllocated;
 
-    private readonly UnitState[] _units;
+    private readonly UnitStateBlock _units;
     private readonly int[][] _queues;
     private readonly double[]?[] _queueAreaByHour;
     private readonly long[] _waitOver;
@@ -57,7 +57,7 @@ internal sealed partial class SimulationEngine
         int n = network.UnitCount;
         int groups = network.Groups.Length;
         _events = new EventQueue(groups + 16);
-        _units = new UnitState[n];
+        _units = new UnitStateBlock(n);
         _queues = new int[n][];
         for (int i = 0; i < n; i++)
         {
