@@ -10,10 +10,10 @@ internal sealed partial class SimulationEngine
             return _freePatients[--_freeCount];
         }
 
-        if (_patientsAllocated == _patients.Length)
+        if (_patientsAllocated == _networkEntries.Length)
         {
-            Array.Resize(ref _patients, _patients.Length * 2);
-            Array.Resize(ref _freePatients, _patients.Length);
+            Array.Resize(ref _networkEntries, _networkEntries.Length * 2);
+            Array.Resize(ref _freePatients, _networkEntries.Length);
         }
 
         return _patientsAllocated++;
@@ -21,7 +21,7 @@ internal sealed partial class SimulationEngine
 
     private void ReleasePatient(int patient) => _freePatients[_freeCount++] = patient;
 
-    private void Enqueue(int unit, int patient)
+    private void Enqueue(int unit, in QueuedPatient patient)
     {
         ref var state = ref _units[unit];
         var queue = _queues[unit];
@@ -29,7 +29,7 @@ internal sealed partial class SimulationEngine
         if (count == queue.Length)
         {
             // Queues start empty and get 4 places with their first patient: most units of a large network never queue.
-            var grown = new int[Math.Max(4, queue.Length * 2)];
+            var grown = new QueuedPatient[Math.Max(4, queue.Length * 2)];
             for (int i = 0; i < count; i++)
             {
                 grown[i] = queue[(state.QueueHead + i) & (queue.Length - 1)];
@@ -43,11 +43,11 @@ internal sealed partial class SimulationEngine
         state.Queued = count + 1;
     }
 
-    private int Dequeue(int unit)
+    private QueuedPatient Dequeue(int unit)
     {
         ref var state = ref _units[unit];
         var queue = _queues[unit];
-        int patient = queue[state.QueueHead];
+        var patient = queue[state.QueueHead];
         state.QueueHead = (state.QueueHead + 1) & (queue.Length - 1);
         state.Queued--;
         return patient;

@@ -21,13 +21,15 @@ internal sealed partial class SimulationEngine
     private readonly EventQueue _events;
     private Xoshiro256StarStar _random;
 
-    private PatientRecord[] _patients = new PatientRecord[256];
+    // When each patient in the pool entered the network, in hours: all a patient needs of their own while in it, since
+    // their group and times at a unit travel with their queue entry (QueuedPatient) or service-end event.
+    private double[] _networkEntries = new double[256];
     private int[] _freePatients = new int[256];
     private int _freeCount;
     private int _patientsAllocated;
 
-    private readonly UnitState[] _units;
-    private readonly int[][] _queues;
+    private readonly UnitStateBlock _units;
+    private readonly QueuedPatient[][] _queues;
     private readonly double[]?[] _queueAreaByHour;
     private readonly long[] _waitOver;
     private readonly DurationHistogram[] _unitHistograms;
@@ -57,8 +59,8 @@ internal sealed partial class SimulationEngine
         int n = network.UnitCount;
         int groups = network.Groups.Length;
         _events = new EventQueue(groups + 16);
-        _units = new UnitState[n];
-        _queues = new int[n][];
+        _units = new UnitStateBlock(n);
+        _queues = new QueuedPatient[n][];
         for (int i = 0; i < n; i++)
         {
             _queues[i] = [];
@@ -190,9 +192,7 @@ internal sealed partial class SimulationEngine
         }
 
         int patient = AllocatePatient();
-        ref var record = ref _patients[patient];
-        record.NetworkEntry = now;
-        record.Group = group;
+        _networkEntries[patient] = now;
         if (now >= _warmupEnd)
         {
             _entered++;
@@ -306,17 +306,15 @@ internal sealed partial class SimulationEngine
         }
         else
         {
-            _patients[patient].UnitArrival = now;
-            Enqueue(unit, patient);
+            Enqueue(unit, new QueuedPatient(patient, group, now));
         }
     }
 
     /// <summary>Starts the service of the patient at the head of <paramref name="unit"/>'s queue.</summary>
     private void StartQueued(double now, int unit)
     {
-        int patient = Dequeue(unit);
-        ref readonly var record = ref _patients[patient];
-        StartService(now, unit, patient, record.Group, record.UnitArrival);
+        var waiting = Dequeue(unit);
+        StartService(now, unit, waiting.Patient, waiting.Group, waiting.UnitArrival);
     }
 
     private void StartService(double now, int unit, int patient, int group, double unitArrival)
@@ -363,10 +361,9 @@ internal sealed partial class SimulationEngine
 
     private void Leave(double now, int patient, int group)
     {
-        ref var record = ref _patients[patient];
         if (now >= _warmupEnd)
         {
-            double time = now - record.NetworkEntry;
+            double time = now - _networkEntries[patient];
             _groupExits[group]++;
             _groupTimeSum[group] += time;
             _groupHistograms[group].Record(time);
@@ -468,8 +465,7 @@ internal sealed partial class SimulationEngine
             ref readonly var state = ref _units[u];
             for (int k = 0; k < state.Queued; k++)
             {
-                int patient = queue[(state.QueueHead + k) & (queue.Length - 1)];
-                AddQueueSpan(u, InWindow(_patients[patient].UnitArrival), _end);
+                AddQueueSpan(u, InWindow(queue[(state.QueueHead + k) & (queue.Length - 1)].UnitArrival), _end);
             }
         }
 
