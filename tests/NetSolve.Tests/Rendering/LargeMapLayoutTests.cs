@@ -134,7 +134,8 @@ public class LargeMapLayoutTests
     public void A_forward_line_up_to_a_later_band_runs_in_the_gaps_and_crosses_no_box(string shape)
     {
         // A forward line whose target stands above (or, flowing right, left of) its source ends in a later band.
-        // Measured before such lines were routed: one curve straight across, 60% of them through boxes on the way.
+        // Measured before such lines were routed (one curve straight across): every one crossed boxes on the way,
+        // 90 of 90 on the hospital and 36 of 36 on the pathways, flowing down.
         var solution = Large(shape);
         foreach (var direction in new[] { MapDirection.TopToBottom, MapDirection.LeftToRight })
         {
