@@ -1,8 +1,8 @@
-using System.Diagnostics;
 using System.Globalization;
 using NetSolve.Parsing;
 using NetSolve.Rendering.Map;
 using NetSolve.Solving;
+using static NetSolve.Benchmarks.InProcessTiming;
 
 namespace NetSolve.Benchmarks;
 
@@ -36,20 +36,5 @@ internal static class MapLayoutMeasurement
             output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"{network.Units.Length,5}  {layout.Edges.Length,5}  {layering.Layers.Sum(layers => layers.Count),6}  {Median(layoutTimes.Select(t => t.Cpu)),13:F1}  {Median(layoutTimes.Select(t => t.Wall)),14:F1}  {Median(layeringTimes.Select(t => t.Cpu)),21:F1}  {Median(svgTimes.Select(t => t.Cpu)),10:F1}  {Median(svgTimes.Select(t => t.Wall)),11:F1}  {layout.Width * layout.Height / layout.Nodes.Sum(node => node.Width * node.Height),22:F2}"));
         }
-    }
-
-    private static (double Cpu, double Wall) Time(Func<object> work)
-    {
-        var cpuBefore = Process.GetCurrentProcess().TotalProcessorTime;
-        var wall = Stopwatch.StartNew();
-        GC.KeepAlive(work());
-        wall.Stop();
-        return ((Process.GetCurrentProcess().TotalProcessorTime - cpuBefore).TotalMilliseconds, wall.Elapsed.TotalMilliseconds);
-    }
-
-    private static double Median(IEnumerable<double> values)
-    {
-        var sorted = values.Order().ToList();
-        return sorted[sorted.Count / 2];
     }
 }

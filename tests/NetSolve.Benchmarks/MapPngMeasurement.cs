@@ -1,10 +1,10 @@
-using System.Diagnostics;
 using System.Globalization;
 using NetSolve.Parsing;
 using NetSolve.Rendering.Map;
 using NetSolve.Solving;
 using SkiaSharp;
 using Svg.Skia;
+using static NetSolve.Benchmarks.InProcessTiming;
 
 namespace NetSolve.Benchmarks;
 
@@ -106,20 +106,5 @@ internal static class MapPngMeasurement
         using var pixels = bitmap.PeekPixels();
         using var data = pixels.Encode(new SKPngEncoderOptions(filter, level))!;
         return data.ToArray();
-    }
-
-    private static (double Cpu, double Wall) Time(Func<object> work)
-    {
-        var cpuBefore = Process.GetCurrentProcess().TotalProcessorTime;
-        var wall = Stopwatch.StartNew();
-        GC.KeepAlive(work());
-        wall.Stop();
-        return ((Process.GetCurrentProcess().TotalProcessorTime - cpuBefore).TotalMilliseconds, wall.Elapsed.TotalMilliseconds);
-    }
-
-    private static double Median(IEnumerable<double> values)
-    {
-        var sorted = values.Order().ToList();
-        return sorted[sorted.Count / 2];
     }
 }
