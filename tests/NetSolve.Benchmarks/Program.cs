@@ -43,4 +43,10 @@ if (args is ["map-layout", .. var mapFiles])
     return;
 }
 
+if (args is ["map-png", .. var pngFiles])
+{
+    MapPngMeasurement.Run(Console.Out, pngFiles);
+    return;
+}
+
 BenchmarkSwitcher.FromAssembly(typeof(GeneratedNetworks).Assembly).Run(args);

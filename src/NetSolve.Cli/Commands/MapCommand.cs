@@ -13,7 +13,7 @@ internal sealed class MapCommand() : NetworkCommand(
     private static readonly string[] Extensions = [".svg", ".png", ".dot"];
 
     private readonly Option<string> _output = OutputFileOption.Create(
-        "Write the map here; the extension picks the format: .svg, .png (rendered from the SVG) or .dot (Graphviz).", Extensions);
+        "Write the map here; the extension picks the format: .svg, .png (drawn as the SVG looks) or .dot (Graphviz).", Extensions);
 
     private readonly Option<string> _direction = SettingOptions.Choice(
         "--direction", "Main direction of patient flow on the map: down (top to bottom, for portrait pages) or right (left to right).", "down", ["down", "right"]);
@@ -37,7 +37,7 @@ internal sealed class MapCommand() : NetworkCommand(
         string target = request.GetValue(_output)!;
         byte[] content = Path.GetExtension(target).ToLowerInvariant() switch
         {
-            ".png" => PngMapRenderer.Render(SvgMapWriter.WriteString(layout)),
+            ".png" => PngMapRenderer.Render(layout),
             ".dot" => Utf8(DotMapWriter.Write(layout)),
             _ => Utf8("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + SvgMapWriter.WriteString(layout) + "\n"),
         };

@@ -8,7 +8,7 @@ namespace NetSolve.Rendering.Map;
 /// <summary>Writes a laid-out map as Graphviz DOT, with the same texts, colours, borders and line kinds as the SVG.</summary>
 /// <remarks>
 /// Graphviz does its own layout; the main direction becomes <c>rankdir</c>. Pen widths follow the map's proportional
-/// widths. External arrivals and exits become small point nodes (<c>arrivals:ID</c>, <c>exit:ID</c>) with labelled edges.
+/// widths; a large map's light flows are pale, as in the SVG. External arrivals and exits become small point nodes (<c>arrivals:ID</c>, <c>exit:ID</c>) with labelled edges.
 /// </remarks>
 public static class DotMapWriter
 {
@@ -50,12 +50,20 @@ public static class DotMapWriter
         foreach (var edge in layout.Edges)
         {
             bool dashed = edge.Kind != MapEdgeKind.Forward;
-            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, dashed ? MapColours.FeedbackLine : MapColours.ForwardLine, dashed, ranks: edge.Kind == MapEdgeKind.Forward);
+            string colour = dashed ? MapColours.FeedbackLine : MapColours.ForwardLine;
+            Edge(dot, edge.From, edge.To, edge.RateText, edge.StrokeWidth, edge.Faint ? Pale(colour) : colour, dashed, ranks: edge.Kind == MapEdgeKind.Forward);
         }
 
         dot.Append("}\n");
         return dot.ToString();
     }
+
+    /// <summary>
+    /// A light flow's colour as the SVG draws it: the line's colour at <see cref="MapColours.FaintOpacity"/>, written
+    /// as Graphviz's <c>#RRGGBBAA</c>, so the heavy flows stand out in the DOT drawing too.
+    /// </summary>
+    internal static string Pale(string colour) =>
+        colour + ((int)Math.Round(255.0 * double.Parse(MapColours.FaintOpacity, CultureInfo.InvariantCulture))).ToString("X2", CultureInfo.InvariantCulture);
 
     // ranks is false for a return route or diversion: Graphviz then leaves it out of ranking, so its own layout
     // keeps the heaviest flow running down the page as the SVG map does, rather than breaking cycles its own way.

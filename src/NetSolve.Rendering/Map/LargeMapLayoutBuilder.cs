@@ -32,6 +32,13 @@ internal static class LargeMapLayoutBuilder
     /// <summary>Width to height a folded group and the whole map aim at: a landscape screen or slide.</summary>
     private const double TargetAspect = 1.4;
 
+    /// <summary>
+    /// Share of a group's layers left whole: a layer wider than this share of them is wrapped onto more rows
+    /// (<see cref="Wrap"/>). Measured on a generated 1,000-unit hospital, map area over the boxes' area: 5.36 with
+    /// no wrapping, 4.40 at 0.9, 4.30 at 0.75, 3.31 at 0.5 (docs/performance.md, "Map and report at scale").
+    /// </summary>
+    private const double WrapShare = 0.5;
+
     /// <summary>Gap between connected groups.</summary>
     private const double GroupGap = 60.0;
 
@@ -64,7 +71,8 @@ internal static class LargeMapLayoutBuilder
 
         var layering = LargeMapLayering.Compute(count, flows.Weighted(), flows.ArrivalPerHour);
         bool down = direction == MapDirection.TopToBottom;
-        var centres = Place(templates, layering, down);
+        var centres = Place(templates, layering, down, out int[] bandOf, out double[] bandEnd);
+        double deepest = templates.Max(box => down ? box.Height : box.Width);
 
         // Each line's curve in unplaced coordinates; then everything is moved so the map starts at its margin.
         var curves = new Curve[flows.Lines.Count];
@@ -77,6 +85,7 @@ internal static class LargeMapLayoutBuilder
             var to = Box(templates[line.ToIndex], centres[line.ToIndex]);
             curves[k] = line.FromIndex == line.ToIndex ? Loop(from, arrow, down)
                 : layering.IsReturn[k] ? Return(from, to, arrow, down)
+                : bandOf[line.FromIndex] != bandOf[line.ToIndex] ? BandGapRoute.Between(from, to, arrow, down, deepest, bandEnd[bandOf[line.FromIndex]] + (BandGap / 2.0))
                 : Forward(from, to, arrow, down);
         }
 
@@ -104,6 +113,10 @@ internal static class LargeMapLayoutBuilder
             }
 
             Cover(curve.Tip.X, curve.Tip.Y);
+            foreach (var bend in curve.Bends ?? [])
+            {
+                Cover(bend.X, bend.Y);
+            }
         }
 
         double shiftX = pad - minX;
@@ -172,7 +185,12 @@ internal static class LargeMapLayoutBuilder
     /// sit side by side, centred on the band; a group with many layers is folded into bands (<see cref="LayersPerBand"/>);
     /// groups are packed in rows (largest first) no longer than the target map's side or the longest group.
     /// </summary>
-    private static MapPoint[] Place(MapNode[] boxes, MapLayering layering, bool down)
+    /// <param name="boxes">The unit boxes, unplaced.</param>
+    /// <param name="layering">The layers.</param>
+    /// <param name="down">True when patients flow down the page.</param>
+    /// <param name="bandOf">Each unit's band, numbered across all groups.</param>
+    /// <param name="bandEnd">Each band's far edge across the main direction (right, or bottom when the map flows right).</param>
+    private static MapPoint[] Place(MapNode[] boxes, MapLayering layering, bool down, out int[] bandOf, out double[] bandEnd)
     {
         double Along(MapNode box) => down ? box.Height : box.Width;
         double Across(MapNode box) => down ? box.Width : box.Height;
@@ -185,10 +203,12 @@ internal static class LargeMapLayoutBuilder
         var along = new double[boxes.Length];
         var across = new double[boxes.Length];
         var extents = new List<(int Group, double Along, double Across)>();
+        bandOf = new int[boxes.Length];
+        var bands = new List<(int Group, double End)>();
         for (int group = 0; group < layering.Layers.Count; group++)
         {
-            var layers = layering.Layers[group];
-            var layerWidths = layers.Select(units => units.Sum(unit => Across(boxes[unit])) + (MapLayoutBuilder.NodeSeparation * (units.Count - 1))).ToList();
+            var layers = Wrap(layering.Layers[group], unit => Across(boxes[unit]));
+            var layerWidths = layers.Select(units => RowWidth(units, unit => Across(boxes[unit]))).ToList();
             int perBand = LayersPerBand(layerWidths, pitch, down);
             double bandStart = 0.0;
             for (int first = 0; first < layers.Count; first += perBand)
@@ -201,12 +221,14 @@ internal static class LargeMapLayoutBuilder
                     double at = bandStart + ((bandWidth - widths[l]) / 2.0);
                     foreach (int unit in band[l])
                     {
+                        bandOf[unit] = bands.Count;
                         across[unit] = at + (Across(boxes[unit]) / 2.0);
                         along[unit] = (l * pitch) + (deepest / 2.0);
                         at += Across(boxes[unit]) + MapLayoutBuilder.NodeSeparation;
                     }
                 }
 
+                bands.Add((group, bandStart + bandWidth));
                 bandStart += bandWidth + BandGap;
             }
 
@@ -230,6 +252,7 @@ internal static class LargeMapLayoutBuilder
             rowDepth = Math.Max(rowDepth, extent.Along);
         }
 
+        bandEnd = bands.Select(band => band.End + offset[band.Group].Across).ToArray();
         var centres = new MapPoint[boxes.Length];
         for (int unit = 0; unit < boxes.Length; unit++)
         {
@@ -239,6 +262,44 @@ internal static class LargeMapLayoutBuilder
 
         return centres;
     }
+
+    /// <summary>
+    /// The group's layers as rows across the main direction: each layer one row, except that a layer wider than
+    /// <see cref="WrapShare"/> of the group's layers is wrapped onto as many rows as it needs, its units kept in
+    /// order. A band is as wide as its widest row, so one wide layer among narrow ones would otherwise widen its whole
+    /// band; lines still run from a row to a later one, as they ran from a layer to a later one.
+    /// </summary>
+    private static List<IReadOnlyList<int>> Wrap(IReadOnlyList<IReadOnlyList<int>> layers, Func<int, double> across)
+    {
+        var widths = layers.Select(units => RowWidth(units, across)).Order().ToList();
+        double widestBox = layers.SelectMany(units => units).Max(across);
+        double limit = Math.Max(widestBox, widths[(int)Math.Ceiling(WrapShare * (widths.Count - 1))]);
+        var rows = new List<IReadOnlyList<int>>();
+        foreach (var units in layers)
+        {
+            var row = new List<int>();
+            double width = -MapLayoutBuilder.NodeSeparation;
+            foreach (int unit in units)
+            {
+                double wider = width + MapLayoutBuilder.NodeSeparation + across(unit);
+                if (row.Count > 0 && wider > limit)
+                {
+                    rows.Add(row);
+                    (row, wider) = ([], across(unit));
+                }
+
+                row.Add(unit);
+                width = wider;
+            }
+
+            rows.Add(row);
+        }
+
+        return rows;
+    }
+
+    private static double RowWidth(IReadOnlyList<int> units, Func<int, double> across) =>
+        units.Sum(across) + (MapLayoutBuilder.NodeSeparation * (units.Count - 1));
 
     /// <summary>
     /// How many layers a band of the group holds: one band, then two, and so on (never under
@@ -342,6 +403,11 @@ internal static class LargeMapLayoutBuilder
 
     private static string PathData(Curve curve, Func<MapPoint, MapPoint> shift)
     {
+        if (curve.Bends is { } bends)
+        {
+            return BandGapRoute.PathData([curve.Start, .. bends, curve.Base], shift);
+        }
+
         var path = new StringBuilder("M ");
         Pair(path, shift(curve.Start)).Append("C ");
         Pair(path, shift(curve.First));
@@ -350,19 +416,27 @@ internal static class LargeMapLayoutBuilder
         return path.ToString().TrimEnd();
     }
 
-    private static StringBuilder Pair(StringBuilder path, MapPoint point) =>
+    internal static StringBuilder Pair(StringBuilder path, MapPoint point) =>
         path.Append(Coordinates.Format(point.X)).Append(' ').Append(Coordinates.Format(point.Y)).Append(' ');
 
     /// <summary>A box as its centre and half sizes.</summary>
     [StructLayout(LayoutKind.Auto)]
-    private readonly record struct Rect(MapPoint Centre, double HalfWidth, double HalfHeight);
+    internal readonly record struct Rect(MapPoint Centre, double HalfWidth, double HalfHeight);
 
     /// <summary>One cubic Bézier from <paramref name="Start"/> to the arrow's <paramref name="Base"/>, then the arrowhead to <paramref name="Tip"/>.</summary>
     [StructLayout(LayoutKind.Auto)]
-    private readonly record struct Curve(MapPoint Start, MapPoint First, MapPoint Second, MapPoint Base, MapPoint Tip)
+    internal readonly record struct Curve(MapPoint Start, MapPoint First, MapPoint Second, MapPoint Base, MapPoint Tip)
     {
-        /// <summary>The curve's point halfway along its parameter: (P0 + 3 P1 + 3 P2 + P3) / 8.</summary>
-        public MapPoint Middle => At(0.5);
+        /// <summary>
+        /// For a line routed along the gap between bands, the corners it turns at between <see cref="Start"/> and
+        /// <see cref="Base"/> (drawn rounded; <see cref="First"/> and <see cref="Second"/> unused); null for one curve.
+        /// </summary>
+        public MapPoint[]? Bends { get; init; }
+
+        /// <summary>Where the rate goes: the curve's point halfway along its parameter, (P0 + 3 P1 + 3 P2 + P3) / 8; on a routed line, the middle of its middle leg.</summary>
+        public MapPoint Middle => Bends is { Length: > 1 } bends
+            ? new MapPoint((bends[(bends.Length / 2) - 1].X + bends[bends.Length / 2].X) / 2.0, (bends[(bends.Length / 2) - 1].Y + bends[bends.Length / 2].Y) / 2.0)
+            : At(0.5);
 
         /// <summary>The point at parameter <paramref name="t"/> in [0, 1] (Bernstein form).</summary>
         public MapPoint At(double t)

@@ -36,7 +36,7 @@ public static class MapLayoutBuilder
 
     /// <summary>
     /// Most units a map is drawn for. Above it <c>map</c> refuses at once and the report leaves its map out: already
-    /// at 2,000 units the PNG's pixel budget (<see cref="PngMapRenderer.MaxPixels"/>) draws box text under 5 pixels
+    /// at 2,000 units the PNG's pixel budget (<see cref="PngMapRenderer.MaxPixels"/>) draws box text about 6 pixels
     /// high and the SVG is about 5 MB, more than a browser or slide shows smoothly (docs/map-and-report.md, "Size").
     /// </summary>
     public const int MaxUnits = 2000;

@@ -10,7 +10,8 @@ internal static class MapLegend
 {
     private static readonly XNamespace Svg = SvgMapWriter.Svg;
 
-    public static XElement Lay(MapLayout layout, out double headerHeight, out double minWidth)
+    /// <summary>The header, its items wrapped to <paramref name="wrapWidth"/> (the map's width) or the widest item, whichever is wider.</summary>
+    public static XElement Lay(MapLayout layout, double wrapWidth, out double headerHeight, out double minWidth)
     {
         double margin = MapTypography.Margin;
         string title = ShownTitle(layout);
@@ -30,7 +31,7 @@ internal static class MapLegend
         string? subtitle = ShownSubtitle(layout);
         double subtitleWidth = subtitle is null ? 0.0 : TextWidth.Of(subtitle, MapTypography.DetailSize, bold: false);
         minWidth = Math.Max(Math.Max(titleWidth, subtitleWidth), widestItem) + (2.0 * margin);
-        double available = Math.Max(layout.Width, minWidth) - (2.0 * margin);
+        double available = Math.Max(wrapWidth, minWidth) - (2.0 * margin);
 
         var header = new XElement(Svg + "g", new XAttribute("class", "legend"));
         double y = margin + SvgMapWriter.TitleFontSize;

@@ -27,10 +27,25 @@ public static class SvgMapWriter
     public static XDocument Write(MapLayout layout)
     {
         ArgumentNullException.ThrowIfNull(layout);
-        var legend = MapLegend.Lay(layout, out double headerHeight, out double minWidth);
+        return new XDocument(Root(layout, header: true, graph: true, wrapWidth: layout.Width));
+    }
+
+    /// <summary>
+    /// The map's header alone (title, changes line and legend), wrapped to <paramref name="wrapWidth"/> or the
+    /// header's widest item: for a page that shows a large map's graph in a frame that scrolls, so the legend stays in view.
+    /// </summary>
+    internal static XElement Header(MapLayout layout, double wrapWidth) => Root(layout, header: true, graph: false, wrapWidth);
+
+    /// <summary>The map without its header, as wide as <see cref="Write"/> draws it: the part a scrolling frame shows.</summary>
+    internal static XElement Graph(MapLayout layout) => Root(layout, header: false, graph: true, wrapWidth: layout.Width);
+
+    private static XElement Root(MapLayout layout, bool header, bool graph, double wrapWidth)
+    {
+        var legend = MapLegend.Lay(layout, wrapWidth, out double headerHeight, out double minWidth);
         // Whole-unit sizes, so a raster at an integer scale has exactly the SVG's size.
-        double width = Math.Ceiling(Math.Max(layout.Width, minWidth));
-        double height = Math.Ceiling(layout.Height + headerHeight);
+        double width = Math.Ceiling(Math.Max(graph ? layout.Width : Math.Min(layout.Width, wrapWidth), minWidth));
+        double top = header ? headerHeight : 0.0;
+        double height = Math.Ceiling((graph ? layout.Height : 0.0) + top);
         double offsetX = (width - layout.Width) / 2.0;
 
         var root = new XElement(
@@ -39,20 +54,28 @@ public static class SvgMapWriter
             new XAttribute("width", Coordinates.Format(width)),
             new XAttribute("height", Coordinates.Format(height)),
             new XAttribute("role", "img"),
-            new XAttribute("class", "bottleneck-map"),
+            new XAttribute("class", graph ? "bottleneck-map" : "bottleneck-map-legend"),
             new XAttribute("font-family", MapTypography.FontFamily),
-            new XElement(Svg + "title", "Bottleneck map: " + layout.Title),
+            new XElement(Svg + "title", (graph ? "Bottleneck map: " : "Legend of the bottleneck map: ") + layout.Title),
             new XElement(Svg + "desc", Description(layout)),
-            new XElement(Svg + "rect", Attr("x", 0), Attr("y", 0), Attr("width", width), Attr("height", height), new XAttribute("fill", MapColours.Background)),
-            legend,
-            new XElement(
+            new XElement(Svg + "rect", Attr("x", 0), Attr("y", 0), Attr("width", width), Attr("height", height), new XAttribute("fill", MapColours.Background)));
+        if (header)
+        {
+            root.Add(legend);
+        }
+
+        if (graph)
+        {
+            root.Add(new XElement(
                 Svg + "g",
                 new XAttribute("class", "graph"),
-                new XAttribute("transform", FormattableString.Invariant($"translate({Coordinates.Format(offsetX)} {Coordinates.Format(headerHeight)})")),
+                new XAttribute("transform", FormattableString.Invariant($"translate({Coordinates.Format(offsetX)} {Coordinates.Format(top)})")),
                 new XElement(Svg + "g", new XAttribute("class", "flows"), layout.Edges.Select(Flow)),
                 new XElement(Svg + "g", new XAttribute("class", "nodes"), layout.Nodes.Select(Node)),
                 new XElement(Svg + "g", new XAttribute("class", "rates"), layout.Edges.Where(edge => edge.ShowsRate).Select(Rate))));
-        return new XDocument(root);
+        }
+
+        return root;
     }
 
     /// <summary>The map as SVG text, without an XML declaration so it can also be inlined in HTML.</summary>

@@ -184,20 +184,27 @@ public static class HtmlReport
     private static void AppendMap(StringBuilder html, NetworkSolution baseline, string unit)
     {
         var layout = MapLayoutBuilder.Build(baseline);
-        var map = SvgMapWriter.Write(layout).Root!;
+        bool large = HasLargeMap(baseline);
+        // A large map scrolls in its frame; its header is drawn apart, above the frame, so the legend stays in view.
+        var map = large ? SvgMapWriter.Graph(layout) : SvgMapWriter.Write(layout).Root!;
         // Never enlarged past 125% of its own size: a small network should not fill the page with giant boxes.
         double mapWidth = double.Parse(map.Attribute("width")!.Value, CultureInfo.InvariantCulture);
         double maxWidthPx = Math.Ceiling(mapWidth * MaxMapEnlargement);
         html.Append("<section id=\"map\">\n<h2>Bottleneck map</h2>\n<figure id=\"map-figure\">\n");
         AppendPrintNote(html, map, mapWidth, maxWidthPx);
+        if (large)
+        {
+            html.Append("<div class=\"map-legend\" id=\"map-legend\">\n").Append(SvgMapWriter.Header(layout, MapTypography.MaxTitleWidth).ToString()).Append("\n</div>\n");
+        }
+
         html.Append("<div class=\"map-frame\" style=\"max-width:").Append(Coordinates.Format(maxWidthPx)).Append("px\">\n")
             .Append(map.ToString()).Append("\n</div>\n")
             .Append("<figcaption>Patients flow from top to bottom; dashed lines return against the flow. Box fill, border, glyph and word give each unit's status (")
             .Append(HtmlEncode(HarbourLightsPalette.Name)).Append(" palette). Line width is proportional to patients per ").Append(unit)
             .Append('.');
-        if (HasLargeMap(baseline))
+        if (large)
         {
-            html.Append(" On screen the map is shown at its own size in a frame that scrolls; on a map this large each box shows the label, status, utilisation and mean wait, pale lines carry under a fifth of the largest flow, and rates are written on the heavier lines only; the table below gives every number.");
+            html.Append(" On screen the map is shown at its own size in a frame that scrolls, under its legend; on a map this large each box shows the label, status, utilisation and mean wait, pale lines carry under a fifth of the largest flow, and rates are written on the heavier lines only; the table below gives every number.");
         }
 
         html.Append("</figcaption>\n</figure>\n</section>\n");

@@ -52,12 +52,15 @@ internal static class ReportStyles
     /// <summary>
     /// Added after <see cref="Css"/> when the report draws a large map (<see cref="Map.MapLayoutBuilder.MaxLayeredUnits"/>):
     /// on screen the map keeps its own size, one map unit to a CSS pixel, in a frame that scrolls both ways, because
-    /// shrunk to the column its box text would be a pixel high; in print it is reduced to the page as any map.
+    /// shrunk to the column its box text would be a pixel high; its legend, drawn apart above the frame at its own
+    /// size (narrowed to the column on a small screen), stays in view while the frame scrolls. In print it is reduced
+    /// to the page as any map.
     /// </summary>
     public const string LargeMapCss = """
         @media screen {
           #map-figure .map-frame { max-width: none !important; max-height: 85vh; overflow: auto; border: 1px solid #B8BEC4; }
           #map-figure svg { width: auto; max-width: none; }
+          #map-figure .map-legend svg { max-width: 100%; }
         }
 
         """;

@@ -1,3 +1,4 @@
+using System.Text.RegularExpressions;
 using NetSolve.Rendering.Map;
 
 namespace NetSolve.Tests.Rendering;
@@ -27,6 +28,21 @@ public class DotMapWriterTests
         Assert.Contains("\"emergency\" -> \"exit:emergency\" [label=\"4.301/h\"", dot, StringComparison.Ordinal);
         Assert.Matches("\"imaging\" -> \"emergency\" \\[[^\\]]*style=dashed", dot);
         Assert.Contains("peripheries=2", dot, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_large_maps_light_flows_are_pale_in_the_dot_as_in_the_svg()
+    {
+        var layout = MapLayoutBuilder.Build(RenderingFixtures.Generated(300, 2));
+        string dot = DotMapWriter.Write(layout);
+        var faint = layout.Edges.Where(edge => edge.Faint).ToList();
+        var heavy = layout.Edges.Where(edge => !edge.Faint).ToList();
+        Assert.NotEmpty(faint);
+        Assert.NotEmpty(heavy);
+
+        // Source: Graphviz colour attribute, "#RRGGBBAA" with alpha last (from memory); 0.3 opacity is 76.5 of 255, 0x4C or 0x4D.
+        Assert.All(faint, edge => Assert.Matches($"\n  \"{Regex.Escape(edge.From)}\" -> \"{Regex.Escape(edge.To)}\" \\[[^\\]]*color=\"#[0-9A-F]{{6}}4[CD]\"", dot));
+        Assert.All(heavy, edge => Assert.Matches($"\n  \"{Regex.Escape(edge.From)}\" -> \"{Regex.Escape(edge.To)}\" \\[[^\\]]*color=\"#[0-9A-F]{{6}}\"", dot));
     }
 
     [Fact]
