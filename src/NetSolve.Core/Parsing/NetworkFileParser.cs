@@ -226,7 +226,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         return routes.ToImmutable();
     }
 
-    private bool KnownUnit(YamlScalar key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
+    private bool KnownUnit(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
     {
         if (known.Contains(key.Value) || _unitLocations.ContainsKey(key.Value))
         {
