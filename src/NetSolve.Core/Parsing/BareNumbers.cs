@@ -18,7 +18,7 @@ public static class BareNumbers
     {
         ArgumentNullException.ThrowIfNull(text);
         amount = 0.0;
-        return NumberText.Split(text, string.Empty, out string number, out string suffix) && suffix.Length == 0
+        return NumberText.Split(text, string.Empty, out var number, out string suffix) && suffix.Length == 0
             && NumberText.IsNumber(number, out amount) && amount > 0.0;
     }
 
@@ -64,9 +64,17 @@ public static class BareNumbers
             return;
         }
 
-        string where = groupId is null ? "service" : string.Concat("service of group '", groupId, "'");
-        diagnostics.Add(Diagnostic.Warning(DiagnosticCodes.BareNumber, scalar.Location, unitId, NoUnitOfTime(where, scalar.Value, timeUnit)));
+        diagnostics.Add(ServiceWarning(scalar, unitId, groupId, timeUnit));
     }
+
+    /// <summary>
+    /// The warning for a bare service number, its words built only when read: the command line prints the first few
+    /// of a kind, and a generated file can have tens of thousands. (A method of its own, so that the captured values
+    /// are allocated only for a bare number, not for every unit looked at.)
+    /// </summary>
+    private static Diagnostic ServiceWarning(YamlScalar scalar, string unitId, string? groupId, TimeUnit timeUnit) =>
+        Diagnostic.Warning(DiagnosticCodes.BareNumber, scalar.Location, unitId, () =>
+            NoUnitOfTime(groupId is null ? "service" : string.Concat("service of group '", groupId, "'"), scalar.Value, timeUnit));
 
     /// <summary>The warning's words: what was bare, how it was read and how to say which unit was meant.</summary>
     private static string NoUnitOfTime(string where, string text, TimeUnit timeUnit)
@@ -99,6 +107,6 @@ public static class BareNumbers
         return null;
     }
 
-    private static IReadOnlyList<KeyValuePair<YamlScalar, YamlNode>> Entries(YamlNode? node) =>
+    private static IReadOnlyList<YamlEntry> Entries(YamlNode? node) =>
         node is YamlMapping mapping ? mapping.Entries : [];
 }

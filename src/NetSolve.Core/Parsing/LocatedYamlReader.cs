@@ -54,15 +54,13 @@ public static class LocatedYamlReader
     {
         switch (node)
         {
-            case YamlScalar scalar when scalar.Value.Contains('\t', StringComparison.Ordinal):
-                int tab = scalar.Value.IndexOf('\t', StringComparison.Ordinal);
-                bool sameLine = !scalar.Value.AsSpan(0, tab).ContainsAny('\n', '\r');
-                var at = sameLine ? scalar.Location with { Column = scalar.Location.Column + tab + (scalar.IsPlain ? 0 : 1) } : scalar.Location;
-                throw new YamlReadException(at, "a tab inside a key or value is not allowed; use spaces");
+            case YamlScalar scalar:
+                RefuseTab(scalar.Location, scalar.Value, scalar.IsPlain);
+                break;
             case YamlMapping mapping:
                 foreach (var (key, value) in mapping.Entries)
                 {
-                    RefuseTabs(key);
+                    RefuseTab(key.Location, key.Value, key.IsPlain);
                     RefuseTabs(value);
                 }
 
@@ -75,6 +73,20 @@ public static class LocatedYamlReader
 
                 break;
         }
+    }
+
+    /// <summary>Throws at the first tab of a key's or value's <paramref name="text"/>, which starts at <paramref name="location"/>.</summary>
+    private static void RefuseTab(SourceLocation location, string text, bool isPlain)
+    {
+        int tab = text.IndexOf('\t', StringComparison.Ordinal);
+        if (tab < 0)
+        {
+            return;
+        }
+
+        bool sameLine = !text.AsSpan(0, tab).ContainsAny('\n', '\r');
+        var at = sameLine ? location with { Column = location.Column + tab + (isPlain ? 0 : 1) } : location;
+        throw new YamlReadException(at, "a tab inside a key or value is not allowed; use spaces");
     }
 
     /// <summary>The line and column (from 1, in UTF-16 code units as YamlDotNet counts) of <paramref name="index"/>.</summary>
@@ -145,7 +157,7 @@ public static class LocatedYamlReader
                 return new YamlSequence(location, items);
             case MappingStart:
                 parser.MoveNext();
-                var entries = new List<KeyValuePair<YamlScalar, YamlNode>>();
+                var entries = new List<YamlEntry>();
                 while (!parser.TryConsume<MappingEnd>(out _))
                 {
                     if (ReadNode(parser, fileName, depth + 1) is not YamlScalar key)
@@ -153,7 +165,7 @@ public static class LocatedYamlReader
                         throw new YamlReadException(location, "a mapping key must be a plain name, not a list or mapping");
                     }
 
-                    entries.Add(new(key, ReadNode(parser, fileName, depth + 1)));
+                    entries.Add(new(new YamlKey(key.Location, key.Value, key.IsPlain), ReadNode(parser, fileName, depth + 1)));
                 }
 
                 return new YamlMapping(location, entries);

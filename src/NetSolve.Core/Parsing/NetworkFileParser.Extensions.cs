@@ -199,7 +199,7 @@ internal sealed partial class NetworkFileParser
     {
         foreach (var (unitId, target) in _diversions)
         {
-            KnownUnit(target, known, "when_full", unitId);
+            KnownUnit(new YamlKey(target.Location, target.Value, target.IsPlain), known, "when_full", unitId);
         }
 
         DiversionLoops.Check(_diversions, Diagnostics);

@@ -41,7 +41,12 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         }
 
         var units = unitsNode is null ? [] : ParseUnits(unitsNode, timeUnit);
-        var known = units.Select(unit => unit.Id).ToHashSet(StringComparer.Ordinal);
+        var known = new HashSet<string>(units.Length, StringComparer.Ordinal);
+        foreach (var unit in units)
+        {
+            known.Add(unit.Id);
+        }
+
         var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
         if (fields.TryGetValue(ArrivalCvKey, out var arrivalCvNode))
         {
@@ -154,6 +159,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         var arrivals = ImmutableArray.CreateBuilder<Arrival>();
         if (Mapping(node, null, "arrivals") is YamlMapping mapping)
         {
+            arrivals.Capacity = mapping.Entries.Count;
             foreach (var (key, value) in UniqueEntries(mapping, null))
             {
                 if (!KnownUnit(key, known, "arrivals"))
@@ -175,7 +181,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
                 : $"groups.{groupId}: no positive arrival rate: a group needs patients arriving from outside at one unit at least");
         }
 
-        return arrivals.ToImmutable();
+        return arrivals.DrainToImmutable();
     }
 
     /// <param name="node">The <c>routes</c> mapping.</param>
@@ -190,6 +196,9 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             return routes.ToImmutable();
         }
 
+        // Sized up front, as the units are: a 100,000-unit file has hundreds of thousands of routes.
+        routes.Capacity = RouteCount(mapping);
+        _routeLocations.EnsureCapacity(mapping.Entries.Count);
         foreach (var (sourceKey, targets) in UniqueEntries(mapping, null))
         {
             string from = sourceKey.Value;
@@ -223,10 +232,22 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             }
         }
 
-        return routes.ToImmutable();
+        return routes.DrainToImmutable();
     }
 
-    private bool KnownUnit(YamlScalar key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
+    /// <summary>How many routes <paramref name="routes"/> lists at most (repeated and unknown targets included).</summary>
+    private static int RouteCount(YamlMapping routes)
+    {
+        int count = 0;
+        foreach (var entry in routes.Entries)
+        {
+            count += entry.Value is YamlMapping targets ? targets.Entries.Count : 0;
+        }
+
+        return count;
+    }
+
+    private bool KnownUnit(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
     {
         if (known.Contains(key.Value) || _unitLocations.ContainsKey(key.Value))
         {

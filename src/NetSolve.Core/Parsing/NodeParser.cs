@@ -17,7 +17,7 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
 
     // Most mappings (a unit's fields, its routes) hold a handful of keys: a linear scan finds duplicates there
     // without a dictionary per mapping, which matters for 100,000-unit files.
-    private const int ScanLimit = 16;
+    internal const int ScanLimit = 16;
 
     protected Dictionary<string, YamlNode> Fields(YamlMapping mapping, string[] knownKeys, string? unitId)
     {
@@ -68,7 +68,7 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     }
 
     /// <summary>True for a key of <paramref name="knownKeys"/>; otherwise reports it with the nearest known key.</summary>
-    private bool IsKnown(YamlScalar key, string[] knownKeys, string? unitId)
+    private bool IsKnown(YamlKey key, string[] knownKeys, string? unitId)
     {
         if (Array.IndexOf(knownKeys, key.Value) >= 0)
         {
@@ -82,30 +82,15 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
         return false;
     }
 
-    private void ReportDuplicate(YamlScalar key, SourceLocation first, string? unitId) =>
+    internal void ReportDuplicate(YamlKey key, SourceLocation first, string? unitId) =>
         Error(key.Location, unitId, DiagnosticCodes.DuplicateKey, string.Create(CultureInfo.InvariantCulture,
             $"duplicate key '{key.Value}' (first at line {first.Line})"));
 
-    protected IEnumerable<(YamlScalar Key, YamlNode Value)> UniqueEntries(YamlMapping mapping, string? unitId)
-    {
-        var entries = mapping.Entries;
-        var seen = entries.Count > ScanLimit ? new Dictionary<string, SourceLocation>(entries.Count, StringComparer.Ordinal) : null;
-        for (int i = 0; i < entries.Count; i++)
-        {
-            var (key, value) = entries[i];
-            if (FirstOccurrence(entries, i, seen) is SourceLocation first)
-            {
-                ReportDuplicate(key, first, unitId);
-                continue;
-            }
-
-            seen?.Add(key.Value, key.Location);
-            yield return (key, value);
-        }
-    }
+    /// <summary>The entries of <paramref name="mapping"/> with a key not seen before in it; repeats are reported.</summary>
+    protected UniqueEntryList UniqueEntries(YamlMapping mapping, string? unitId) => new(this, mapping, unitId);
 
     /// <summary>Where the key of entry <paramref name="index"/> first appeared, when it appeared before.</summary>
-    private static SourceLocation? FirstOccurrence(IReadOnlyList<KeyValuePair<YamlScalar, YamlNode>> entries, int index, Dictionary<string, SourceLocation>? seen)
+    internal static SourceLocation? FirstOccurrence(IReadOnlyList<YamlEntry> entries, int index, Dictionary<string, SourceLocation>? seen)
     {
         string key = entries[index].Key.Value;
         if (seen is not null)

@@ -99,7 +99,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         return new ScenarioReadResult(failed ? null : scenario, [.. sorted]);
     }
 
-    private void Section(Dictionary<string, YamlNode> fields, string key, List<NetworkChange> changes, Func<YamlScalar, YamlNode, NetworkChange?> parse)
+    private void Section(Dictionary<string, YamlNode> fields, string key, List<NetworkChange> changes, Func<YamlKey, YamlNode, NetworkChange?> parse)
     {
         if (!fields.TryGetValue(key, out var node) || node is YamlScalar { IsNull: true } || Mapping(node, null, key) is not YamlMapping mapping)
         {
@@ -115,7 +115,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         }
     }
 
-    private AddUnit? AddUnit(YamlScalar key, YamlNode node, TimeUnit timeUnit)
+    private AddUnit? AddUnit(YamlKey key, YamlNode node, TimeUnit timeUnit)
     {
         string id = key.Value;
         if (Mapping(node, id, "a new unit") is not YamlMapping mapping)
@@ -157,7 +157,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             : null;
     }
 
-    private NetworkChange? ServersChange(YamlScalar key, YamlNode node)
+    private NetworkChange? ServersChange(YamlKey key, YamlNode node)
     {
         if (node is YamlScalar { IsNull: false } scalar && (scalar.Value.StartsWith('+') || scalar.Value.StartsWith('-')))
         {
@@ -167,7 +167,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
         return ServersField(node, key.Value) is Servers servers ? new SetServers(key.Location, key.Value, servers) : null;
     }
 
-    private NetworkChange? ServiceChange(YamlScalar key, YamlNode node, TimeUnit timeUnit)
+    private NetworkChange? ServiceChange(YamlKey key, YamlNode node, TimeUnit timeUnit)
     {
         if (Scalar(node, key.Value, FieldLabels.Service) is not YamlScalar scalar)
         {
@@ -186,7 +186,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             : null;
     }
 
-    private NetworkChange? ArrivalsChange(YamlScalar key, YamlNode node, TimeUnit timeUnit)
+    private NetworkChange? ArrivalsChange(YamlKey key, YamlNode node, TimeUnit timeUnit)
     {
         if (Scalar(node, key.Value, FieldLabels.ArrivalRate) is not YamlScalar scalar)
         {
@@ -205,7 +205,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             : null;
     }
 
-    private CloseUnit? CloseChange(YamlScalar key, YamlNode node)
+    private CloseUnit? CloseChange(YamlKey key, YamlNode node)
     {
         if (node is YamlScalar { IsNull: true })
         {

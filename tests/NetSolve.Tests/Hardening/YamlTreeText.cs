@@ -13,4 +13,7 @@ internal static class YamlTreeText
         YamlSequence sequence => $"Q({sequence.Location};" + string.Join(";", sequence.Items.Select(Of)) + ")",
         _ => throw new ArgumentOutOfRangeException(nameof(node)),
     };
+
+    /// <summary>A key, written as a scalar is, so that a key and a value with the same text and place read alike.</summary>
+    private static string Of(YamlKey key) => $"S({key.Location},{key.Value},{key.IsPlain})";
 }

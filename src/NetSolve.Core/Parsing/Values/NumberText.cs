@@ -26,7 +26,7 @@ internal static class NumberText
     /// <param name="text">The text.</param>
     /// <param name="value">The number; infinite when the form is right but too large for a double.</param>
     /// <returns>True when all of <paramref name="text"/> is one number in the contract's form.</returns>
-    public static bool IsNumber(string text, out double value)
+    public static bool IsNumber(ReadOnlySpan<char> text, out double value)
     {
         value = 0.0;
         if (text.Length == 0 || NumberLength(text) != text.Length)
@@ -42,10 +42,10 @@ internal static class NumberText
     /// Splits <c>NUMBER[ ]MARKER SUFFIX</c>: a number in the contract's form, then (only when anything follows) one
     /// optional space, <paramref name="marker"/> and the rest as the suffix. False when no number starts the text.
     /// </summary>
-    public static bool Split(string text, string marker, out string number, out string suffix)
+    public static bool Split(string text, string marker, out ReadOnlySpan<char> number, out string suffix)
     {
         int length = NumberLength(text);
-        number = text[..length];
+        number = text.AsSpan(0, length);
         suffix = string.Empty;
         if (length == 0)
         {
@@ -79,7 +79,7 @@ internal static class NumberText
     };
 
     /// <summary>Length of the number at the start of <paramref name="text"/>; 0 when there is none.</summary>
-    private static int NumberLength(string text)
+    private static int NumberLength(ReadOnlySpan<char> text)
     {
         int i = 0;
         if (i < text.Length && text[i] is '+' or '-')
@@ -117,7 +117,7 @@ internal static class NumberText
         return i;
     }
 
-    private static int Digits(string text, ref int i)
+    private static int Digits(ReadOnlySpan<char> text, ref int i)
     {
         int start = i;
         while (i < text.Length && char.IsAsciiDigit(text[i]))

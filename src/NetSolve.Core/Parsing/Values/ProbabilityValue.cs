@@ -11,7 +11,7 @@ public static class ProbabilityValue
     public static ValueResult<double> Parse(string text)
     {
         ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, string.Empty, out string number, out string suffix) || suffix is not ("" or "%")
+        if (!NumberText.Split(text, string.Empty, out var number, out string suffix) || suffix is not ("" or "%")
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid($"'{text}' is not a probability (write e.g. 0.35 or 35%)");

@@ -130,4 +130,6 @@ public sealed class BlockYamlReaderTests
         YamlSequence sequence => $"Q({sequence.Location};" + string.Join(";", sequence.Items.Select(Dump)) + ")",
         _ => throw new ArgumentOutOfRangeException(nameof(node)),
     };
+
+    private static string Dump(YamlKey key) => $"S({key.Location},{key.Value},{key.IsPlain})";
 }

@@ -173,6 +173,24 @@ public class NetworkReaderTests
         Assert.Equal(probability, parsed, 1e-12);
     }
 
+    // Source: YAML 1.2.2, section 3.2.1.1 (the keys of a mapping are unique) and the network file contract (a repeat is
+    // reported where it stands, naming the line of the first). Lines counted by hand: 'units' holds 'hub' (lines 3-5)
+    // and w01..w19 (three lines each, 6-62); 'routes' starts at 65, hub's targets at 67 (w01) to 85 (w19), the repeat at 86.
+    // More than 16 targets: the size from which repeats are looked up in a table rather than by scanning.
+    [Fact]
+    public void A_repeated_target_in_a_long_list_of_routes_is_reported_at_the_repeat()
+    {
+        var text = new System.Text.StringBuilder("time_unit: hour\nunits:\n  hub:\n    servers: 1\n    service: 30min\n");
+        var ids = Enumerable.Range(1, 19).Select(i => "w" + i.ToString("D2", System.Globalization.CultureInfo.InvariantCulture)).ToList();
+        ids.ForEach(id => text.Append("  ").Append(id).Append(":\n    servers: 1\n    service: 30min\n"));
+        text.Append("arrivals:\n  hub: 1/h\nroutes:\n  hub:\n");
+        ids.Append("w05").ToList().ForEach(id => text.Append("    ").Append(id).Append(": 0.01\n"));
+
+        var result = NetworkReader.ReadText(text.ToString(), "net.yaml");
+
+        Assert.Equal(["net.yaml:86:5: unit 'hub': duplicate key 'w05' (first at line 71)"], result.Diagnostics.Select(d => d.ToString()).ToArray());
+    }
+
     private static ReadResult ReadFromFolder(string folder, string fileName) =>
         NetworkReader.ReadText(File.ReadAllText(Path.Combine(folder, fileName)), fileName);
 
