@@ -21,6 +21,9 @@ public static class ShortestRoundTrip
     /// <summary>The longest text written: <c>-1.2345678901234567E-308</c>.</summary>
     public const int MaxLength = 24;
 
+    /// <summary>Whole numbers up to this are written as integers directly (well below 2^53 and 17 digits).</summary>
+    private const long MaxWhole = 1_000_000_000_000_000;
+
     private const int MantissaBits = 52;
     private const int ExponentBias = 1023;
     private const int Pow5InverseBits = 125;
@@ -44,6 +47,12 @@ public static class ShortestRoundTrip
         if (!double.IsFinite(value))
         {
             throw new ArgumentOutOfRangeException(nameof(value), value, "Only finite numbers are written.");
+        }
+
+        // A whole number (0 and 1 fill many fields) is its digits: every double this size is an exact integer.
+        if (Math.Abs(value) <= MaxWhole && (long)value is long whole && whole == value && (whole != 0 || !double.IsNegative(value)))
+        {
+            return Whole(whole, destination);
         }
 
         ulong bits = BitConverter.DoubleToUInt64Bits(value);
@@ -92,6 +101,20 @@ public static class ShortestRoundTrip
         WriteDigits(destination, at + length, digits);
         destination.Slice(at + length, scale - length).Fill((byte)'0');
         return at + scale;
+    }
+
+    private static int Whole(long value, Span<byte> destination)
+    {
+        int at = 0;
+        if (value < 0)
+        {
+            destination[at++] = (byte)'-';
+            value = -value;
+        }
+
+        int length = DecimalLength((ulong)value);
+        WriteDigits(destination, at + length, (ulong)value);
+        return at + length;
     }
 
     /// <summary><c>d.dddE+XX</c>: at least two exponent digits, its sign always written.</summary>
@@ -284,10 +307,11 @@ public static class ShortestRoundTrip
         return count;
     }
 
+    /// <summary>Digits of <paramref name="value"/>; 1 for 0.</summary>
     private static int DecimalLength(ulong value)
     {
         int estimate = ((64 - BitOperations.LeadingZeroCount(value | 1)) * 1233) >> 12;
-        return estimate + (value >= PowersOf10[estimate] ? 1 : 0);
+        return estimate + ((value | 1) >= PowersOf10[estimate] ? 1 : 0);
     }
 
     /// <summary>Writes the decimal digits of <paramref name="value"/> so that the last lands just before <paramref name="end"/>.</summary>

@@ -26,6 +26,9 @@ public class ShortestRoundTripTests
     [InlineData(double.MaxValue, "1.7976931348623157E+308")]
     [InlineData(double.Epsilon, "5E-324")]
     [InlineData(0.0, "0")]
+    [InlineData(1.0, "1")]
+    [InlineData(-42.0, "-42")]
+    [InlineData(1e15, "1000000000000000")]
     [InlineData(-0.0, "-0")]
     [InlineData(2.9802322387695312e-8, "2.980232238769531E-08")]
     public void Known_values_are_written_as_the_runtime_writes_them(double value, string expected)
@@ -48,6 +51,8 @@ public class ShortestRoundTripTests
             Check(BitConverter.Int64BitsToDouble(random.NextInt64()), different);
             Check(random.NextDouble() * Math.Pow(10, random.Next(-9, 13)), different);
             Check(-random.Next(1, 1_000_000) / 64.0, different);
+            Check(random.NextInt64(-1_000_000_000_000_001, 1_000_000_000_000_001), different);
+            Check(random.Next(0, 1000), different);
         }
 
         for (int e = -324; e <= 308; e++)
