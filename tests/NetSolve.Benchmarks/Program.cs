@@ -25,6 +25,12 @@ if (args is ["read-file", var networkPath, .. var readRuns])
     return;
 }
 
+if (args is ["solve-stages", var solvePath, .. var solveRuns])
+{
+    SolveStagesMeasurement.Run(Console.Out, solvePath, solveRuns.Length == 0 ? 5 : int.Parse(solveRuns[0], System.Globalization.CultureInfo.InvariantCulture));
+    return;
+}
+
 if (args is ["time-varying", .. var counts])
 {
     TimeVaryingMeasurement.Run(Console.Out, counts.Length == 0 ? [100, 1000] : [.. counts.Select(int.Parse)]);

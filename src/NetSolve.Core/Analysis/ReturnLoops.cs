@@ -34,21 +34,7 @@ public static class ReturnLoops
     public static ImmutableArray<ReturnLoop> Find(Network network)
     {
         ArgumentNullException.ThrowIfNull(network);
-        var index = network.BuildIndex();
-        int n = network.Units.Length;
-        var next = new List<(int To, double Probability)>[n];
-        for (int i = 0; i < n; i++)
-        {
-            next[i] = [];
-        }
-
-        foreach (var route in network.Routes)
-        {
-            if (route.Probability > 0.0 && index.TryGetValue(route.From, out int from) && index.TryGetValue(route.To, out int to))
-            {
-                next[from].Add((to, route.Probability));
-            }
-        }
+        var next = PositiveRoutes(RoutingTable.Build(network));
 
         var loops = ImmutableArray.CreateBuilder<ReturnLoop>();
         foreach (var component in StronglyConnected.Components(next))
@@ -80,6 +66,33 @@ public static class ReturnLoops
         }
 
         return loops.ToImmutable();
+    }
+
+    /// <summary>
+    /// The positive routes out of each unit, in the file's order: read from the routing table the rules already built
+    /// for this network (no look-up of unit names, each list made at its final size).
+    /// </summary>
+    private static List<(int To, double Probability)>[] PositiveRoutes(RoutingTable routing)
+    {
+        int n = routing.UnitCount;
+        var next = new List<(int To, double Probability)>[n];
+        for (int from = 0; from < n; from++)
+        {
+            int start = routing.Offsets[from];
+            int end = routing.Offsets[from + 1];
+            var routes = new List<(int To, double Probability)>(end - start);
+            for (int e = start; e < end; e++)
+            {
+                if (routing.Probabilities[e] > 0.0)
+                {
+                    routes.Add((routing.Targets[e], routing.Probabilities[e]));
+                }
+            }
+
+            next[from] = routes;
+        }
+
+        return next;
     }
 
     /// <summary>The findings of <see cref="Find"/> as warnings located at <paramref name="fileName"/>.</summary>

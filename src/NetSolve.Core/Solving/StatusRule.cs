@@ -28,7 +28,9 @@ public static class StatusRule
         var builder = ImmutableArray.CreateBuilder<UnitResult>(units.Count);
         foreach (var unit in units)
         {
-            var ranked = unit with { Status = StatusOf(unit, smallest, strainThreshold) };
+            // Most units keep the status the formulas gave (ok or unstable): no copy of the result to say so again.
+            var status = StatusOf(unit, smallest, strainThreshold);
+            var ranked = status == unit.Status ? unit : unit with { Status = status };
             var breached = TargetCheck.Breached(ranked);
 
             // Most units have no targets: no second copy of a 200-byte result to say so (100,000 of them at a time).

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.LinearAlgebra.Double;
 using MathNet.Numerics.LinearAlgebra.Double.Solvers;
@@ -78,30 +79,79 @@ public static class TrafficEquations
     }
 
     /// <summary>Gauss–Seidel in upstream-first order; null when it has not converged within <see cref="MaxIterations"/> sweeps.</summary>
+    /// <remarks>
+    /// The units are renumbered in sweep order once, so each sweep reads the routes into a unit, its external arrivals
+    /// and its flow from arrays walked front to back. Every flow is summed from the same terms in the same order as
+    /// over the file's numbering (routes in by the unit they leave, then the file's order), so the flows are the same
+    /// to the last bit.
+    /// </remarks>
     private static double[]? Sweep(RoutingTable routing, bool[] reached)
     {
         int n = routing.UnitCount;
-        var incomingStart = new int[n + 1];
-        for (int from = 0; from < n; from++)
+        int[] order = ComponentOrder.Upstream(routing, reached);
+        var place = new int[n];
+        for (int k = 0; k < order.Length; k++)
         {
-            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
+            place[order[k]] = k;
+        }
+
+        var (incomingStart, incoming, selfRoute) = IncomingInSweepOrder(routing, reached, order, place);
+        var external = new double[order.Length];
+        for (int k = 0; k < order.Length; k++)
+        {
+            external[k] = routing.ExternalPerHour[order[k]];
+        }
+
+        var swept = new double[order.Length];
+        for (int sweep = 0; sweep < MaxIterations; sweep++)
+        {
+            if (SweepOnce(incomingStart, incoming, selfRoute, external, swept))
             {
-                if (reached[from] && routing.Probabilities[e] > 0.0)
+                var flows = new double[n];
+                for (int k = 0; k < order.Length; k++)
                 {
-                    incomingStart[routing.Targets[e] + 1]++;
+                    flows[order[k]] = swept[k];
                 }
+
+                return flows;
             }
         }
 
-        for (int i = 0; i < n; i++)
+        return null;
+    }
+
+    /// <summary>One Gauss–Seidel sweep over the units in sweep order; true when no flow changed by more than <see cref="SweepTolerance"/>.</summary>
+    private static bool SweepOnce(int[] incomingStart, IncomingRoute[] incoming, double[] selfRoute, double[] external, double[] flows)
+    {
+        double largestChange = 0.0;
+        double largestFlow = 0.0;
+        for (int unit = 0; unit < flows.Length; unit++)
         {
-            incomingStart[i + 1] += incomingStart[i];
+            double inflow = external[unit];
+            for (int k = incomingStart[unit]; k < incomingStart[unit + 1]; k++)
+            {
+                inflow += incoming[k].Probability * flows[incoming[k].Source];
+            }
+
+            double updated = inflow / (1.0 - selfRoute[unit]);
+            largestChange = Math.Max(largestChange, Math.Abs(updated - flows[unit]));
+            largestFlow = Math.Max(largestFlow, updated);
+            flows[unit] = updated;
         }
 
-        var fill = (int[])incomingStart.Clone();
-        var sources = new int[incomingStart[n]];
-        var weights = new double[incomingStart[n]];
-        var selfRoute = new double[n];
+        return largestChange <= SweepTolerance * Math.Max(1.0, largestFlow);
+    }
+
+    /// <summary>
+    /// The positive routes between reached units by the sweep position of the unit they enter (self-routes apart), each
+    /// unit's in the order of the unit they leave, then of the routing table.
+    /// </summary>
+    private static (int[] Start, IncomingRoute[] Routes, double[] SelfRoute) IncomingInSweepOrder(
+        RoutingTable routing, bool[] reached, int[] order, int[] place)
+    {
+        int n = routing.UnitCount;
+        var start = new int[order.Length + 1];
+        var selfRoute = new double[order.Length];
         for (int from = 0; from < n; from++)
         {
             for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
@@ -115,46 +165,41 @@ public static class TrafficEquations
 
                 if (to == from)
                 {
-                    selfRoute[from] += p;
+                    selfRoute[place[from]] += p;
                 }
                 else
                 {
-                    int slot = fill[to]++;
-                    sources[slot] = from;
-                    weights[slot] = p;
+                    start[place[to] + 1]++;
                 }
             }
         }
 
-        int[] order = ComponentOrder.Upstream(routing, reached);
-        var external = routing.ExternalPerHour.ToArray();
-        var flows = new double[n];
-        for (int sweep = 0; sweep < MaxIterations; sweep++)
+        for (int k = 0; k < order.Length; k++)
         {
-            double largestChange = 0.0;
-            double largestFlow = 0.0;
-            foreach (int unit in order)
+            start[k + 1] += start[k];
+        }
+
+        var fill = (int[])start.Clone();
+        var routes = new IncomingRoute[start[order.Length]];
+        for (int from = 0; from < n; from++)
+        {
+            for (int e = routing.Offsets[from]; e < routing.Offsets[from + 1]; e++)
             {
-                double inflow = external[unit];
-                for (int k = incomingStart[unit]; k < incomingStart[unit + 1]; k++)
+                int to = routing.Targets[e];
+                double p = routing.Probabilities[e];
+                if (reached[from] && p > 0.0 && to != from)
                 {
-                    inflow += weights[k] * flows[sources[k]];
+                    routes[fill[place[to]]++] = new IncomingRoute(place[from], p);
                 }
-
-                double updated = inflow / (1.0 - selfRoute[unit]);
-                largestChange = Math.Max(largestChange, Math.Abs(updated - flows[unit]));
-                largestFlow = Math.Max(largestFlow, updated);
-                flows[unit] = updated;
-            }
-
-            if (largestChange <= SweepTolerance * Math.Max(1.0, largestFlow))
-            {
-                return flows;
             }
         }
 
-        return null;
+        return (start, routes, selfRoute);
     }
+
+    /// <summary>A route into a unit: the sweep position of the unit it leaves and its fraction.</summary>
+    [StructLayout(LayoutKind.Sequential)]
+    private readonly record struct IncomingRoute(int Source, double Probability);
 
     private static Vector<double> SolveDense(RoutingTable routing, List<int> members, int[] position, Vector<double> external)
     {

@@ -57,7 +57,9 @@ public static class UnitMetrics
         }
 
         int servers = unit.Servers.Count;
-        var estimate = GgcFormulas.Estimate(servers, arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv, unit.EffectiveService);
+        // The service's shape matters only for a service more variable than exponential; otherwise no distribution is made.
+        var shape = serviceScv > 1.0 ? unit.EffectiveService : null;
+        var estimate = GgcFormulas.Estimate(servers, arrivalsPerHour, meanServiceHours, arrivalScv, serviceScv, shape);
         return new UnitResult
         {
             Unit = unit,
