@@ -1,5 +1,4 @@
 using System.Globalization;
-using NetSolve.Parsing;
 using NetSolve.Rendering.Map;
 using NetSolve.Solving;
 using static NetSolve.Benchmarks.InProcessTiming;
@@ -22,8 +21,7 @@ internal static class MapLayoutMeasurement
         output.WriteLine("units  lines  layers  layout cpu ms  layout wall ms  of it layering cpu ms  svg cpu ms  svg wall ms  map area / boxes' area");
         foreach (string path in paths)
         {
-            var network = NetworkReader.ReadFile(path).Network
-                ?? throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture, $"{path} is not a valid network file"));
+            var network = NetworkFile.Read(path);
             var solution = NetworkSolver.Solve(network);
             var layout = MapLayoutBuilder.Build(solution);
             _ = SvgMapWriter.WriteString(layout);

@@ -1,5 +1,4 @@
 using System.Globalization;
-using NetSolve.Parsing;
 using NetSolve.Rendering.Map;
 using NetSolve.Solving;
 using SkiaSharp;
@@ -25,8 +24,7 @@ internal static class MapPngMeasurement
         output.WriteLine("units  pixels       stage                      cpu ms   wall ms       bytes");
         foreach (string path in paths)
         {
-            var network = NetworkReader.ReadFile(path).Network
-                ?? throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture, $"{path} is not a valid network file"));
+            var network = NetworkFile.Read(path);
             var solution = NetworkSolver.Solve(network);
             var layout = MapLayoutBuilder.Build(solution);
             string svg = SvgMapWriter.WriteString(layout);

@@ -1,6 +1,5 @@
 using System.Diagnostics;
 using System.Globalization;
-using NetSolve.Parsing;
 using NetSolve.Presentation.Simulation;
 using NetSolve.Simulation;
 
@@ -31,7 +30,7 @@ internal static class SimulationMemoryStages
             cpu = cpuNow;
         }
 
-        var network = NetworkReader.ReadFile(path).Network ?? throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture, $"{path} is not a valid network file"));
+        var network = NetworkFile.Read(path);
         Stage("read");
         var options = new SimulationOptions { Replications = 1, WarmupHours = 0.0, DurationHours = hours, MaxDegreeOfParallelism = 1 };
         var compiled = CompiledNetwork.Compile(network);
