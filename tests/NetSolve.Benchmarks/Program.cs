@@ -31,6 +31,12 @@ if (args is ["solve-stages", var solvePath, .. var solveRuns])
     return;
 }
 
+if (args is ["solve-memory", var memoryPath, .. var memoryFormat])
+{
+    SolveMemoryStages.Run(Console.Out, memoryPath, memoryFormat.Length == 0 ? "json" : memoryFormat[0]);
+    return;
+}
+
 if (args is ["time-varying", .. var counts])
 {
     TimeVaryingMeasurement.Run(Console.Out, counts.Length == 0 ? [100, 1000] : [.. counts.Select(int.Parse)]);
