@@ -1,3 +1,4 @@
+using NetSolve.Model;
 using NetSolve.Presentation.Metrics;
 
 namespace NetSolve.Presentation.Formats;
@@ -21,7 +22,26 @@ public static class CsvTableWriter
         output.Write(Header(table) + "\n");
         foreach (var row in table.Rows)
         {
-            output.Write(string.Join(',', shown.Select(i => MachineFormat.CsvCell(row[i], table.TimeUnit))) + "\n");
+            WriteRow(row, shown, table.TimeUnit, output);
         }
+    }
+
+    /// <summary>One row as <see cref="Write"/> writes it: the cells at <paramref name="shown"/>, comma-separated, then a line feed.</summary>
+    public static void WriteRow(IReadOnlyList<Cell> row, IReadOnlyList<int> shown, TimeUnit timeUnit, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(row);
+        ArgumentNullException.ThrowIfNull(shown);
+        ArgumentNullException.ThrowIfNull(output);
+        for (int i = 0; i < shown.Count; i++)
+        {
+            if (i > 0)
+            {
+                output.Write(',');
+            }
+
+            output.Write(MachineFormat.CsvCell(row[shown[i]], timeUnit));
+        }
+
+        output.Write('\n');
     }
 }

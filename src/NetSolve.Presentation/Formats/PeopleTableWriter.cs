@@ -27,4 +27,41 @@ public static class PeopleTableWriter
 
         text.Write(output);
     }
+
+    /// <summary>
+    /// As <see cref="Write(ResultTable, TextWriter)"/> for a <see cref="ResultTable.Build"/> of these columns and rows,
+    /// byte for byte, without holding every row's cells: each cell is formatted as it is read and only its text is
+    /// kept (a column is left-aligned once one of its cells is text, as the table's <see cref="ResultColumn.IsText"/>).
+    /// </summary>
+    public static void Write<TRow>(IReadOnlyList<Column<TRow>> columns, IEnumerable<TRow> rows, TimeUnit timeUnit, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(columns);
+        ArgumentNullException.ThrowIfNull(rows);
+        ArgumentNullException.ThrowIfNull(output);
+        var shown = columns.Where(column => ResultTable.Shows(column.Audience, Audience.People)).ToArray();
+        var text = new TextTable([.. shown.Select(column => ">" + Header(new ResultColumn(column.Id, column.Header, column.Dimension, IsText: false, column.Audience), timeUnit))]);
+        var isText = new bool[shown.Length];
+        var cells = new string[shown.Length];
+        foreach (var row in rows)
+        {
+            for (int i = 0; i < shown.Length; i++)
+            {
+                var cell = shown[i].Read(row);
+                isText[i] |= cell.IsText;
+                cells[i] = PeopleFormat.Cell(cell, timeUnit);
+            }
+
+            text.Add(cells);
+        }
+
+        for (int i = 0; i < shown.Length; i++)
+        {
+            if (isText[i])
+            {
+                text.AlignLeft(i);
+            }
+        }
+
+        text.Write(output);
+    }
 }

@@ -38,8 +38,8 @@ public static class JourneyCsvRows
 
         var figures = ResultTable.Build(columns, journeys, units.TimeUnit);
         var kind = new ResultColumn(KindId, KindId, MetricDimension.Plain, IsText: true, Audience.Machines);
-        var empties = figures.Columns.Select(_ => Empty).ToImmutableArray();
-        var unitRows = units.Rows.Select(row => row.Add(Cell.Word("unit")).AddRange(empties));
+        var tail = UnitRowTail(figures.Columns.Length + 1);
+        var unitRows = units.Rows.Select(row => row.AddRange(tail));
         var journeyRows = journeys.Select((journey, r) => units.Columns
             .Select(column => column.Id switch
             {
@@ -52,6 +52,13 @@ public static class JourneyCsvRows
             .ToImmutableArray());
         return new ResultTable(units.Columns.Add(kind).AddRange(figures.Columns), [.. unitRows, .. journeyRows], units.TimeUnit);
     }
+
+    /// <summary>
+    /// The cells <see cref="Append"/> puts after a unit's own, given how many columns it adds (0 without journeys):
+    /// none, or the kind <c>unit</c> and an empty cell under each journey figure.
+    /// </summary>
+    public static ImmutableArray<Cell> UnitRowTail(int addedColumns) =>
+        addedColumns == 0 ? [] : [Cell.Word("unit"), .. Enumerable.Repeat(Empty, addedColumns - 1)];
 
     /// <summary>The same column under the journey prefix, for programs only (<c>mean_time</c> becomes <c>journey_mean_time</c>).</summary>
     public static Column<TJourney> Prefixed<TJourney>(Column<TJourney> column)

@@ -17,7 +17,7 @@ public static class SolutionTableWriter
         ArgumentNullException.ThrowIfNull(output);
         string average = !ByHourTableWriter.HasSection(solution) ? string.Empty : "; steady state at the daily average arrivals, by hour below";
         output.Write($"{solution.Network.Name}  ({Title(solution.Network.TimeUnit, solution.StrainThreshold)}{average})\n\n");
-        PeopleTableWriter.Write(UnitColumns.Table(solution), output);
+        PeopleTableWriter.Write(UnitColumns.For(solution), solution.Units, solution.Network.TimeUnit, output);
         if (!solution.Groups.IsEmpty)
         {
             output.Write("\nPatient groups\n");
