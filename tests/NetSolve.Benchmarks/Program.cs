@@ -33,7 +33,7 @@ if (args is ["solve-stages", var solvePath, .. var solveRuns])
 
 if (args is ["solve-memory", var memoryPath, .. var memoryFormat])
 {
-    SolveMemoryStages.Run(Console.Out, memoryPath, memoryFormat.Length == 0 ? "json" : memoryFormat[0]);
+    SolveMemoryStages.Run(Console.Out, memoryPath, memoryFormat.Length == 0 ? "json" : memoryFormat[0], memoryFormat.Contains("live"));
     return;
 }
 

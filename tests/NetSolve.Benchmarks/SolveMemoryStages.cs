@@ -7,20 +7,25 @@ using NetSolve.Solving;
 namespace NetSolve.Benchmarks;
 
 /// <summary>
-/// <c>dotnet artifacts/bin/NetSolve.Benchmarks/release/NetSolve.Benchmarks.dll solve-memory NET.yaml [json|csv|table]</c>:
+/// <c>dotnet artifacts/bin/NetSolve.Benchmarks/release/NetSolve.Benchmarks.dll solve-memory NET.yaml [json|csv|table] [live]</c>:
 /// the memory of each stage of <c>solve NET.yaml --format F</c>, in the order the command runs them (the text, the YAML
 /// tree, the network rules, the solution, the two warnings, the document written to nowhere). For each stage: the bytes
-/// it allocates, the highest resident set while it runs (the kernel's peak, reset before the stage through
-/// /proc/self/clear_refs), the managed heap at its end before any collection (live and garbage), and the bytes still
-/// live after a full collection at its end (what the next stage starts from). Run it with the settings the command
-/// carries (<c>DOTNET_GCConserveMemory=7 DOTNET_gcConcurrent=0</c>) to see what the command sees.
+/// it allocates, the collections of each generation while it runs and the time the program stood paused for them, the
+/// highest resident set while it runs (the kernel's peak, reset before the stage through /proc/self/clear_refs), the
+/// managed heap at its end (live and garbage) and what the last collection left in each generation. With <c>live</c>,
+/// also the bytes still live after a full collection at the end of each stage (a collection the command does not make,
+/// so the stages after it see a different heap). Run it with the settings the command carries
+/// (<c>DOTNET_GCConserveMemory=7 DOTNET_gcConcurrent=0</c>) to see what the command sees, just-in-time compiled.
 /// </summary>
 internal static class SolveMemoryStages
 {
-    public static void Run(TextWriter output, string path, string format)
+    private static bool _measureLive;
+
+    public static void Run(TextWriter output, string path, string format, bool measureLive)
     {
+        _measureLive = measureLive;
         output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"{path}, --format {format}; gen0 budget {Budget(0) / 1e6:F1} MB at start; columns: allocated, peak resident while running, heap at the end (before collecting), live after a full collection"));
+            $"{path}, --format {format}; gen0 budget {Budget(0) / 1e6:F1} MB at start; columns: allocated, collections of gen0/1/2 while running, peak resident while running, heap at the end (before collecting), live after a full collection"));
         string? text = null;
         YamlNode? root = null;
         ReadResult? read = null;
@@ -65,15 +70,20 @@ internal static class SolveMemoryStages
     {
         ResetPeak();
         long before = GC.GetTotalAllocatedBytes(precise: true);
+        int[] collections = [GC.CollectionCount(0), GC.CollectionCount(1), GC.CollectionCount(2)];
+        var paused = GC.GetTotalPauseDuration();
         var result = stage();
+        paused = GC.GetTotalPauseDuration() - paused;
+        string counts = string.Create(CultureInfo.InvariantCulture,
+            $"{GC.CollectionCount(0) - collections[0]}/{GC.CollectionCount(1) - collections[1]}/{GC.CollectionCount(2) - collections[2]}");
         long allocated = GC.GetTotalAllocatedBytes(precise: true) - before;
         long peakKb = PeakResidentKb();
         long heap = GC.GetTotalMemory(forceFullCollection: false);
         var generations = GC.GetGCMemoryInfo(GCKind.Any).GenerationInfo;
-        long live = GC.GetTotalMemory(forceFullCollection: true);
+        long live = _measureLive ? GC.GetTotalMemory(forceFullCollection: true) : 0;
         GC.KeepAlive(result);
         output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"{name,-24} allocated {allocated / 1e6,7:F1} MB  peak resident {peakKb / 1e3,6:F1} MB  heap {heap / 1e6,6:F1} MB  live {live / 1e6,6:F1} MB  (last collection before: gen0 {generations[0].SizeAfterBytes / 1e6:F1}, gen1 {generations[1].SizeAfterBytes / 1e6:F1}, gen2 {generations[2].SizeAfterBytes / 1e6:F1}, large {generations[3].SizeAfterBytes / 1e6:F1} MB; gen0 budget {Budget(0) / 1e6:F1} MB)"));
+            $"{name,-24} allocated {allocated / 1e6,7:F1} MB  collections {counts,-8} ({paused.TotalMilliseconds,4:F0} ms paused)  peak resident {peakKb / 1e3,6:F1} MB  heap {heap / 1e6,6:F1} MB  {(_measureLive ? string.Create(CultureInfo.InvariantCulture, $"live {live / 1e6,6:F1} MB") : "")}  (last collection before: gen0 {generations[0].SizeAfterBytes / 1e6:F1}, gen1 {generations[1].SizeAfterBytes / 1e6:F1}, gen2 {generations[2].SizeAfterBytes / 1e6:F1}, large {generations[3].SizeAfterBytes / 1e6:F1} MB; gen0 budget {Budget(0) / 1e6:F1} MB)"));
     }
 
     /// <summary>The collector's allocation budget of a generation (an internal of the runtime, read for this measurement only; 0 when absent).</summary>
