@@ -1,3 +1,4 @@
+using System.Globalization;
 using NetSolve.Model;
 using NetSolve.Presentation.Metrics;
 
@@ -6,6 +7,9 @@ namespace NetSolve.Presentation.Formats;
 /// <summary>Writes a <see cref="ResultTable"/> as CSV: the contract's ids as header, one row per result row.</summary>
 public static class CsvTableWriter
 {
+    /// <summary>Room for any double's round-trip text ("-1.7976931348623157E+308" is 24 characters).</summary>
+    private const int RoundTripLength = 32;
+
     /// <summary>The header row of the columns meant for programs.</summary>
     public static string Header(ResultTable table)
     {
@@ -39,9 +43,28 @@ public static class CsvTableWriter
                 output.Write(',');
             }
 
-            output.Write(MachineFormat.CsvCell(row[shown[i]], timeUnit));
+            WriteCell(row[shown[i]], timeUnit, output);
         }
 
         output.Write('\n');
+    }
+
+    /// <summary>
+    /// <see cref="MachineFormat.CsvCell"/> written straight to <paramref name="output"/>: a number is formatted into a
+    /// buffer on the stack (the same round-trip text) rather than into a string per cell.
+    /// </summary>
+    private static void WriteCell(Cell cell, TimeUnit timeUnit, TextWriter output)
+    {
+        if (cell.Text is null && MachineFormat.Value(cell, timeUnit) is double number)
+        {
+            Span<char> digits = stackalloc char[RoundTripLength];
+            if (number.TryFormat(digits, out int written, "R", CultureInfo.InvariantCulture))
+            {
+                output.Write(digits[..written]);
+                return;
+            }
+        }
+
+        output.Write(MachineFormat.CsvCell(cell, timeUnit));
     }
 }

@@ -6,12 +6,14 @@
 #
 # BEFORE, AFTER: the two programs (for example a copy of main's artifacts/launcher/netsolve and this worktree's).
 # FILE: the network (default $WORK/net_100000.yaml). WORK and PERF as in measure.sh.
+# FORMAT (environment): the output format, json (default), csv or table (what `solve FILE` prints without --format).
 set -euo pipefail
 root="$(cd "$(dirname "$(readlink -f "${BASH_SOURCE[0]}")")/../../.." && pwd)"
 before="$1"; after="$2"; runs="${3:-7}"
 perf="${PERF:-$root/../shared/perf}"
 work="${WORK:-/tmp/netsolve-whole-process}"
 file="${4:-$work/net_100000.yaml}"
+format="${FORMAT:-json}"
 mkdir -p "$work"
 [ -x "$work/yaml_scan" ] || gcc -O2 -o "$work/yaml_scan" "$perf/yaml_scan.c" -lyaml
 [ -f "$file" ] || { echo "compare: no file $file (measure.sh generates the networks)" >&2; exit 2; }
@@ -27,14 +29,14 @@ run_once() {
 
 echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg)" >&2
 for ((i = 0; i < runs; i++)); do
-  run_once before "$before" solve "$file" --format json
-  run_once after "$after" solve "$file" --format json
+  run_once before "$before" solve "$file" --format "$format"
+  run_once after "$after" solve "$file" --format "$format"
   run_once scan "$work/yaml_scan" "$file" 1
 done > "$work/compare.txt"
 echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)" >&2
 
 median() { sort -n | awk '{ v[NR] = $1 } END { print (NR % 2) ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2 }'; }
-echo "| \`solve $(basename "$file") --format json\` | wall (median of $runs) | CPU user+sys (median) | peak (highest) |"
+echo "| \`solve $(basename "$file") --format $format\` | wall (median of $runs) | CPU user+sys (median) | peak (highest) |"
 echo "|---|---:|---:|---:|"
 for name in before after scan; do
   rows=$(grep "^$name " "$work/compare.txt")
