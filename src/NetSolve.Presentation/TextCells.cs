@@ -3,8 +3,9 @@ namespace NetSolve.Presentation;
 /// <summary>
 /// The cells of a <see cref="TextTable"/>, kept as characters in blocks of 64 KB instead of one string each: a table
 /// of 100,000 units holds about 1.3 million cells, which as strings cost about 40 bytes each besides their characters
-/// (and a string array per row); here a cell costs its characters and one length. Blocks stay under the large-object
-/// threshold, so they are collected young when the table goes.
+/// (and a string array per row); here a cell costs its characters and one length. Blocks of characters and of lengths
+/// stay under the large-object threshold (a growing list of 1.3 million lengths would be copied into ever larger
+/// arrays there, each one able to start a full collection).
 /// </summary>
 /// <remarks>Mutable builder; not thread-safe. Cells are read back in the order they were added.</remarks>
 internal sealed class TextCells
@@ -12,9 +13,13 @@ internal sealed class TextCells
     /// <summary>Characters per block (64 KB; a longer cell gets a block of its own length).</summary>
     private const int BlockLength = 1 << 15;
 
+    /// <summary>Lengths per block of lengths (64 KB).</summary>
+    private const int LengthsPerBlock = 1 << 14;
+
     private readonly List<char[]> _blocks = [];
-    private readonly List<int> _lengths = [];
+    private readonly List<int[]> _lengths = [];
     private int _used;
+    private int _count;
 
     /// <summary>Appends a cell.</summary>
     public void Add(ReadOnlySpan<char> cell)
@@ -27,7 +32,13 @@ internal sealed class TextCells
 
         cell.CopyTo(_blocks[^1].AsSpan(_used));
         _used += cell.Length;
-        _lengths.Add(cell.Length);
+        if (_count % LengthsPerBlock == 0)
+        {
+            _lengths.Add(new int[LengthsPerBlock]);
+        }
+
+        _lengths[^1][_count % LengthsPerBlock] = cell.Length;
+        _count++;
     }
 
     /// <summary>A reader of the cells from the first, in the order they were added.</summary>
@@ -43,7 +54,8 @@ internal sealed class TextCells
         /// <summary>The next cell's characters, valid until the table changes.</summary>
         public ReadOnlySpan<char> Next()
         {
-            int length = cells._lengths[_cell++];
+            int length = cells._lengths[_cell / LengthsPerBlock][_cell % LengthsPerBlock];
+            _cell++;
             if (_block < 0 || length > cells._blocks[_block].Length - _position)
             {
                 _block++;
