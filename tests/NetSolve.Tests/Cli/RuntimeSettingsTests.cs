@@ -16,7 +16,7 @@ public sealed class RuntimeSettingsTests
         return document.RootElement.GetProperty("runtimeOptions").GetProperty("configProperties").Clone();
     }
 
-    // Measured (docs/performance.md): at level 7 the 100,000-unit solve peaks at 184-191 MB whatever the first
+    // Measured (docs/performance.md): at level 7 the 100,000-unit JSON solve peaks at 184-191 MB whatever the first
     // generation's budget (4 to 96 MB, standing in for processor caches of any size); at level 3 at 226 MB, at 0 at
     // 298-348 MB, over the 300 MB goal; fit on 10 million rows at 893 MB against 1,315 MB at level 0 (goal 1 GB).
     [Fact]
