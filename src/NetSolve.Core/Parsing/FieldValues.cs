@@ -1,5 +1,3 @@
-using System.Diagnostics.CodeAnalysis;
-
 namespace NetSolve.Parsing;
 
 /// <summary>
@@ -15,20 +13,19 @@ namespace NetSolve.Parsing;
 /// <param name="Count">How many different known keys the mapping holds.</param>
 internal readonly record struct FieldValues(YamlMapping Mapping, string[] KnownKeys, int Count)
 {
-    public bool TryGetValue(string key, [MaybeNullWhen(false)] out YamlNode value)
+    public bool TryGetValue(string key, out YamlNode value)
     {
-        value = null;
+        value = default;
         if (Array.IndexOf(KnownKeys, key) < 0)
         {
             return false;
         }
 
-        var entries = Mapping.Entries;
-        for (int i = 0; i < entries.Count; i++)
+        foreach (var (entryKey, entryValue) in Mapping.Entries)
         {
-            if (string.Equals(entries[i].Key.Value, key, StringComparison.Ordinal))
+            if (entryKey.Is(key))
             {
-                value = entries[i].Value;
+                value = entryValue;
                 return true;
             }
         }

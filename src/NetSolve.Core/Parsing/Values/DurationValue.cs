@@ -18,7 +18,7 @@ public static class DurationValue
     public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
     {
         ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, string.Empty, out var number, out string suffix) || !NumberText.IsTimeSuffix(suffix)
+        if (!NumberText.Split(text, string.Empty, out var number, out var suffix) || !NumberText.IsTimeSuffix(suffix)
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid(

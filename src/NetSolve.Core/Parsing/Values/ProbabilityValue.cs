@@ -11,13 +11,13 @@ public static class ProbabilityValue
     public static ValueResult<double> Parse(string text)
     {
         ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, string.Empty, out var number, out string suffix) || suffix is not ("" or "%")
+        if (!NumberText.Split(text, string.Empty, out var number, out var suffix) || suffix is not ("" or "%")
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid($"'{text}' is not a probability (write e.g. 0.35 or 35%)");
         }
 
-        double probability = suffix == "%" ? amount / 100.0 : amount;
+        double probability = suffix is "%" ? amount / 100.0 : amount;
         if (probability is < 0.0 or > 1.0)
         {
             return ValueResult<double>.Invalid($"'{text}' is not between 0 and 1");

@@ -16,7 +16,7 @@ public static class RateValue
     public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
     {
         ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, "/", out var number, out string suffix) || !NumberText.IsTimeSuffix(suffix)
+        if (!NumberText.Split(text, "/", out var number, out var suffix) || !NumberText.IsTimeSuffix(suffix)
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid(
