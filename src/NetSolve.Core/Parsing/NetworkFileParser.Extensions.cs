@@ -94,8 +94,16 @@ internal sealed partial class NetworkFileParser
         return new ParsedService(m, c, distribution, keyLocation);
     }
 
+    /// <summary>One rate parser per time unit, made once: a lambda over the time unit would be a closure per arrivals mapping.</summary>
+    private static Func<ReadOnlySpan<char>, ValueResult<double>> RateParser(TimeUnit timeUnit) => timeUnit switch
+    {
+        TimeUnit.Minute => static text => RateValue.Parse(text, TimeUnit.Minute),
+        TimeUnit.Day => static text => RateValue.Parse(text, TimeUnit.Day),
+        _ => static text => RateValue.Parse(text, TimeUnit.Hour),
+    };
+
     /// <summary>One duration parser per time unit, made once: a lambda over the time unit here would be a closure per unit.</summary>
-    private static Func<string, ValueResult<double>> DurationParser(TimeUnit timeUnit) => timeUnit switch
+    private static Func<ReadOnlySpan<char>, ValueResult<double>> DurationParser(TimeUnit timeUnit) => timeUnit switch
     {
         TimeUnit.Minute => static text => DurationValue.Parse(text, TimeUnit.Minute),
         TimeUnit.Day => static text => DurationValue.Parse(text, TimeUnit.Day),

@@ -167,14 +167,14 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             arrivals.Capacity = mapping.Entries.Count;
             foreach (var (key, value) in UniqueEntries(mapping, null))
             {
-                if (!KnownUnit(key, known, "arrivals"))
+                if (KnownId(key, known, "arrivals") is not string id)
                 {
                     continue;
                 }
 
-                if (Value(value, key.Value, FieldLabels.ArrivalRate, text => RateValue.Parse(text, timeUnit)) is double rate)
+                if (Value(value, id, FieldLabels.ArrivalRate, RateParser(timeUnit)) is double rate)
                 {
-                    arrivals.Add(new Arrival(key.Value, rate));
+                    arrivals.Add(new Arrival(id, rate));
                 }
             }
         }
@@ -206,8 +206,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         _routeLocations.EnsureCapacity(mapping.Entries.Count);
         foreach (var (sourceKey, targets) in UniqueEntries(mapping, null))
         {
-            string from = sourceKey.Value;
-            if (!KnownUnit(sourceKey, known, where))
+            if (KnownId(sourceKey, known, where) is not string from)
             {
                 continue;
             }
@@ -222,10 +221,10 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             foreach (var (targetKey, value) in UniqueEntries(targetMap, from))
             {
                 // The names in messages are built only on error: a 100,000-unit file has hundreds of thousands of routes.
-                if (KnownUnit(targetKey, known, where, groupId is null ? from : null, from)
-                    && Value(value, from, FieldLabels.RouteTo, ProbabilityValue.Parse, targetKey.Value) is double probability)
+                if (KnownId(targetKey, known, where, groupId is null ? from : null, from) is string to
+                    && Value(value, from, FieldLabels.RouteTo, ProbabilityValue.Parse, to) is double probability)
                 {
-                    routes.Add(new Route(from, targetKey.Value, probability));
+                    routes.Add(new Route(from, to, probability));
                     total += probability;
                 }
             }
@@ -253,7 +252,23 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
     }
 
     private bool KnownUnit(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null) =>
+        KnownId(key, known, where, unitId, whereUnit) is not null;
+
+    /// <summary>
+    /// The id of the unit <paramref name="key"/> names, as the unit's own string (looked up by the key's text, so no
+    /// string is made per route or arrival); null after reporting an unknown unit.
+    /// </summary>
+    private string? KnownId(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
+    {
+        if (known.GetAlternateLookup<ReadOnlySpan<char>>().TryGetValue(key.Text, out string? id)
+            || _unitLocations.GetAlternateLookup<ReadOnlySpan<char>>().TryGetValue(key.Text, out id, out _))
+        {
+            return id;
+        }
+
         KnownUnit(key.Location, key.Value, known, where, unitId, whereUnit);
+        return null;
+    }
 
     private bool KnownUnit(SourceLocation location, string id, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
     {

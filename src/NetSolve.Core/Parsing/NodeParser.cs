@@ -127,7 +127,7 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     /// message for the field <c>label 'labelUnit'</c> (<see cref="FieldLabels.For"/>) and returns null.
     /// </summary>
     /// <remarks>The field name is built only on a mistake: a 100,000-unit file has hundreds of thousands of routes.</remarks>
-    protected T? Value<T>(YamlNode node, string? unitId, string label, Func<string, ValueResult<T>> parse, string? labelUnit = null)
+    protected T? Value<T>(YamlNode node, string? unitId, string label, Func<ReadOnlySpan<char>, ValueResult<T>> parse, string? labelUnit = null)
         where T : struct
     {
         if (node.AsScalar is not YamlScalar { IsNull: false } scalar)
@@ -136,7 +136,7 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
             return null;
         }
 
-        var result = parse(scalar.Value);
+        var result = parse(scalar.Text);
         if (!result.IsValid)
         {
             Error(scalar.Location, unitId, DiagnosticCodes.BadValue, result.MessageFor(FieldLabels.For(label, labelUnit)));

@@ -174,7 +174,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             return null;
         }
 
-        if (scalar.Value.StartsWith('x'))
+        if (scalar.Text is ['x', ..])
         {
             return Value(scalar.Node, key.Value, FieldLabels.Service, text => FactorValue.Positive(WithoutTimes(text))) is double factor
                 ? new ScaleService(key.Location, key.Value, factor)
@@ -193,7 +193,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             return null;
         }
 
-        if (scalar.Value.StartsWith('x'))
+        if (scalar.Text is ['x', ..])
         {
             return Value(scalar.Node, key.Value, FieldLabels.Arrivals, text => FactorValue.NotNegative(WithoutTimes(text))) is double factor
                 ? new ScaleArrivals(key.Location, key.Value, factor)
@@ -219,5 +219,5 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
     }
 
     /// <summary>A factor as the scenario file writes it, <c>x1.2</c>, without its <c>x</c>; the factor alone is what <c>--set</c> takes after <c>*=</c>.</summary>
-    private static string WithoutTimes(string text) => text.StartsWith('x') ? text[1..] : text;
+    private static ReadOnlySpan<char> WithoutTimes(ReadOnlySpan<char> text) => text is ['x', ..] ? text[1..] : text;
 }
