@@ -7,14 +7,21 @@ namespace NetSolve.Parsing;
 /// through <see cref="YamlNode"/> and its kin, small views that hold the tree and an index.
 /// </summary>
 /// <remarks>
-/// Compact because network files are large: the nodes are records in one array (<see cref="YamlRecord"/>), and a
-/// scalar's text is a span of the input, made into a string only when asked for. A 100,000-unit file has about
-/// 1.5 million nodes; as objects with a string each they were over a hundred megabytes for the collector to trace.
+/// Compact because network files are large: the nodes are records (<see cref="YamlRecord"/>) in pages of
+/// <see cref="PageSize"/>, and a scalar's text is a span of the input, made into a string only when asked for. A
+/// 100,000-unit file has about 1.5 million nodes; as objects with a string each they were over a hundred megabytes
+/// for the collector to trace. Pages rather than one array: one array of 37 MB lands on the large object heap, which
+/// only a full collection frees, and it was still held at the process's peak, long after the read.
 /// </remarks>
 public sealed class YamlTree
 {
+    /// <summary>Records per page: 48 KB, under the size at which an array goes to the large object heap.</summary>
+    private const int PageBits = 11;
+    private const int PageSize = 1 << PageBits;
+    private const int PageMask = PageSize - 1;
+
     private readonly string _text;
-    private YamlRecord[] _records;
+    private readonly List<YamlRecord[]> _pages;
     private int _count;
     private List<string>? _strings;
 
@@ -22,7 +29,7 @@ public sealed class YamlTree
     {
         _text = text;
         FileName = fileName;
-        _records = new YamlRecord[Math.Max(capacity, 4)];
+        _pages = new List<YamlRecord[]>((capacity >> PageBits) + 1);
     }
 
     /// <summary>The file name shown in every location.</summary>
@@ -33,17 +40,17 @@ public sealed class YamlTree
 
     internal int Count => _count;
 
-    internal ref readonly YamlRecord this[int index] => ref _records[index];
+    internal ref readonly YamlRecord this[int index] => ref _pages[index >> PageBits][index & PageMask];
 
     /// <summary>Adds a node whose text, for a scalar, is <paramref name="length"/> characters of the input at <paramref name="start"/>.</summary>
     internal int Add(YamlNodeKind kind, int line, int column, int start, int length, bool isPlain)
     {
-        if (_count == _records.Length)
+        if ((_count & PageMask) == 0)
         {
-            Array.Resize(ref _records, _records.Length * 2);
+            _pages.Add(new YamlRecord[PageSize]);
         }
 
-        _records[_count] = new YamlRecord { Kind = kind, Line = line, Column = column, Start = start, Length = length, IsPlain = isPlain };
+        Record(_count) = new YamlRecord { Kind = kind, Line = line, Column = column, Start = start, Length = length, IsPlain = isPlain };
         return _count++;
     }
 
@@ -55,23 +62,27 @@ public sealed class YamlTree
         return Add(YamlNodeKind.Scalar, line, column, ~(_strings.Count - 1), value.Length, isPlain);
     }
 
-    internal void SetNext(int index, int next) => _records[index].Next = next;
+    internal void SetNext(int index, int next) => Record(index).Next = next;
 
-    internal void SetLength(int index, int length) => _records[index].Length = length;
+    internal void SetLength(int index, int length) => Record(index).Length = length;
 
-    internal SourceLocation Location(int index) => new(FileName, _records[index].Line, _records[index].Column);
+    internal SourceLocation Location(int index)
+    {
+        ref readonly var record = ref this[index];
+        return new(FileName, record.Line, record.Column);
+    }
 
     /// <summary>A scalar's text, without making a string.</summary>
     internal ReadOnlySpan<char> Text(int index)
     {
-        ref readonly var record = ref _records[index];
+        ref readonly var record = ref this[index];
         return record.Start >= 0 ? _text.AsSpan(record.Start, record.Length) : _strings![~record.Start];
     }
 
     /// <summary>A scalar's text as a string, made on each call.</summary>
     internal string String(int index)
     {
-        ref readonly var record = ref _records[index];
+        ref readonly var record = ref this[index];
         return record.Start >= 0 ? _text.Substring(record.Start, record.Length) : _strings![~record.Start];
     }
 
@@ -82,7 +93,7 @@ public sealed class YamlTree
     internal int EarlierKey(int firstKey, int key)
     {
         var text = Text(key);
-        for (int k = firstKey; k != key; k = _records[k + 1].Next)
+        for (int k = firstKey; k != key; k = this[k + 1].Next)
         {
             if (Text(k).SequenceEqual(text))
             {
@@ -92,4 +103,6 @@ public sealed class YamlTree
 
         return -1;
     }
+
+    private ref YamlRecord Record(int index) => ref _pages[index >> PageBits][index & PageMask];
 }
