@@ -10,13 +10,14 @@ namespace NetSolve.Parsing;
 /// </remarks>
 /// <param name="Mapping">The mapping the fields are in.</param>
 /// <param name="KnownKeys">The keys this kind of mapping may have.</param>
-/// <param name="Count">How many different known keys the mapping holds.</param>
-internal readonly record struct FieldValues(YamlMapping Mapping, string[] KnownKeys, int Count)
+/// <param name="Present">Bit i set when the mapping holds <c>KnownKeys[i]</c>: most of a unit's possible keys are absent, and are answered without a look at the mapping.</param>
+internal readonly record struct FieldValues(YamlMapping Mapping, string[] KnownKeys, long Present)
 {
     public bool TryGetValue(string key, out YamlNode value)
     {
         value = default;
-        if (Array.IndexOf(KnownKeys, key) < 0)
+        int index = Array.IndexOf(KnownKeys, key);
+        if (index < 0 || (Present & (1L << index)) == 0)
         {
             return false;
         }

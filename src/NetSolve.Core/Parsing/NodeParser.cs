@@ -24,9 +24,9 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
         var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
         foreach (var (key, value) in UniqueEntries(mapping, unitId))
         {
-            if (KnownKey(key, knownKeys, unitId) is string name)
+            if (KnownKey(key, knownKeys, unitId) is int index and >= 0)
             {
-                fields[name] = value;
+                fields[knownKeys[index]] = value;
             }
         }
 
@@ -44,15 +44,15 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     protected FieldValues KnownFields(YamlMapping mapping, string[] knownKeys, string? unitId)
     {
         var entries = mapping.Entries;
-        int count = 0;
+        long present = 0;
         if (entries.Count > ScanLimit)
         {
             foreach (var (key, _) in UniqueEntries(mapping, unitId))
             {
-                count += KnownKey(key, knownKeys, unitId) is null ? 0 : 1;
+                present |= KnownKey(key, knownKeys, unitId) is int index and >= 0 ? 1L << index : 0;
             }
 
-            return new FieldValues(mapping, knownKeys, count);
+            return new FieldValues(mapping, knownKeys, present);
         }
 
         foreach (var (key, _) in entries)
@@ -61,21 +61,21 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
             {
                 ReportDuplicate(key, first, unitId);
             }
-            else if (KnownKey(key, knownKeys, unitId) is not null)
+            else if (KnownKey(key, knownKeys, unitId) is int index and >= 0)
             {
-                count++;
+                present |= 1L << index;
             }
         }
 
-        return new FieldValues(mapping, knownKeys, count);
+        return new FieldValues(mapping, knownKeys, present);
     }
 
-    /// <summary>The name in <paramref name="knownKeys"/> that is the key's text; otherwise reports the key with the nearest known key.</summary>
-    private string? KnownKey(YamlKey key, string[] knownKeys, string? unitId)
+    /// <summary>Where the key's text is in <paramref name="knownKeys"/>; otherwise -1, after reporting the key with the nearest known key.</summary>
+    private int KnownKey(YamlKey key, string[] knownKeys, string? unitId)
     {
         if (IndexOf(knownKeys, key.Text) is int index and >= 0)
         {
-            return knownKeys[index];
+            return index;
         }
 
         string text = key.Value;
@@ -83,7 +83,7 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
             ? $"; did you mean '{best}'?"
             : $" (known keys: {string.Join(", ", knownKeys)})";
         Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{text}'{hint}");
-        return null;
+        return -1;
     }
 
     /// <summary>Where <paramref name="text"/> is in <paramref name="names"/>; -1 when it is not.</summary>

@@ -21,7 +21,7 @@ public sealed class YamlTree
     private const int PageMask = PageSize - 1;
 
     private readonly string _text;
-    private readonly List<YamlRecord[]> _pages;
+    private YamlRecord[][] _pages;
     private int _count;
     private List<string>? _strings;
 
@@ -29,7 +29,7 @@ public sealed class YamlTree
     {
         _text = text;
         FileName = fileName;
-        _pages = new List<YamlRecord[]>((capacity >> PageBits) + 1);
+        _pages = new YamlRecord[(Math.Max(capacity, 1) >> PageBits) + 1][];
     }
 
     /// <summary>The file name shown in every location.</summary>
@@ -47,7 +47,13 @@ public sealed class YamlTree
     {
         if ((_count & PageMask) == 0)
         {
-            _pages.Add(new YamlRecord[PageSize]);
+            int page = _count >> PageBits;
+            if (page == _pages.Length)
+            {
+                Array.Resize(ref _pages, _pages.Length * 2);
+            }
+
+            _pages[page] = new YamlRecord[PageSize];
         }
 
         Record(_count) = new YamlRecord { Kind = kind, Line = line, Column = column, Start = start, Length = length, IsPlain = isPlain };
