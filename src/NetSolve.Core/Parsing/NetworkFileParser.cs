@@ -266,7 +266,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             return id;
         }
 
-        KnownUnit(key.Location, key.Value, known, where, unitId, whereUnit);
+        ReportUnknownUnit(key.Location, key.Value, where, unitId, whereUnit);
         return null;
     }
 
@@ -277,10 +277,13 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             return true;
         }
 
-        Error(location, unitId, DiagnosticCodes.UnknownUnit,
-            $"{where}{(whereUnit is null ? string.Empty : "." + whereUnit)}: unknown unit '{id}'{NearestName.Hint(id, _unitLocations.Keys)}");
+        ReportUnknownUnit(location, id, where, unitId, whereUnit);
         return false;
     }
+
+    private void ReportUnknownUnit(SourceLocation location, string id, string where, string? unitId, string? whereUnit) =>
+        Error(location, unitId, DiagnosticCodes.UnknownUnit,
+            $"{where}{(whereUnit is null ? string.Empty : "." + whereUnit)}: unknown unit '{id}'{NearestName.Hint(id, _unitLocations.Keys)}");
 
     /// <summary>Letters, digits, '_' and '-', starting with a letter (ASCII, as the contract's examples).</summary>
     private static bool IsUnitId(string id)
