@@ -113,7 +113,7 @@ internal static class NetworkLoader
             return FromNetworkFile(NetworkReader.ReadText(text, path));
         }
 
-        return root is YamlMapping mapping && mapping.Entries.Any(entry => entry.Key.Value == "base")
+        return root?.AsMapping is YamlMapping mapping && mapping.Find("base") is not null
             ? ReadScenario(text, path)
             : FromNetworkFile(NetworkReader.ReadTree(root, path));
     }

@@ -30,7 +30,7 @@ internal static class ReadMeasurement
     /// <summary>The rules stage by stage on one tree: the file's rules, the routing structure, the bare-number warnings.</summary>
     private static void Stages(TextWriter output, string text, string path)
     {
-        var root = LocatedYamlReader.Read(text, path)!;
+        var root = LocatedYamlReader.Read(text, path)!.Value;
         var diagnostics = new List<NetSolve.Diagnostics.Diagnostic>();
         (NetSolve.Model.Network Network, NetworkLocations Locations)? parsed = null;
         var (parseCpu, parseBytes, parseWall) = Measure(() => parsed = new NetworkFileParser(path, diagnostics).Parse(root));

@@ -17,8 +17,14 @@ public static class BareNumbers
     public static bool IsBare(string text, out double amount)
     {
         ArgumentNullException.ThrowIfNull(text);
+        return IsBare(text.AsSpan(), out amount);
+    }
+
+    /// <summary>True when <paramref name="text"/> is a positive number with no unit of time; <paramref name="amount"/> is that number.</summary>
+    public static bool IsBare(ReadOnlySpan<char> text, out double amount)
+    {
         amount = 0.0;
-        return NumberText.Split(text, string.Empty, out var number, out string suffix) && suffix.Length == 0
+        return NumberText.Split(text, string.Empty, out var number, out var suffix) && suffix.Length == 0
             && NumberText.IsNumber(number, out amount) && amount > 0.0;
     }
 
@@ -28,43 +34,51 @@ public static class BareNumbers
     /// </summary>
     internal static void Check(YamlNode root, TimeUnit timeUnit, List<Diagnostic> diagnostics)
     {
-        if (root is not YamlMapping top)
+        if (root.AsMapping is not YamlMapping top)
         {
             return;
         }
 
-        foreach (var (unitKey, unit) in Entries(Child(top, "units")))
+        foreach (var (unitKey, unit) in Entries(top.Find("units")))
         {
-            Warn(Child(unit, "service"), unitKey.Value, null, timeUnit, diagnostics);
+            Warn(Child(unit, "service"), unitKey, null, timeUnit, diagnostics);
         }
 
-        foreach (var (groupKey, group) in Entries(Child(top, "groups")))
+        foreach (var (groupKey, group) in Entries(top.Find("groups")))
         {
             foreach (var (unitKey, service) in Entries(Child(group, "services")))
             {
-                Warn(Child(service, "service"), unitKey.Value, groupKey.Value, timeUnit, diagnostics);
+                Warn(Child(service, "service"), unitKey, groupKey.Value, timeUnit, diagnostics);
             }
         }
 
-        foreach (var (journeyId, journey) in Entries(Child(top, "journeys")))
+        foreach (var (journeyId, journey) in Entries(top.Find("journeys")))
         {
-            var times = Child(journey, "over") is YamlSequence over ? over.Items : [];
-            foreach (var time in times.OfType<YamlScalar>().Where(time => IsBare(time.Value, out _)))
+            if (Child(journey, "over")?.AsSequence is not YamlSequence over)
             {
-                diagnostics.Add(new Diagnostic(DiagnosticSeverity.Warning, DiagnosticCodes.BareNumber, time.Location,
-                    string.Concat("journey '", journeyId.Value, "'"), NoUnitOfTime("over", time.Value, timeUnit)));
+                continue;
+            }
+
+            foreach (var item in over.Items)
+            {
+                if (item.AsScalar is YamlScalar time && IsBare(time.Text, out _))
+                {
+                    diagnostics.Add(new Diagnostic(DiagnosticSeverity.Warning, DiagnosticCodes.BareNumber, time.Location,
+                        string.Concat("journey '", journeyId.Value, "'"), NoUnitOfTime("over", time.Value, timeUnit)));
+                }
             }
         }
     }
 
-    private static void Warn(YamlNode? node, string unitId, string? groupId, TimeUnit timeUnit, List<Diagnostic> diagnostics)
+    /// <summary>A warning when <paramref name="node"/> is a bare number; the unit's id and the text are made into strings only then.</summary>
+    private static void Warn(YamlNode? node, YamlKey unitKey, string? groupId, TimeUnit timeUnit, List<Diagnostic> diagnostics)
     {
-        if (node is not YamlScalar scalar || !IsBare(scalar.Value, out _))
+        if (node?.AsScalar is not YamlScalar scalar || !IsBare(scalar.Text, out _))
         {
             return;
         }
 
-        diagnostics.Add(ServiceWarning(scalar, unitId, groupId, timeUnit));
+        diagnostics.Add(ServiceWarning(scalar.Location, scalar.Value, unitKey.Value, groupId, timeUnit));
     }
 
     /// <summary>
@@ -72,9 +86,9 @@ public static class BareNumbers
     /// of a kind, and a generated file can have tens of thousands. (A method of its own, so that the captured values
     /// are allocated only for a bare number, not for every unit looked at.)
     /// </summary>
-    private static Diagnostic ServiceWarning(YamlScalar scalar, string unitId, string? groupId, TimeUnit timeUnit) =>
-        Diagnostic.Warning(DiagnosticCodes.BareNumber, scalar.Location, unitId, () =>
-            NoUnitOfTime(groupId is null ? "service" : string.Concat("service of group '", groupId, "'"), scalar.Value, timeUnit));
+    private static Diagnostic ServiceWarning(SourceLocation location, string text, string unitId, string? groupId, TimeUnit timeUnit) =>
+        Diagnostic.Warning(DiagnosticCodes.BareNumber, location, unitId, () =>
+            NoUnitOfTime(groupId is null ? "service" : string.Concat("service of group '", groupId, "'"), text, timeUnit));
 
     /// <summary>The warning's words: what was bare, how it was read and how to say which unit was meant.</summary>
     private static string NoUnitOfTime(string where, string text, TimeUnit timeUnit)
@@ -88,25 +102,8 @@ public static class BareNumbers
     }
 
     /// <summary>The first value under <paramref name="key"/>; a plain loop, as it runs once per unit.</summary>
-    private static YamlNode? Child(YamlNode? node, string key)
-    {
-        if (node is not YamlMapping mapping)
-        {
-            return null;
-        }
+    private static YamlNode? Child(YamlNode node, string key) => node.AsMapping is YamlMapping mapping ? mapping.Find(key) : null;
 
-        var entries = mapping.Entries;
-        for (int i = 0; i < entries.Count; i++)
-        {
-            if (string.Equals(entries[i].Key.Value, key, StringComparison.Ordinal))
-            {
-                return entries[i].Value;
-            }
-        }
-
-        return null;
-    }
-
-    private static IReadOnlyList<YamlEntry> Entries(YamlNode? node) =>
-        node is YamlMapping mapping ? mapping.Entries : [];
+    /// <summary>The entries of <paramref name="node"/> when it is a mapping; none otherwise.</summary>
+    private static YamlEntries Entries(YamlNode? node) => node?.AsMapping is YamlMapping mapping ? mapping.Entries : default;
 }

@@ -1,12 +1,8 @@
-using StringPool = System.Collections.Generic.Dictionary<string, string>.AlternateLookup<System.ReadOnlySpan<char>>;
-
-using NetSolve.Diagnostics;
-
 namespace NetSolve.Parsing;
 
 /// <summary>
 /// A fast reader for the plain block-mapping YAML that network files are written in, producing exactly the
-/// nodes and positions that <see cref="LocatedYamlReader"/> builds through YamlDotNet.
+/// nodes and positions that <see cref="LocatedYamlReader"/> builds through YamlDotNet, each scalar a span of the text.
 /// </summary>
 /// <remarks>
 /// YamlDotNet reads about 2 MB a second, too slow for 100,000-unit networks. This reader accepts only nested
@@ -36,77 +32,66 @@ internal static class BlockYamlReader
             return false;
         }
 
-        var scratch = new List<List<YamlEntry>>();
-        var mapping = ReadMapping(lines, 0, fileName, 0, scratch);
-        if (mapping is null || lines.HasCurrent || lines.Failed)
+        // A key and a value per line at most: the records are allocated once, at their final size or a little over.
+        var tree = new YamlTree(text, fileName, (2 * text.AsSpan().Count('\n')) + 2);
+        if (!ReadMapping(lines, 0, tree, 0) || lines.HasCurrent || lines.Failed)
         {
             return false;
         }
 
-        root = mapping;
+        root = tree.Root;
         return true;
     }
 
-    /// <summary>
-    /// Reads the mapping whose keys stand at <paramref name="indent"/>, using one reusable entry list per depth
-    /// (<paramref name="scratch"/>) so that each mapping keeps an array of exactly its entries.
-    /// </summary>
-    private static YamlMapping? ReadMapping(LineCursor lines, int indent, string fileName, int depth, List<List<YamlEntry>> scratch)
+    /// <summary>Reads the mapping whose keys stand at <paramref name="indent"/> into <paramref name="tree"/>; false when it is outside the subset.</summary>
+    private static bool ReadMapping(LineCursor lines, int indent, YamlTree tree, int depth)
     {
         if (depth > LocatedYamlReader.MaxDepth)
         {
-            return null;
+            return false;
         }
 
-        if (scratch.Count == depth)
-        {
-            scratch.Add([]);
-        }
-
-        var entries = scratch[depth];
-        entries.Clear();
-        int firstNumber = lines.Current.Number;
+        int mapping = tree.Add(YamlNodeKind.Mapping, lines.Current.Number, indent + 1, 0, 0, isPlain: true);
+        int count = 0;
+        int previous = 0;
         while (lines.HasCurrent && lines.Current.Indent == indent)
         {
             var line = lines.Current;
             lines.Advance();
-            var key = new YamlKey(new SourceLocation(fileName, line.Number, indent + 1), line.Key, IsPlain: true);
-            if (line.Value is not null)
+            int key = tree.Add(YamlNodeKind.Scalar, line.Number, indent + 1, line.KeyStart, line.KeyLength, isPlain: true);
+            if (previous != 0)
             {
-                entries.Add(new(key, new YamlScalar(new SourceLocation(fileName, line.Number, line.ValueColumn), line.Value, line.ValueIsPlain)));
+                tree.SetNext(previous, key);
+            }
+
+            previous = key + 1;
+            count++;
+            if (line.HasValue)
+            {
+                tree.Add(YamlNodeKind.Scalar, line.Number, line.ValueColumn, line.ValueStart, line.ValueLength, line.ValueIsPlain);
             }
             else if (lines.HasCurrent && lines.Current.Indent > indent)
             {
-                var child = ReadMapping(lines, lines.Current.Indent, fileName, depth + 1, scratch);
-                if (child is null)
+                if (!ReadMapping(lines, lines.Current.Indent, tree, depth + 1))
                 {
-                    return null;
+                    return false;
                 }
-
-                entries.Add(new(key, child));
             }
             else
             {
-                entries.Add(new(key, new YamlScalar(new SourceLocation(fileName, line.Number, line.ValueColumn), string.Empty, IsPlain: true)));
+                tree.Add(YamlNodeKind.Scalar, line.Number, line.ValueColumn, 0, 0, isPlain: true);
             }
         }
 
-        // A line indented deeper than its siblings but not under an empty key is not a block mapping.
-        if (lines.HasCurrent && lines.Current.Indent > indent)
-        {
-            return null;
-        }
+        tree.SetLength(mapping, count);
 
-        return new YamlMapping(new SourceLocation(fileName, firstNumber, indent + 1), entries.ToArray());
+        // A line indented deeper than its siblings but not under an empty key is not a block mapping.
+        return !(lines.HasCurrent && lines.Current.Indent > indent);
     }
 
     /// <summary>The next line with a key on it, read when asked for; blank and comment lines are passed over.</summary>
     private sealed class LineCursor(string text)
     {
-        // Keys and values repeat (unit ids appear as routes' targets, probabilities recur): one string each. Sized so
-        // that the pool is not regrown as it fills: the generated 100,000-unit network has 287,000 distinct strings
-        // in 13.4 M characters, one per 47 characters (at one per 64 the pool was regrown once, 12 MB more).
-        private readonly StringPool _pool = new Dictionary<string, string>(text.Length / 40, StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
         private int _position;
         private int _lineNumber;
 
@@ -135,8 +120,9 @@ internal static class BlockYamlReader
                     span = span[..^1];
                 }
 
+                int lineStart = _position;
                 _position = end + 1;
-                if (!ReadLine(span, _lineNumber, _pool, out var line))
+                if (!ReadLine(span, lineStart, _lineNumber, out var line))
                 {
                     Failed = true;
                     return;
@@ -152,8 +138,11 @@ internal static class BlockYamlReader
         }
     }
 
-    /// <summary>False when the line is outside the accepted subset; <paramref name="line"/> is null for a blank or comment line.</summary>
-    private static bool ReadLine(ReadOnlySpan<char> span, int number, StringPool pool, out Line? line)
+    /// <summary>
+    /// False when the line is outside the accepted subset; <paramref name="line"/> is null for a blank or comment line.
+    /// <paramref name="lineStart"/> is where the line starts in the text: the line's key and value are kept as places there.
+    /// </summary>
+    private static bool ReadLine(ReadOnlySpan<char> span, int lineStart, int number, out Line? line)
     {
         line = null;
         // Most lines are printable ASCII throughout: one vectorised search, and the character loop only for the rest.
@@ -189,7 +178,6 @@ internal static class BlockYamlReader
             return false;
         }
 
-        string key = Intern(pool, span[indent..keyEnd]);
         int colon = keyEnd;
         int valueStart = colon + 1;
         if (valueStart < span.Length && span[valueStart] != ' ')
@@ -205,22 +193,24 @@ internal static class BlockYamlReader
         var rest = span[valueStart..];
         if (rest.Length == 0 || rest[0] == '#')
         {
-            line = new Line(number, indent, key, null, colon + 2, true);
+            line = new Line(number, indent, lineStart + indent, keyEnd - indent, HasValue: false, 0, 0, colon + 2, ValueIsPlain: true);
             return true;
         }
 
-        if (!ReadValue(rest, pool, out string? value, out bool isPlain))
+        if (!ReadValue(rest, out int offset, out int length, out bool isPlain))
         {
             return false;
         }
 
-        line = new Line(number, indent, key, value, valueStart + 1, isPlain);
+        line = new Line(number, indent, lineStart + indent, keyEnd - indent, HasValue: true, lineStart + valueStart + offset, length, valueStart + 1, isPlain);
         return true;
     }
 
-    private static bool ReadValue(ReadOnlySpan<char> rest, StringPool pool, out string? value, out bool isPlain)
+    /// <summary>The value's text: <paramref name="length"/> characters from <paramref name="offset"/> in <paramref name="rest"/>.</summary>
+    private static bool ReadValue(ReadOnlySpan<char> rest, out int offset, out int length, out bool isPlain)
     {
-        value = null;
+        offset = 0;
+        length = 0;
         isPlain = true;
         char first = rest[0];
         if (first is '"' or '\'')
@@ -237,7 +227,8 @@ internal static class BlockYamlReader
                 return false;
             }
 
-            value = Intern(pool, rest[1..(close + 1)]);
+            offset = 1;
+            length = close;
             isPlain = false;
             return true;
         }
@@ -255,22 +246,13 @@ internal static class BlockYamlReader
             return false;
         }
 
-        value = Intern(pool, body);
+        length = body.Length;
         return true;
-    }
-
-    private static string Intern(StringPool pool, ReadOnlySpan<char> text)
-    {
-        if (!pool.TryGetValue(text, out string? interned))
-        {
-            interned = text.ToString();
-            pool.Dictionary[interned] = interned;
-        }
-
-        return interned;
     }
 
     private static bool IsKeyChar(char c) => char.IsAsciiLetterOrDigit(c) || c is '_' or '-';
 
-    private readonly record struct Line(int Number, int Indent, string Key, string? Value, int ValueColumn, bool ValueIsPlain);
+    /// <summary>A line with a key: where its key and value stand in the text (<paramref name="ValueColumn"/> counts from the line's start).</summary>
+    private readonly record struct Line(
+        int Number, int Indent, int KeyStart, int KeyLength, bool HasValue, int ValueStart, int ValueLength, int ValueColumn, bool ValueIsPlain);
 }

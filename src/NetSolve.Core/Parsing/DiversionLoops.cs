@@ -9,18 +9,18 @@ namespace NetSolve.Parsing;
 /// <remarks>Each loop is reported once, at the <c>when_full</c> value of its first unit in file order. Yields every loop.</remarks>
 internal static class DiversionLoops
 {
-    public static void Check(IReadOnlyList<(string UnitId, YamlScalar Target)> diversions, List<Diagnostic> diagnostics)
+    public static void Check(IReadOnlyList<(string UnitId, string Target, SourceLocation Location)> diversions, List<Diagnostic> diagnostics)
     {
         var next = new Dictionary<string, string>(StringComparer.Ordinal);
         var order = new Dictionary<string, int>(StringComparer.Ordinal);
-        foreach (var (unitId, target) in diversions)
+        foreach (var (unitId, target, _) in diversions)
         {
-            next[unitId] = target.Value;
+            next[unitId] = target;
             order.TryAdd(unitId, order.Count);
         }
 
         var reported = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var (unitId, target) in diversions)
+        foreach (var (unitId, _, location) in diversions)
         {
             var loop = LoopFrom(unitId, next);
             if (loop is null || loop.Min(id => order[id]) != order[unitId] || !reported.Add(unitId))
@@ -29,7 +29,7 @@ internal static class DiversionLoops
             }
 
             string chain = string.Join(" → ", loop.Append(unitId).Select(id => $"'{id}'"));
-            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NoExit, target.Location, unitId,
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NoExit, location, unitId,
                 $"when_full: a diversion chain with no way out ({chain}); when all of them are full a patient has nowhere to go, so let one of them turn patients away"));
         }
     }

@@ -1,5 +1,3 @@
-using System.Diagnostics.CodeAnalysis;
-
 namespace NetSolve.Parsing;
 
 /// <summary>
@@ -12,23 +10,23 @@ namespace NetSolve.Parsing;
 /// </remarks>
 /// <param name="Mapping">The mapping the fields are in.</param>
 /// <param name="KnownKeys">The keys this kind of mapping may have.</param>
-/// <param name="Count">How many different known keys the mapping holds.</param>
-internal readonly record struct FieldValues(YamlMapping Mapping, string[] KnownKeys, int Count)
+/// <param name="Present">Bit i set when the mapping holds <c>KnownKeys[i]</c>: most of a unit's possible keys are absent, and are answered without a look at the mapping.</param>
+internal readonly record struct FieldValues(YamlMapping Mapping, string[] KnownKeys, long Present)
 {
-    public bool TryGetValue(string key, [MaybeNullWhen(false)] out YamlNode value)
+    public bool TryGetValue(string key, out YamlNode value)
     {
-        value = null;
-        if (Array.IndexOf(KnownKeys, key) < 0)
+        value = default;
+        int index = Array.IndexOf(KnownKeys, key);
+        if (index < 0 || (Present & (1L << index)) == 0)
         {
             return false;
         }
 
-        var entries = Mapping.Entries;
-        for (int i = 0; i < entries.Count; i++)
+        foreach (var (entryKey, entryValue) in Mapping.Entries)
         {
-            if (string.Equals(entries[i].Key.Value, key, StringComparison.Ordinal))
+            if (entryKey.Is(key))
             {
-                value = entries[i].Value;
+                value = entryValue;
                 return true;
             }
         }

@@ -38,7 +38,7 @@ public static class InputFile
 
         try
         {
-            if (ReadBounded(path, maxBytes) is not byte[] bytes)
+            if (ReadBounded(path, maxBytes) is not ArraySegment<byte> bytes)
             {
                 problem = Unreadable(location, $"is larger than {Size(maxBytes)}, the most read for {kind}");
                 return null;
@@ -104,7 +104,7 @@ public static class InputFile
 
     /// <summary>The bytes of the file, or null when it holds more than <paramref name="maxBytes"/>.</summary>
     /// <remarks>The length is checked before reading, and the read stops one byte past the limit in case the file grows.</remarks>
-    private static byte[]? ReadBounded(string path, long maxBytes)
+    private static ArraySegment<byte>? ReadBounded(string path, long maxBytes)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 1, FileOptions.SequentialScan);
         if (stream.CanSeek && stream.Length > maxBytes)
@@ -131,17 +131,26 @@ public static class InputFile
             ArrayPool<byte>.Shared.Return(chunk);
         }
 
-        return buffer.ToArray();
+        // The stream's own buffer, not a copy: for a 13 MB network the copy was 13 MB more at the read's peak.
+        return new ArraySegment<byte>(buffer.GetBuffer(), 0, (int)buffer.Length);
     }
 
     /// <summary>Strict UTF-8: the first invalid byte is an error at its line and column.</summary>
-    private static string? Decode(byte[] bytes, SourceLocation file, out Diagnostic? problem)
+    /// <remarks>
+    /// Valid text is decoded straight into its string, with no array of characters first: for a 13 MB network that
+    /// array and its copy into the string were 54 MB on the large object heap.
+    /// </remarks>
+    private static string? Decode(ReadOnlySpan<byte> data, SourceLocation file, out Diagnostic? problem)
     {
         problem = null;
-        ReadOnlySpan<byte> data = bytes;
         if (data.StartsWith(ByteOrderMark))
         {
             data = data[ByteOrderMark.Length..];
+        }
+
+        if (Utf8.IsValid(data))
+        {
+            return Encoding.UTF8.GetString(data);
         }
 
         char[] chars = new char[data.Length];

@@ -5,7 +5,7 @@ using NetSolve.Diagnostics;
 namespace NetSolve.Parsing;
 
 /// <summary>
-/// Reads YAML into <see cref="YamlNode"/>s that keep their file positions, duplicate keys and quoting,
+/// Reads YAML into a <see cref="YamlTree"/> whose nodes keep their file positions, duplicate keys and quoting,
 /// which the network rules need and YamlDotNet's own object model hides.
 /// </summary>
 public static class LocatedYamlReader
@@ -50,41 +50,33 @@ public static class LocatedYamlReader
     /// A tab inside a key or value is refused: YAML allows it there, but in a label or id it is invisible, and a
     /// pasted cell from a spreadsheet brings one in by mistake. Tabs between tokens and in comments are fine.
     /// </summary>
-    private static void RefuseTabs(YamlNode? node)
+    /// <remarks>The nodes are stored in the order they are met, so the first scalar with a tab is the first in the file.</remarks>
+    private static void RefuseTabs(YamlNode? root)
     {
-        switch (node)
+        if (root is not YamlNode { Tree: var tree })
         {
-            case YamlScalar scalar:
-                RefuseTab(scalar.Location, scalar.Value, scalar.IsPlain);
-                break;
-            case YamlMapping mapping:
-                foreach (var (key, value) in mapping.Entries)
-                {
-                    RefuseTab(key.Location, key.Value, key.IsPlain);
-                    RefuseTabs(value);
-                }
+            return;
+        }
 
-                break;
-            case YamlSequence sequence:
-                foreach (var item in sequence.Items)
-                {
-                    RefuseTabs(item);
-                }
-
-                break;
+        for (int i = 0; i < tree.Count; i++)
+        {
+            if (tree[i].Kind == YamlNodeKind.Scalar)
+            {
+                RefuseTab(tree.Location(i), tree.Text(i), tree[i].IsPlain);
+            }
         }
     }
 
     /// <summary>Throws at the first tab of a key's or value's <paramref name="text"/>, which starts at <paramref name="location"/>.</summary>
-    private static void RefuseTab(SourceLocation location, string text, bool isPlain)
+    private static void RefuseTab(SourceLocation location, ReadOnlySpan<char> text, bool isPlain)
     {
-        int tab = text.IndexOf('\t', StringComparison.Ordinal);
+        int tab = text.IndexOf('\t');
         if (tab < 0)
         {
             return;
         }
 
-        bool sameLine = !text.AsSpan(0, tab).ContainsAny('\n', '\r');
+        bool sameLine = !text[..tab].ContainsAny('\n', '\r');
         var at = sameLine ? location with { Column = location.Column + tab + (isPlain ? 0 : 1) } : location;
         throw new YamlReadException(at, "a tab inside a key or value is not allowed; use spaces");
     }
@@ -110,7 +102,9 @@ public static class LocatedYamlReader
             }
 
             parser.Consume<DocumentStart>();
-            var root = ReadNode(parser, fileName, 0);
+            var tree = new YamlTree(text, fileName, 16);
+            ReadNode(parser, tree, 0);
+            var root = tree.Root;
             parser.Consume<DocumentEnd>();
             if (!parser.Accept<StreamEnd>(out _))
             {
@@ -132,10 +126,11 @@ public static class LocatedYamlReader
         }
     }
 
-    private static YamlNode ReadNode(IParser parser, string fileName, int depth)
+    /// <summary>Adds the node at the parser, and its children, to <paramref name="tree"/>; returns its index.</summary>
+    private static int ReadNode(IParser parser, YamlTree tree, int depth)
     {
         var start = parser.Current!;
-        var location = At(fileName, start.Start);
+        var location = At(tree.FileName, start.Start);
         if (depth > MaxDepth)
         {
             throw new YamlReadException(location, $"nesting deeper than {MaxDepth} levels");
@@ -145,30 +140,58 @@ public static class LocatedYamlReader
         {
             case Scalar scalar:
                 parser.MoveNext();
-                return new YamlScalar(location, scalar.Value, scalar.Style == ScalarStyle.Plain && scalar.Tag.IsEmpty);
+                return tree.AddScalar(location.Line, location.Column, scalar.Value, scalar.Style == ScalarStyle.Plain && scalar.Tag.IsEmpty);
             case SequenceStart:
+            {
                 parser.MoveNext();
-                var items = new List<YamlNode>();
+                int sequence = tree.Add(YamlNodeKind.Sequence, location.Line, location.Column, 0, 0, isPlain: true);
+                int count = 0;
+                int previous = 0;
                 while (!parser.TryConsume<SequenceEnd>(out _))
                 {
-                    items.Add(ReadNode(parser, fileName, depth + 1));
+                    int item = ReadNode(parser, tree, depth + 1);
+                    if (previous != 0)
+                    {
+                        tree.SetNext(previous, item);
+                    }
+
+                    previous = item;
+                    count++;
                 }
 
-                return new YamlSequence(location, items);
+                tree.SetLength(sequence, count);
+                return sequence;
+            }
+
             case MappingStart:
+            {
                 parser.MoveNext();
-                var entries = new List<YamlEntry>();
+                int mapping = tree.Add(YamlNodeKind.Mapping, location.Line, location.Column, 0, 0, isPlain: true);
+                int count = 0;
+                int previous = 0;
                 while (!parser.TryConsume<MappingEnd>(out _))
                 {
-                    if (ReadNode(parser, fileName, depth + 1) is not YamlScalar key)
+                    int key = ReadNode(parser, tree, depth + 1);
+                    if (tree[key].Kind != YamlNodeKind.Scalar)
                     {
                         throw new YamlReadException(location, "a mapping key must be a plain name, not a list or mapping");
                     }
 
-                    entries.Add(new(new YamlKey(key.Location, key.Value, key.IsPlain), ReadNode(parser, fileName, depth + 1)));
+                    // The value follows its key: a key is one record.
+                    int value = ReadNode(parser, tree, depth + 1);
+                    if (previous != 0)
+                    {
+                        tree.SetNext(previous, key);
+                    }
+
+                    previous = value;
+                    count++;
                 }
 
-                return new YamlMapping(location, entries);
+                tree.SetLength(mapping, count);
+                return mapping;
+            }
+
             case AnchorAlias:
                 throw new YamlReadException(location, "YAML aliases (*name) are not supported in network files");
             default:

@@ -15,13 +15,13 @@ internal sealed partial class NetworkFileParser
 
     private ImmutableArray<Arrival> ParseArrivalCv(YamlNode node, ImmutableArray<Arrival> arrivals, YamlNode? arrivalsNode, HashSet<string> known)
     {
-        if (node is YamlScalar { IsNull: true } || Mapping(node, null, ArrivalCvKey) is not YamlMapping mapping)
+        if (node.IsNullScalar || Mapping(node, null, ArrivalCvKey) is not YamlMapping mapping)
         {
             return arrivals;
         }
 
         // Units listed under 'arrivals', whether or not their rate parsed: a bad rate is reported once, there.
-        var listed = arrivalsNode is YamlMapping arrivalsMapping
+        var listed = arrivalsNode?.AsMapping is YamlMapping arrivalsMapping
             ? arrivalsMapping.Entries.Select(entry => entry.Key.Value).ToHashSet(StringComparer.Ordinal)
             : new HashSet<string>(StringComparer.Ordinal);
         var cvs = new Dictionary<string, double>(StringComparer.Ordinal);

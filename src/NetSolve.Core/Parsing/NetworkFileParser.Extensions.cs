@@ -17,7 +17,7 @@ internal sealed partial class NetworkFileParser
     private static readonly string[] GroupKeys = ["label", "arrivals", "routes", "arrival_profile", "services"];
     private static readonly string[] ServiceKeys = ["service", "service_cv", "service_distribution", "service_samples"];
 
-    private readonly List<(string UnitId, YamlScalar Target)> _diversions = [];
+    private readonly List<(string UnitId, string Target, SourceLocation Location)> _diversions = [];
     private readonly Dictionary<string, SourceLocation> _groupLocations = new(StringComparer.Ordinal);
 
     private ParsedService? ParseService(FieldValues fields, YamlMapping owner, string id, TimeUnit timeUnit)
@@ -38,15 +38,16 @@ internal sealed partial class NetworkFileParser
             kind = (ServiceKind)index;
         }
 
-        fields.TryGetValue("service", out var serviceNode);
-        fields.TryGetValue("service_cv", out var cvNode);
-        if (fields.TryGetValue("service_samples", out var samplesNode))
+        var serviceNode = fields.GetValueOrDefault("service");
+        var cvNode = fields.GetValueOrDefault("service_cv");
+        var samplesNode = fields.GetValueOrDefault("service_samples");
+        if (samplesNode is YamlNode samples)
         {
-            keyLocation ??= samplesNode.Location;
+            keyLocation ??= samples.Location;
             kind ??= ServiceKind.Empirical;
             if (kind != ServiceKind.Empirical)
             {
-                Error(samplesNode.Location, id, DiagnosticCodes.BadValue, "service_samples needs service_distribution empirical (or no service_distribution)");
+                Error(samples.Location, id, DiagnosticCodes.BadValue, "service_samples needs service_distribution empirical (or no service_distribution)");
                 return null;
             }
         }
@@ -56,23 +57,23 @@ internal sealed partial class NetworkFileParser
             return ParseEmpirical(samplesNode, serviceNode, cvNode, owner, id, timeUnit, keyLocation);
         }
 
-        double? mean = serviceNode is null ? null : Value(serviceNode, id, FieldLabels.Service, DurationParser(timeUnit));
+        double? mean = serviceNode is YamlNode service ? Value(service, id, FieldLabels.Service, DurationParser(timeUnit)) : null;
         if (serviceNode is null)
         {
             Error(owner.Location, id, DiagnosticCodes.MissingKey, "missing 'service' (the mean time a patient holds a server, e.g. 45min)");
         }
 
         double defaultCv = kind == ServiceKind.Deterministic ? 0.0 : 1.0;
-        double? cv = cvNode is null ? defaultCv : Value(cvNode, id, "service_cv", CvValue.Parse);
+        double? cv = cvNode is YamlNode cvValue ? Value(cvValue, id, "service_cv", CvValue.Parse) : defaultCv;
         if (cv < 0.0)
         {
-            Error(cvNode!.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
+            Error(cvNode!.Value.Location, id, DiagnosticCodes.BadValue, "service_cv must be 0 or more");
             return null;
         }
 
-        if (cvNode is not null && cv is double given && given != defaultCv && kind is ServiceKind.Deterministic or ServiceKind.Exponential)
+        if (cvNode is YamlNode cvGiven && cv is double given && given != defaultCv && kind is ServiceKind.Deterministic or ServiceKind.Exponential)
         {
-            Error(cvNode.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
+            Error(cvGiven.Location, id, DiagnosticCodes.BadValue, string.Create(CultureInfo.InvariantCulture,
                 $"service_cv of a {DistributionNames[(int)kind]} service is {defaultCv}; choose lognormal or gamma for another value"));
             return null;
         }
@@ -93,8 +94,16 @@ internal sealed partial class NetworkFileParser
         return new ParsedService(m, c, distribution, keyLocation);
     }
 
+    /// <summary>One rate parser per time unit, made once: a lambda over the time unit would be a closure per arrivals mapping.</summary>
+    private static Func<ReadOnlySpan<char>, ValueResult<double>> RateParser(TimeUnit timeUnit) => timeUnit switch
+    {
+        TimeUnit.Minute => static text => RateValue.Parse(text, TimeUnit.Minute),
+        TimeUnit.Day => static text => RateValue.Parse(text, TimeUnit.Day),
+        _ => static text => RateValue.Parse(text, TimeUnit.Hour),
+    };
+
     /// <summary>One duration parser per time unit, made once: a lambda over the time unit here would be a closure per unit.</summary>
-    private static Func<string, ValueResult<double>> DurationParser(TimeUnit timeUnit) => timeUnit switch
+    private static Func<ReadOnlySpan<char>, ValueResult<double>> DurationParser(TimeUnit timeUnit) => timeUnit switch
     {
         TimeUnit.Minute => static text => DurationValue.Parse(text, TimeUnit.Minute),
         TimeUnit.Day => static text => DurationValue.Parse(text, TimeUnit.Day),
@@ -105,39 +114,39 @@ internal sealed partial class NetworkFileParser
     {
         foreach (var (node, key) in new[] { (serviceNode, "service"), (cvNode, "service_cv") })
         {
-            if (node is not null)
+            if (node is YamlNode given)
             {
-                Error(node.Location, id, DiagnosticCodes.BadValue, $"{key} comes from service_samples for an empirical service; remove it");
+                Error(given.Location, id, DiagnosticCodes.BadValue, $"{key} comes from service_samples for an empirical service; remove it");
             }
         }
 
-        if (samplesNode is null)
+        if (samplesNode is not YamlNode samples)
         {
             Error(owner.Location, id, DiagnosticCodes.MissingKey, "missing 'service_samples' (a list of observed durations, e.g. [40min, 55min, 2h])");
             return null;
         }
 
-        if (samplesNode is not YamlSequence sequence || sequence.Items.Count == 0)
+        if (samples.AsSequence is not YamlSequence sequence || sequence.Items.Count == 0)
         {
-            Error(samplesNode.Location, id, DiagnosticCodes.WrongShape, "service_samples must be a non-empty list of durations, e.g. [40min, 55min, 2h]");
+            Error(samples.Location, id, DiagnosticCodes.WrongShape, "service_samples must be a non-empty list of durations, e.g. [40min, 55min, 2h]");
             return null;
         }
 
-        var samples = new List<double>();
+        var durations = new List<double>();
         foreach (var item in sequence.Items)
         {
             if (Value(item, id, "service_samples", text => DurationValue.Parse(text, timeUnit)) is double hours)
             {
-                samples.Add(hours);
+                durations.Add(hours);
             }
         }
 
-        if (samples.Count < sequence.Items.Count || serviceNode is not null || cvNode is not null)
+        if (durations.Count < sequence.Items.Count || serviceNode is not null || cvNode is not null)
         {
             return null;
         }
 
-        var distribution = ServiceDistribution.Empirical(samples);
+        var distribution = ServiceDistribution.Empirical(durations);
         return new ParsedService(distribution.MeanHours, distribution.Cv, distribution, keyLocation);
     }
 
@@ -191,15 +200,15 @@ internal sealed partial class NetworkFileParser
             return WhenFull.TurnAway;
         }
 
-        _diversions.Add((id, scalar with { Value = target }));
+        _diversions.Add((id, target, scalar.Location));
         return WhenFull.DivertTo(target);
     }
 
     private void CheckDiversions(HashSet<string> known)
     {
-        foreach (var (unitId, target) in _diversions)
+        foreach (var (unitId, target, location) in _diversions)
         {
-            KnownUnit(new YamlKey(target.Location, target.Value, target.IsPlain), known, "when_full", unitId);
+            KnownUnit(location, target, known, "when_full", unitId);
         }
 
         DiversionLoops.Check(_diversions, Diagnostics);
@@ -221,8 +230,9 @@ internal sealed partial class NetworkFileParser
         }
 
         var hours = Multipliers(hoursNode, ArrivalProfile.HoursPerDay, $"{where}.hour_of_day");
-        var days = fields.TryGetValue("day_of_week", out var daysNode) ? Multipliers(daysNode, ArrivalProfile.DaysPerWeek, $"{where}.day_of_week") : null;
-        if (hours is null || (daysNode is not null && days is null))
+        bool hasDays = fields.TryGetValue("day_of_week", out var daysNode);
+        var days = hasDays ? Multipliers(daysNode, ArrivalProfile.DaysPerWeek, $"{where}.day_of_week") : null;
+        if (hours is null || (hasDays && days is null))
         {
             return null;
         }
@@ -233,7 +243,7 @@ internal sealed partial class NetworkFileParser
 
     private double[]? Multipliers(YamlNode node, int count, string where)
     {
-        if (node is not YamlSequence sequence || sequence.Items.Count != count)
+        if (node.AsSequence is not YamlSequence sequence || sequence.Items.Count != count)
         {
             Error(node.Location, null, DiagnosticCodes.WrongShape, string.Create(CultureInfo.InvariantCulture, $"{where} must be a list of {count} numbers"));
             return null;

@@ -9,7 +9,7 @@ internal sealed partial class NetworkFileParser
 {
     private ImmutableArray<PatientGroup> ParseGroups(YamlNode node, TimeUnit timeUnit, HashSet<string> known)
     {
-        if (node is YamlScalar { IsNull: true } || Mapping(node, null, "groups") is not YamlMapping mapping)
+        if (node.IsNullScalar || Mapping(node, null, "groups") is not YamlMapping mapping)
         {
             return [];
         }
@@ -44,15 +44,16 @@ internal sealed partial class NetworkFileParser
 
         int errorsBefore = Diagnostics.Count(d => d.IsError);
         var fields = Fields(mapping, GroupKeys, null);
-        string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, null, $"groups.{id}.label") is YamlScalar labelScalar
+        string label = Field(fields, "label") is YamlNode labelNode && Scalar(labelNode, null, $"groups.{id}.label") is YamlScalar labelScalar
             ? labelScalar.Value
             : id;
-        if (!fields.TryGetValue("arrivals", out var arrivalsNode))
+        var arrivalsNode = Field(fields, "arrivals");
+        if (arrivalsNode is null)
         {
             Error(location, null, DiagnosticCodes.MissingKey, $"groups.{id}: missing 'arrivals' (where this group's patients arrive from outside)");
         }
 
-        var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known, id);
+        var arrivals = arrivalsNode is YamlNode arrivalsValue ? ParseArrivals(arrivalsValue, timeUnit, known, id) : [];
         ImmutableArray<Route>? routes = null;
         if (fields.TryGetValue("routes", out var routesNode))
         {

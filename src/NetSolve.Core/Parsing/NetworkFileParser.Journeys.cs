@@ -16,7 +16,7 @@ internal sealed partial class NetworkFileParser
 
     private ImmutableArray<Journey> ParseJourneys(YamlNode node, TimeUnit timeUnit)
     {
-        if (node is YamlScalar { IsNull: true } || Mapping(node, null, JourneysKey) is not YamlMapping mapping)
+        if (node.IsNullScalar || Mapping(node, null, JourneysKey) is not YamlMapping mapping)
         {
             return [];
         }
@@ -50,7 +50,7 @@ internal sealed partial class NetworkFileParser
 
         int errors = Diagnostics.Count(d => d.IsError);
         var fields = Fields(mapping, JourneyKeys, null);
-        string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, null, where + ".label") is YamlScalar labelScalar
+        string label = Field(fields, "label") is YamlNode labelNode && Scalar(labelNode, null, where + ".label") is YamlScalar labelScalar
             ? labelScalar.Value
             : id;
         var unitIds = ImmutableArray<string>.Empty;
@@ -70,7 +70,7 @@ internal sealed partial class NetworkFileParser
     private ImmutableArray<string> ParseJourneyUnits(YamlNode node, string where)
     {
         string field = where + ".units";
-        if (node is not YamlSequence sequence)
+        if (node.AsSequence is not YamlSequence sequence)
         {
             Error(node.Location, null, DiagnosticCodes.WrongShape, $"{field} must be a list of unit ids, e.g. [emergency, lab]");
             return [];
@@ -110,7 +110,7 @@ internal sealed partial class NetworkFileParser
     private ImmutableArray<double> ParseJourneyTimes(YamlNode node, string where, TimeUnit timeUnit)
     {
         string field = where + ".over";
-        IReadOnlyList<YamlNode> items = node is YamlSequence sequence ? sequence.Items : [node];
+        IReadOnlyList<YamlNode> items = node.AsSequence is YamlSequence sequence ? [.. sequence.Items] : [node];
         var hours = ImmutableArray.CreateBuilder<double>(items.Count);
         foreach (var item in items)
         {

@@ -21,12 +21,9 @@ internal sealed partial class NetworkFileParser
             return null;
         }
 
-        int[]? hours = node switch
-        {
-            YamlSequence sequence => RosterList(sequence, id),
-            YamlMapping mapping => RosterBlocks(mapping, id),
-            _ => RosterShapeError(node, id),
-        };
+        int[]? hours = node.AsSequence is YamlSequence sequence ? RosterList(sequence, id)
+            : node.AsMapping is YamlMapping mapping ? RosterBlocks(mapping, id)
+            : RosterShapeError(node, id);
         if (hours is null)
         {
             return null;
@@ -73,9 +70,10 @@ internal sealed partial class NetworkFileParser
 
         var hours = new int[count];
         bool valid = true;
-        for (int h = 0; h < count; h++)
+        int h = 0;
+        foreach (var item in sequence.Items)
         {
-            valid &= RosterCount(sequence.Items[h], id, out hours[h]);
+            valid &= RosterCount(item, id, out hours[h++]);
         }
 
         return valid ? hours : null;

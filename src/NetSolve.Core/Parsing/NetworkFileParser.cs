@@ -18,36 +18,38 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
 
     public (Network Network, NetworkLocations Locations)? Parse(YamlNode root)
     {
-        if (root is not YamlMapping top)
+        if (root.AsMapping is not YamlMapping top)
         {
             Error(root.Location, null, DiagnosticCodes.WrongShape, "the top level must be a mapping with 'units', 'arrivals' and optionally 'name', 'time_unit', 'routes'");
             return null;
         }
 
         var fields = Fields(top, TopKeys, null);
-        var timeUnit = ParseTimeUnit(fields.GetValueOrDefault("time_unit"));
-        string name = fields.GetValueOrDefault("name") is YamlNode nameNode && Scalar(nameNode, null, "name") is YamlScalar nameScalar
+        var timeUnit = ParseTimeUnit(Field(fields, "time_unit"));
+        string name = Field(fields, "name") is YamlNode nameNode && Scalar(nameNode, null, "name") is YamlScalar nameScalar
             ? nameScalar.Value
             : Path.GetFileNameWithoutExtension(fileName);
 
-        if (!fields.TryGetValue("units", out var unitsNode))
+        var unitsNode = Field(fields, "units");
+        if (unitsNode is null)
         {
             Error(top.Location, null, DiagnosticCodes.MissingKey, "missing 'units': a network file defines at least one unit");
         }
 
-        if (!fields.TryGetValue("arrivals", out var arrivalsNode))
+        var arrivalsNode = Field(fields, "arrivals");
+        if (arrivalsNode is null)
         {
             Error(top.Location, null, DiagnosticCodes.MissingKey, "missing 'arrivals': at least one unit needs a positive external arrival rate");
         }
 
-        var units = unitsNode is null ? [] : ParseUnits(unitsNode, timeUnit);
+        var units = unitsNode is YamlNode unitsValue ? ParseUnits(unitsValue, timeUnit) : [];
         var known = new HashSet<string>(units.Length, StringComparer.Ordinal);
         foreach (var unit in units)
         {
             known.Add(unit.Id);
         }
 
-        var arrivals = arrivalsNode is null ? [] : ParseArrivals(arrivalsNode, timeUnit, known);
+        var arrivals = arrivalsNode is YamlNode arrivalsValue ? ParseArrivals(arrivalsValue, timeUnit, known) : [];
         if (fields.TryGetValue(ArrivalCvKey, out var arrivalCvNode))
         {
             arrivals = ParseArrivalCv(arrivalCvNode, arrivals, arrivalsNode, known);
@@ -71,7 +73,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
 
     private TimeUnit ParseTimeUnit(YamlNode? node)
     {
-        if (node is null || Scalar(node, null, "time_unit") is not YamlScalar scalar)
+        if (node is not YamlNode given || Scalar(given, null, "time_unit") is not YamlScalar scalar)
         {
             return TimeUnit.Hour;
         }
@@ -134,16 +136,19 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         string label = fields.GetValueOrDefault("label") is YamlNode labelNode && Scalar(labelNode, id, "label") is YamlScalar labelScalar
             ? labelScalar.Value
             : id;
-        var servers = fields.TryGetValue("servers", out var serversNode) ? ServersField(serversNode, id) : null;
+        var serversNode = fields.GetValueOrDefault("servers");
+        var servers = serversNode is YamlNode serversValue ? ServersField(serversValue, id) : null;
         var service = ParseService(fields, mapping, id, timeUnit);
         if (serversNode is null)
         {
             Error(mapping.Location, id, DiagnosticCodes.MissingKey, "missing 'servers' (a whole number of at least 1, or unlimited)");
         }
 
-        int? capacity = fields.TryGetValue("capacity", out var capacityNode) ? ParseCapacity(capacityNode, id, servers) : null;
-        var whenFull = fields.TryGetValue("when_full", out var whenFullNode) ? ParseWhenFull(whenFullNode, id) : WhenFull.TurnAway;
-        if (whenFullNode is not null && capacityNode is null)
+        bool hasCapacity = fields.TryGetValue("capacity", out var capacityNode);
+        int? capacity = hasCapacity ? ParseCapacity(capacityNode, id, servers) : null;
+        bool hasWhenFull = fields.TryGetValue("when_full", out var whenFullNode);
+        var whenFull = hasWhenFull ? ParseWhenFull(whenFullNode, id) : WhenFull.TurnAway;
+        if (hasWhenFull && !hasCapacity)
         {
             Error(whenFullNode.Location, id, DiagnosticCodes.BadValue, "when_full needs 'capacity': a unit without a capacity is never full");
         }
@@ -162,14 +167,14 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             arrivals.Capacity = mapping.Entries.Count;
             foreach (var (key, value) in UniqueEntries(mapping, null))
             {
-                if (!KnownUnit(key, known, "arrivals"))
+                if (KnownId(key, known, "arrivals") is not string id)
                 {
                     continue;
                 }
 
-                if (Value(value, key.Value, FieldLabels.ArrivalRate, text => RateValue.Parse(text, timeUnit)) is double rate)
+                if (Value(value, id, FieldLabels.ArrivalRate, RateParser(timeUnit)) is double rate)
                 {
-                    arrivals.Add(new Arrival(key.Value, rate));
+                    arrivals.Add(new Arrival(id, rate));
                 }
             }
         }
@@ -191,7 +196,7 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
     {
         string where = groupId is null ? "routes" : string.Concat("group '", groupId, "': routes");
         var routes = ImmutableArray.CreateBuilder<Route>();
-        if (node is YamlScalar { IsNull: true } || Mapping(node, null, "routes") is not YamlMapping mapping)
+        if (node.IsNullScalar || Mapping(node, null, "routes") is not YamlMapping mapping)
         {
             return routes.ToImmutable();
         }
@@ -201,14 +206,13 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         _routeLocations.EnsureCapacity(mapping.Entries.Count);
         foreach (var (sourceKey, targets) in UniqueEntries(mapping, null))
         {
-            string from = sourceKey.Value;
-            if (!KnownUnit(sourceKey, known, where))
+            if (KnownId(sourceKey, known, where) is not string from)
             {
                 continue;
             }
 
             _routeLocations[from] = sourceKey.Location;
-            if (targets is YamlScalar { IsNull: true } || Mapping(targets, from, "routes") is not YamlMapping targetMap)
+            if (targets.IsNullScalar || Mapping(targets, from, "routes") is not YamlMapping targetMap)
             {
                 continue;
             }
@@ -217,10 +221,10 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
             foreach (var (targetKey, value) in UniqueEntries(targetMap, from))
             {
                 // The names in messages are built only on error: a 100,000-unit file has hundreds of thousands of routes.
-                if (KnownUnit(targetKey, known, where, groupId is null ? from : null, from)
-                    && Value(value, from, FieldLabels.RouteTo, ProbabilityValue.Parse, targetKey.Value) is double probability)
+                if (KnownId(targetKey, known, where, groupId is null ? from : null, from) is string to
+                    && Value(value, from, FieldLabels.RouteTo, ProbabilityValue.Parse, to) is double probability)
                 {
-                    routes.Add(new Route(from, targetKey.Value, probability));
+                    routes.Add(new Route(from, to, probability));
                     total += probability;
                 }
             }
@@ -241,23 +245,45 @@ internal sealed partial class NetworkFileParser(string fileName, List<Diagnostic
         int count = 0;
         foreach (var entry in routes.Entries)
         {
-            count += entry.Value is YamlMapping targets ? targets.Entries.Count : 0;
+            count += entry.Value.AsMapping is YamlMapping targets ? targets.Entries.Count : 0;
         }
 
         return count;
     }
 
-    private bool KnownUnit(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
+    private bool KnownUnit(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null) =>
+        KnownId(key, known, where, unitId, whereUnit) is not null;
+
+    /// <summary>
+    /// The id of the unit <paramref name="key"/> names, as the unit's own string (looked up by the key's text, so no
+    /// string is made per route or arrival); null after reporting an unknown unit.
+    /// </summary>
+    private string? KnownId(YamlKey key, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
     {
-        if (known.Contains(key.Value) || _unitLocations.ContainsKey(key.Value))
+        if (known.GetAlternateLookup<ReadOnlySpan<char>>().TryGetValue(key.Text, out string? id)
+            || _unitLocations.GetAlternateLookup<ReadOnlySpan<char>>().TryGetValue(key.Text, out id, out _))
+        {
+            return id;
+        }
+
+        ReportUnknownUnit(key.Location, key.Value, where, unitId, whereUnit);
+        return null;
+    }
+
+    private bool KnownUnit(SourceLocation location, string id, HashSet<string> known, string where, string? unitId = null, string? whereUnit = null)
+    {
+        if (known.Contains(id) || _unitLocations.ContainsKey(id))
         {
             return true;
         }
 
-        Error(key.Location, unitId, DiagnosticCodes.UnknownUnit,
-            $"{where}{(whereUnit is null ? string.Empty : "." + whereUnit)}: unknown unit '{key.Value}'{NearestName.Hint(key.Value, _unitLocations.Keys)}");
+        ReportUnknownUnit(location, id, where, unitId, whereUnit);
         return false;
     }
+
+    private void ReportUnknownUnit(SourceLocation location, string id, string where, string? unitId, string? whereUnit) =>
+        Error(location, unitId, DiagnosticCodes.UnknownUnit,
+            $"{where}{(whereUnit is null ? string.Empty : "." + whereUnit)}: unknown unit '{id}'{NearestName.Hint(id, _unitLocations.Keys)}");
 
     /// <summary>Letters, digits, '_' and '-', starting with a letter (ASCII, as the contract's examples).</summary>
     private static bool IsUnitId(string id)

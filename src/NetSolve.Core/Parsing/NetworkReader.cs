@@ -44,17 +44,17 @@ public static class NetworkReader
     public static ReadResult ReadTree(YamlNode? root, string fileName)
     {
         ArgumentNullException.ThrowIfNull(fileName);
-        if (root is null || root is YamlScalar { IsNull: true })
+        if (root is not YamlNode top || top.IsNullScalar)
         {
             return Failed(new SourceLocation(fileName, 1, 1), DiagnosticCodes.Empty, "the file is empty; a network file needs 'units' and 'arrivals'");
         }
 
         var diagnostics = new List<Diagnostic>();
-        var network = new NetworkFileParser(fileName, diagnostics).Parse(root);
+        var network = new NetworkFileParser(fileName, diagnostics).Parse(top);
         if (network is not null && !diagnostics.Any(d => d.IsError))
         {
             StructureRules.Check(network.Value.Network, network.Value.Locations, diagnostics);
-            BareNumbers.Check(root, network.Value.Network.TimeUnit, diagnostics);
+            BareNumbers.Check(top, network.Value.Network.TimeUnit, diagnostics);
         }
 
         var sorted = diagnostics

@@ -24,14 +24,18 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
         var fields = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
         foreach (var (key, value) in UniqueEntries(mapping, unitId))
         {
-            if (IsKnown(key, knownKeys, unitId))
+            if (KnownKey(key, knownKeys, unitId) is int index and >= 0)
             {
-                fields[key.Value] = value;
+                fields[knownKeys[index]] = value;
             }
         }
 
         return fields;
     }
+
+    /// <summary>The node under <paramref name="key"/> in fields read by <see cref="Fields"/>; null when the key is not there.</summary>
+    protected static YamlNode? Field(Dictionary<string, YamlNode> fields, string key) =>
+        fields.TryGetValue(key, out var node) ? node : null;
 
     /// <summary>
     /// The same checks and messages as <see cref="Fields"/>, with the fields left where they are in the mapping:
@@ -40,46 +44,60 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     protected FieldValues KnownFields(YamlMapping mapping, string[] knownKeys, string? unitId)
     {
         var entries = mapping.Entries;
-        int count = 0;
+        long present = 0;
         if (entries.Count > ScanLimit)
         {
             foreach (var (key, _) in UniqueEntries(mapping, unitId))
             {
-                count += IsKnown(key, knownKeys, unitId) ? 1 : 0;
+                present |= KnownKey(key, knownKeys, unitId) is int index and >= 0 ? 1L << index : 0;
             }
 
-            return new FieldValues(mapping, knownKeys, count);
+            return new FieldValues(mapping, knownKeys, present);
         }
 
-        for (int i = 0; i < entries.Count; i++)
+        foreach (var (key, _) in entries)
         {
-            var key = entries[i].Key;
-            if (FirstOccurrence(entries, i, null) is SourceLocation first)
+            if (FirstOccurrence(entries, key, null) is SourceLocation first)
             {
                 ReportDuplicate(key, first, unitId);
             }
-            else if (IsKnown(key, knownKeys, unitId))
+            else if (KnownKey(key, knownKeys, unitId) is int index and >= 0)
             {
-                count++;
+                present |= 1L << index;
             }
         }
 
-        return new FieldValues(mapping, knownKeys, count);
+        return new FieldValues(mapping, knownKeys, present);
     }
 
-    /// <summary>True for a key of <paramref name="knownKeys"/>; otherwise reports it with the nearest known key.</summary>
-    private bool IsKnown(YamlKey key, string[] knownKeys, string? unitId)
+    /// <summary>Where the key's text is in <paramref name="knownKeys"/>; otherwise -1, after reporting the key with the nearest known key.</summary>
+    private int KnownKey(YamlKey key, string[] knownKeys, string? unitId)
     {
-        if (Array.IndexOf(knownKeys, key.Value) >= 0)
+        if (IndexOf(knownKeys, key.Text) is int index and >= 0)
         {
-            return true;
+            return index;
         }
 
-        string hint = NearestName.Suggest(key.Value, knownKeys) is string best
+        string text = key.Value;
+        string hint = NearestName.Suggest(text, knownKeys) is string best
             ? $"; did you mean '{best}'?"
             : $" (known keys: {string.Join(", ", knownKeys)})";
-        Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{key.Value}'{hint}");
-        return false;
+        Error(key.Location, unitId, DiagnosticCodes.UnknownKey, $"unknown key '{text}'{hint}");
+        return -1;
+    }
+
+    /// <summary>Where <paramref name="text"/> is in <paramref name="names"/>; -1 when it is not.</summary>
+    internal static int IndexOf(string[] names, ReadOnlySpan<char> text)
+    {
+        for (int i = 0; i < names.Length; i++)
+        {
+            if (text.SequenceEqual(names[i]))
+            {
+                return i;
+            }
+        }
+
+        return -1;
     }
 
     internal void ReportDuplicate(YamlKey key, SourceLocation first, string? unitId) =>
@@ -89,24 +107,19 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     /// <summary>The entries of <paramref name="mapping"/> with a key not seen before in it; repeats are reported.</summary>
     protected UniqueEntryList UniqueEntries(YamlMapping mapping, string? unitId) => new(this, mapping, unitId);
 
-    /// <summary>Where the key of entry <paramref name="index"/> first appeared, when it appeared before.</summary>
-    internal static SourceLocation? FirstOccurrence(IReadOnlyList<YamlEntry> entries, int index, Dictionary<string, SourceLocation>? seen)
+    /// <summary>
+    /// Where <paramref name="key"/> of <paramref name="entries"/> first appeared, when it appeared before: looked up
+    /// in <paramref name="seen"/> (the earlier keys' places) when given, else by a scan of the earlier keys.
+    /// </summary>
+    internal static SourceLocation? FirstOccurrence(YamlEntries entries, YamlKey key, HashSet<int>? seen)
     {
-        string key = entries[index].Key.Value;
         if (seen is not null)
         {
-            return seen.TryGetValue(key, out var location) ? location : null;
+            return seen.TryGetValue(key.Index, out int earlier) ? entries.Tree.Location(earlier) : null;
         }
 
-        for (int j = 0; j < index; j++)
-        {
-            if (string.Equals(entries[j].Key.Value, key, StringComparison.Ordinal))
-            {
-                return entries[j].Key.Location;
-            }
-        }
-
-        return null;
+        int first = entries.Tree.EarlierKey(entries.FirstKey, key.Index);
+        return first >= 0 ? entries.Tree.Location(first) : null;
     }
 
     /// <summary>
@@ -114,16 +127,16 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
     /// message for the field <c>label 'labelUnit'</c> (<see cref="FieldLabels.For"/>) and returns null.
     /// </summary>
     /// <remarks>The field name is built only on a mistake: a 100,000-unit file has hundreds of thousands of routes.</remarks>
-    protected T? Value<T>(YamlNode node, string? unitId, string label, Func<string, ValueResult<T>> parse, string? labelUnit = null)
+    protected T? Value<T>(YamlNode node, string? unitId, string label, Func<ReadOnlySpan<char>, ValueResult<T>> parse, string? labelUnit = null)
         where T : struct
     {
-        if (node is not YamlScalar { IsNull: false } && Scalar(node, unitId, FieldLabels.For(label, labelUnit)) is null)
+        if (node.AsScalar is not YamlScalar { IsNull: false } scalar)
         {
+            Scalar(node, unitId, FieldLabels.For(label, labelUnit));
             return null;
         }
 
-        var scalar = (YamlScalar)node;
-        var result = parse(scalar.Value);
+        var result = parse(scalar.Text);
         if (!result.IsValid)
         {
             Error(scalar.Location, unitId, DiagnosticCodes.BadValue, result.MessageFor(FieldLabels.For(label, labelUnit)));
@@ -135,24 +148,24 @@ internal abstract class NodeParser(List<Diagnostic> diagnostics)
 
     /// <summary>Reads a unit's servers: a plain (unquoted) <see cref="ServersValue"/>; null after reporting a mistake.</summary>
     /// <remarks>The parser is chosen before the call, not inside a lambda over the node: no closure per unit.</remarks>
-    protected Servers? ServersField(YamlNode node, string unitId) => node is YamlScalar { IsPlain: false }
+    protected Servers? ServersField(YamlNode node, string unitId) => node.AsScalar is { IsPlain: false }
         ? Value(node, unitId, FieldLabels.Servers, ServersValue.Quoted)
         : Value(node, unitId, FieldLabels.Servers, ServersValue.Parse);
 
     protected YamlScalar? Scalar(YamlNode node, string? unitId, string what)
     {
-        if (node is YamlScalar scalar && !scalar.IsNull)
+        if (node.AsScalar is YamlScalar scalar && !scalar.IsNull)
         {
             return scalar;
         }
 
-        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node is YamlScalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
+        Error(node.Location, unitId, DiagnosticCodes.WrongShape, node.Kind == YamlNodeKind.Scalar ? $"{what} has no value" : $"{what} must be a single value, not a list or mapping");
         return null;
     }
 
     protected YamlMapping? Mapping(YamlNode node, string? unitId, string what)
     {
-        if (node is YamlMapping mapping)
+        if (node.AsMapping is YamlMapping mapping)
         {
             return mapping;
         }

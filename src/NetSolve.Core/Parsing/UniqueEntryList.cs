@@ -14,29 +14,32 @@ internal readonly struct UniqueEntryList(NodeParser parser, YamlMapping mapping,
 {
     public Enumerator GetEnumerator() => new(parser, mapping.Entries, unitId);
 
-    /// <summary>Walks the entries; mappings of more than <see cref="NodeParser.ScanLimit"/> keys look repeats up in a dictionary.</summary>
-    internal struct Enumerator(NodeParser parser, IReadOnlyList<YamlEntry> entries, string? unitId)
+    /// <summary>
+    /// Walks the entries; mappings of more than <see cref="NodeParser.ScanLimit"/> keys look repeats up in a set of
+    /// the keys' places, compared by their text in the file.
+    /// </summary>
+    internal struct Enumerator(NodeParser parser, YamlEntries entries, string? unitId)
     {
-        private readonly Dictionary<string, SourceLocation>? _seen = entries.Count > NodeParser.ScanLimit
-            ? new Dictionary<string, SourceLocation>(entries.Count, StringComparer.Ordinal)
+        private readonly HashSet<int>? _seen = entries.Count > NodeParser.ScanLimit
+            ? new HashSet<int>(entries.Count, new YamlKeyComparer(entries.Tree))
             : null;
 
-        private int _index = -1;
+        private YamlEntries.Enumerator _entries = entries.GetEnumerator();
 
         public (YamlKey Key, YamlNode Value) Current { get; private set; }
 
         public bool MoveNext()
         {
-            while (++_index < entries.Count)
+            while (_entries.MoveNext())
             {
-                var (key, value) = entries[_index];
-                if (NodeParser.FirstOccurrence(entries, _index, _seen) is SourceLocation first)
+                var (key, value) = _entries.Current;
+                if (NodeParser.FirstOccurrence(entries, key, _seen) is SourceLocation first)
                 {
                     parser.ReportDuplicate(key, first, unitId);
                     continue;
                 }
 
-                _seen?.Add(key.Value, key.Location);
+                _seen?.Add(key.Index);
                 Current = (key, value);
                 return true;
             }

@@ -16,7 +16,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
     public ScenarioReadResult Parse(YamlNode root)
     {
-        if (root is not YamlMapping top)
+        if (root.AsMapping is not YamlMapping top)
         {
             Error(root.Location, null, DiagnosticCodes.WrongShape, "the top level must be a mapping with 'base' and the changes");
             return Result(null);
@@ -101,7 +101,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
     private void Section(Dictionary<string, YamlNode> fields, string key, List<NetworkChange> changes, Func<YamlKey, YamlNode, NetworkChange?> parse)
     {
-        if (!fields.TryGetValue(key, out var node) || node is YamlScalar { IsNull: true } || Mapping(node, null, key) is not YamlMapping mapping)
+        if (!fields.TryGetValue(key, out var node) || node.IsNullScalar || Mapping(node, null, key) is not YamlMapping mapping)
         {
             return;
         }
@@ -159,7 +159,7 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
 
     private NetworkChange? ServersChange(YamlKey key, YamlNode node)
     {
-        if (node is YamlScalar { IsNull: false } scalar && (scalar.Value.StartsWith('+') || scalar.Value.StartsWith('-')))
+        if (node.AsScalar is YamlScalar { IsNull: false } scalar && scalar.Text[0] is '+' or '-')
         {
             return Value(node, key.Value, FieldLabels.Servers, AddedServersValue.Parse) is int added ? new AddServers(key.Location, key.Value, added) : null;
         }
@@ -174,14 +174,14 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             return null;
         }
 
-        if (scalar.Value.StartsWith('x'))
+        if (scalar.Text is ['x', ..])
         {
-            return Value(scalar, key.Value, FieldLabels.Service, text => FactorValue.Positive(WithoutTimes(text))) is double factor
+            return Value(scalar.Node, key.Value, FieldLabels.Service, text => FactorValue.Positive(WithoutTimes(text))) is double factor
                 ? new ScaleService(key.Location, key.Value, factor)
                 : null;
         }
 
-        return Value(scalar, key.Value, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit)) is double hours
+        return Value(scalar.Node, key.Value, FieldLabels.Service, text => DurationValue.Parse(text, timeUnit)) is double hours
             ? new SetService(key.Location, key.Value, hours)
             : null;
     }
@@ -193,21 +193,21 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
             return null;
         }
 
-        if (scalar.Value.StartsWith('x'))
+        if (scalar.Text is ['x', ..])
         {
-            return Value(scalar, key.Value, FieldLabels.Arrivals, text => FactorValue.NotNegative(WithoutTimes(text))) is double factor
+            return Value(scalar.Node, key.Value, FieldLabels.Arrivals, text => FactorValue.NotNegative(WithoutTimes(text))) is double factor
                 ? new ScaleArrivals(key.Location, key.Value, factor)
                 : null;
         }
 
-        return Value(scalar, key.Value, FieldLabels.ArrivalRate, text => RateValue.Parse(text, timeUnit)) is double perHour
+        return Value(scalar.Node, key.Value, FieldLabels.ArrivalRate, text => RateValue.Parse(text, timeUnit)) is double perHour
             ? new SetArrivals(key.Location, key.Value, perHour)
             : null;
     }
 
     private CloseUnit? CloseChange(YamlKey key, YamlNode node)
     {
-        if (node is YamlScalar { IsNull: true })
+        if (node.IsNullScalar)
         {
             Error(node.Location, key.Value, DiagnosticCodes.MissingKey, $"say where its patients go instead: a unit id or '{ScenarioReader.LeaveNetwork}'");
             return null;
@@ -219,5 +219,5 @@ internal sealed class ScenarioFileParser(string fileName, Func<string, ReadResul
     }
 
     /// <summary>A factor as the scenario file writes it, <c>x1.2</c>, without its <c>x</c>; the factor alone is what <c>--set</c> takes after <c>*=</c>.</summary>
-    private static string WithoutTimes(string text) => text.StartsWith('x') ? text[1..] : text;
+    private static ReadOnlySpan<char> WithoutTimes(ReadOnlySpan<char> text) => text is ['x', ..] ? text[1..] : text;
 }

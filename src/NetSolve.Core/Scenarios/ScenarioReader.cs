@@ -44,7 +44,7 @@ public static class ScenarioReader
             return Failed(exception.Location, DiagnosticCodes.NotYaml, exception.Message);
         }
 
-        if (root is YamlMapping mapping && !mapping.Entries.Any(entry => entry.Key.Value == "base"))
+        if (root?.AsMapping is YamlMapping mapping && mapping.Find("base") is null)
         {
             var network = NetworkReader.ReadTree(root, fileName);
             return network.Network is null
@@ -54,12 +54,12 @@ public static class ScenarioReader
                     network.Diagnostics);
         }
 
-        if (root is null || root is YamlScalar { IsNull: true })
+        if (root is not YamlNode top || top.IsNullScalar)
         {
             return Failed(new SourceLocation(fileName, 1, 1), DiagnosticCodes.Empty, "the file is empty; a scenario file needs 'base' and its changes");
         }
 
-        return new ScenarioFileParser(fileName, readBase).Parse(root);
+        return new ScenarioFileParser(fileName, readBase).Parse(top);
     }
 
     /// <summary>The base path as the program opens it: relative paths are taken from the scenario file's folder.</summary>

@@ -77,7 +77,7 @@ public sealed class InputCharacterTests
     {
         var root = LocatedYamlReader.Read("name:\tx   #\tnote\n", "f");
 
-        Assert.Equal("x", ((YamlScalar)((YamlMapping)root!).Entries[0].Value).Value);
+        Assert.Equal("x", root!.Value.AsMapping!.Value.Find("name")!.Value.AsScalar!.Value.Value);
     }
 
     [Fact]
@@ -85,7 +85,7 @@ public sealed class InputCharacterTests
     {
         var root = LocatedYamlReader.Read("name: \u05D0\u05D1 \u0627\u0644 \U0001F3E5 caf\u00E9\n", "f");
 
-        Assert.Equal("\u05D0\u05D1 \u0627\u0644 \U0001F3E5 caf\u00E9", ((YamlScalar)((YamlMapping)root!).Entries[0].Value).Value);
+        Assert.Equal("\u05D0\u05D1 \u0627\u0644 \U0001F3E5 caf\u00E9", root!.Value.AsMapping!.Value.Find("name")!.Value.AsScalar!.Value.Value);
     }
 
     [Fact]

@@ -7,11 +7,17 @@ namespace NetSolve.Parsing.Values;
 public static class AddedServersValue
 {
     /// <summary>Reads <paramref name="text"/> as a number of servers to add.</summary>
-    public static ValueResult<int> Parse(string text)
+    public static ValueResult<int> Parse(ReadOnlySpan<char> text)
     {
-        ArgumentNullException.ThrowIfNull(text);
         return int.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out int added)
             ? ValueResult<int>.Valid(added)
             : ValueResult<int>.Invalid($"'{text}' is not a whole number of servers to add (write e.g. +2, or -1 to remove one)");
+    }
+
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char})"/>
+    public static ValueResult<int> Parse(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan());
     }
 }

@@ -8,7 +8,7 @@ namespace NetSolve.Parsing.Values;
 public static class CvValue
 {
     /// <summary>Reads <paramref name="text"/> as a coefficient of variation.</summary>
-    public static ValueResult<double> Parse(string text)
+    public static ValueResult<double> Parse(ReadOnlySpan<char> text)
     {
         var number = NumberValue.Parse(text);
         if (!number.IsValid)
@@ -20,5 +20,12 @@ public static class CvValue
         return number.Value <= ValueRanges.LargestCv
             ? number
             : ValueResult<double>.Invalid($"'{text}' is not a coefficient of variation ({ValueRanges.CvRange}; 1 is exponential, 0 evenly spaced)");
+    }
+
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char})"/>
+    public static ValueResult<double> Parse(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan());
     }
 }

@@ -15,10 +15,9 @@ public static class DurationValue
     /// <summary>Reads <paramref name="text"/> as a duration in hours.</summary>
     /// <param name="text">The text as written.</param>
     /// <param name="timeUnit">The file's time unit, for a bare number.</param>
-    public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
+    public static ValueResult<double> Parse(ReadOnlySpan<char> text, TimeUnit timeUnit)
     {
-        ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, string.Empty, out var number, out string suffix) || !NumberText.IsTimeSuffix(suffix)
+        if (!NumberText.Split(text, string.Empty, out var number, out var suffix) || !NumberText.IsTimeSuffix(suffix)
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid(
@@ -38,6 +37,13 @@ public static class DurationValue
 
         string which = hours > ValueRanges.LongestHours ? "too long" : "too short";
         return ValueResult<double>.Invalid($"'{text}' is {which} for a duration ({ValueRanges.DurationRange})");
+    }
+
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char}, TimeUnit)"/>
+    public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan(), timeUnit);
     }
 
     /// <summary>True for a number of hours within <see cref="ValueRanges.DurationRange"/> (so finite, normal, with a finite reciprocal).</summary>

@@ -12,14 +12,13 @@ namespace NetSolve.Parsing.Values;
 public static class FactorValue
 {
     /// <summary>Reads a factor more than 0 (for a duration).</summary>
-    public static ValueResult<double> Positive(string text) => Parse(text, allowZero: false);
+    public static ValueResult<double> Positive(ReadOnlySpan<char> text) => Parse(text, allowZero: false);
 
     /// <summary>Reads a factor of 0 or more (for an arrival rate).</summary>
-    public static ValueResult<double> NotNegative(string text) => Parse(text, allowZero: true);
+    public static ValueResult<double> NotNegative(ReadOnlySpan<char> text) => Parse(text, allowZero: true);
 
-    private static ValueResult<double> Parse(string text, bool allowZero)
+    private static ValueResult<double> Parse(ReadOnlySpan<char> text, bool allowZero)
     {
-        ArgumentNullException.ThrowIfNull(text);
         if (!NumberText.IsNumber(text, out double factor))
         {
             return ValueResult<double>.Invalid($"'{text}' is not a factor (write a number, e.g. 1.2 for 20% more)");

@@ -9,17 +9,17 @@ namespace NetSolve.Parsing.Values;
 internal static class NumberText
 {
     /// <summary>The time suffixes a duration or rate may carry, besides none (the file's time unit).</summary>
-    public static bool IsTimeSuffix(string suffix) => suffix is "" or "s" or "min" or "h" or "d";
+    public static bool IsTimeSuffix(ReadOnlySpan<char> suffix) => suffix is "" or "s" or "min" or "h" or "d";
 
     /// <summary>Hours in one <paramref name="suffix"/>; none means one <paramref name="timeUnit"/>.</summary>
-    public static double HoursPerSuffix(string suffix, TimeUnit timeUnit) => suffix switch
+    public static double HoursPerSuffix(ReadOnlySpan<char> suffix, TimeUnit timeUnit) => suffix switch
     {
         "" => TimeConstants.HoursPer(timeUnit),
         "s" => 1.0 / TimeConstants.SecondsPerHour,
         "min" => 1.0 / TimeConstants.MinutesPerHour,
         "h" => 1.0,
         "d" => TimeConstants.HoursPerDay,
-        _ => throw new ArgumentOutOfRangeException(nameof(suffix), suffix, "Unknown time suffix."),
+        _ => throw new ArgumentOutOfRangeException(nameof(suffix), suffix.ToString(), "Unknown time suffix."),
     };
 
     /// <summary>The number <paramref name="text"/> is, in full; false when it is anything else or overflows.</summary>
@@ -42,11 +42,11 @@ internal static class NumberText
     /// Splits <c>NUMBER[ ]MARKER SUFFIX</c>: a number in the contract's form, then (only when anything follows) one
     /// optional space, <paramref name="marker"/> and the rest as the suffix. False when no number starts the text.
     /// </summary>
-    public static bool Split(string text, string marker, out ReadOnlySpan<char> number, out string suffix)
+    public static bool Split(ReadOnlySpan<char> text, string marker, out ReadOnlySpan<char> number, out ReadOnlySpan<char> suffix)
     {
         int length = NumberLength(text);
-        number = text.AsSpan(0, length);
-        suffix = string.Empty;
+        number = text[..length];
+        suffix = [];
         if (length == 0)
         {
             return false;
@@ -58,27 +58,15 @@ internal static class NumberText
         }
 
         int rest = text[length] == ' ' ? length + 1 : length;
-        if (!text.AsSpan(rest).StartsWith(marker, StringComparison.Ordinal))
+        if (!text[rest..].StartsWith(marker, StringComparison.Ordinal))
         {
             return false;
         }
 
-        suffix = KnownSuffix(text.AsSpan(rest + marker.Length)) ?? text[(rest + marker.Length)..];
+        suffix = text[(rest + marker.Length)..];
         return suffix.Length > 0;
     }
 
-    /// <summary>The one shared string for a common suffix, so that reading 100,000 durations makes no copy of "min".</summary>
-    private static string? KnownSuffix(ReadOnlySpan<char> suffix) => suffix switch
-    {
-        "min" => "min",
-        "h" => "h",
-        "s" => "s",
-        "d" => "d",
-        "%" => "%",
-        _ => null,
-    };
-
-    /// <summary>Length of the number at the start of <paramref name="text"/>; 0 when there is none.</summary>
     private static int NumberLength(ReadOnlySpan<char> text)
     {
         int i = 0;

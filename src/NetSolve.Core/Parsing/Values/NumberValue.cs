@@ -6,9 +6,8 @@ namespace NetSolve.Parsing.Values;
 public static class NumberValue
 {
     /// <summary>Reads <paramref name="text"/> as a finite number.</summary>
-    public static ValueResult<double> Parse(string text)
+    public static ValueResult<double> Parse(ReadOnlySpan<char> text)
     {
-        ArgumentNullException.ThrowIfNull(text);
         if (!NumberText.IsNumber(text, out double value))
         {
             return ValueResult<double>.Invalid($"'{text}' is not a number");
@@ -23,5 +22,12 @@ public static class NumberValue
         return value == 0.0 || double.IsNormal(value)
             ? ValueResult<double>.Valid(value == 0.0 ? 0.0 : value)
             : ValueResult<double>.Invalid($"'{text}' is too small for a number (write 0, or a number of at least 1e-300)");
+    }
+
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char})"/>
+    public static ValueResult<double> Parse(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan());
     }
 }

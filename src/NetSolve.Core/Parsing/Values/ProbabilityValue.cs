@@ -8,16 +8,15 @@ namespace NetSolve.Parsing.Values;
 public static class ProbabilityValue
 {
     /// <summary>Reads <paramref name="text"/> as a probability.</summary>
-    public static ValueResult<double> Parse(string text)
+    public static ValueResult<double> Parse(ReadOnlySpan<char> text)
     {
-        ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, string.Empty, out var number, out string suffix) || suffix is not ("" or "%")
+        if (!NumberText.Split(text, string.Empty, out var number, out var suffix) || suffix is not ("" or "%")
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid($"'{text}' is not a probability (write e.g. 0.35 or 35%)");
         }
 
-        double probability = suffix == "%" ? amount / 100.0 : amount;
+        double probability = suffix is "%" ? amount / 100.0 : amount;
         if (probability is < 0.0 or > 1.0)
         {
             return ValueResult<double>.Invalid($"'{text}' is not between 0 and 1");
@@ -26,5 +25,12 @@ public static class ProbabilityValue
         return probability == 0.0 || probability >= ValueRanges.SmallestProbability
             ? ValueResult<double>.Valid(probability == 0.0 ? 0.0 : probability)
             : ValueResult<double>.Invalid($"'{text}' is too small for a probability ({ValueRanges.ProbabilityRange})");
+    }
+
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char})"/>
+    public static ValueResult<double> Parse(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan());
     }
 }

@@ -13,10 +13,9 @@ public static class RateValue
     /// <summary>Reads <paramref name="text"/> as a rate in events per hour.</summary>
     /// <param name="text">The text as written.</param>
     /// <param name="timeUnit">The file's time unit, for a bare number.</param>
-    public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
+    public static ValueResult<double> Parse(ReadOnlySpan<char> text, TimeUnit timeUnit)
     {
-        ArgumentNullException.ThrowIfNull(text);
-        if (!NumberText.Split(text, "/", out var number, out string suffix) || !NumberText.IsTimeSuffix(suffix)
+        if (!NumberText.Split(text, "/", out var number, out var suffix) || !NumberText.IsTimeSuffix(suffix)
             || !NumberText.IsNumber(number, out double amount))
         {
             return ValueResult<double>.Invalid(
@@ -36,5 +35,12 @@ public static class RateValue
 
         string which = perHour > ValueRanges.LargestRatePerHour ? "too large" : "too small";
         return ValueResult<double>.Invalid($"'{text}' is {which} for a rate ({ValueRanges.RateRange})");
+    }
+
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char}, TimeUnit)"/>
+    public static ValueResult<double> Parse(string text, TimeUnit timeUnit)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan(), timeUnit);
     }
 }

@@ -8,15 +8,14 @@ namespace NetSolve.Parsing.Values;
 public static class ServersValue
 {
     /// <summary>Reads <paramref name="text"/> as a number of servers.</summary>
-    public static ValueResult<Servers> Parse(string text)
+    public static ValueResult<Servers> Parse(ReadOnlySpan<char> text)
     {
-        ArgumentNullException.ThrowIfNull(text);
-        if (text == "unlimited")
+        if (text is "unlimited")
         {
             return ValueResult<Servers>.Valid(Servers.Unlimited);
         }
 
-        if (text.Length == 0 || text.AsSpan().ContainsAnyExceptInRange('0', '9'))
+        if (text.Length == 0 || text.ContainsAnyExceptInRange('0', '9'))
         {
             return NotServers(text);
         }
@@ -30,10 +29,17 @@ public static class ServersValue
         return count >= 1 ? ValueResult<Servers>.Valid(Servers.Of(count)) : NotServers(text);
     }
 
+    /// <inheritdoc cref="Parse(ReadOnlySpan{char})"/>
+    public static ValueResult<Servers> Parse(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return Parse(text.AsSpan());
+    }
+
     /// <summary>The error for a quoted YAML value, which a number of servers never is.</summary>
-    public static ValueResult<Servers> Quoted(string text) =>
+    public static ValueResult<Servers> Quoted(ReadOnlySpan<char> text) =>
         ValueResult<Servers>.Invalid($"'{text}' is quoted (write a number of servers, or unlimited, without quotes)");
 
-    private static ValueResult<Servers> NotServers(string text) => ValueResult<Servers>.Invalid(string.Create(CultureInfo.InvariantCulture,
+    private static ValueResult<Servers> NotServers(ReadOnlySpan<char> text) => ValueResult<Servers>.Invalid(string.Create(CultureInfo.InvariantCulture,
         $"'{text}' is not a number of servers (write a whole number from 1 to {Servers.MaxCount}, or unlimited)"));
 }

@@ -1,5 +1,6 @@
 using System.Text;
 using NetSolve.Parsing;
+using NetSolve.Tests.Hardening;
 using NetSolve.Tests.Support;
 
 namespace NetSolve.Tests.Core.Parsing;
@@ -72,7 +73,7 @@ public sealed class BlockYamlReaderTests
         }
 
         YamlNode? reference = LocatedYamlReader.ReadWithYamlDotNet(text, "f");
-        Assert.Equal(Dump(reference), Dump(fast));
+        Assert.Equal(YamlTreeText.Of(reference), YamlTreeText.Of(fast));
         return true;
     }
 
@@ -122,14 +123,4 @@ public sealed class BlockYamlReaderTests
         }
     }
 
-    private static string Dump(YamlNode? node) => node switch
-    {
-        null => "null",
-        YamlScalar scalar => $"S({scalar.Location},{scalar.Value},{scalar.IsPlain})",
-        YamlMapping mapping => $"M({mapping.Location};" + string.Join(";", mapping.Entries.Select(e => Dump(e.Key) + "=" + Dump(e.Value))) + ")",
-        YamlSequence sequence => $"Q({sequence.Location};" + string.Join(";", sequence.Items.Select(Dump)) + ")",
-        _ => throw new ArgumentOutOfRangeException(nameof(node)),
-    };
-
-    private static string Dump(YamlKey key) => $"S({key.Location},{key.Value},{key.IsPlain})";
 }
