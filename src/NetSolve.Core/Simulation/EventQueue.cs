@@ -76,7 +76,11 @@ internal sealed class EventQueue
         return top;
     }
 
-    /// <summary>Removes the earliest event; the queue must not be empty.</summary>
+    /// <summary>
+    /// Removes the earliest event; the queue must not be empty. Hints the slot of the event that is now earliest
+    /// (<see cref="CachePrefetch"/>): an event loop that removes an event before handling it then finds the next one
+    /// in cache, its miss overlapped with the handling (unless the handling schedules an even earlier event).
+    /// </summary>
     public void RemoveEarliest()
     {
         int slot = _winners[1];
@@ -84,6 +88,7 @@ internal sealed class EventQueue
         _free[_freeCount++] = slot;
         Count--;
         Replay(slot);
+        CachePrefetch.Element(_payloads, _winners[1]);
     }
 
     /// <summary>

@@ -44,7 +44,6 @@ internal sealed partial class SimulationEngine
     private readonly double[] _groupTimeSum;
     private readonly DurationHistogram[] _groupHistograms;
     private readonly JourneyTracker? _journeys;
-    private bool _handledStillQueued;
     private long _entered;
     private long _networkTurnedAway;
 
@@ -94,15 +93,17 @@ internal sealed partial class SimulationEngine
         int handled = 0;
         while (handled < ChunkEvents && _events.EarliestTime <= _end)
         {
-            // The event stays in the queue while it is handled: the first event it schedules takes its place in one
-            // pass (see Schedule), and it is removed on its own only if it schedules none.
+            // The event leaves the queue before it is handled: the removal names the next earliest event at once, so
+            // its slot is hinted now and read from cache when its turn comes (see EventQueue.RemoveEarliest). The
+            // first event this one schedules takes the freed slot back (last freed, first reused), on the path just
+            // walked, so the events keep their slots and ties resolve as they would with the slot replaced in place.
             var next = _events.Earliest;
             if (next.Time >= _nextSample)
             {
                 SampleSeries(next.Time);
             }
 
-            _handledStillQueued = true;
+            _events.RemoveEarliest();
             handled++;
             if (next.IsArrival)
             {
@@ -115,11 +116,6 @@ internal sealed partial class SimulationEngine
             else
             {
                 OnServiceEnd(next);
-            }
-
-            if (_handledStillQueued)
-            {
-                _events.RemoveEarliest();
             }
         }
 
@@ -345,19 +341,8 @@ internal sealed partial class SimulationEngine
         Schedule(new SimulationEvent(now + service, unit, patient) { Group = group, UnitArrival = unitArrival, ServiceStart = now });
     }
 
-    /// <summary>Adds an event: in place of the event being handled if it is still queued, else as a new one.</summary>
-    private void Schedule(in SimulationEvent item)
-    {
-        if (_handledStillQueued)
-        {
-            _handledStillQueued = false;
-            _events.ReplaceEarliest(item);
-        }
-        else
-        {
-            _events.Push(item);
-        }
-    }
+    /// <summary>Adds an event.</summary>
+    private void Schedule(in SimulationEvent item) => _events.Push(item);
 
     private void Leave(double now, int patient, int group)
     {
