@@ -44,6 +44,9 @@ internal sealed partial class SimulationEngine
     private readonly double[] _groupTimeSum;
     private readonly DurationHistogram[] _groupHistograms;
     private readonly JourneyTracker? _journeys;
+
+    // Whether the event being handled is still in the queue, where the first event it schedules takes its slot.
+    private bool _handledStillQueued;
     private long _entered;
     private long _networkTurnedAway;
 
@@ -93,17 +96,28 @@ internal sealed partial class SimulationEngine
         int handled = 0;
         while (handled < ChunkEvents && _events.EarliestTime <= _end)
         {
-            // The event leaves the queue before it is handled: the removal names the next earliest event at once, so
-            // its slot is hinted now and read from cache when its turn comes (see EventQueue.RemoveEarliest). The
-            // first event this one schedules takes the freed slot back (last freed, first reused), on the path just
-            // walked, so the events keep their slots and ties resolve as they would with the slot replaced in place.
+            // With many units the event leaves the queue before it is handled: the removal names the next earliest
+            // event at once, so its slot is hinted now and read from cache when its turn comes, its miss overlapped
+            // with the handling (see EventQueue.RemoveEarliest); the first event this one schedules takes the freed
+            // slot back (last freed, first reused). With few units everything is in cache and the hint gains nothing,
+            // while removing and adding walk the tree twice: the event stays in the queue while it is handled, and
+            // the first event it schedules takes its place in one walk (ReplaceEarliest). Both leave every event in
+            // the same slot and the tree in the same state, so the two ways simulate the same patients.
             var next = _events.Earliest;
             if (next.Time >= _nextSample)
             {
                 SampleSeries(next.Time);
             }
 
-            _events.RemoveEarliest();
+            if (_hintMemory)
+            {
+                _events.RemoveEarliest();
+            }
+            else
+            {
+                _handledStillQueued = true;
+            }
+
             handled++;
             if (next.IsArrival)
             {
@@ -116,6 +130,12 @@ internal sealed partial class SimulationEngine
             else
             {
                 OnServiceEnd(next);
+            }
+
+            if (_handledStillQueued)
+            {
+                _handledStillQueued = false;
+                _events.RemoveEarliest();
             }
         }
 
@@ -341,8 +361,19 @@ internal sealed partial class SimulationEngine
         Schedule(new SimulationEvent(now + service, unit, patient) { Group = group, UnitArrival = unitArrival, ServiceStart = now });
     }
 
-    /// <summary>Adds an event.</summary>
-    private void Schedule(in SimulationEvent item) => _events.Push(item);
+    /// <summary>Adds an event: in place of the event being handled if it is still queued, else as a new one.</summary>
+    private void Schedule(in SimulationEvent item)
+    {
+        if (_handledStillQueued)
+        {
+            _handledStillQueued = false;
+            _events.ReplaceEarliest(item);
+        }
+        else
+        {
+            _events.Push(item);
+        }
+    }
 
     private void Leave(double now, int patient, int group)
     {
