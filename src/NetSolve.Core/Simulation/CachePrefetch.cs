@@ -26,6 +26,21 @@ internal static class CachePrefetch
         }
     }
 
+    /// <summary>
+    /// Hints the line holding <paramref name="array"/>[<paramref name="index"/>] without reading the array's length,
+    /// which <see cref="Element"/> does and which, for an array not yet in cache, is itself a miss that the processor
+    /// waits for. The caller knows that the index is inside the array (a hint outside it would change nothing anyway:
+    /// the instruction never faults).
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static unsafe void KnownElement<T>(T[] array, int index)
+    {
+        if (Sse.IsSupported)
+        {
+            Sse.Prefetch0(Unsafe.AsPointer(ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(array), index)));
+        }
+    }
+
     /// <summary>Hints the first line of <paramref name="instance"/>: its type and its first fields.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static unsafe void Object(object instance)

@@ -81,7 +81,8 @@ internal sealed class DurationHistogram
             int index = (int)(key >> SubBucketBits) - _firstOctave;
             if ((uint)index < (uint)_octaves.Length && _octaves[index] is long[] octave)
             {
-                CachePrefetch.Element(octave, (int)(key & (BucketsPerOctave - 1)));
+                // Every octave holds BucketsPerOctave counts.
+                CachePrefetch.KnownElement(octave, (int)(key & (BucketsPerOctave - 1)));
             }
 
             return;
@@ -93,7 +94,8 @@ internal sealed class DurationHistogram
         int step = Math.Max(16, count >> 3);
         for (int k = 0; k < count; k += step)
         {
-            CachePrefetch.Element(sparse, k);
+            // The first count pairs are inside the array.
+            CachePrefetch.KnownElement(sparse, k);
         }
     }
 

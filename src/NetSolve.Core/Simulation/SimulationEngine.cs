@@ -44,11 +44,17 @@ internal sealed partial class SimulationEngine
     private readonly double[] _groupTimeSum;
     private readonly DurationHistogram[] _groupHistograms;
     private readonly JourneyTracker? _journeys;
+
+    // Whether the event being handled is still in the queue, where the first event it schedules takes its slot.
     private bool _handledStillQueued;
     private long _entered;
     private long _networkTurnedAway;
 
-    public SimulationEngine(CompiledNetwork network, MetricLayout layout, double[] waitThresholdsHours, double warmupHours, double durationHours, ulong seed, int replication)
+    /// <summary>
+    /// Sets up one replication. <paramref name="hintMemory"/>: whether to hint memory ahead and take each event out of
+    /// the queue before handling it, by default from 1,024 units; either way gives the same results (tests run both).
+    /// </summary>
+    public SimulationEngine(CompiledNetwork network, MetricLayout layout, double[] waitThresholdsHours, double warmupHours, double durationHours, ulong seed, int replication, bool? hintMemory = null)
     {
         _network = network;
         _layout = layout;
@@ -75,7 +81,7 @@ internal sealed partial class SimulationEngine
         _unitTimes = new DeferredDurations(_unitHistograms);
         _groups = network.Groups;
         _samplers = network.Samplers;
-        _hintMemory = n >= HintMemoryFrom;
+        _hintMemory = hintMemory ?? n >= HintMemoryFrom;
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
         _groupHistograms = NewHistograms(groups);
@@ -94,15 +100,28 @@ internal sealed partial class SimulationEngine
         int handled = 0;
         while (handled < ChunkEvents && _events.EarliestTime <= _end)
         {
-            // The event stays in the queue while it is handled: the first event it schedules takes its place in one
-            // pass (see Schedule), and it is removed on its own only if it schedules none.
+            // With many units the event leaves the queue before it is handled: the removal names the next earliest
+            // event at once, so its slot is hinted now and read from cache when its turn comes, its miss overlapped
+            // with the handling (see EventQueue.RemoveEarliest); the first event this one schedules takes the freed
+            // slot back (last freed, first reused). With few units everything is in cache and the hint gains nothing,
+            // while removing and adding walk the tree twice: the event stays in the queue while it is handled, and
+            // the first event it schedules takes its place in one walk (ReplaceEarliest). Both leave every event in
+            // the same slot and the tree in the same state, so the two ways simulate the same patients.
             var next = _events.Earliest;
             if (next.Time >= _nextSample)
             {
                 SampleSeries(next.Time);
             }
 
-            _handledStillQueued = true;
+            if (_hintMemory)
+            {
+                _events.RemoveEarliest();
+            }
+            else
+            {
+                _handledStillQueued = true;
+            }
+
             handled++;
             if (next.IsArrival)
             {
@@ -119,6 +138,7 @@ internal sealed partial class SimulationEngine
 
             if (_handledStillQueued)
             {
+                _handledStillQueued = false;
                 _events.RemoveEarliest();
             }
         }
@@ -416,65 +436,5 @@ internal sealed partial class SimulationEngine
         }
 
         return k;
-    }
-
-    /// <summary>The later of <paramref name="time"/> and the end of the warm-up: where a span inside the window starts.</summary>
-    /// <remarks>A plain comparison: Math.Max also orders NaN and −0, which these times never are, at a cost per call.</remarks>
-    private double InWindow(double time) => time > _warmupEnd ? time : _warmupEnd;
-
-    /// <summary>
-    /// Adds one patient's wait from <paramref name="from"/> to <paramref name="to"/> (inside the statistics window) to
-    /// the unit's queue area and to its area by hour of day.
-    /// </summary>
-    /// <remarks>
-    /// The area under the queue-length curve is the sum of the waits inside the window, so it is added up per patient
-    /// when a wait ends (and for those still waiting when the run ends) rather than at every change of the queue: a
-    /// patient who never waits costs nothing, and the busy area is added the same way when a service ends. Times are
-    /// not negative, so truncation is the floor. A unit's 24 hourly areas are made with its first wait: in a large
-    /// network most units never queue, and 192 bytes for each of them would be most of the engine's memory.
-    /// </remarks>
-    private void AddQueueSpan(int unit, double from, double to)
-    {
-        _units[unit].QueueArea += to - from;
-        var byHour = _queueAreaByHour[unit] ??= new double[24];
-        long hour = (long)from;
-        double hourEnd = hour + 1.0;
-        int slot = (int)(hour % 24);
-        while (to > hourEnd)
-        {
-            byHour[slot] += hourEnd - from;
-            from = hourEnd;
-            hourEnd += 1.0;
-            slot = slot == 23 ? 0 : slot + 1;
-        }
-
-        byHour[slot] += to - from;
-    }
-
-    /// <summary>Adds the spans still open when the run ends: waits of queued patients and services in progress.</summary>
-    private void CloseOpenSpans()
-    {
-        if (_end <= _warmupEnd)
-        {
-            return;
-        }
-
-        for (int u = 0; u < _units.Length; u++)
-        {
-            var queue = _queues[u];
-            ref readonly var state = ref _units[u];
-            for (int k = 0; k < state.Queued; k++)
-            {
-                AddQueueSpan(u, InWindow(queue[(state.QueueHead + k) & (queue.Length - 1)].UnitArrival), _end);
-            }
-        }
-
-        foreach (var pending in _events.Pending())
-        {
-            if (pending.IsServiceEnd)
-            {
-                _units[pending.Unit].BusyArea += _end - InWindow(pending.ServiceStart);
-            }
-        }
     }
 }
