@@ -38,9 +38,11 @@ internal sealed class DurationHistogram
     private long[]?[] _octaves = [];
     private int _firstOctave;
 
-    // While sparse (_octaves empty): bucket key << CountBits | count, sorted by key, in the first _sparseCount entries.
+    // While sparse (_octaves empty): bucket key << CountBits | count in the first _sparseCount entries; the first
+    // _sortedCount of them sorted by key, one per bucket, the rest counted since, one per duration, in arrival order.
     private uint[] _sparse = [];
     private int _sparseCount;
+    private int _sortedCount;
     private bool _isDense;
 
     /// <summary>Whether the buckets are still held as sorted pairs rather than octave arrays.</summary>
@@ -88,14 +90,12 @@ internal sealed class DurationHistogram
             return;
         }
 
-        // 16 pairs to a 64-byte line; at most 8 lines, evenly spaced, for the largest sparse arrays.
+        // A count is appended after the last pair: one line, unless the array is full and is settled first.
         var sparse = _sparse;
-        int count = _sparseCount;
-        int step = Math.Max(16, count >> 3);
-        for (int k = 0; k < count; k += step)
+        if (sparse.Length > 0)
         {
-            // The first count pairs are inside the array.
-            CachePrefetch.KnownElement(sparse, k);
+            // Both indices are inside the array.
+            CachePrefetch.KnownElement(sparse, Math.Min(_sparseCount, sparse.Length - 1));
         }
     }
 
@@ -103,6 +103,8 @@ internal sealed class DurationHistogram
     public void Add(DurationHistogram other)
     {
         ArgumentNullException.ThrowIfNull(other);
+        other.Settle();
+        Settle();
         Zeros += other.Zeros;
         Count += other.Count;
         for (int k = 0; k < other._sparseCount; k++)
@@ -207,6 +209,7 @@ internal sealed class DurationHistogram
     /// <summary>Every bucket holding a count, shortest first, with its edges: the walk shared by quantiles, shares and pooling.</summary>
     public IEnumerable<(double Low, double High, long Count)> NonEmptyBuckets()
     {
+        Settle();
         for (int k = 0; k < _sparseCount; k++)
         {
             long key = _sparse[k] >> CountBits;
@@ -245,8 +248,148 @@ internal sealed class DurationHistogram
             throw new ArgumentOutOfRangeException(nameof(duration), duration, "A duration is zero or positive and finite.");
         }
 
-        AddToBucket(BitConverter.DoubleToInt64Bits(duration) >> MantissaShift, 1);
+        long key = BitConverter.DoubleToInt64Bits(duration) >> MantissaShift;
+        if (!_isDense && !AppendSparse(key))
+        {
+            TurnDense();
+        }
+
+        if (_isDense)
+        {
+            OctaveFor((int)(key >> SubBucketBits))[key & (BucketsPerOctave - 1)]++;
+        }
+
         Count++;
+    }
+
+    /// <summary>
+    /// Sorts the counts appended since the last time into the sorted pairs, one pair per bucket (or turns the
+    /// histogram dense when they do not fit the sparse form). Reading the buckets does this first; call it once a
+    /// replication has finished so that histograms read from several threads are not changed by the reading.
+    /// </summary>
+    public void Settle()
+    {
+        if (!_isDense && _sortedCount != _sparseCount && !Merge())
+        {
+            TurnDense();
+        }
+    }
+
+    /// <summary>
+    /// Appends one count of bucket <paramref name="key"/> after the pairs, settling them first when the array is full;
+    /// false when the histogram should turn dense instead.
+    /// </summary>
+    /// <remarks>
+    /// Appending reads and writes one cache line, where an insertion in order searched the pairs (branches that the
+    /// processor cannot predict) and moved half of them. Settling then sorts the appended counts and merges them in,
+    /// once for every eighth of the array at least, so each count costs a few steps of a sequential merge.
+    /// </remarks>
+    private bool AppendSparse(long key)
+    {
+        if (_sparseCount == _sparse.Length && !MakeRoom())
+        {
+            return false;
+        }
+
+        _sparse[_sparseCount++] = ((uint)key << CountBits) | 1u;
+        return true;
+    }
+
+    /// <summary>Settles the pairs and grows the array when settling freed less than an eighth of it; false to turn dense.</summary>
+    private bool MakeRoom()
+    {
+        if (_sortedCount != _sparseCount && !Merge())
+        {
+            return false;
+        }
+
+        int length = _sparse.Length;
+        if (length - _sparseCount >= Math.Max(1, length >> 3))
+        {
+            return true;
+        }
+
+        if (length == SparseBuckets)
+        {
+            // Nearly every pair a bucket of its own: settling again and again would cost more than the dense form.
+            return false;
+        }
+
+        // Half as much again rather than twice: a network of 100,000 units holds 100,000 of these arrays, and
+        // doubling left a third of them unused on average.
+        Array.Resize(ref _sparse, Math.Min(SparseBuckets, Math.Max(4, length + (length >> 1))));
+        return true;
+    }
+
+    /// <summary>
+    /// Sorts the appended counts and merges them into the sorted pairs, one pair per bucket; false (with every count
+    /// still held, some buckets in two pairs) when a bucket's count would not fit its 14 bits.
+    /// </summary>
+    private bool Merge()
+    {
+        int sorted = _sortedCount;
+        int added = _sparseCount - sorted;
+        Span<uint> tail = stackalloc uint[SparseBuckets];
+        tail = tail[..added];
+        _sparse.AsSpan(sorted, added).CopyTo(tail);
+        tail.Sort();
+
+        // Buckets counted more than once since the last merge: one pair each.
+        int distinct = 0;
+        for (int k = 0; k < added; k++)
+        {
+            if (distinct > 0 && (tail[distinct - 1] >> CountBits) == (tail[k] >> CountBits) && (tail[distinct - 1] & SparseCountMask) + (tail[k] & SparseCountMask) <= SparseCountMask)
+            {
+                tail[distinct - 1] += tail[k] & SparseCountMask;
+            }
+            else
+            {
+                tail[distinct++] = tail[k];
+            }
+        }
+
+        // Merged from the back, so that the sorted pairs move only once; a bucket in both adds its counts.
+        var pairs = _sparse;
+        int i = sorted - 1;
+        int j = distinct - 1;
+        int write = sorted + distinct - 1;
+        bool fits = true;
+        while (j >= 0)
+        {
+            uint fromTail = tail[j];
+            if (i >= 0 && (pairs[i] >> CountBits) > (fromTail >> CountBits))
+            {
+                pairs[write--] = pairs[i--];
+            }
+            else if (i >= 0 && (pairs[i] >> CountBits) == (fromTail >> CountBits) && (pairs[i] & SparseCountMask) + (fromTail & SparseCountMask) <= SparseCountMask)
+            {
+                pairs[write--] = pairs[i--] + (fromTail & SparseCountMask);
+                j--;
+            }
+            else
+            {
+                fits &= i < 0 || (pairs[i] >> CountBits) != (fromTail >> CountBits);
+                pairs[write--] = fromTail;
+                j--;
+            }
+        }
+
+        // Pairs [0, i] stay where they are; the merged ones sit in (write, sorted + distinct).
+        int start = write + 1;
+        int end = sorted + distinct;
+        if (start > i + 1)
+        {
+            Array.Copy(pairs, start, pairs, i + 1, end - start);
+        }
+
+        _sparseCount = i + 1 + (end - start);
+        _sortedCount = _sparseCount;
+        for (int k = 1; k < distinct && fits; k++)
+        {
+            fits = (tail[k - 1] >> CountBits) != (tail[k] >> CountBits);
+        }
+
+        return fits;
     }
 
     /// <summary>Adds <paramref name="count"/> to bucket <paramref name="key"/> in whichever form the histogram has.</summary>
@@ -289,6 +432,7 @@ internal sealed class DurationHistogram
             }
 
             _sparse[low] += (uint)count;
+            _sortedCount = _sparseCount;
             return true;
         }
 
@@ -307,6 +451,7 @@ internal sealed class DurationHistogram
         Array.Copy(_sparse, low, _sparse, low + 1, _sparseCount - low);
         _sparse[low] = ((uint)key << CountBits) | (uint)count;
         _sparseCount++;
+        _sortedCount = _sparseCount;
         return true;
     }
 
@@ -317,6 +462,7 @@ internal sealed class DurationHistogram
         int count = _sparseCount;
         _sparse = [];
         _sparseCount = 0;
+        _sortedCount = 0;
         _isDense = true;
         for (int k = 0; k < count; k++)
         {

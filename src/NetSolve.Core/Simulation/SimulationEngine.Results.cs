@@ -75,6 +75,11 @@ internal sealed partial class SimulationEngine
         }
 
         _unitTimes.Flush();
+        foreach (var histogram in _unitHistograms.Concat(_groupHistograms))
+        {
+            histogram.Settle();
+        }
+
         return new ReplicationTallies(_unitHistograms, _groupHistograms, starts, _waitOver);
     }
 
