@@ -97,4 +97,65 @@ public sealed class DurationHistogramSparseTests
             Assert.Equal(dense.Quantile(fraction), reference.Quantile(fraction));
         }
     }
+
+    [Fact]
+    public void Counts_appended_in_any_order_and_repeated_end_in_the_same_buckets_as_in_the_dense_form()
+    {
+        // Exact by hand: counting does not depend on order, so a sparse histogram that appends its counts and merges
+        // them (and inserts in order once its array is nearly full) holds, bucket for bucket, what a dense histogram
+        // holds for the same durations; the dense one also holds 600 filler buckets from 2^20 h up, kept apart here.
+        var random = new Xoshiro256StarStar(17, 0);
+        var filler = new DurationHistogram();
+        for (int i = 0; i < 600; i++)
+        {
+            filler.Record(Math.Pow(2.0, 20.0 + (i / 10.0)));
+        }
+
+        var dense = new DurationHistogram();
+        dense.Add(filler);
+        var sparse = new DurationHistogram();
+        var distinct = new double[250];
+        for (int i = 0; i < distinct.Length; i++)
+        {
+            distinct[i] = Math.Pow(10.0, (random.NextDouble() * 3.0) - 1.0);
+        }
+
+        for (int i = 0; i < 4_000; i++)
+        {
+            // Mostly repeats of 250 values, a new value one time in 25: merges free room, and the array nearly fills.
+            double value = i % 25 == 0 ? Math.Pow(10.0, (random.NextDouble() * 3.0) - 1.0) : distinct[random.NextInt(distinct.Length)];
+            sparse.Record(value);
+            dense.Record(value);
+            if (i % 997 == 0)
+            {
+                // Reading in the middle settles the appended counts; counting goes on afterwards.
+                Assert.Equal(Expected(), sparse.NonEmptyBuckets());
+            }
+        }
+
+        Assert.True(sparse.IsSparse);
+        Assert.Equal(Expected(), sparse.NonEmptyBuckets());
+        Assert.Equal(dense.Count - filler.Count, sparse.Count);
+
+        IEnumerable<(double Low, double High, long Count)> Expected() => dense.NonEmptyBuckets().Where(bucket => bucket.High <= 1_048_576.0).ToList();
+    }
+
+    [Fact]
+    public void A_bucket_counted_past_fourteen_bits_turns_the_histogram_dense_with_the_exact_count()
+    {
+        // Exact by hand: 20,000 durations of 1 h (bucket [1, 1 + 2^-7)) and 5 of 2 h (bucket [2, 2 + 2^-6)); a sparse
+        // pair holds at most 16,383 in its count, so the histogram turns dense and keeps both counts whole.
+        var histogram = new DurationHistogram();
+        for (int i = 0; i < 20_000; i++)
+        {
+            histogram.Record(1.0);
+            if (i % 4_000 == 0)
+            {
+                histogram.Record(2.0);
+            }
+        }
+
+        Assert.False(histogram.IsSparse);
+        Assert.Equal([(1.0, 1.0078125, 20_000L), (2.0, 2.015625, 5L)], histogram.NonEmptyBuckets());
+    }
 }
