@@ -50,8 +50,8 @@ internal sealed class DeferredDurations
     /// <summary>Counts every recorded duration in its histogram. Call before the histograms are read.</summary>
     /// <remarks>
     /// Each count waits on up to three cache misses in turn (the histogram's place in the array, the histogram, its
-    /// counts), and a sparse histogram's binary search mispredicts branches, which throws away reads the processor
-    /// had started ahead. So the three are hinted <see cref="Ahead"/>, 2 × and 3 × <see cref="Ahead"/> durations
+    /// counts; a sparse histogram appends its count after its pairs, one line, see <see cref="DurationHistogram"/>).
+    /// So the three are hinted <see cref="Ahead"/>, 2 × and 3 × <see cref="Ahead"/> durations
     /// before they are counted (<see cref="CachePrefetch"/>), each step reading only what the step before brought in;
     /// with fewer than <see cref="HintFrom"/> histograms there are no misses to hide, and nothing is hinted.
     /// </remarks>

@@ -8,7 +8,8 @@ namespace NetSolve.Simulation;
 /// A bucket is the double's exponent and the top <see cref="SubBucketBits"/> bits of its mantissa, read straight from
 /// its bits: 128 buckets per octave, each at most 2^−7 (0.78%) of its lower edge wide, so a quantile read from the
 /// buckets (interpolated linearly inside its bucket) is within 0.78% of a value of the sample that has the same rank.
-/// A histogram starts sparse: the buckets it has counted, as sorted (bucket, count) pairs packed in 4 bytes each (a
+/// A histogram starts sparse: the buckets it has counted, as sorted (bucket, count) pairs packed in 4 bytes each, each
+/// new count appended after them and merged in when the array is full or the buckets are read (a
 /// bucket key has 18 bits, leaving 14 for its count), so a unit that sees a few hundred patients in a replication
 /// costs at most 4 bytes per patient, not 1 KB per octave touched (a network of 100,000 units would otherwise need
 /// gigabytes). Past <see cref="SparseBuckets"/> buckets, or a count above 16,383 in one bucket, it turns dense: buckets kept per octave, an array of 128 counts (1 KB) made the first time
