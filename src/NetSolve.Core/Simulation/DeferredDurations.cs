@@ -1,6 +1,3 @@
-using System.Runtime.CompilerServices;
-using System.Runtime.InteropServices;
-
 namespace NetSolve.Simulation;
 
 /// <summary>
@@ -27,19 +24,12 @@ internal sealed class DeferredDurations
     private const int HintFrom = 256;
 
     private readonly DurationHistogram[] _histograms;
-
-    // One entry per histogram while there are at least HintFrom of them (empty otherwise): see Flush.
-    private readonly HistogramHeader[] _headers;
     private readonly int[] _owners = new int[Capacity];
     private readonly double[] _durations = new double[Capacity];
     private int _count;
 
     /// <param name="histograms">Where the durations are counted: the owner passed to <see cref="Record"/> indexes it.</param>
-    public DeferredDurations(DurationHistogram[] histograms)
-    {
-        _histograms = histograms;
-        _headers = histograms.Length < HintFrom ? [] : new HistogramHeader[histograms.Length];
-    }
+    public DeferredDurations(DurationHistogram[] histograms) => _histograms = histograms;
 
     /// <summary>Durations recorded and not yet counted.</summary>
     public int Pending => _count;
@@ -53,37 +43,19 @@ internal sealed class DeferredDurations
         _count = k + 1;
         if (_count == Capacity)
         {
-            Count();
+            Flush();
         }
     }
 
     /// <summary>Counts every recorded duration in its histogram. Call before the histograms are read.</summary>
-    public void Flush()
-    {
-        Count();
-        var headers = _headers;
-        var histograms = _histograms;
-        for (int i = 0; i < headers.Length; i++)
-        {
-            if (headers[i].Pairs is not null)
-            {
-                histograms[i].CommitAppends(headers[i].Next);
-            }
-        }
-
-        Array.Clear(headers);
-    }
-
-    /// <summary>Counts the buffer: in the histograms, or (many histograms, sparse) appended through their headers.</summary>
     /// <remarks>
-    /// With many histograms each count waits on cache misses in turn: the header in the flat table, then the line of
-    /// the pairs where the count is appended and the pairs' first line (see <see cref="DurationHistogram"/>). So the header is hinted
-    /// 2 × <see cref="Ahead"/> durations before it is counted and the pairs' line <see cref="Ahead"/> before
-    /// (<see cref="CachePrefetch"/>), each step reading only what the step before brought in. A histogram that is
-    /// dense, inserts in order or has a full array is counted by its object (its appended counts counted first), and
-    /// its header read again. With fewer than <see cref="HintFrom"/> histograms there are no misses to hide.
+    /// Each count waits on up to three cache misses in turn (the histogram's place in the array, the histogram, its
+    /// counts; a sparse histogram appends its count after its pairs, one line, see <see cref="DurationHistogram"/>).
+    /// So the three are hinted <see cref="Ahead"/>, 2 × and 3 × <see cref="Ahead"/> durations
+    /// before they are counted (<see cref="CachePrefetch"/>), each step reading only what the step before brought in;
+    /// with fewer than <see cref="HintFrom"/> histograms there are no misses to hide, and nothing is hinted.
     /// </remarks>
-    private void Count()
+    public void Flush()
     {
         var histograms = _histograms;
         var owners = _owners;
@@ -100,44 +72,24 @@ internal sealed class DeferredDurations
             return;
         }
 
-        var headers = _headers;
         for (int k = 0; k < count; k++)
         {
+            if (k + (3 * Ahead) < count)
+            {
+                CachePrefetch.Element(histograms, owners[k + (3 * Ahead)]);
+            }
+
             if (k + (2 * Ahead) < count)
             {
-                CachePrefetch.Element(headers, owners[k + (2 * Ahead)]);
+                CachePrefetch.Object(histograms[owners[k + (2 * Ahead)]]);
             }
 
             if (k + Ahead < count)
             {
-                ref var ahead = ref headers[owners[k + Ahead]];
-                if (ahead.Pairs is uint[] pairs && ahead.Next < ahead.Limit)
-                {
-                    // Writing the count checks first that the array is there, which reads its first line.
-                    CachePrefetch.Object(pairs);
-                    CachePrefetch.KnownElement(pairs, ahead.Next);
-                }
-                else
-                {
-                    var histogram = histograms[owners[k + Ahead]];
-                    CachePrefetch.Object(histogram);
-                }
+                histograms[owners[k + Ahead]].Prefetch(durations[k + Ahead]);
             }
 
-            ref var header = ref headers[owners[k]];
-            double duration = durations[k];
-            if (header.Next < header.Limit && duration > 0.0 && duration <= double.MaxValue)
-            {
-                // Next < Limit: the header holds the pairs, at least Limit long.
-                Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(header.Pairs!), header.Next) = DurationHistogram.AppendedPair(duration);
-                header.Next++;
-                continue;
-            }
-
-            var owner = histograms[owners[k]];
-            owner.CommitAppends(header.Next);
-            owner.Record(duration);
-            header.Pairs = owner.AppendWindow(out header.Next, out header.Limit);
+            histograms[owners[k]].Record(durations[k]);
         }
 
         _count = 0;

@@ -4,38 +4,6 @@ namespace NetSolve.Simulation;
 internal sealed partial class DurationHistogram
 {
     /// <summary>
-    /// The pairs' array and the part of it where counts may be appended from outside (<see cref="DeferredDurations"/>),
-    /// each as <see cref="AppendedPair"/>, from <paramref name="next"/> up to <paramref name="limit"/>; an empty part
-    /// (limit 0) when the histogram is dense or inserts in order. <see cref="CommitAppends"/> then counts them.
-    /// </summary>
-    internal uint[] AppendWindow(out int next, out int limit)
-    {
-        if (_isDense || _nearlyFull)
-        {
-            next = 0;
-            limit = 0;
-            return _sparse;
-        }
-
-        next = _sparseCount;
-        limit = _sparse.Length;
-        return _sparse;
-    }
-
-    /// <summary>Counts the pairs appended through <see cref="AppendWindow"/> up to <paramref name="next"/> (nothing when none were).</summary>
-    internal void CommitAppends(int next)
-    {
-        if (next > _sparseCount)
-        {
-            Count += next - _sparseCount;
-            _sparseCount = next;
-        }
-    }
-
-    /// <summary>The appended pair for one count of <paramref name="duration"/>, positive and finite.</summary>
-    internal static uint AppendedPair(double duration) => ((uint)BucketOf(duration) << CountBits) | 1u;
-
-    /// <summary>
     /// Appends one count of bucket <paramref name="key"/> after the pairs, settling them first when the array is full;
     /// false when the histogram should turn dense instead.
     /// </summary>
