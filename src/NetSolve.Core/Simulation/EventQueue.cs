@@ -55,6 +55,19 @@ internal sealed class EventQueue
         }
     }
 
+    /// <summary>
+    /// The unit, patient and group of the earliest pending event, read without its time (stale values when the queue
+    /// is empty): enough to hint what its handling will read.
+    /// </summary>
+    public (int Unit, int Patient, int Group) EarliestTarget
+    {
+        get
+        {
+            ref readonly var payload = ref _payloads[_winners[1]];
+            return (payload.Unit, payload.Patient, payload.Group);
+        }
+    }
+
     /// <summary>Adds an event; its time must not be negative.</summary>
     public void Push(in SimulationEvent item)
     {

@@ -141,9 +141,28 @@ internal sealed partial class SimulationEngine
                 _handledStillQueued = false;
                 _events.RemoveEarliest();
             }
+            else if (_hintMemory)
+            {
+                HintNextServiceEnd();
+            }
         }
 
         return handled;
+    }
+
+    /// <summary>
+    /// Hints the state and route row of the unit whose service end comes next. Its event's slot was hinted when the
+    /// event just handled left the queue, so it is in cache by now (unless the handling scheduled an earlier event):
+    /// the unit's lines then load while the next removal walks the tree, instead of after it.
+    /// </summary>
+    private void HintNextServiceEnd()
+    {
+        var (unit, patient, group) = _events.EarliestTarget;
+        if (patient >= 0)
+        {
+            _units.Prefetch(unit);
+            CachePrefetch.Element(_groups[group].RouteOffsets, unit);
+        }
     }
 
     /// <summary>Events processed so far.</summary>
