@@ -59,12 +59,12 @@ internal sealed class EventQueue
     /// The unit, patient and group of the earliest pending event, read without its time (stale values when the queue
     /// is empty): enough to hint what its handling will read.
     /// </summary>
-    public (int Unit, int Patient, int Group) EarliestTarget
+    public (int Unit, int Patient, int Group, int NextUnit) EarliestTarget
     {
         get
         {
             ref readonly var payload = ref _payloads[_winners[1]];
-            return (payload.Unit, payload.Patient, payload.Group);
+            return (payload.Unit, payload.Patient, payload.Group, payload.NextUnit);
         }
     }
 
@@ -142,7 +142,7 @@ internal sealed class EventQueue
     {
         Debug.Assert(item.Time >= 0.0, "Keys order like times only for times that are not negative.");
         _keys[_leaves + slot] = BitConverter.DoubleToInt64Bits(item.Time);
-        _payloads[slot] = new EventPayload(item.Unit, item.Patient, item.Group, item.UnitArrival, item.ServiceStart);
+        _payloads[slot] = new EventPayload(item.Unit, item.Patient, item.Group, item.NextUnit, item.UnitArrival, item.ServiceStart);
     }
 
     /// <summary>
@@ -244,8 +244,8 @@ internal sealed class EventQueue
 
     /// <summary>An event without its time, 32 bytes: half a cache line, so one read of a slot fetches all of it.</summary>
     [StructLayout(LayoutKind.Sequential)]
-    private readonly record struct EventPayload(int Unit, int Patient, int Group, double UnitArrival, double ServiceStart)
+    private readonly record struct EventPayload(int Unit, int Patient, int Group, int NextUnit, double UnitArrival, double ServiceStart)
     {
-        public SimulationEvent At(double time) => new(time, Unit, Patient) { Group = Group, UnitArrival = UnitArrival, ServiceStart = ServiceStart };
+        public SimulationEvent At(double time) => new(time, Unit, Patient) { Group = Group, NextUnit = NextUnit, UnitArrival = UnitArrival, ServiceStart = ServiceStart };
     }
 }

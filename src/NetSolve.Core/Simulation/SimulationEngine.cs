@@ -157,11 +157,18 @@ internal sealed partial class SimulationEngine
     /// </summary>
     private void HintNextServiceEnd()
     {
-        var (unit, patient, group) = _events.EarliestTarget;
+        var (unit, patient, group, next) = _events.EarliestTarget;
         if (patient >= 0)
         {
+            var routeOffsets = _groups[group].RouteOffsets;
             _units.Prefetch(unit);
-            CachePrefetch.Element(_groups[group].RouteOffsets, unit);
+            CachePrefetch.Element(routeOffsets, unit);
+            if (next >= 0)
+            {
+                _units.Prefetch(next);
+                CachePrefetch.Element(routeOffsets, next);
+                CachePrefetch.Element(_samplers, (group * _units.Length) + next);
+            }
         }
     }
 
@@ -248,14 +255,6 @@ internal sealed partial class SimulationEngine
         int group = end.Group;
         ref var state = ref _units[unit];
 
-        // The route is chosen after the statistics and any service start: its row is hinted now, so that at 100,000
-        // units its cache miss overlaps the unit's instead of following it (see CachePrefetch).
-        var plan = _groups[group];
-        if (_hintMemory)
-        {
-            CachePrefetch.Element(plan.RouteOffsets, unit);
-        }
-
         // Times are recorded when they end, for every patient ending after the warm-up: in steady state the patient
         // leaving at any moment has the steady-state time, whereas keeping only those who also arrived after the
         // warm-up would leave out long stays that straddle the end of the run.
@@ -278,7 +277,7 @@ internal sealed partial class SimulationEngine
             state.Busy--;
         }
 
-        int next = Route(plan, unit);
+        int next = end.NextUnit;
         if (next >= 0)
         {
             ArriveAtUnit(now, next, patient, group);
@@ -291,10 +290,13 @@ internal sealed partial class SimulationEngine
 
     private void ArriveAtUnit(double now, int unit, int patient, int group)
     {
-        // Hinted beside the unit's state, which decides whether a service starts: the two misses then overlap.
+        // Hinted beside the unit's state, which decides whether a service starts: the misses then overlap. The
+        // service start draws the patient's next unit from the unit's route row.
         if (_hintMemory)
         {
             CachePrefetch.Element(_samplers, (group * _units.Length) + unit);
+            var plan = _groups[group];
+            CachePrefetch.Element(plan.Routes, plan.RouteOffsets[unit]);
         }
         bool counted = now >= _warmupEnd;
         for (int hops = 0; ; hops++)
@@ -381,7 +383,8 @@ internal sealed partial class SimulationEngine
 
         ref readonly var sampler = ref _samplers[(group * _units.Length) + unit];
         double service = sampler.IsExponential ? sampler.ExponentialMeanHours * _random.NextExponential() : sampler.Sample(ref _random);
-        Schedule(new SimulationEvent(now + service, unit, patient) { Group = group, UnitArrival = unitArrival, ServiceStart = now });
+        int next = Route(_groups[group], unit);
+        Schedule(new SimulationEvent(now + service, unit, patient) { Group = group, NextUnit = next, UnitArrival = unitArrival, ServiceStart = now });
     }
 
     /// <summary>Adds an event: in place of the event being handled if it is still queued, else as a new one.</summary>

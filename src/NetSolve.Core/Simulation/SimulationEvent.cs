@@ -32,6 +32,12 @@ internal readonly record struct SimulationEvent(double Time, int Unit, int Patie
     /// <summary>When the patient finishing service arrived at the unit, in hours; 0 for other events.</summary>
     public double UnitArrival { get; init; }
 
+    /// <summary>
+    /// Where the patient finishing service goes next: a unit, or −1 to leave the network; drawn when the service
+    /// started. 0 for other events.
+    /// </summary>
+    public int NextUnit { get; init; }
+
     /// <summary>When the service ending started, in hours; 0 for other events.</summary>
     public double ServiceStart { get; init; }
 
