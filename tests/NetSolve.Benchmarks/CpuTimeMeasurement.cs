@@ -32,6 +32,8 @@ internal static class CpuTimeMeasurement
         output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"units {network.Units.Length}  compile cpu {(Process.GetCurrentProcess().TotalProcessorTime - cpuBefore).TotalMilliseconds:F0} ms"));
         for (int run = 1; run <= runs; run++)
         {
+            int[] collectionsBefore = [GC.CollectionCount(0), GC.CollectionCount(1), GC.CollectionCount(2)];
+            var pausedBefore = GC.GetTotalPauseDuration();
             cpuBefore = Process.GetCurrentProcess().TotalProcessorTime;
             var wall = Stopwatch.StartNew();
             var engine = new SimulationEngine(compiled, layout, [], 0.0, hours, 1, 0);
@@ -40,7 +42,7 @@ internal static class CpuTimeMeasurement
             var cpu = Process.GetCurrentProcess().TotalProcessorTime - cpuBefore;
             long events = engine.EventCount;
             output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"units {network.Units.Length,6}  run {run}  events {events,9}  wall {wall.Elapsed.TotalMilliseconds,8:F0} ms  cpu {cpu.TotalMilliseconds,8:F0} ms  {events / cpu.TotalSeconds / 1e6,6:F2} M events/cpu-s  managed heap {GC.GetTotalMemory(false) / 1e6,6:F0} MB  results {Fingerprint(engine):X16}"));
+                $"units {network.Units.Length,6}  run {run}  events {events,9}  wall {wall.Elapsed.TotalMilliseconds,8:F0} ms  cpu {cpu.TotalMilliseconds,8:F0} ms  {events / cpu.TotalSeconds / 1e6,6:F2} M events/cpu-s  managed heap {GC.GetTotalMemory(false) / 1e6,6:F0} MB  collections {GC.CollectionCount(0) - collectionsBefore[0]}/{GC.CollectionCount(1) - collectionsBefore[1]}/{GC.CollectionCount(2) - collectionsBefore[2]} ({(GC.GetTotalPauseDuration() - pausedBefore).TotalMilliseconds:F0} ms paused)  results {Fingerprint(engine):X16}"));
         }
     }
 

@@ -64,7 +64,8 @@ internal sealed partial class SimulationEngine
         _random = new Xoshiro256StarStar(seed, (ulong)replication);
         int n = network.UnitCount;
         int groups = network.Groups.Length;
-        _events = new EventQueue(groups + 16);
+        _hintMemory = hintMemory ?? n >= HintMemoryFrom;
+        _events = new EventQueue(groups + 16, _hintMemory);
         _units = new UnitStateBlock(n);
         _queues = new QueuedPatient[n][];
         for (int i = 0; i < n; i++)
@@ -81,7 +82,6 @@ internal sealed partial class SimulationEngine
         _unitTimes = new DeferredDurations(_unitHistograms);
         _groups = network.Groups;
         _samplers = network.Samplers;
-        _hintMemory = hintMemory ?? n >= HintMemoryFrom;
         _groupExits = new long[groups];
         _groupTimeSum = new double[groups];
         _groupHistograms = NewHistograms(groups);
@@ -168,6 +168,11 @@ internal sealed partial class SimulationEngine
                 _units.Prefetch(next);
                 CachePrefetch.Element(routeOffsets, next);
                 CachePrefetch.Element(_samplers, (group * _units.Length) + next);
+                CachePrefetch.Element(_queues, next);
+            }
+            else
+            {
+                CachePrefetch.Element(_networkEntries, patient);
             }
         }
     }
