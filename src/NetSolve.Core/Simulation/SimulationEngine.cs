@@ -151,9 +151,11 @@ internal sealed partial class SimulationEngine
     }
 
     /// <summary>
-    /// Hints the state and route row of the unit whose service end comes next. Its event's slot was hinted when the
-    /// event just handled left the queue, so it is in cache by now (unless the handling scheduled an earlier event):
-    /// the unit's lines then load while the next removal walks the tree, instead of after it.
+    /// Hints what the next event, a service end, will read: its unit's state and route offsets, and where the patient
+    /// goes (drawn when the service started) that unit's state, route offsets, service sampler and queue, or the
+    /// patient's entry time when they leave. The event's slot was hinted when the event just handled left the queue,
+    /// so it is in cache by now (unless the handling scheduled an earlier event): these lines then load while the
+    /// next removal walks the tree, instead of one after another while the event is handled.
     /// </summary>
     private void HintNextServiceEnd()
     {
