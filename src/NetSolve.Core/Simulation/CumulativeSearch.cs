@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>
@@ -15,6 +17,7 @@ internal static class CumulativeSearch
     /// The index of the first of <paramref name="cumulative"/> (not decreasing) that is above <paramref name="draw"/>,
     /// or the last index when none is (the last outcome takes what rounding left over).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static int FirstAbove(double[] cumulative, double draw)
     {
         int low = 0;
@@ -39,6 +42,7 @@ internal static class CumulativeSearch
     /// The index in [<paramref name="start"/>, <paramref name="stop"/>) of the first route whose cumulative probability
     /// is above <paramref name="draw"/>, or −1 when none is (the patient leaves the network).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static int FirstAbove(RouteChoice[] routes, int start, int stop, double draw)
     {
         int low = start;

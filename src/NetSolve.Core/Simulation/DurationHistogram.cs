@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>
@@ -59,6 +61,7 @@ internal sealed partial class DurationHistogram
     public long Zeros { get; private set; }
 
     /// <summary>Counts <paramref name="duration"/> (in any unit, the same for every call): zero or a positive finite value.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public void Record(double duration)
     {
         long key = BitConverter.DoubleToInt64Bits(duration) >> MantissaShift;
@@ -79,6 +82,7 @@ internal sealed partial class DurationHistogram
     /// bucket's count when dense; when sparse, the pairs, which the search and an insertion read from the middle on.
     /// The histogram object itself should have been hinted a little earlier, since its fields say where to look.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public void Prefetch(double duration)
     {
         if (_isDense)

@@ -55,6 +55,7 @@ internal sealed class EventQueue
     /// <summary>The earliest pending event; the queue must not be empty.</summary>
     public SimulationEvent Earliest
     {
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
         get
         {
             ref readonly var payload = ref _payloads[_winners[1]];
@@ -68,6 +69,7 @@ internal sealed class EventQueue
     /// </summary>
     public (int Unit, int Patient, int Group, int NextUnit) EarliestTarget
     {
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
         get
         {
             ref readonly var payload = ref _payloads[_winners[1]];
@@ -76,6 +78,7 @@ internal sealed class EventQueue
     }
 
     /// <summary>Adds an event; its time must not be negative.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public void Push(in SimulationEvent item)
     {
         if (_freeCount == 0)
@@ -137,6 +140,7 @@ internal sealed class EventQueue
     /// Removes the earliest event and adds <paramref name="item"/> in its slot, with one walk up the tree: the event
     /// loop's commonest step, since most events schedule exactly one more (the "hold" operation of event-list studies).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public void ReplaceEarliest(in SimulationEvent item) => Set(_winners[1], item);
 
     /// <summary>The pending events, in no particular order.</summary>
@@ -160,12 +164,14 @@ internal sealed class EventQueue
         Resize(_leaves);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void Set(int slot, in SimulationEvent item)
     {
         Store(slot, item);
         Replay(slot);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void Store(int slot, in SimulationEvent item)
     {
         Debug.Assert(item.Time >= 0.0, "Keys order like times only for times that are not negative.");
@@ -274,6 +280,7 @@ internal sealed class EventQueue
     [StructLayout(LayoutKind.Sequential)]
     private readonly record struct EventPayload(int Unit, int Patient, int Group, int NextUnit, double UnitArrival, double ServiceStart)
     {
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
         public SimulationEvent At(double time) => new(time, Unit, Patient) { Group = Group, NextUnit = NextUnit, UnitArrival = UnitArrival, ServiceStart = ServiceStart };
     }
 }

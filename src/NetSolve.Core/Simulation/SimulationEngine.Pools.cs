@@ -1,8 +1,11 @@
+using System.Runtime.CompilerServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>The patient pool and the per-unit FCFS ring buffers: both grow by doubling and are then reused.</summary>
 internal sealed partial class SimulationEngine
 {
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private int AllocatePatient()
     {
         if (_freeCount > 0)
@@ -19,6 +22,7 @@ internal sealed partial class SimulationEngine
         return _patientsAllocated++;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void ReleasePatient(int patient) => _freePatients[_freeCount++] = patient;
 
     private void Enqueue(int unit, in QueuedPatient patient)
@@ -43,6 +47,7 @@ internal sealed partial class SimulationEngine
         state.Queued = count + 1;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private QueuedPatient Dequeue(int unit)
     {
         ref var state = ref _units[unit];

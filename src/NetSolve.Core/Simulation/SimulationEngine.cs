@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace NetSolve.Simulation;
 
 /// <summary>
@@ -359,6 +361,7 @@ internal sealed partial class SimulationEngine
     }
 
     /// <summary>Starts the service of the patient at the head of <paramref name="unit"/>'s queue.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void StartQueued(double now, int unit)
     {
         var waiting = Dequeue(unit);
@@ -395,6 +398,7 @@ internal sealed partial class SimulationEngine
     }
 
     /// <summary>Adds an event: in place of the event being handled if it is still queued, else as a new one.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void Schedule(in SimulationEvent item)
     {
         if (_handledStillQueued)
@@ -408,6 +412,7 @@ internal sealed partial class SimulationEngine
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private void Leave(double now, int patient, int group)
     {
         if (now >= _warmupEnd)
@@ -422,6 +427,7 @@ internal sealed partial class SimulationEngine
         ReleasePatient(patient);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private int Route(GroupPlan plan, int unit)
     {
         int start = plan.RouteOffsets[unit];

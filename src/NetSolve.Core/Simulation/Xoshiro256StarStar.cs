@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 
 namespace NetSolve.Simulation;
@@ -32,6 +33,7 @@ internal struct Xoshiro256StarStar
         new() { _s0 = s0, _s1 = s1, _s2 = s2, _s3 = s3 };
 
     /// <summary>The next 64 random bits.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public ulong NextUInt64()
     {
         unchecked
@@ -49,6 +51,7 @@ internal struct Xoshiro256StarStar
     }
 
     /// <summary>A uniform double in [0, 1) with 53 random bits.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public double NextDouble() => (NextUInt64() >> 11) * UnitScale;
 
     /// <summary>A uniform double in (0, 1]: safe to take the logarithm of.</summary>
@@ -64,6 +67,7 @@ internal struct Xoshiro256StarStar
     }
 
     /// <summary>An exponential variate with mean 1, by the ziggurat method (<see cref="ExponentialZiggurat"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public double NextExponential() => ExponentialZiggurat.Next(ref this);
 
     /// <summary>A standard normal variate by Marsaglia's polar method (the second variate is discarded).</summary>
