@@ -92,24 +92,15 @@ internal sealed class CompiledNetwork
     {
         var routing = RoutingTable.Build(network with { Arrivals = [.. arrivals], Routes = [.. routes] });
         var entryUnits = new List<int>();
-        var entryCumulative = new List<double>();
-        double total = routing.ExternalPerHour.Sum();
-        double running = 0.0;
         for (int i = 0; i < routing.UnitCount; i++)
         {
             if (routing.ExternalPerHour[i] > 0.0)
             {
-                running += routing.ExternalPerHour[i];
                 entryUnits.Add(i);
-                entryCumulative.Add(running / total);
             }
         }
 
-        if (entryCumulative.Count > 0)
-        {
-            entryCumulative[^1] = 1.0;
-        }
-
+        double total = routing.ExternalPerHour.Sum();
         var cumulative = new double[routing.Targets.Count];
         for (int i = 0; i < routing.UnitCount; i++)
         {
@@ -136,7 +127,7 @@ internal sealed class CompiledNetwork
             HourOfDay = profile is null ? null : [.. profile.HourOfDay],
             DayOfWeek = profile is null || profile.DayOfWeek.IsEmpty ? null : [.. profile.DayOfWeek],
             EntryUnits = [.. entryUnits],
-            EntryCumulative = [.. entryCumulative],
+            EntryPick = AliasTable.Of(entryUnits.Count == 0 ? [1.0] : [.. entryUnits.Select(unit => routing.ExternalPerHour[unit])]),
             RouteOffsets = [.. routing.Offsets],
             Routes = [.. cumulative.Select((probability, k) => new RouteChoice(probability, routing.Targets[k]))],
         };

@@ -22,8 +22,8 @@ internal sealed class GroupPlan
     /// <summary>Units where the group's patients arrive from outside.</summary>
     public required int[] EntryUnits { get; init; }
 
-    /// <summary>Cumulative shares of <see cref="EntryUnits"/>, the last one exactly 1.</summary>
-    public required double[] EntryCumulative { get; init; }
+    /// <summary>Picks the place in <see cref="EntryUnits"/> of each arriving patient, by the units' shares of the arrivals.</summary>
+    public required AliasTable EntryPick { get; init; }
 
     /// <summary>Row starts of the routes out of each unit (length units + 1).</summary>
     public required int[] RouteOffsets { get; init; }

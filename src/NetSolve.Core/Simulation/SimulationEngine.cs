@@ -243,7 +243,7 @@ internal sealed partial class SimulationEngine
         int entry = plan.EntryUnits[0];
         if (plan.EntryUnits.Length > 1)
         {
-            entry = plan.EntryUnits[PickEntry(plan.EntryCumulative, _random.NextDouble())];
+            entry = plan.EntryUnits[plan.EntryPick.Pick(_random.NextDouble())];
         }
 
         int patient = AllocatePatient();
@@ -454,22 +454,5 @@ internal sealed partial class SimulationEngine
         }
 
         return -1;
-    }
-
-    /// <summary>The entry unit's place among the group's entry units for a uniform <paramref name="draw"/>.</summary>
-    private static int PickEntry(double[] cumulative, double draw)
-    {
-        if (cumulative.Length > CumulativeSearch.ScanUpTo)
-        {
-            return CumulativeSearch.FirstAbove(cumulative, draw);
-        }
-
-        int k = 0;
-        while (k < cumulative.Length - 1 && draw >= cumulative[k])
-        {
-            k++;
-        }
-
-        return k;
     }
 }

@@ -160,9 +160,16 @@ public sealed class SimulateCommandTests
         Assert.Equal(unit.GetProperty("mean_queue_by_hour")[23].GetDouble(), double.Parse(firstRow[^4], System.Globalization.CultureInfo.InvariantCulture));
     }
 
-    /// <summary>A short run of the larkspur file is short against its ward's relaxation time, which is worth a warning, and nothing else is.</summary>
+    /// <summary>
+    /// A short run of the larkspur file is short against its ward's relaxation time, which is worth a warning, and
+    /// nothing else is but its consequence that the warm-up check (MSER-5) may see, depending on the draws: the
+    /// number in the network still rising after the warm-up.
+    /// </summary>
     private static void AssertOnlySlowUnitWarnings(string error) =>
-        Assert.All(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), line => Assert.StartsWith("netsolve: warning: unit '", line, StringComparison.Ordinal));
+        Assert.All(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), line => Assert.True(
+            line.StartsWith("netsolve: warning: unit '", StringComparison.Ordinal)
+                || line.StartsWith("netsolve: warning: the number of patients in the network settled only after", StringComparison.Ordinal),
+            line));
 
     /// <summary>One server at utilisation 0.9 with one-day service: Erlang C is exact for it, and it relaxes in about 380 days.</summary>
     private const string SlowSingleServer = "name: Slow single server  # invented\nunits:\n  ward:\n    servers: 1\n    service: 1d\narrivals:\n  ward: 0.9/d\n";

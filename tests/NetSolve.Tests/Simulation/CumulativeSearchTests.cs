@@ -5,27 +5,6 @@ namespace NetSolve.Tests.Simulation;
 public sealed class CumulativeSearchTests
 {
     [Fact]
-    public void Binary_search_picks_the_outcome_a_scan_from_the_first_picks_for_every_draw()
-    {
-        // Exact by hand: the reference is the scan the event loop used before, first cumulative above the draw.
-        var random = new Xoshiro256StarStar(21, 0);
-        for (int length = 1; length <= 40; length++)
-        {
-            var cumulative = RandomCumulative(ref random, length);
-            foreach (double draw in Draws(ref random, cumulative))
-            {
-                int scanned = 0;
-                while (scanned < cumulative.Length - 1 && draw >= cumulative[scanned])
-                {
-                    scanned++;
-                }
-
-                Assert.Equal(scanned, CumulativeSearch.FirstAbove(cumulative, draw));
-            }
-        }
-    }
-
-    [Fact]
     public void Binary_search_over_one_row_of_routes_picks_what_a_scan_picks_and_minus_one_for_leaving()
     {
         // Exact by hand: the scan over the row [start, stop) returns the first route above the draw, or none.
