@@ -20,9 +20,12 @@ public sealed class FormulaAccuracyTests
     /// seed 2026) with Cosmetatos' ratio for regular service, the light-heavy traffic interpolation for variable
     /// service on several servers, the M/G/c/K truncation for bed limits with waiting places and the diverted-overflow
     /// model for a unit fed by a full unit's diversions; the misses are light-load units (ρ 0.33-0.46, docs/methods.md).
-    /// Asserted at 95% (the measured 96.0% rounded down: 0.96 × 124 is just above 119), so a regression of two units fails.
+    /// Measured again after the simulator's draws changed order (2026-12-03: next unit drawn at service start, entry
+    /// units by an alias table): 116 of 125 (92.8%), the misses again light-load units (ρ 0.33-0.49) near 15%, where
+    /// the simulation's own interval (±3-10%) decides the side. Asserted at 92% (the measured share rounded down), so a
+    /// regression of two units fails.
     /// </summary>
-    private const double MeasuredShare = 0.95;
+    private const double MeasuredShare = 0.92;
 
     /// <summary>
     /// Goal: closer than the exponential formula wherever a cv differs from 1, i.e. 0 exceptions: NOT MET. Measured 2
@@ -39,8 +42,8 @@ public sealed class FormulaAccuracyTests
 
     // Source: the project's simulator (seed 2026, 10 replications of 50,000 h after 2,000 h) against NetworkSolver;
     // the goal is issue 11's: two-moment waits within 15% of simulation for at least 90% of units, and closer than the
-    // exponential formula wherever an arrival or service cv differs from 1. The first is met (119 of 124), the second
-    // not quite (111 of 113): see MeasuredNotBetter.
+    // exponential formula wherever an arrival or service cv differs from 1. The first is met (116 of 125), the second
+    // not quite (112 of 114, the same two units as with the earlier draws' 111 of 113): see MeasuredNotBetter.
     [Fact(Explicit = true)]
     public void Two_moment_waits_meet_the_accuracy_goal_against_the_simulator()
     {
