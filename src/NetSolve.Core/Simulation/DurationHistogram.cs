@@ -164,7 +164,7 @@ internal sealed partial class DurationHistogram
 
         double below = Zeros;
         double last = 0.0;
-        foreach (var (low, high, count) in NonEmptyBuckets())
+        foreach (var (low, high, count) in Buckets())
         {
             last = high;
             if (below + count >= target)
@@ -196,7 +196,7 @@ internal sealed partial class DurationHistogram
         }
 
         double below = Zeros;
-        foreach (var (low, high, count) in NonEmptyBuckets())
+        foreach (var (low, high, count) in Buckets())
         {
             if (duration < high)
             {
@@ -221,31 +221,87 @@ internal sealed partial class DurationHistogram
     /// <summary>The lower edge of the bucket <paramref name="key"/>, which is the upper edge of bucket key − 1.</summary>
     public static double LowerEdge(long key) => BitConverter.Int64BitsToDouble(key << MantissaShift);
 
-    /// <summary>Every bucket holding a count, shortest first, with its edges: the walk shared by quantiles, shares and pooling.</summary>
+    /// <summary>Every bucket holding a count, shortest first, with its edges.</summary>
     public IEnumerable<(double Low, double High, long Count)> NonEmptyBuckets()
     {
-        Settle();
-        for (int k = 0; k < _sparseCount; k++)
+        foreach (var bucket in Buckets())
         {
-            long key = _sparse[k] >> CountBits;
-            yield return (LowerEdge(key), LowerEdge(key + 1), _sparse[k] & SparseCountMask);
+            yield return bucket;
+        }
+    }
+
+    /// <summary>
+    /// The buckets of <see cref="NonEmptyBuckets"/> as a walk held in a struct: the walk shared by quantiles, shares and
+    /// pooling. A 100,000-unit result walks its histograms over a million times, and an iterator was an object each
+    /// time and a call per bucket.
+    /// </summary>
+    public BucketWalk Buckets()
+    {
+        Settle();
+        return new BucketWalk(this);
+    }
+
+    /// <summary>The walk of <see cref="Buckets"/>: the sparse pairs, then each dense octave's non-zero counts.</summary>
+    [System.Runtime.InteropServices.StructLayout(System.Runtime.InteropServices.LayoutKind.Auto)]
+    public struct BucketWalk
+    {
+        private readonly uint[] _sparse;
+        private readonly int _sparseCount;
+        private readonly long[]?[] _octaves;
+        private readonly int _firstOctave;
+        private int _pair;
+        private int _octave;
+        private int _bucket;
+
+        internal BucketWalk(DurationHistogram histogram)
+        {
+            _sparse = histogram._sparse;
+            _sparseCount = histogram._sparseCount;
+            _octaves = histogram._octaves;
+            _firstOctave = histogram._firstOctave;
+            _pair = -1;
+            _octave = 0;
+            _bucket = -1;
+            Current = default;
         }
 
-        for (int i = 0; i < _octaves.Length; i++)
+        /// <summary>The bucket reached: its lower and upper edges and its count.</summary>
+        public (double Low, double High, long Count) Current { get; private set; }
+
+        /// <summary>The walk itself, so that it can be walked with <c>foreach</c>.</summary>
+        public readonly BucketWalk GetEnumerator() => this;
+
+        /// <summary>Moves to the next bucket holding a count; false past the last.</summary>
+        public bool MoveNext()
         {
-            if (_octaves[i] is not long[] counts)
+            if (++_pair < _sparseCount)
             {
-                continue;
+                uint pair = _sparse[_pair];
+                long key = pair >> CountBits;
+                Current = (LowerEdge(key), LowerEdge(key + 1), pair & SparseCountMask);
+                return true;
             }
 
-            long octaveKey = (long)(_firstOctave + i) << SubBucketBits;
-            for (int b = 0; b < BucketsPerOctave; b++)
+            _pair = _sparseCount;
+            for (; _octave < _octaves.Length; _octave++, _bucket = -1)
             {
-                if (counts[b] != 0)
+                if (_octaves[_octave] is not long[] counts)
                 {
-                    yield return (LowerEdge(octaveKey + b), LowerEdge(octaveKey + b + 1), counts[b]);
+                    continue;
+                }
+
+                while (++_bucket < BucketsPerOctave)
+                {
+                    if (counts[_bucket] != 0)
+                    {
+                        long key = ((long)(_firstOctave + _octave) << SubBucketBits) + _bucket;
+                        Current = (LowerEdge(key), LowerEdge(key + 1), counts[_bucket]);
+                        return true;
+                    }
                 }
             }
+
+            return false;
         }
     }
 
