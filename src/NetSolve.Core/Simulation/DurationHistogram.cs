@@ -180,6 +180,65 @@ internal sealed partial class DurationHistogram
     }
 
     /// <summary>
+    /// The quantiles of <paramref name="fractions"/> into <paramref name="quantiles"/>, each exactly as
+    /// <see cref="Quantile"/> gives it, from one walk of the buckets when the fractions ascend (a unit's four
+    /// percentiles were four walks).
+    /// </summary>
+    public void Quantiles(ReadOnlySpan<double> fractions, Span<double> quantiles)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(quantiles.Length, fractions.Length, nameof(quantiles));
+        for (int i = 1; i < fractions.Length; i++)
+        {
+            if (!(fractions[i - 1] <= fractions[i]))
+            {
+                for (int j = 0; j < fractions.Length; j++)
+                {
+                    quantiles[j] = Quantile(fractions[j]);
+                }
+
+                return;
+            }
+        }
+
+        if (Count == 0)
+        {
+            quantiles[..fractions.Length].Fill(double.NaN);
+            return;
+        }
+
+        // The same sums as Quantile's, in the same order: a later fraction's bucket is never before an earlier one's.
+        int next = 0;
+        while (next < fractions.Length && fractions[next] * Count <= Zeros)
+        {
+            quantiles[next++] = 0.0;
+        }
+
+        double below = Zeros;
+        double last = 0.0;
+        foreach (var (low, high, count) in Buckets())
+        {
+            if (next == fractions.Length)
+            {
+                return;
+            }
+
+            last = high;
+            while (next < fractions.Length && below + count >= fractions[next] * Count)
+            {
+                double within = Math.Clamp(((fractions[next] * Count) - below) / count, 0.0, 1.0);
+                quantiles[next++] = low + (within * (high - low));
+            }
+
+            below += count;
+        }
+
+        while (next < fractions.Length)
+        {
+            quantiles[next++] = last;
+        }
+    }
+
+    /// <summary>
     /// The share of the counted durations at most <paramref name="duration"/>, interpolated linearly inside its bucket
     /// as <see cref="Quantile"/> is (so the two are inverse to each other within a bucket); NaN when nothing was counted.
     /// </summary>

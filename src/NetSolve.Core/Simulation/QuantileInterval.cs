@@ -29,7 +29,15 @@ internal static class QuantileInterval
     /// </summary>
     public static Estimate? Of(double fraction, DurationHistogram pooled, IReadOnlyList<DurationHistogram> replications)
     {
-        double point = pooled.Quantile(fraction);
+        ArgumentNullException.ThrowIfNull(pooled);
+        return At(pooled.Quantile(fraction), pooled, replications);
+    }
+
+    /// <summary>As <see cref="Of(double, DurationHistogram, IReadOnlyList{DurationHistogram})"/>, at the pooled percentile <paramref name="point"/> already read.</summary>
+    public static Estimate? At(double point, DurationHistogram pooled, IReadOnlyList<DurationHistogram> replications)
+    {
+        ArgumentNullException.ThrowIfNull(pooled);
+        ArgumentNullException.ThrowIfNull(replications);
         if (!double.IsFinite(point))
         {
             return null;
@@ -71,8 +79,15 @@ internal static class QuantileInterval
     /// </summary>
     public static Estimate? Of(double fraction, DurationHistogram pooled, ShareMoments shares)
     {
+        ArgumentNullException.ThrowIfNull(pooled);
+        return At(pooled.Quantile(fraction), pooled, shares);
+    }
+
+    /// <summary>As <see cref="Of(double, DurationHistogram, ShareMoments)"/>, at the pooled percentile <paramref name="point"/> already read.</summary>
+    public static Estimate? At(double point, DurationHistogram pooled, ShareMoments shares)
+    {
+        ArgumentNullException.ThrowIfNull(pooled);
         ArgumentNullException.ThrowIfNull(shares);
-        double point = pooled.Quantile(fraction);
         if (!double.IsFinite(point))
         {
             return null;
