@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using MathNet.Numerics.Distributions;
 
@@ -27,36 +28,41 @@ public readonly record struct Estimate(double Mean, double? HalfWidth, int Repli
     public static Estimate? From(IEnumerable<double> values)
     {
         ArgumentNullException.ThrowIfNull(values);
-        int n = 0;
-        double mean = 0.0;
-        double sumSquares = 0.0;
+        var moments = default(Welford);
         foreach (double value in values)
         {
-            if (!double.IsFinite(value))
+            moments.Add(value);
+        }
+
+        return moments.Estimate();
+    }
+
+    /// <summary>
+    /// As <see cref="From(IEnumerable{double})"/> over the value at <paramref name="slot"/> of each row: the same sums in
+    /// the same order, without an enumerator per metric (a 100,000-unit result reads about 3.4 million of them).
+    /// </summary>
+    // Optimized from its first call: a one-time pass over 100,000 units spent most of its time here in tier-0 and
+    // instrumented copies (docs/performance.md).
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static Estimate? FromSlot(IReadOnlyList<double[]> rows, int slot)
+    {
+        var moments = default(Welford);
+        if (rows is double[][] array)
+        {
+            foreach (double[] row in array)
             {
-                continue;
+                moments.Add(row[slot]);
             }
-
-            // Welford's update: stable for values far from zero.
-            n++;
-            double delta = value - mean;
-            mean += delta / n;
-            sumSquares += delta * (value - mean);
         }
-
-        if (n == 0)
+        else
         {
-            return null;
+            for (int r = 0; r < rows.Count; r++)
+            {
+                moments.Add(rows[r][slot]);
+            }
         }
 
-        if (n == 1)
-        {
-            return new Estimate(mean, null, 1);
-        }
-
-        double t = StudentT.InvCDF(0.0, 1.0, n - 1, 0.5 + (ConfidenceLevel / 2.0));
-        double half = t * Math.Sqrt(sumSquares / (n - 1) / n);
-        return new Estimate(mean, half, n);
+        return moments.Estimate();
     }
 
     /// <summary>
@@ -93,5 +99,44 @@ public readonly record struct Estimate(double Mean, double? HalfWidth, int Repli
 
         double t = StudentT.InvCDF(0.0, 1.0, n - 1, 0.5 + (ConfidenceLevel / 2.0));
         return new Estimate(pooled, t * Math.Sqrt(sumSquares / (n - 1) / n), n);
+    }
+
+    /// <summary>Welford's running mean and sum of squares of the finite values added: stable for values far from zero.</summary>
+    [StructLayout(LayoutKind.Auto)]
+    private struct Welford
+    {
+        private int _n;
+        private double _mean;
+        private double _sumSquares;
+
+        public void Add(double value)
+        {
+            if (!double.IsFinite(value))
+            {
+                return;
+            }
+
+            _n++;
+            double delta = value - _mean;
+            _mean += delta / _n;
+            _sumSquares += delta * (value - _mean);
+        }
+
+        public readonly Estimate? Estimate()
+        {
+            if (_n == 0)
+            {
+                return null;
+            }
+
+            if (_n == 1)
+            {
+                return new Estimate(_mean, null, 1);
+            }
+
+            double t = StudentT.InvCDF(0.0, 1.0, _n - 1, 0.5 + (ConfidenceLevel / 2.0));
+            double half = t * Math.Sqrt(_sumSquares / (_n - 1) / _n);
+            return new Estimate(_mean, half, _n);
+        }
     }
 }

@@ -19,8 +19,7 @@ internal sealed class HourlyQueueEstimates(IReadOnlyList<double[]> rows, int fir
         {
             ArgumentOutOfRangeException.ThrowIfNegative(hour);
             ArgumentOutOfRangeException.ThrowIfGreaterThanOrEqual(hour, Count);
-            int slot = firstSlot + hour;
-            return Estimate.From(rows.Select(row => row[slot]));
+            return Estimate.FromSlot(rows, firstSlot + hour);
         }
     }
 

@@ -67,12 +67,15 @@ internal sealed class PercentilePool
     public ImmutableArray<PercentileEstimate> Percentiles()
     {
         var pooled = _pooled ?? new DurationHistogram();
-        var builder = ImmutableArray.CreateBuilder<PercentileEstimate>(MetricLayout.Percentiles.Length);
-        foreach (double fraction in MetricLayout.Percentiles)
+        var fractions = MetricLayout.Percentiles;
+        Span<double> points = stackalloc double[fractions.Length];
+        pooled.Quantiles(fractions, points);
+        var builder = ImmutableArray.CreateBuilder<PercentileEstimate>(fractions.Length);
+        for (int i = 0; i < fractions.Length; i++)
         {
             // Without moments the unfolded histograms are every replication: all of them while kept, else at most one.
-            var estimate = _shares is null ? QuantileInterval.Of(fraction, pooled, _unfolded) : QuantileInterval.Of(fraction, pooled, _shares);
-            builder.Add(new PercentileEstimate(fraction * 100.0, estimate));
+            var estimate = _shares is null ? QuantileInterval.At(points[i], pooled, _unfolded) : QuantileInterval.At(points[i], pooled, _shares);
+            builder.Add(new PercentileEstimate(fractions[i] * 100.0, estimate));
         }
 
         return builder.MoveToImmutable();

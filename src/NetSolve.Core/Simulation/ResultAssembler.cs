@@ -126,7 +126,7 @@ internal sealed class ResultAssembler
         return new WaitOverEstimate(thresholdHours, estimate ?? new Estimate(0.0, null, 0));
     }
 
-    private Estimate? At(int slot) => Estimate.From(_rows.Select(row => row[slot]));
+    private Estimate? At(int slot) => Estimate.FromSlot(_rows, slot);
 
     /// <summary>The estimate at <paramref name="slot"/>, or <paramref name="whenUnobserved"/> (no interval) if no replication observed it.</summary>
     private Estimate Required(int slot, double whenUnobserved) => At(slot) ?? new Estimate(whenUnobserved, null, 0);

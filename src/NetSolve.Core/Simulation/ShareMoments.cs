@@ -41,7 +41,7 @@ internal sealed class ShareMoments
         Replications++;
         _zeroSum += before;
         _zeroSquares += before * before;
-        foreach (var (low, _, inBucket) in replication.NonEmptyBuckets())
+        foreach (var (low, _, inBucket) in replication.Buckets())
         {
             long key = DurationHistogram.BucketOf(low);
             double share = inBucket / count;

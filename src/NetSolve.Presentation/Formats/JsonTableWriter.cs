@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Text.Json;
 using NetSolve.Model;
 using NetSolve.Presentation.Metrics;
@@ -84,6 +85,9 @@ public static class JsonTableWriter
     }
 
     /// <summary>As the other overload, with the name encoded once for many rows (the per-unit values of a large network).</summary>
+    // Optimized from its first call: a one-time pass over 100,000 units spent most of its time here in tier-0 and
+    // instrumented copies (docs/performance.md).
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void WriteCell(Utf8JsonWriter json, JsonEncodedText name, Cell cell, TimeUnit timeUnit)
     {
         ArgumentNullException.ThrowIfNull(json);

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Runtime.CompilerServices;
 using System.Text.Json;
 using NetSolve.Analysis;
 using NetSolve.Model;
@@ -38,19 +39,16 @@ public static class SimulationJsonWriter
         WriteRun(json, result);
         // Each unit's cells are read as it is written and the document is handed on every FlushBytes, so memory does not
         // grow with the units: at 100,000 units a table of every cell and the whole document held for one final flush
-        // were about 700 MB.
-        var columns = SimulatedUnitColumns.ForJson;
-        var described = ResultTable.Build(columns, [], timeUnit);
+        // were about 700 MB. The field names are encoded once and nothing is built per unit: tables of a unit's
+        // percentiles and P(wait > t) were about 16 KB allocated per unit.
+        var fields = Fields<SimulatedUnitRow>.Of(SimulatedUnitColumns.ForJson);
+        var details = new UnitDetails();
         json.WriteStartArray("units");
         for (int i = 0; i < rows.Length; i++)
         {
             json.WriteStartObject();
-            foreach (int c in described.ColumnsFor(Audience.Machines))
-            {
-                JsonTableWriter.WriteCell(json, columns[c].Id, columns[c].Read(rows[i]), timeUnit);
-            }
-
-            WriteUnitDetails(json, rows[i].Simulated, timeUnit);
+            fields.Write(json, rows[i], timeUnit);
+            details.Write(json, rows[i].Simulated, timeUnit);
             if (formula is not null)
             {
                 WriteComparison(json, ComparisonRow.OfUnit(rows[i].Simulated, formula.Units[i], result.Network), timeUnit);
@@ -118,13 +116,129 @@ public static class SimulationJsonWriter
         }
     }
 
-    /// <summary>The nested fields of a unit: percentiles, P(wait &gt; t) and the mean queue by hour of day.</summary>
-    private static void WriteUnitDetails(Utf8JsonWriter json, SimulatedUnit unit, TimeUnit timeUnit)
+    /// <summary>
+    /// The nested fields of a unit: percentiles, P(wait &gt; t) and the mean queue by hour of day, written from what
+    /// was worked out for the first unit (the encoded names) and into one buffer of hours reused by every unit.
+    /// </summary>
+    private sealed class UnitDetails
     {
-        WritePercentiles(json, "time_in_unit_percentiles", unit.TimeInUnitPercentiles, timeUnit);
-        JsonTableWriter.WriteArray(ResultTable.Build(WaitOverColumns.ForJson, unit.WaitOver, timeUnit), "p_wait_over", json);
-        WriteHourly(json, "mean_queue_by_hour", unit.MeanQueueByHour, EstimateCell.Mean, timeUnit);
-        WriteHourly(json, "mean_queue_by_hour_ci", unit.MeanQueueByHour, EstimateCell.HalfWidth, timeUnit);
+        private const string TimeInUnitPercentilesName = "time_in_unit_percentiles";
+        private static readonly JsonEncodedText TimeInUnitPercentiles = JsonEncodedText.Encode(TimeInUnitPercentilesName);
+        private static readonly JsonEncodedText WaitOver = JsonEncodedText.Encode("p_wait_over");
+        private static readonly JsonEncodedText QueueByHour = JsonEncodedText.Encode("mean_queue_by_hour");
+        private static readonly JsonEncodedText QueueByHourHalfWidth = JsonEncodedText.Encode("mean_queue_by_hour_ci");
+
+        private readonly Fields<WaitOverEstimate> _waitOver = Fields<WaitOverEstimate>.Of(WaitOverColumns.ForJson);
+        private readonly PercentileFields _percentiles = new();
+        private Estimate?[] _hours = [];
+
+        // Optimized from its first call: a one-time pass over 100,000 units spent most of its time here in tier-0 and
+        // instrumented copies (docs/performance.md).
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        public void Write(Utf8JsonWriter json, SimulatedUnit unit, TimeUnit timeUnit)
+        {
+            json.WritePropertyName(TimeInUnitPercentiles);
+            _percentiles.Write(json, TimeInUnitPercentilesName, unit.TimeInUnitPercentiles, timeUnit);
+            json.WriteStartArray(WaitOver);
+            foreach (var over in unit.WaitOver)
+            {
+                json.WriteStartObject();
+                _waitOver.Write(json, over, timeUnit);
+                json.WriteEndObject();
+            }
+
+            json.WriteEndArray();
+
+            // Each hour's estimate is worked out from the replications' rows when read: read once for both arrays.
+            var byHour = unit.MeanQueueByHour;
+            if (_hours.Length != byHour.Count)
+            {
+                _hours = new Estimate?[byHour.Count];
+            }
+
+            for (int hour = 0; hour < _hours.Length; hour++)
+            {
+                _hours[hour] = byHour[hour];
+            }
+
+            WriteHourly(json, QueueByHour, _hours, EstimateCell.Mean, timeUnit);
+            WriteHourly(json, QueueByHourHalfWidth, _hours, EstimateCell.HalfWidth, timeUnit);
+        }
+    }
+
+    /// <summary>
+    /// The machines' fields of a registry's columns with their names encoded once: written for each of many rows
+    /// without building a table.
+    /// </summary>
+    private sealed class Fields<TRow>
+    {
+        private readonly Func<TRow, Cell>[] _read;
+        private readonly JsonEncodedText[] _names;
+
+        private Fields(Func<TRow, Cell>[] read, JsonEncodedText[] names)
+        {
+            _read = read;
+            _names = names;
+        }
+
+        public static Fields<TRow> Of(IEnumerable<Column<TRow>> columns)
+        {
+            var shown = columns.Where(column => ResultTable.Shows(column.Audience, Audience.Machines)).ToArray();
+            return new Fields<TRow>([.. shown.Select(column => column.Read)], [.. shown.Select(column => JsonEncodedText.Encode(column.Id))]);
+        }
+
+        /// <summary>Writes the fields of <paramref name="row"/> into the object being written.</summary>
+        // Optimized from its first call: a one-time pass over 100,000 units spent most of its time here in tier-0 and
+        // instrumented copies (docs/performance.md).
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        public void Write(Utf8JsonWriter json, TRow row, TimeUnit timeUnit)
+        {
+            for (int i = 0; i < _read.Length; i++)
+            {
+                JsonTableWriter.WriteCell(json, _names[i], _read[i](row), timeUnit);
+            }
+        }
+    }
+
+    /// <summary>
+    /// A percentiles object (<c>{"p50": .., "p50_ci": .., ...}</c>, the machines' columns of <see cref="PercentileColumns"/>),
+    /// with the columns made and their keys encoded once for as long as the percentiles asked for stay the same.
+    /// </summary>
+    private sealed class PercentileFields
+    {
+        private double[] _percents = [];
+        private Fields<PercentileRow>? _fields;
+
+        public void Write(Utf8JsonWriter json, string name, ImmutableArray<PercentileEstimate> percentiles, TimeUnit timeUnit)
+        {
+            if (_fields is null || !Matches(percentiles))
+            {
+                _percents = [.. percentiles.Select(percentile => percentile.Percent)];
+                _fields = Fields<PercentileRow>.Of(PercentileColumns.Of(percentiles));
+            }
+
+            json.WriteStartObject();
+            _fields.Write(json, new PercentileRow(name, percentiles), timeUnit);
+            json.WriteEndObject();
+        }
+
+        private bool Matches(ImmutableArray<PercentileEstimate> percentiles)
+        {
+            if (percentiles.Length != _percents.Length)
+            {
+                return false;
+            }
+
+            for (int i = 0; i < _percents.Length; i++)
+            {
+                if (percentiles[i].Percent.CompareTo(_percents[i]) != 0)
+                {
+                    return false;
+                }
+            }
+
+            return true;
+        }
     }
 
     /// <summary>One object per compared metric, keyed by its name.</summary>
@@ -167,13 +281,15 @@ public static class SimulationJsonWriter
 
     private static void WritePercentiles(Utf8JsonWriter json, string name, ImmutableArray<PercentileEstimate> percentiles, TimeUnit timeUnit)
     {
-        var table = PercentileColumns.Table(name, percentiles, timeUnit);
         json.WritePropertyName(name);
-        JsonTableWriter.WriteObject(table, table.Rows[0], json);
+        new PercentileFields().Write(json, name, percentiles, timeUnit);
     }
 
     /// <summary>An array of one number per hour of day; null for an hour not measured (or without a half-width).</summary>
-    private static void WriteHourly(Utf8JsonWriter json, string name, IReadOnlyList<Estimate?> byHour, Func<Estimate?, MetricDimension, Cell> cell, TimeUnit timeUnit)
+    // Optimized from its first call: a one-time pass over 100,000 units spent most of its time here in tier-0 and
+    // instrumented copies (docs/performance.md).
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void WriteHourly(Utf8JsonWriter json, JsonEncodedText name, Estimate?[] byHour, Func<Estimate?, MetricDimension, Cell> cell, TimeUnit timeUnit)
     {
         json.WriteStartArray(name);
         foreach (var hour in byHour)

@@ -30,6 +30,39 @@ public sealed class DurationHistogramTests
         Assert.Equal(atRank, histogram.Quantile(fraction), atRank * DurationHistogram.RelativeResolution);
     }
 
+    // The one walk for several fractions gives each quantile bit for bit as the walk for one does: sparse and dense
+    // forms, zeros, fractions sharing a bucket, the ends, and fractions out of order (read one by one).
+    [Theory]
+    [InlineData(10, 0)]
+    [InlineData(300, 40)]
+    [InlineData(20_000, 5_000)]
+    public void Quantiles_read_together_are_each_the_quantile_read_alone(int draws, int zeros)
+    {
+        var random = new Xoshiro256StarStar(5, 0);
+        var histogram = new DurationHistogram();
+        for (int i = 0; i < draws; i++)
+        {
+            histogram.Record(-Math.Log(1.0 - random.NextDouble()));
+        }
+
+        for (int i = 0; i < zeros; i++)
+        {
+            histogram.Record(0.0);
+        }
+
+        double[][] sets = [[0.0, 0.001, 0.2, 0.5, 0.9, 0.95, 0.99, 0.999, 1.0], [0.5, 0.5, 0.9], [0.99, 0.5, 0.9], [0.7], []];
+        foreach (var fractions in sets)
+        {
+            var together = new double[fractions.Length];
+            histogram.Quantiles(fractions, together);
+            Assert.Equal(fractions.Select(histogram.Quantile), together);
+        }
+
+        var empty = new double[2];
+        new DurationHistogram().Quantiles([0.5, 0.9], empty);
+        Assert.All(empty, value => Assert.True(double.IsNaN(value)));
+    }
+
     [Theory]
     [InlineData(0.50)]
     [InlineData(0.95)]
