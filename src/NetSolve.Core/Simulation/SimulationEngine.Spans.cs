@@ -3,6 +3,9 @@ namespace NetSolve.Simulation;
 /// <summary>The spans of waiting and of service inside the statistics window: added when they end, and at the run's end.</summary>
 internal sealed partial class SimulationEngine
 {
+    // Waits longer than this many hours past their first hour add whole days at once (AddQueueSpan).
+    private const double WholeDaysFrom = 48.0;
+
     /// <summary>The later of <paramref name="time"/> and the end of the warm-up: where a span inside the window starts.</summary>
     /// <remarks>A plain comparison: Math.Max also orders NaN and −0, which these times never are, at a cost per call.</remarks>
     private double InWindow(double time) => time > _warmupEnd ? time : _warmupEnd;
@@ -25,6 +28,23 @@ internal sealed partial class SimulationEngine
         long hour = (long)from;
         double hourEnd = hour + 1.0;
         int slot = (int)(hour % 24);
+        if (to - hourEnd > WholeDaysFrom)
+        {
+            // A wait of days (a unit that cannot keep up) adds its whole days to every hour at once: hour by hour, the
+            // work per service start grows with the wait, and a run's with the square of its length.
+            byHour[slot] += hourEnd - from;
+            from = hourEnd;
+            slot = slot == 23 ? 0 : slot + 1;
+            double days = Math.Floor((to - from) / 24.0);
+            for (int h = 0; h < 24; h++)
+            {
+                byHour[h] += days;
+            }
+
+            from += days * 24.0;
+            hourEnd = from + 1.0;
+        }
+
         while (to > hourEnd)
         {
             byHour[slot] += hourEnd - from;
